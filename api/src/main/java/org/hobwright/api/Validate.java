@@ -1,0 +1,74 @@
+package org.hobwright.api;
+
+import java.util.Objects;
+
+/**
+ * Argument checks used by the compact constructors of the api records.
+ *
+ * <p>Every failure is an {@link IllegalArgumentException} whose message names the field and
+ * the offending value, so a caller that breaks the contract learns exactly what to fix. The
+ * wizard never lets user input reach these checks unvalidated: it turns bad input into
+ * findings first.
+ */
+public final class Validate {
+    private Validate() {
+    }
+
+    /** Requires a finite number. */
+    public static double finite(String field, double value) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException(field + " must be a finite number, was " + value);
+        }
+        return value;
+    }
+
+    /** Requires a finite number greater than zero. */
+    public static double positive(String field, double value) {
+        finite(field, value);
+        if (value <= 0) {
+            throw new IllegalArgumentException(field + " must be greater than 0, was " + value);
+        }
+        return value;
+    }
+
+    /** Requires a finite number of zero or more. */
+    public static double nonNegative(String field, double value) {
+        finite(field, value);
+        if (value < 0) {
+            throw new IllegalArgumentException(field + " must be 0 or more, was " + value);
+        }
+        return value;
+    }
+
+    /** Requires a finite number in the closed range [min, max]. */
+    public static double range(String field, double value, double min, double max) {
+        finite(field, value);
+        if (value < min || value > max) {
+            throw new IllegalArgumentException(
+                    field + " must be between " + min + " and " + max + ", was " + value);
+        }
+        return value;
+    }
+
+    /** Requires a whole number of at least {@code min}. */
+    public static int atLeast(String field, int value, int min) {
+        if (value < min) {
+            throw new IllegalArgumentException(field + " must be at least " + min + ", was " + value);
+        }
+        return value;
+    }
+
+    /** Requires a non-null value. */
+    public static <T> T present(String field, T value) {
+        return Objects.requireNonNull(value, () -> field + " is required, was null");
+    }
+
+    /** Requires a non-blank text. */
+    public static String text(String field, String value) {
+        present(field, value);
+        if (value.isBlank()) {
+            throw new IllegalArgumentException(field + " must not be blank");
+        }
+        return value;
+    }
+}

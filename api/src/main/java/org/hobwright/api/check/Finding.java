@@ -1,0 +1,60 @@
+package org.hobwright.api.check;
+
+import java.util.Collection;
+import java.util.Optional;
+import org.hobwright.api.Validate;
+
+/**
+ * One problem or remark about a job, found by a check.
+ *
+ * @param severity how much it matters
+ * @param code     stable code, never reused for another meaning (e.g. {@code GEAR_UNDERCUT})
+ * @param field    path of the input field concerned, e.g. {@code gear.profileShift}; {@code job} when none fits
+ * @param message  what is wrong, in plain words, with the numbers
+ * @param fix      what would fix it, when there is a suggestion
+ * @param source   the standard, handbook or rule the check rests on
+ *                 ("common practice, no source" for a rule of thumb)
+ */
+public record Finding(Severity severity, String code, String field, String message, Optional<String> fix,
+                      String source) {
+
+    public Finding {
+        Validate.present("severity", severity);
+        Validate.text("code", code);
+        Validate.text("field", field);
+        Validate.text("message", message);
+        Validate.present("fix", fix);
+        Validate.text("source", source);
+    }
+
+    /** An error finding. */
+    public static Finding error(String code, String field, String message, String fix, String source) {
+        return new Finding(Severity.ERROR, code, field, message, Optional.ofNullable(fix), source);
+    }
+
+    /** A warning finding. */
+    public static Finding warning(String code, String field, String message, String fix, String source) {
+        return new Finding(Severity.WARNING, code, field, message, Optional.ofNullable(fix), source);
+    }
+
+    /** An info finding. */
+    public static Finding info(String code, String field, String message, String source) {
+        return new Finding(Severity.INFO, code, field, message, Optional.empty(), source);
+    }
+
+    /** True when this finding is an error. */
+    public boolean isError() {
+        return severity == Severity.ERROR;
+    }
+
+    /** True when any of the findings is an error. */
+    public static boolean anyError(Collection<Finding> findings) {
+        return findings.stream().anyMatch(Finding::isError);
+    }
+
+    /** One line for a terminal: {@code error GEAR_UNDERCUT gear.teeth: message (fix: ...)}. */
+    public String line() {
+        return severity.word() + " " + code + " " + field + ": " + message
+                + fix.map(f -> " (fix: " + f + ")").orElse("");
+    }
+}

@@ -1,0 +1,45 @@
+package org.hobwright.api.cycle;
+
+import java.util.List;
+import java.util.Optional;
+import org.hobwright.api.Validate;
+
+/**
+ * Time and predicted quality of the planned cycle.
+ *
+ * @param cycleTimeS            total cycle time, s (the sum of the steps' seconds)
+ * @param passes                the axial passes in order
+ * @param finishFeedMmPerRev    axial feed of the finishing (last) pass, mm per work revolution
+ * @param approachLengthMm      approach length of the last pass, mm
+ * @param overrunLengthMm       overrun length of the last pass, mm
+ * @param feedMarkFlankUm       predicted feed-mark depth on the flank, µm
+ * @param feedMarkRootUm        predicted feed-mark depth in the root, µm
+ * @param envelopingDepthUm     predicted enveloping-cut (generating flat) depth, µm
+ * @param maxChipThicknessMm    predicted maximum chip thickness of the heaviest pass, mm
+ * @param fastest               the optimiser's proposal, when asked for
+ */
+public record CycleSummary(
+        double cycleTimeS,
+        List<PassSummary> passes,
+        double finishFeedMmPerRev,
+        double approachLengthMm,
+        double overrunLengthMm,
+        double feedMarkFlankUm,
+        double feedMarkRootUm,
+        double envelopingDepthUm,
+        double maxChipThicknessMm,
+        Optional<FastestProposal> fastest) {
+
+    public CycleSummary {
+        Validate.nonNegative("cycleTimeS", cycleTimeS);
+        passes = List.copyOf(Validate.present("passes", passes));
+        Validate.positive("finishFeedMmPerRev", finishFeedMmPerRev);
+        Validate.nonNegative("approachLengthMm", approachLengthMm);
+        Validate.nonNegative("overrunLengthMm", overrunLengthMm);
+        Validate.nonNegative("feedMarkFlankUm", feedMarkFlankUm);
+        Validate.nonNegative("feedMarkRootUm", feedMarkRootUm);
+        Validate.nonNegative("envelopingDepthUm", envelopingDepthUm);
+        Validate.nonNegative("maxChipThicknessMm", maxChipThicknessMm);
+        Validate.present("fastest", fastest);
+    }
+}

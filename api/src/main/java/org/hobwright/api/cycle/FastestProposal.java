@@ -1,0 +1,30 @@
+package org.hobwright.api.cycle;
+
+import org.hobwright.api.Validate;
+
+/**
+ * The optimiser's shortest cycle for the job's limits, shown beside the user's plan.
+ *
+ * @param cycleTimeS          cycle time of the proposal, s
+ * @param lowerBoundS         the lower bound the optimiser proved, s
+ * @param bindingLimit        which limit binds, in words (e.g. "hob spindle maximum speed")
+ * @param cuttingSpeedMPerMin proposed cutting speed, m/min
+ * @param hobRpm              proposed hob speed, rpm
+ * @param roughFeedMmPerRev   proposed roughing feed, mm per work revolution
+ * @param finishFeedMmPerRev  proposed finishing feed, mm per work revolution
+ * @param passes              proposed number of passes
+ */
+public record FastestProposal(double cycleTimeS, double lowerBoundS, String bindingLimit,
+                              double cuttingSpeedMPerMin, double hobRpm, double roughFeedMmPerRev,
+                              double finishFeedMmPerRev, int passes) {
+    public FastestProposal {
+        Validate.positive("cycleTimeS", cycleTimeS);
+        Validate.positive("lowerBoundS", lowerBoundS);
+        Validate.text("bindingLimit", bindingLimit);
+        Validate.positive("cuttingSpeedMPerMin", cuttingSpeedMPerMin);
+        Validate.positive("hobRpm", hobRpm);
+        Validate.positive("roughFeedMmPerRev", roughFeedMmPerRev);
+        Validate.positive("finishFeedMmPerRev", finishFeedMmPerRev);
+        Validate.atLeast("passes", passes, 1);
+    }
+}

@@ -1,0 +1,36 @@
+package org.hobwright.api.cycle;
+
+import org.hobwright.api.Validate;
+
+/**
+ * Values for the inspector, mm.
+ *
+ * @param spanTeeth              number of teeth spanned k
+ * @param spanWidthMm            base tangent length W_k over k teeth
+ * @param spanContactDiameterMm  diameter where the anvils touch the flanks
+ * @param pinDiameterMm          pin (spur) or ball (helical) diameter D_M
+ * @param overPinsMm             measurement over two pins or balls M_d
+ * @param balls                  true when balls are meant (helical gears)
+ * @param chordalThicknessMm     chordal tooth thickness at the reference circle (normal section)
+ * @param chordalHeightMm        chordal height from the tip to that chord
+ */
+public record InspectionData(
+        int spanTeeth,
+        double spanWidthMm,
+        double spanContactDiameterMm,
+        double pinDiameterMm,
+        double overPinsMm,
+        boolean balls,
+        double chordalThicknessMm,
+        double chordalHeightMm) {
+
+    public InspectionData {
+        Validate.atLeast("spanTeeth", spanTeeth, 1);
+        Validate.finite("spanWidthMm", spanWidthMm);
+        Validate.finite("spanContactDiameterMm", spanContactDiameterMm);
+        Validate.positive("pinDiameterMm", pinDiameterMm);
+        Validate.finite("overPinsMm", overPinsMm);
+        Validate.finite("chordalThicknessMm", chordalThicknessMm);
+        Validate.finite("chordalHeightMm", chordalHeightMm);
+    }
+}

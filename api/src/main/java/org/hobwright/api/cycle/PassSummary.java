@@ -1,0 +1,29 @@
+package org.hobwright.api.cycle;
+
+import org.hobwright.api.Validate;
+
+/**
+ * One axial pass.
+ *
+ * @param pass              pass number, 1 = first
+ * @param infeedDiameterMm  work diameter of the hob tip during this pass, mm
+ * @param radialDepthMm     depth below the blank tip reached by this pass, mm
+ * @param feedMmPerRev      axial feed per work revolution, mm
+ * @param approachMm        approach (run-in) length from first contact to full depth, mm
+ * @param overrunMm         overrun (run-out) length past the far face, mm
+ * @param axialTravelMm     whole feed travel of the pass, mm
+ * @param seconds           time of the pass including its rapids, s
+ */
+public record PassSummary(int pass, double infeedDiameterMm, double radialDepthMm, double feedMmPerRev,
+                          double approachMm, double overrunMm, double axialTravelMm, double seconds) {
+    public PassSummary {
+        Validate.atLeast("pass", pass, 1);
+        Validate.positive("infeedDiameterMm", infeedDiameterMm);
+        Validate.positive("radialDepthMm", radialDepthMm);
+        Validate.positive("feedMmPerRev", feedMmPerRev);
+        Validate.nonNegative("approachMm", approachMm);
+        Validate.nonNegative("overrunMm", overrunMm);
+        Validate.positive("axialTravelMm", axialTravelMm);
+        Validate.nonNegative("seconds", seconds);
+    }
+}

@@ -1,0 +1,62 @@
+package org.hobwright.api.cycle;
+
+import org.hobwright.api.Validate;
+
+/**
+ * What the setter needs before the first part: diameters, swivel, speeds, ratio.
+ *
+ * @param blankDiameterMm        diameter to turn the blank to, mm
+ * @param touchOffDiameterMm     diameter at which the hob tip touches the blank, mm
+ * @param finalInfeedDiameterMm  final work diameter of the hob tip (the root diameter), mm
+ * @param leadAngleDeg           hob lead angle γ (magnitude), degrees
+ * @param swivelAngleDeg         swivel angle η = β − γ (signed: right hand positive), degrees
+ * @param swivelSettingDeg       the setting in the machine's sign convention, rounded to the holder's
+ *                               resolution, degrees
+ * @param swivelSettingText      the setting as the holder's scale reads it (decimal or degrees-minutes)
+ * @param swivelAngleDms         η as degrees-minutes-seconds, e.g. {@code 13° 14′ 12.4″}
+ * @param swivelDirection        the direction in words for this machine
+ * @param cuttingSpeedMPerMin    cutting speed at the hob tip actually used, m/min
+ * @param hobRpm                 hob speed, rpm
+ * @param workRpm                work speed (from the ratio), rpm
+ * @param syncHobTurns           hob turns of the sync ratio
+ * @param syncWorkTurns          work turns of the sync ratio
+ * @param differentialDegPerMm   helical addition, degrees of work rotation per mm of axial travel (0 for spur)
+ * @param hobShiftMm             hob shift position for this part, mm
+ */
+public record SetupValues(
+        double blankDiameterMm,
+        double touchOffDiameterMm,
+        double finalInfeedDiameterMm,
+        double leadAngleDeg,
+        double swivelAngleDeg,
+        double swivelSettingDeg,
+        String swivelSettingText,
+        String swivelAngleDms,
+        String swivelDirection,
+        double cuttingSpeedMPerMin,
+        double hobRpm,
+        double workRpm,
+        int syncHobTurns,
+        int syncWorkTurns,
+        double differentialDegPerMm,
+        double hobShiftMm) {
+
+    public SetupValues {
+        Validate.positive("blankDiameterMm", blankDiameterMm);
+        Validate.positive("touchOffDiameterMm", touchOffDiameterMm);
+        Validate.positive("finalInfeedDiameterMm", finalInfeedDiameterMm);
+        Validate.finite("leadAngleDeg", leadAngleDeg);
+        Validate.finite("swivelAngleDeg", swivelAngleDeg);
+        Validate.finite("swivelSettingDeg", swivelSettingDeg);
+        Validate.text("swivelSettingText", swivelSettingText);
+        Validate.text("swivelAngleDms", swivelAngleDms);
+        Validate.text("swivelDirection", swivelDirection);
+        Validate.positive("cuttingSpeedMPerMin", cuttingSpeedMPerMin);
+        Validate.positive("hobRpm", hobRpm);
+        Validate.positive("workRpm", workRpm);
+        Validate.atLeast("syncHobTurns", syncHobTurns, 1);
+        Validate.atLeast("syncWorkTurns", syncWorkTurns, 1);
+        Validate.finite("differentialDegPerMm", differentialDegPerMm);
+        Validate.nonNegative("hobShiftMm", hobShiftMm);
+    }
+}

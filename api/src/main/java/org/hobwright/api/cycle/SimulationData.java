@@ -1,0 +1,38 @@
+package org.hobwright.api.cycle;
+
+import java.util.List;
+import org.hobwright.api.Validate;
+
+/**
+ * Result of the generating simulation of one tooth space (transverse section).
+ *
+ * @param profileDeviationMaxMm      largest deviation of the simulated flank from the true involute, mm
+ * @param envelopingDepthMm          enveloping-cut depth measured on the simulated flank, mm
+ * @param closedFormEnvelopingDepthMm the same estimated by the closed-form formula, mm
+ * @param undercut                   true when the simulated root cuts into the involute (undercut)
+ * @param activeInvoluteStartDiameterMm diameter where the simulated flank becomes involute, mm
+ * @param simulatedProfile           the simulated tooth space outline, root to tip on both flanks,
+ *                                   gear centre at the origin, tooth space centred on +y, mm
+ * @param nominalProfile             the true involute flanks on the same axes, mm
+ * @param deviation                  deviation along the roll length: x = roll length mm, y = deviation mm
+ */
+public record SimulationData(
+        double profileDeviationMaxMm,
+        double envelopingDepthMm,
+        double closedFormEnvelopingDepthMm,
+        boolean undercut,
+        double activeInvoluteStartDiameterMm,
+        List<Point> simulatedProfile,
+        List<Point> nominalProfile,
+        List<Point> deviation) {
+
+    public SimulationData {
+        Validate.nonNegative("profileDeviationMaxMm", profileDeviationMaxMm);
+        Validate.nonNegative("envelopingDepthMm", envelopingDepthMm);
+        Validate.nonNegative("closedFormEnvelopingDepthMm", closedFormEnvelopingDepthMm);
+        Validate.nonNegative("activeInvoluteStartDiameterMm", activeInvoluteStartDiameterMm);
+        simulatedProfile = List.copyOf(Validate.present("simulatedProfile", simulatedProfile));
+        nominalProfile = List.copyOf(Validate.present("nominalProfile", nominalProfile));
+        deviation = List.copyOf(Validate.present("deviation", deviation));
+    }
+}

@@ -1,0 +1,26 @@
+package org.hobwright.api.job;
+
+import org.hobwright.api.Validate;
+
+/**
+ * One hobbing job: the gear, the hob, the machine and how to cut, all in canonical units, plus
+ * the unit the user works in (used for every printed or exported value that is not canonical).
+ *
+ * @param name    job name, used for output file names
+ * @param units   the user's length unit
+ * @param gear    the gear
+ * @param hob     the hob
+ * @param machine the machine profile
+ * @param cycle   the cycle settings
+ */
+public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine,
+                     CycleSettings cycle) {
+    public HobJob {
+        Validate.text("name", name);
+        Validate.present("units", units);
+        Validate.present("gear", gear);
+        Validate.present("hob", hob);
+        Validate.present("machine", machine);
+        Validate.present("cycle", cycle);
+    }
+}

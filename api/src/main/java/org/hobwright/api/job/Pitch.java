@@ -1,0 +1,58 @@
+package org.hobwright.api.job;
+
+import org.hobwright.api.Validate;
+
+/**
+ * The normal pitch of a gear or hob as the drawing gives it: a module in millimetres or a
+ * diametral pitch in teeth per inch of diameter. The user's form is kept so that reports can
+ * repeat it; {@link #moduleMm()} gives the canonical value.
+ *
+ * <p>m = 25.4 / P (module in mm, P in 1/in), the definition of diametral pitch.
+ */
+public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
+
+    /** Normal module in millimetres. */
+    double moduleMm();
+
+    /** Normal diametral pitch in 1/in. */
+    default double diametralPitch() {
+        return 25.4 / moduleMm();
+    }
+
+    /**
+     * A pitch given as a module.
+     *
+     * @param mm normal module, mm, greater than 0
+     */
+    record Module(double mm) implements Pitch {
+        public Module {
+            Validate.positive("module", mm);
+        }
+
+        @Override
+        public double moduleMm() {
+            return mm;
+        }
+    }
+
+    /**
+     * A pitch given as a diametral pitch.
+     *
+     * @param perInch normal diametral pitch, 1/in, greater than 0
+     */
+    record Diametral(double perInch) implements Pitch {
+        public Diametral {
+            Validate.positive("diametralPitch", perInch);
+        }
+
+        @Override
+        public double moduleMm() {
+            return 25.4 / perInch;
+        }
+
+        @Override
+        public double diametralPitch() {
+            return perInch;
+        }
+    }
+}

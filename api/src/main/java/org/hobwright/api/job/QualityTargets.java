@@ -1,0 +1,31 @@
+package org.hobwright.api.job;
+
+import java.util.Objects;
+import java.util.OptionalDouble;
+
+/**
+ * Limits the planner checks the predicted finish against. Empty values take defaults from the
+ * gear's flank tolerance class or the cutting-data table.
+ *
+ * @param feedMarkDepthUm    largest feed-mark depth on the flank, micrometres
+ * @param envelopingDepthUm  largest enveloping-cut (generating flat) depth, micrometres
+ * @param maxChipThicknessMm largest undeformed chip thickness, mm
+ */
+public record QualityTargets(
+        OptionalDouble feedMarkDepthUm,
+        OptionalDouble envelopingDepthUm,
+        OptionalDouble maxChipThicknessMm) {
+
+    /** No explicit targets. */
+    public static final QualityTargets DEFAULTS =
+            new QualityTargets(OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty());
+
+    public QualityTargets {
+        Objects.requireNonNull(feedMarkDepthUm, "feedMarkDepthUm");
+        Objects.requireNonNull(envelopingDepthUm, "envelopingDepthUm");
+        Objects.requireNonNull(maxChipThicknessMm, "maxChipThicknessMm");
+        feedMarkDepthUm.ifPresent(v -> org.hobwright.api.Validate.positive("targets.feedMarkDepth", v));
+        envelopingDepthUm.ifPresent(v -> org.hobwright.api.Validate.positive("targets.envelopingDepth", v));
+        maxChipThicknessMm.ifPresent(v -> org.hobwright.api.Validate.positive("targets.maxChipThickness", v));
+    }
+}

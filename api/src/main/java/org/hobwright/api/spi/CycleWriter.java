@@ -1,0 +1,33 @@
+package org.hobwright.api.spi;
+
+import org.hobwright.api.cycle.HobCycle;
+
+/**
+ * Writes one kind of output (NC program, cycle CSV, setup sheet, report) from a planned cycle.
+ * Found with {@link java.util.ServiceLoader}; the post module provides four, a host may add more.
+ *
+ * <p>A writer formats what the cycle says; it computes no geometry. It produces texts, not files:
+ * the caller writes every file of a run atomically, or none when any writer refuses.
+ */
+public interface CycleWriter {
+
+    /** Stable identifier: {@code nc}, {@code csv}, {@code sheet}, {@code report}, or a host's own. */
+    String id();
+
+    /** The SPI version this writer was built for ({@link Spi#VERSION}). */
+    int spiVersion();
+
+    /** One line saying what this writer produces. */
+    default String description() {
+        return id();
+    }
+
+    /**
+     * Formats the cycle. Must not throw for a cycle with errors: it returns a refusal instead.
+     *
+     * @param cycle   the planned cycle
+     * @param context the job and the resources the writer may need
+     * @return files or findings, never null
+     */
+    WriteResult write(HobCycle cycle, WriteContext context);
+}

@@ -1,0 +1,31 @@
+package org.hobwright.api.spi;
+
+import java.util.List;
+import org.hobwright.api.Validate;
+import org.hobwright.api.check.Finding;
+
+/**
+ * What a writer returns: the files, or findings that say why it would not write.
+ *
+ * @param files    files to write (empty when the findings hold an error)
+ * @param findings problems met while writing (e.g. a dialect that does not load)
+ */
+public record WriteResult(List<OutputFile> files, List<Finding> findings) {
+    public WriteResult {
+        files = List.copyOf(Validate.present("files", files));
+        findings = List.copyOf(Validate.present("findings", findings));
+        if (Finding.anyError(findings) && !files.isEmpty()) {
+            throw new IllegalArgumentException("a write result with error findings must have no files");
+        }
+    }
+
+    /** A result with files and no findings. */
+    public static WriteResult of(OutputFile... files) {
+        return new WriteResult(List.of(files), List.of());
+    }
+
+    /** A refusal with the findings that explain it. */
+    public static WriteResult refused(List<Finding> findings) {
+        return new WriteResult(List.of(), findings);
+    }
+}

@@ -1,0 +1,19 @@
+package org.hobwright.api.wizard;
+
+import java.util.List;
+import org.hobwright.api.Validate;
+import org.hobwright.api.check.Finding;
+
+/**
+ * Outcome of asking the wizard to move.
+ *
+ * @param moved    true when the wizard is now on another step
+ * @param current  the step the wizard is on now
+ * @param findings findings that blocked the move, or warnings shown on the way
+ */
+public record Transition(boolean moved, StepId current, List<Finding> findings) {
+    public Transition {
+        Validate.present("current", current);
+        findings = List.copyOf(Validate.present("findings", findings));
+    }
+}

@@ -1,0 +1,52 @@
+package org.hobwright.api.contract;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.spi.CyclePlanner;
+import org.hobwright.api.spi.Spi;
+import org.hobwright.api.testkit.SampleJobs;
+import org.junit.jupiter.api.Test;
+
+/** What every {@link CyclePlanner} must do. Extend it in a provider's tests. */
+public abstract class CyclePlannerContract {
+
+    /** The planner under test. */
+    protected abstract CyclePlanner planner();
+
+    @Test
+    void declaresStableIdAndVersion() {
+        assertFalse(planner().id().isBlank());
+        assertEquals(planner().id(), planner().id());
+        assertEquals(Spi.VERSION, planner().spiVersion());
+    }
+
+    @Test
+    void plansEverySampleJobWithoutThrowing() {
+        for (HobJob job : List.of(SampleJobs.spurMetric(), SampleJobs.helicalMetric(),
+                SampleJobs.helicalOnSpurMachine())) {
+            HobCycle cycle = planner().plan(job);
+            assertNotNull(cycle, job.name());
+            if (cycle.hasErrors()) {
+                assertTrue(cycle.steps().isEmpty(), job.name() + ": a cycle with errors has no steps");
+            } else {
+                assertFalse(cycle.steps().isEmpty(), job.name() + ": a clean cycle has steps");
+            }
+        }
+    }
+
+    @Test
+    void planningTwiceGivesEqualCycles() {
+        assertEquals(planner().plan(SampleJobs.helicalMetric()), planner().plan(SampleJobs.helicalMetric()));
+    }
+
+    @Test
+    void helixOnMachineThatCannotFollowOneIsAnError() {
+        assertTrue(planner().plan(SampleJobs.helicalOnSpurMachine()).hasErrors());
+    }
+}

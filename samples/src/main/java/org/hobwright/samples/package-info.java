@@ -1,0 +1,2 @@
+/** The example host adapter: reaches Hobwright through the api alone. */
+package org.hobwright.samples;

@@ -1,0 +1,14 @@
+package org.hobwright.wizard.cli;
+
+import picocli.CommandLine;
+
+/** Version text for {@code --version}. */
+public final class ToolVersion implements CommandLine.IVersionProvider {
+    /** The version of this build. */
+    public static final String VERSION = "0.1.0";
+
+    @Override
+    public String[] getVersion() {
+        return new String[] {"hobwright " + VERSION};
+    }
+}
