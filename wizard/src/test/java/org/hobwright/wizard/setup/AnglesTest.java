@@ -1,0 +1,41 @@
+package org.hobwright.wizard.setup;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.params.provider.ValueSource;
+
+class AnglesTest {
+
+    // Worked values: 13.2368° = 13° 14′ 12.5″ (12.48″) and 1.76323° = 1° 45′ 47.6″ — conversion by
+    // definition of the minute (1/60°) and second (1/3600°), checked by hand.
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "1.5|1.5", "1°30'|1.5", "1 30 0|1.5", "1° 30′ 0″|1.5", "-1°30'|-1.5", "13d14m12s|13.236666666666666",
+        "0°5'|0.08333333333333333", "20|20", "14.5°|14.5", "+2 0 36|2.01"})
+    void readsDecimalAndDms(String text, double expected) {
+        assertEquals(expected, Angles.parse(text).orElseThrow(), 1e-12, text);
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"", "abc", "1°60'", "1 2 60", "NaN", "Infinity", "1..2"})
+    void rejectsWhatIsNotAnAngle(String text) {
+        assertTrue(Angles.parse(text).isEmpty(), text);
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {
+        "13.2368|13° 14′ 12.5″", "1.76323|1° 45′ 47.6″", "-1.76323|-1° 45′ 47.6″", "29.999999|30° 00′ 00.0″",
+        "0|0° 00′ 00.0″"})
+    void formatsDmsWithCarry(double deg, String expected) {
+        assertEquals(expected, Angles.dms(deg));
+    }
+
+    @ParameterizedTest
+    @CsvSource(delimiter = '|', value = {"13.2368|13° 14′", "16.7632|16° 46′", "-1.76323|-1° 46′"})
+    void formatsDegreesMinutes(double deg, String expected) {
+        assertEquals(expected, Angles.degreesMinutes(deg));
+    }
+}
