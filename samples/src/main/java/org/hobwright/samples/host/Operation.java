@@ -1,0 +1,39 @@
+package org.hobwright.samples.host;
+
+import java.util.Locale;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.TreeMap;
+
+/**
+ * One operation in this host's own list, imported from a row of the cycle CSV. A real host would
+ * map it onto its own operation objects; this one keeps the row's values by column name.
+ *
+ * @param sequence position in the cycle, 1 = first
+ * @param kind     the step kind ({@code sync-on}, {@code rapid}, {@code feed} ...)
+ * @param seconds  time of the step, s
+ * @param values   every column of the row by its header name, as written
+ */
+public record Operation(int sequence, String kind, double seconds, Map<String, String> values) {
+
+    public Operation {
+        values = Map.copyOf(values);
+    }
+
+    /** A numeric column, empty when the column is missing or blank in this row. */
+    public OptionalDouble number(String column) {
+        String v = values.get(column);
+        return v == null || v.isBlank() ? OptionalDouble.empty() : OptionalDouble.of(Double.parseDouble(v));
+    }
+
+    /** One line for a listing: sequence, kind, time and the non-empty values. */
+    public String describe() {
+        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "%3d %-14s %8.2f s", sequence, kind, seconds));
+        new TreeMap<>(values).forEach((k, v) -> {
+            if (!v.isBlank()) {
+                sb.append("  ").append(k).append('=').append(v);
+            }
+        });
+        return sb.toString();
+    }
+}
