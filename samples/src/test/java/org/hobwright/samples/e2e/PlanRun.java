@@ -1,0 +1,106 @@
+package org.hobwright.samples.e2e;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.stream.Stream;
+import org.hobwright.wizard.cli.HobwrightCommand;
+import picocli.CommandLine;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * One run of {@code hobwright plan JOB --out DIR --json} in this JVM, exactly as a user runs it
+ * from the terminal: job file → reader → checks → plan → writers → files.
+ *
+ * @param exitCode the tool's exit code
+ * @param stdout   what it printed on standard output (the JSON report)
+ * @param stderr   what it printed on standard error
+ * @param out      the output folder
+ * @param report   the parsed report, when one was printed
+ */
+record PlanRun(int exitCode, String stdout, String stderr, Path out, Optional<JsonNode> report) {
+
+    /** The folder of the sample jobs, relative to the samples module (Surefire's working folder). */
+    static final Path JOBS = Path.of("scenario", "jobs");
+
+    private static final JsonMapper JSON = JsonMapper.builder().build();
+
+    /**
+     * Plans a sample job.
+     *
+     * @param jobFile the job's file name in {@link #JOBS}
+     * @param work    a fresh folder for this run (output and an empty library folder)
+     */
+    static PlanRun of(String jobFile, Path work) {
+        Path out = work.resolve("out");
+        Path home = work.resolve("home");
+        StringWriter so = new StringWriter();
+        StringWriter se = new StringWriter();
+        CommandLine cl = HobwrightCommand.commandLine();
+        cl.setOut(new PrintWriter(so, true));
+        cl.setErr(new PrintWriter(se, true));
+        int code = cl.execute("plan", JOBS.resolve(jobFile).toString(), "--out", out.toString(), "--json",
+                "--home", home.toString());
+        String text = so.toString();
+        Optional<JsonNode> report = text.isBlank() ? Optional.empty() : Optional.of(JSON.readTree(text));
+        return new PlanRun(code, text, se.toString(), out, report);
+    }
+
+    /** The report, failing with the run's output when there is none. */
+    JsonNode json() {
+        return report.orElseThrow(() -> new AssertionError("no report; exit " + exitCode + ", stderr:\n" + stderr));
+    }
+
+    /** A number of the report at a JSON pointer, failing with the pointer when it is missing. */
+    double number(String pointer) {
+        JsonNode n = json().at(pointer);
+        if (!n.isNumber()) {
+            throw new AssertionError("report has no number at " + pointer + ":\n" + stdout);
+        }
+        return n.doubleValue();
+    }
+
+    /** The findings of the report as {@code severity code field: message} lines, for messages. */
+    List<JsonNode> findings() {
+        return json().at("/findings").valueStream().toList();
+    }
+
+    /** True when a finding has a code containing the given word. */
+    Optional<JsonNode> finding(String codePart) {
+        return findings().stream().filter(f -> f.at("/code").asString().contains(codePart)).findFirst();
+    }
+
+    /** The files written into the output folder. */
+    List<Path> files() throws IOException {
+        if (!Files.isDirectory(out)) {
+            return List.of();
+        }
+        try (Stream<Path> s = Files.list(out)) {
+            return s.sorted().toList();
+        }
+    }
+
+    /** The one written file whose name ends this way. */
+    Path file(String suffix) throws IOException {
+        return files().stream().filter(p -> p.getFileName().toString().endsWith(suffix)).findFirst()
+                .orElseThrow(() -> new AssertionError("no *" + suffix + " in " + out + ": " + filesText()));
+    }
+
+    private String filesText() {
+        try {
+            return files().toString();
+        } catch (IOException e) {
+            return e.toString();
+        }
+    }
+
+    /** A text to put in assertion messages. */
+    String describe() {
+        return "exit " + exitCode + "\nstderr:\n" + stderr + "\nstdout:\n" + stdout;
+    }
+}

@@ -1,0 +1,175 @@
+package org.hobwright.samples.e2e;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The key numbers of each sample job, read from the JSON report (in the job's units), against
+ * published values and worked examples. "DOMAIN §x / case n" refers to the domain reference of
+ * the design notes, which names the published source of each case. Values marked "computed
+ * independently" come from {@code src/test/resources/e2e/reference_values.py}, a separate
+ * implementation of the same textbook formulas.
+ */
+class SampleJobNumbersTest {
+
+    /** 6 significant figures, as the published cases are printed. */
+    private static final double PRINTED = 5e-6;
+
+    @TempDir
+    Path work;
+
+    private static void close(double expected, double actual, double relative, String what) {
+        assertEquals(expected, actual, Math.abs(expected) * relative + 1e-12, what);
+    }
+
+    @Test
+    void meteringPumpGear() {
+        PlanRun r = PlanRun.of("metering-pump-gear.json", work);
+        assertEquals(0, r.exitCode(), r.describe());
+        // ISO 21771 eq. (1), (13), (33), (34): d = z m, d_b = d cos α, d_a = d + 2 m, d_f = d − 2 · 1.25 m
+        close(24.0, r.number("/gear/referenceDiameter"), 1e-9, "d");
+        close(24.0 * Math.cos(Math.toRadians(20)), r.number("/gear/baseDiameter"), 1e-9, "d_b");
+        close(26.0, r.number("/gear/tipDiameter"), 1e-9, "d_a");
+        close(21.5, r.number("/gear/rootDiameter"), 1e-9, "d_f");
+        close(2.25, r.number("/gear/wholeDepth"), 1e-9, "h");
+        // s_n = m π/2 + E_sn (DOMAIN §2.1, allowance −0.03 mm)
+        close(Math.PI / 2 - 0.03, r.number("/gear/toothThickness"), 1e-9, "s_n");
+        // span: k = z α/180° + 0.5 = 3.17 → 3 (DOMAIN §3.1, S8); W_3 = 7.716462 for the nominal
+        // tooth (span tables list 7.7165 for m 1, z 24), minus |E_sn| cos α for the allowance
+        assertEquals(3, r.number("/inspection/spanTeeth"));
+        close(7.716462 - 0.03 * Math.cos(Math.toRadians(20)), r.number("/inspection/spanWidth"), 2e-6, "W_3");
+        // over two 1.75 mm pins with the allowance: 26.406392 (computed independently, DOMAIN §3.2)
+        close(26.406392, r.number("/inspection/overPins"), 2e-6, "M_d");
+        // hob: d_m0 = 32 − 2 · 1.25 = 29.5 mm, sin γ = 1 / 29.5 (DOMAIN §4.1, S10); spur: η = −γ (§4.2)
+        double gamma = Math.toDegrees(Math.asin(1 / 29.5));
+        close(gamma, r.number("/setup/leadAngle"), 1e-9, "γ");
+        close(-gamma, r.number("/setup/swivelAngle"), 1e-9, "η");
+        // generating ratio: n_2 = n_0 z_0 / z_2 (DOMAIN §5.1)
+        close(r.number("/cycle/hobRpm") / 24, r.number("/cycle/workRpm"), 1e-9, "n_2");
+        // spur approach, full depth from the blank tip: E = √(h (d_a0 − h)) (DOMAIN §7.1, case 34 form)
+        close(Math.sqrt(2.25 * (32 - 2.25)), r.number("/cycle/approachLength"), 1e-6, "E");
+    }
+
+    @Test
+    void twoStartHobHalvesTheRatioAndQuadruplesTheEnvelopingFlats() {
+        PlanRun one = PlanRun.of("metering-pump-gear.json", work.resolve("one"));
+        PlanRun two = PlanRun.of("metering-pump-gear-two-start.json", work.resolve("two"));
+        assertEquals(0, two.exitCode(), two.describe());
+        // sin γ = z_0 m / d_m0 = 2 / 29.5 (DOMAIN §4.1, S10)
+        close(Math.toDegrees(Math.asin(2 / 29.5)), two.number("/setup/leadAngle"), 1e-9, "γ two-start");
+        // n_2 = n_0 z_0 / z_2: 12 hob turns per work turn instead of 24 (DOMAIN §5.1)
+        close(two.number("/cycle/hobRpm") / 12, two.number("/cycle/workRpm"), 1e-9, "n_2 two-start");
+        // enveloping depth δ = π² z_0² m sin α / (4 z i²) grows with z_0² (DOMAIN §6.2)
+        close(4 * one.number("/cycle/envelopingDepth"), two.number("/cycle/envelopingDepth"), 1e-6, "δ_y ratio");
+        double expectedUm = Math.PI * Math.PI * 4 * 1.0 * Math.sin(Math.toRadians(20)) / (4 * 24 * 144) * 1000;
+        close(expectedUm, toMicrometres(two.number("/cycle/envelopingDepth"), expectedUm), 1e-6, "δ_y two-start");
+    }
+
+    /** The report gives lengths in job units; quality values may be µm. Accept either, say which. */
+    private static double toMicrometres(double reported, double expectedUm) {
+        return Math.abs(reported - expectedUm) < Math.abs(reported * 1000 - expectedUm) ? reported : reported * 1000;
+    }
+
+    @Test
+    void pinionWithTwelveTeethIsUndercutAndTheShiftIsProposed() {
+        PlanRun r = PlanRun.of("dosing-pinion-z12.json", work);
+        var undercut = r.finding("UNDERCUT").orElseThrow(() -> new AssertionError(r.describe()));
+        // x_min = h* − z sin² α / 2 = 1 − 12 sin² 20° / 2 = 0.298133 (DOMAIN §2.3, case 13; S3, S9)
+        String fix = undercut.at("/fix").asString() + " " + undercut.at("/message").asString();
+        assertTrue(fix.contains("0.3") || fix.contains("0.29"), "proposes x ≈ 0.30: " + undercut);
+        close(11.2, r.number("/gear/tipDiameter"), 1e-9, "d_a, x = 0");
+        close(9.6 - 2 * 1.25 * 0.8, r.number("/gear/rootDiameter"), 1e-9, "d_f, x = 0");
+    }
+
+    @Test
+    void pinionWithTheProposedShiftIsClean() {
+        PlanRun r = PlanRun.of("dosing-pinion-z12-shifted.json", work);
+        assertEquals(0, r.exitCode(), r.describe());
+        assertTrue(r.finding("UNDERCUT").isEmpty(), r.describe());
+        assertTrue(r.finding("POINTED").isEmpty(), r.describe());
+        // d_a = d + 2 m (1 + x), d_f = d − 2 m (1.25 − x) (ISO 21771 eq. (33), (34)), x = 0.3
+        close(9.6 + 2 * 0.8 * 1.3, r.number("/gear/tipDiameter"), 1e-9, "d_a");
+        close(9.6 - 2 * 0.8 * 0.95, r.number("/gear/rootDiameter"), 1e-9, "d_f");
+        // span over k = 2: W_2 = 3.841181; over 1.4 mm pins: 11.881757 (computed independently)
+        assertEquals(2, r.number("/inspection/spanTeeth"));
+        close(3.841181, r.number("/inspection/spanWidth"), 2e-6, "W_2");
+        close(11.881757, r.number("/inspection/overPins"), 2e-6, "M_d");
+    }
+
+    @Test
+    void inchFinePitchWheelInBrass() {
+        PlanRun r = PlanRun.of("indicator-wheel-dp32.json", work);
+        assertEquals(0, r.exitCode(), r.describe());
+        // AGMA fine pitch, P 32, N 32: D = N/P = 1.000 in, a = 1/P, b = 1.200/P + 0.002 in
+        // (Mott, Machine Elements, 4th ed., Table 8-4; DOMAIN case 9: whole depth 0.07075 in)
+        close(1.0, r.number("/gear/referenceDiameter"), 1e-9, "D");
+        close(1.0625, r.number("/gear/tipDiameter"), 1e-9, "OD");
+        close(0.921, r.number("/gear/rootDiameter"), 1e-9, "root");
+        close(0.07075, r.number("/gear/wholeDepth"), 1e-9, "whole depth");
+        // over wires 1.728/P = 0.054 in: 34.4130 in at 1 DP, 32 teeth (Machinery's Handbook wire
+        // table quoted by S6, DOMAIN case 18) → 34.4130 / 32 = 1.07541 in
+        close(0.054, r.number("/inspection/pinDiameter"), 1e-9, "wire");
+        close(34.4130 / 32, r.number("/inspection/overPins"), PRINTED, "over wires");
+        // hob: d_m0 = OD − 2 (1.200/P + 0.002) = 1.171 in; sin γ = (1/P) / d_m0 (DOMAIN §4.1)
+        double gamma = Math.toDegrees(Math.asin((1 / 32.0) / 1.171));
+        close(gamma, r.number("/setup/leadAngle"), 1e-9, "γ");
+        // n_0 = 12 v_c / (π D_0) for ft/min and inches (DOMAIN §5.1, S12, in inch units)
+        close(12 * 200 / (Math.PI * 1.25), r.number("/cycle/hobRpm"), 1e-9, "n_0");
+        close(r.number("/cycle/hobRpm") / 32, r.number("/cycle/workRpm"), 1e-9, "n_2");
+    }
+
+    @Test
+    void helicalGearOnTheTurretLathe() {
+        PlanRun r = PlanRun.of("pump-helical-gear-tl40.json", work);
+        assertEquals(0, r.exitCode(), r.describe());
+        // DOMAIN §1.5 worked example (m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A) scaled to m_n 0.8:
+        // every length of these relations is proportional to m_n, every angle is unchanged.
+        double s = 0.8 / 2;
+        close(62.1166 * s, r.number("/gear/referenceDiameter"), PRINTED, "d (case 3)");
+        close(58.1269 * s, r.number("/gear/baseDiameter"), PRINTED, "d_b (case 3)");
+        close(66.9166 * s, r.number("/gear/tipDiameter"), PRINTED, "d_a (case 5)");
+        close(57.9166 * s, r.number("/gear/rootDiameter"), PRINTED, "d_f (case 5)");
+        close(3.43277 * s, r.number("/gear/toothThickness"), PRINTED, "s_n (case 10)");
+        assertEquals(5, r.number("/inspection/spanTeeth"), "k (case 17)");
+        close(27.7705 * s, r.number("/inspection/spanWidth"), PRINTED, "W_5 (case 17)");
+        close(67.7794 * s, r.number("/inspection/overPins"), PRINTED, "over 1.4 mm balls (case 21, 3.5 mm scaled)");
+        // hob d_a0 28 = 70 × 0.4, so d_m0 = 26 and γ, η are those of cases 26 and 27
+        close(1.76323, r.number("/setup/leadAngle"), PRINTED, "γ (case 26)");
+        close(13.2368, r.number("/setup/swivelAngle"), PRINTED, "η same-hand (case 27)");
+        // n_0 = 1000 v_c / (π d_a0) (case 29 with d_a0 28); n_2 = n_0 / 30 (case 30)
+        close(272.837 * 70 / 28, r.number("/cycle/hobRpm"), PRINTED, "n_0");
+        close(r.number("/cycle/hobRpm") / 30, r.number("/cycle/workRpm"), 1e-9, "n_2");
+        // exact helical approach for a cylindrical hob envelope (DOMAIN §7.1, case 35 scaled)
+        close(18.1330 * s, r.number("/cycle/approachLength"), 2e-5, "E (case 35)");
+    }
+
+    @Test
+    void helicalGearOnTheSlidingHeadstockLatheIsRefused() {
+        PlanRun r = PlanRun.of("pump-helical-gear-sl16.json", work);
+        assertEquals(1, r.exitCode(), r.describe());
+        var helix = r.findings().stream()
+                .filter(f -> f.at("/severity").asString().equals("error"))
+                .filter(f -> (f.at("/code").asString() + f.at("/field").asString()).toLowerCase().contains("helix"))
+                .findFirst();
+        assertTrue(helix.isPresent(), "an error says the machine cannot follow a helix:\n" + r.describe());
+        // the gear itself is the one the turret lathe cuts: same geometry in the report
+        close(66.9166 * 0.4, r.number("/gear/tipDiameter"), PRINTED, "d_a");
+    }
+
+    @Test
+    void drawingWithAnImpossibleOutsideDiameterIsCaught() {
+        PlanRun r = PlanRun.of("counter-wheel-drawing-error.json", work);
+        var drawing = r.findings().stream()
+                .filter(f -> f.at("/field").asString().startsWith("gear.drawing")).toList();
+        // z 40, m 0.5, x 0: d = 20, d_a = 21, d_f = 18.75, h = 1.125 (ISO 21771 eq. (1), (33), (34));
+        // the drawing's 22.0 outside diameter belongs to a 42-tooth wheel
+        assertEquals(1, drawing.size(), "exactly the outside diameter disagrees:\n" + r.describe());
+        assertEquals("gear.drawing.outsideDiameter", drawing.get(0).at("/field").asString());
+        assertTrue(drawing.get(0).at("/message").asString().contains("21"), drawing.get(0).toString());
+        close(21.0, r.number("/gear/tipDiameter"), 1e-9, "d_a");
+    }
+}

@@ -1,0 +1,73 @@
+package org.hobwright.samples.e2e;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.stream.Stream;
+import org.hobwright.samples.host.CycleImport;
+import org.hobwright.samples.host.Operation;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/**
+ * Every sample job through the whole chain. A clean job gives all four files; a job with errors
+ * gives its findings and no file at all. The program is never the judge of itself here: the
+ * ordering rules are the safety invariants of the architecture notes, the CSV is read back by the
+ * example host's own reader.
+ */
+class SampleJobsChainTest {
+
+    static Stream<String> jobs() throws IOException {
+        try (Stream<Path> s = Files.list(PlanRun.JOBS)) {
+            return s.map(p -> p.getFileName().toString()).filter(n -> n.endsWith(".json")).sorted().toList().stream();
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("jobs")
+    void theWholeChainRunsAndAnErrorMeansNothingWritten(String job, @TempDir Path work) throws IOException {
+        PlanRun run = PlanRun.of(job, work);
+        assertTrue(run.exitCode() == 0 || run.exitCode() == 1, run.describe());
+        boolean errors = run.findings().stream().anyMatch(f -> f.at("/severity").asString().equals("error"));
+        assertEquals(errors, run.exitCode() == 1, "exit 1 exactly when an error finding is reported\n" + run.describe());
+        for (var f : run.findings()) {
+            for (String key : List.of("/severity", "/code", "/field", "/message")) {
+                assertFalse(f.at(key).asString().isBlank(), key + " of " + f);
+            }
+        }
+        if (errors) {
+            assertEquals(List.of(), run.files(), "nothing is written for a job with errors");
+            return;
+        }
+        for (String suffix : List.of(".nc", ".csv", ".html", ".json")) {
+            assertTrue(Files.size(run.file(suffix)) > 0, suffix);
+        }
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("jobs")
+    void theCycleCsvReadsBackInSafeOrder(String job, @TempDir Path work) throws IOException {
+        PlanRun run = PlanRun.of(job, work);
+        if (run.exitCode() != 0) {
+            return;
+        }
+        List<Operation> ops = CycleImport.operations(Files.readString(run.file(".csv")));
+        List<String> kinds = ops.stream().map(Operation::kind).toList();
+        // safety invariants (architecture notes, "NC output"): sync on before the first cutting
+        // move, sync off before the spindles stop, and the spindles stopped at the end
+        int syncOn = kinds.indexOf("sync-on");
+        int firstFeed = kinds.indexOf("feed");
+        int syncOff = kinds.lastIndexOf("sync-off");
+        int stop = kinds.lastIndexOf("spindles-stop");
+        assertTrue(syncOn >= 0 && firstFeed > syncOn, "sync on before the first feed: " + kinds);
+        assertTrue(syncOff > kinds.lastIndexOf("feed") && stop > syncOff, "sync off, then stop: " + kinds);
+        double csvSeconds = ops.stream().mapToDouble(Operation::seconds).sum();
+        assertTrue(csvSeconds > 0, "the steps take time");
+    }
+}

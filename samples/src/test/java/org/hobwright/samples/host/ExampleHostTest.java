@@ -1,0 +1,76 @@
+package org.hobwright.samples.host;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.hobwright.api.cycle.CycleStep;
+import org.hobwright.api.cycle.HobCycle;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The example host against the real Hobwright jars on the class path (found through
+ * ServiceLoader, as a host finds them): the wizard is answered from the shipped example answers,
+ * the files are written, and the operations imported from the CSV are the cycle's steps.
+ */
+class ExampleHostTest {
+
+    private static final Path ANSWERS = Path.of("src/main/resources/example-host/pump-helical-gear.properties");
+
+    @TempDir
+    Path work;
+
+    private final StringWriter screen = new StringWriter();
+
+    private HostSession.Result runSession() throws IOException {
+        Path answers = work.resolve("answers.properties");
+        Files.writeString(answers, Files.readString(ANSWERS) + "\nhost.home = "
+                + work.resolve("home").toString().replace("\\", "/") + "\n");
+        HobwrightPlugin plugin = HobwrightPlugin.load(getClass().getClassLoader());
+        assertEquals(List.of(), plugin.problems());
+        return new HostSession(plugin, new PrintWriter(screen, true)).run(AnswerSheet.read(answers), work.resolve("out"));
+    }
+
+    @Test
+    void theCsvImportRebuildsTheCycleStepByStep() throws IOException {
+        HostSession.Result r = runSession();
+        assertEquals(HostSession.Status.DONE, r.status(), screen.toString());
+        HobCycle cycle = r.cycle().orElseThrow();
+        List<CycleStep> steps = cycle.steps();
+        assertEquals(steps.size(), r.operations().size(), screen.toString());
+        for (int i = 0; i < steps.size(); i++) {
+            Operation op = r.operations().get(i);
+            assertEquals(steps.get(i).kind(), op.kind(), "step " + (i + 1));
+            assertEquals(steps.get(i).seconds(), op.seconds(), 1e-6 + 1e-9 * steps.get(i).seconds(), "step " + (i + 1));
+        }
+        assertEquals(cycle.stepSeconds(), r.operations().stream().mapToDouble(Operation::seconds).sum(), 1e-4);
+    }
+
+    @Test
+    void theHostShowsEveryStepAndWritesEveryFile() throws IOException {
+        HostSession.Result r = runSession();
+        String text = screen.toString();
+        for (String step : List.of("== GEAR", "== CUTTER", "== MACHINE", "== CYCLE", "== REVIEW")) {
+            assertTrue(text.contains(step), step + " shown:\n" + text);
+        }
+        for (String suffix : List.of(".nc", ".csv", ".html", ".json")) {
+            assertTrue(r.written().stream().anyMatch(p -> p.toString().endsWith(suffix)), suffix + " in " + r.written());
+        }
+        // DOMAIN.md §4.2 case 27: β 15° RH with a right-hand hob of γ 1.76323° → η 13.2368°
+        assertEquals(13.2368, r.cycle().orElseThrow().setup().orElseThrow().swivelAngleDeg(), 1e-4);
+    }
+
+    @Test
+    void usageAndUnreadableAnswersExitWithTwo() {
+        PrintWriter out = new PrintWriter(screen, true);
+        ClassLoader loader = getClass().getClassLoader();
+        assertEquals(2, ExampleHost.run(new String[0], out, loader));
+        assertEquals(2, ExampleHost.run(new String[] {work.resolve("missing.properties").toString(), "x"}, out, loader));
+    }
+}
