@@ -1,0 +1,44 @@
+#!/usr/bin/env bash
+# Follows the top-level README's two commands on a fresh clone, as a new user would:
+#
+#   wizard/hobwright demo      → builds the tool on first use, writes hobwright-out/
+#   mvn -B verify              → runs every test
+#
+#   samples/src/test/sh/fresh-clone.sh [REPOSITORY]   # default: the repository this script is in (its HEAD)
+#
+# Set FRESH_MAVEN_REPO=1 to start from an empty local Maven repository as well (downloads about
+# 60 MB from Maven Central). Exits non-zero, saying which step failed, when anything is missing.
+set -euo pipefail
+here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
+source_repo="${1:-$(git -C "$here" rev-parse --show-toplevel)}"
+work="$(mktemp -d)"
+trap 'rm -rf "$work"' EXIT
+
+fail() { echo "fresh-clone: FAILED: $*" >&2; exit 1; }
+
+git clone -q "$source_repo" "$work/hobwright"
+cd "$work/hobwright"
+echo "fresh-clone: cloned $(git log --oneline -1) into $work/hobwright"
+
+if [ "${FRESH_MAVEN_REPO:-0}" = 1 ]; then
+  mkdir -p "$work/m2"
+  export MAVEN_OPTS="${MAVEN_OPTS:-} -Dmaven.repo.local=$work/m2"
+fi
+export HOBWRIGHT_HOME="$work/home"          # no saved machines or templates from this computer
+
+echo "fresh-clone: wizard/hobwright demo"
+wizard/hobwright demo > "$work/demo.out" 2> "$work/demo.err" || { cat "$work/demo.err" >&2; fail "the demo command"; }
+for ext in nc csv html json; do
+  compgen -G "hobwright-out/*.$ext" >/dev/null || fail "the demo wrote no .$ext file into hobwright-out/"
+done
+echo "fresh-clone: demo wrote: $(cd hobwright-out && ls | tr '\n' ' ')"
+grep -qi caution hobwright-out/*.nc || fail "the program has no caution"
+grep -qi caution hobwright-out/*.html || fail "the setup sheet has no caution"
+
+echo "fresh-clone: mvn -B verify"
+mvn -B verify > "$work/verify.out" 2>&1 || { tail -60 "$work/verify.out" >&2; fail "mvn -B verify"; }
+grep -E "Tests run: [0-9]+, Failures: 0, Errors: 0" "$work/verify.out" | tail -4
+
+[ -z "$(git status --porcelain --untracked-files=no)" ] || fail "the two commands changed tracked files: $(git status --porcelain)"
+git status --porcelain | grep -v '^?? hobwright-out/$' | grep . && fail "untracked files left that .gitignore does not cover"
+echo "fresh-clone: OK"
