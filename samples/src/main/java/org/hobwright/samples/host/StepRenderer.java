@@ -68,8 +68,9 @@ public final class StepRenderer {
             var given = sheet.answer(field.key());
             List<Finding> findings = given.map(text -> wizard.answer(field.key(), text)).orElse(List.of());
             given.ifPresent(text -> used.add(field.key()));
-            out.println("   " + field.label() + " = " + wizard.value(field.key())
-                    + (field.unit().isEmpty() ? "" : " " + field.unit())
+            String value = wizard.value(field.key());
+            out.println("   " + field.label() + " = "
+                    + (value.isEmpty() ? "(none)" : value + (field.unit().isEmpty() ? "" : " " + field.unit()))
                     + (given.isPresent() ? "" : "   (default)")
                     + (field.choices().isEmpty() ? "" : "   one of " + String.join(", ", field.choices())));
             showFindings(findings);

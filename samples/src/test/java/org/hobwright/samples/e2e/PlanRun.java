@@ -1,13 +1,21 @@
 package org.hobwright.samples.e2e;
 
+import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.StringReader;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.Map;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
+import org.hobwright.wizard.cli.CliEnvironment;
 import org.hobwright.wizard.cli.HobwrightCommand;
 import picocli.CommandLine;
 import tools.jackson.databind.JsonNode;
@@ -35,17 +43,23 @@ record PlanRun(int exitCode, String stdout, String stderr, Path out, Optional<Js
      *
      * @param jobFile the job's file name in {@link #JOBS}
      * @param work    a fresh folder for this run (output and an empty library folder)
+     * @param options more options of {@code plan}, e.g. {@code --machine NAME}
      */
-    static PlanRun of(String jobFile, Path work) {
+    static PlanRun of(String jobFile, Path work, String... options) {
         Path out = work.resolve("out");
         Path home = work.resolve("home");
         StringWriter so = new StringWriter();
         StringWriter se = new StringWriter();
-        CommandLine cl = HobwrightCommand.commandLine();
+        CliEnvironment env = new CliEnvironment(new BufferedReader(new StringReader("")),
+                Clock.fixed(Instant.parse("2026-12-01T12:00:00Z"), ZoneOffset.UTC), Map.of(),
+                PlanRun.class.getClassLoader(), true);
+        CommandLine cl = HobwrightCommand.commandLine(env);
         cl.setOut(new PrintWriter(so, true));
         cl.setErr(new PrintWriter(se, true));
-        int code = cl.execute("plan", JOBS.resolve(jobFile).toString(), "--out", out.toString(), "--json",
-                "--home", home.toString());
+        List<String> args = new ArrayList<>(List.of("--home", home.toString(), "plan",
+                JOBS.resolve(jobFile).toString(), "--out", out.toString(), "--json"));
+        args.addAll(List.of(options));
+        int code = cl.execute(args.toArray(String[]::new));
         String text = so.toString();
         Optional<JsonNode> report = text.isBlank() ? Optional.empty() : Optional.of(JSON.readTree(text));
         return new PlanRun(code, text, se.toString(), out, report);

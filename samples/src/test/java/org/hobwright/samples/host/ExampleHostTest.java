@@ -21,7 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class ExampleHostTest {
 
-    private static final Path ANSWERS = Path.of("src/main/resources/example-host/pump-helical-gear.properties");
+    private static final Path ANSWERS = Path.of("src/main/resources/example-host/dosing-pinion.properties");
 
     @TempDir
     Path work;
@@ -48,8 +48,22 @@ class ExampleHostTest {
             Operation op = r.operations().get(i);
             assertEquals(steps.get(i).kind(), op.kind(), "step " + (i + 1));
             assertEquals(steps.get(i).seconds(), op.seconds(), 1e-6 + 1e-9 * steps.get(i).seconds(), "step " + (i + 1));
+            if (steps.get(i) instanceof CycleStep.Feed f) {
+                assertPosition(f.diameterMm(), f.axialMm(), op);
+                assertEquals(f.feedMmPerRev(), op.number("feed_mm_per_rev").orElseThrow(), 1e-6, "feed " + op);
+            } else if (steps.get(i) instanceof CycleStep.Rapid rapid) {
+                assertPosition(rapid.diameterMm(), rapid.axialMm(), op);
+            } else if (steps.get(i) instanceof CycleStep.SyncOn sync) {
+                assertEquals(sync.hobTurns(), op.number("hob_turns").orElseThrow(), "ratio " + op);
+                assertEquals(sync.workTurns(), op.number("work_turns").orElseThrow(), "ratio " + op);
+            }
         }
         assertEquals(cycle.stepSeconds(), r.operations().stream().mapToDouble(Operation::seconds).sum(), 1e-4);
+    }
+
+    private static void assertPosition(double diameterMm, double axialMm, Operation op) {
+        assertEquals(diameterMm, op.number("diameter_mm").orElseThrow(), 1e-6, "diameter " + op);
+        assertEquals(axialMm, op.number("axial_mm").orElseThrow(), 1e-6, "axial " + op);
     }
 
     @Test
@@ -62,8 +76,10 @@ class ExampleHostTest {
         for (String suffix : List.of(".nc", ".csv", ".html", ".json")) {
             assertTrue(r.written().stream().anyMatch(p -> p.toString().endsWith(suffix)), suffix + " in " + r.written());
         }
-        // DOMAIN.md §4.2 case 27: β 15° RH with a right-hand hob of γ 1.76323° → η 13.2368°
-        assertEquals(13.2368, r.cycle().orElseThrow().setup().orElseThrow().swivelAngleDeg(), 1e-4);
+        // hob d_m0 = 24 − 2 · 1.25 · 0.8 = 22 mm, sin γ = m / d_m0 (DOMAIN.md §4.1, S10);
+        // spur gear with a right-hand hob: η = −γ (DOMAIN.md §4.2)
+        double gamma = Math.toDegrees(Math.asin(0.8 / 22.0));
+        assertEquals(-gamma, r.cycle().orElseThrow().setup().orElseThrow().swivelAngleDeg(), 1e-9);
     }
 
     @Test
