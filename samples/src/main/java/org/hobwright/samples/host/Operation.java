@@ -26,11 +26,15 @@ public record Operation(int sequence, String kind, double seconds, Map<String, S
         return v == null || v.isBlank() ? OptionalDouble.empty() : OptionalDouble.of(Double.parseDouble(v));
     }
 
-    /** One line for a listing: sequence, kind, time and the non-empty values. */
+    /** Columns {@link #describe()} leaves out because the line shows them already. */
+    private static final java.util.Set<String> SHOWN = java.util.Set.of(CycleImport.VERSION_COLUMN,
+            CycleImport.KIND_COLUMN, CycleImport.SECONDS_COLUMN, "step_no");
+
+    /** One line for a listing: sequence, kind, time and the other non-empty values. */
     public String describe() {
         StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "%3d %-14s %8.2f s", sequence, kind, seconds));
         new TreeMap<>(values).forEach((k, v) -> {
-            if (!v.isBlank()) {
+            if (!v.isBlank() && !SHOWN.contains(k)) {
                 sb.append("  ").append(k).append('=').append(v);
             }
         });
