@@ -25,7 +25,7 @@ public enum EngineeringCode {
     GEAR_UNDERCUT(Severity.WARNING, "the hob undercuts the teeth; states the shift to use",
             "undercut limit for rack generation: drivetrainhub notebooks-gears; easyengcalc gear-undercut page"),
     GEAR_UNDERCUT_SLIGHT(Severity.INFO, "slight undercut below the working flank, usually accepted",
-            "practical limit 5/6 of z_min (from memory, Roloff/Matek; matches 14 teeth at 20° of easyengcalc)"),
+            "practical limits 14 teeth at 20°, 26 at 14.5° (easyengcalc gear-undercut page): shift shortfall up to h* ÷ 5"),
     GEAR_TIP_POINTED(Severity.ERROR, "the teeth come to a point below the tip diameter",
             "tip thickness s_at = d_a (s_t/d + inv α_t − inv α_at), ISO 21771"),
     GEAR_TIP_THIN(Severity.WARNING, "tip thickness below 0.25 m_n (0.4 m_n for case-hardened gears)",

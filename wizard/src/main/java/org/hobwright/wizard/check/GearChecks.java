@@ -56,7 +56,7 @@ public final class GearChecks {
                 + words.length(shifted.tipDiameterMm()) + ", root diameter " + words.length(shifted.rootDiameterMm())
                 + ", tip thickness " + words.length(shifted.normalThicknessAtMm(shifted.tipDiameterMm()))
                 + "; the mating gear and centre distance must allow for it";
-        EngineeringCode code = xMin - xE <= hStar / 6 ? EngineeringCode.GEAR_UNDERCUT_SLIGHT : EngineeringCode.GEAR_UNDERCUT;
+        EngineeringCode code = xMin - xE <= Undercut.SLIGHT_SHORTFALL * hStar ? EngineeringCode.GEAR_UNDERCUT_SLIGHT : EngineeringCode.GEAR_UNDERCUT;
         out.add(code.at("gear.profileShift", msg, fix));
     }
 
