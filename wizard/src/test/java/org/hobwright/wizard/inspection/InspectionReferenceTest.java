@@ -66,8 +66,7 @@ class InspectionReferenceTest {
         assertEquals(true, OverPins.of(thin, 1.75).overPinsMm() < OverPins.of(plain, 1.75).overPinsMm());
     }
 
-    // Pin choice: job pin first, else 1.728 m (US wire tables, S6) when it fits; a z 8, x 0.6 pinion needs a
-    // computed pin (contact of the rule pin falls outside the flank).
+    // Pin choice: job pin first, else 1.728 m (US wire tables, S6) when it fits.
     @Test
     void pinChoiceFollowsTheStatedRule() {
         InvoluteGear g = TestGears.gear(24, 1, 20, 0, 0);
@@ -75,5 +74,17 @@ class InspectionReferenceTest {
         PinChoice rule = PinChoice.choose(g, java.util.OptionalDouble.empty(), 26, 0.01);
         assertEquals(PinChoice.Origin.WIRE_TABLE_RULE, rule.origin());
         assertEquals(1.728, rule.diameterMm(), 1e-15);
+    }
+
+    // z 8, x 0.6, m 1: the 1.728 mm pin reaches only 11.081 mm, below the 11.2 mm tip (independent computation of
+    // the over-pins relation), so the pin touching at d + 2 x m is used: 2.95497 mm → 2.95 mm at a 0.01 mm step.
+    @Test
+    void largeShiftGetsAComputedPin() {
+        InvoluteGear g = TestGears.gear(8, 1, 20, 0, 0.6);
+        assertRelative(11.0811, OverPins.of(g, 1.728).overPinsMm(), 5e-6, "rule pin");
+        PinChoice c = PinChoice.choose(g, java.util.OptionalDouble.empty(), g.tipDiameterMm(), 0.01);
+        assertEquals(PinChoice.Origin.CONTACT_AT_SHIFTED_REFERENCE, c.origin());
+        assertEquals(2.95, c.diameterMm(), 1e-12);
+        assertEquals(true, OverPins.of(g, c.diameterMm()).fits(g.rootFormDiameterMm(), g.tipDiameterMm()));
     }
 }
