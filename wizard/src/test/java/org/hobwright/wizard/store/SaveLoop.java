@@ -10,6 +10,8 @@ import java.util.Optional;
 /**
  * A second process for the store tests, started with the test class path.
  *
+ * <p>{@code replace} and {@code create} first print {@code ready} and wait for {@code HOME/go}.
+ *
  * <ul>
  *   <li>{@code replace HOME NAME TAG COUNT}: saves machine NAME COUNT times with --force, each
  *       time with a description ending in TAG and the round;</li>
@@ -24,6 +26,9 @@ public final class SaveLoop {
     }
 
     public static void main(String[] args) throws Exception {
+        if (!args[0].equals("stall")) {
+            awaitStart(Path.of(args[1]));
+        }
         switch (args[0]) {
             case "replace" -> replace(Path.of(args[1]), args[2], args[3], Integer.parseInt(args[4]));
             case "create" -> create(Path.of(args[1]), args[2], Integer.parseInt(args[3]));
@@ -31,6 +36,20 @@ public final class SaveLoop {
             default -> throw new IllegalArgumentException(args[0]);
         }
     }
+
+    /** Says {@code ready} and waits for the file {@code HOME/go}, so that both processes start saving together. */
+    private static void awaitStart(Path home) throws InterruptedException {
+        System.out.println("ready");
+        System.out.flush();
+        Path go = home.resolve(GO);
+        long deadline = System.nanoTime() + 60_000_000_000L;
+        while (!Files.exists(go) && System.nanoTime() < deadline) {
+            Thread.sleep(1);
+        }
+    }
+
+    /** The file whose appearance starts the second process's saves. */
+    static final String GO = "go";
 
     static MachineFile machine(String name, String description) {
         return new MachineFile(SampleProfile.profile(name), org.hobwright.api.job.Units.MM, description);
