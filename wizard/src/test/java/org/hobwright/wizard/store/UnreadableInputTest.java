@@ -97,6 +97,8 @@ class UnreadableInputTest {
         assertUnreadable(reader.read("{\"version\": 1}", "n.json"), "INPUT_FORMAT", "missing");
         assertUnreadable(reader.read("{\"format\": \"hobwright-job\", \"version\": 7}", "v.json"),
                 "INPUT_VERSION", "version 7");
+        assertUnreadable(reader.read("{\"format\": \"hobwright-job\", \"version\": 99999999999999999999}", "big.json"),
+                "INPUT_VERSION", "not one this program reads");
         assertUnreadable(reader.read("{\"format\": \"hobwright-job\", \"version\": \"1\"}", "s.json"),
                 "INPUT_VERSION", "whole number");
         assertUnreadable(reader.read("{\"format\": \"hobwright-job\", \"version\": 1, \"units\": \"cm\"}", "u.json"),
