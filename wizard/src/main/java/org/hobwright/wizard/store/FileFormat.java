@@ -122,7 +122,7 @@ public enum FileFormat {
                     "give a " + word + " file here"));
         }
         JsonNode version = doc.root().get("version");
-        if (version == null || !version.isIntegralNumber()) {
+        if (version == null || !version.isNumber() || version.doubleValue() != Math.rint(version.doubleValue())) {
             return Loaded.unreadable(InputCode.INPUT_VERSION.finding("version",
                     doc.at("version") + ": \"version\" is missing or not a whole number",
                     "add \"version\": " + VERSION));
