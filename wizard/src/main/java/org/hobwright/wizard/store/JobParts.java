@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
+import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.DrawingValues;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
@@ -43,7 +44,7 @@ final class JobParts {
                 .map(Pitch.Diametral::new);
     }
 
-    static Optional<GearSpec> gear(Fields f, String jobName, List<org.hobwright.api.check.Finding> out) {
+    static Optional<GearSpec> gear(Fields f, String jobName, List<Finding> out) {
         int before = errors(out);
         String part = f.text("partName").orElse(jobName);
         int teeth = f.requiredInt("teeth", 1, 100_000, "give the number of teeth");
@@ -110,7 +111,7 @@ final class JobParts {
                 d.number("overPins", Kind.LENGTH, Limit.POSITIVE));
     }
 
-    static Optional<HobSpec> hob(Fields f, List<org.hobwright.api.check.Finding> out) {
+    static Optional<HobSpec> hob(Fields f, List<Finding> out) {
         int before = errors(out);
         Optional<Pitch> pitch = pitch(f);
         double alpha = f.requiredAngle("pressureAngle", Limit.range(1, 45), "give the hob's pressure angle, e.g. 20");
@@ -132,7 +133,7 @@ final class JobParts {
                 lead, reference, gashes, length, maxRpm, material.orElseThrow()));
     }
 
-    static int errors(List<org.hobwright.api.check.Finding> out) {
-        return (int) out.stream().filter(org.hobwright.api.check.Finding::isError).count();
+    static int errors(List<Finding> out) {
+        return (int) out.stream().filter(Finding::isError).count();
     }
 }
