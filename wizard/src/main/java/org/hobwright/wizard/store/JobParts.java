@@ -32,7 +32,8 @@ final class JobParts {
         boolean dp = f.has("diametralPitch");
         if (m == dp) {
             f.problem(InputCode.INPUT_PITCH, m ? "diametralPitch" : "module",
-                    f.path("module") + " and " + f.path("diametralPitch") + (m ? " are both given" : " are both missing")
+                    f.path("module") + " and " + f.path("diametralPitch")
+                            + (m ? " are both given" : " are both missing")
                             + "; exactly one gives the normal pitch",
                     m ? "keep one of them" : "add \"module\" (mm) or \"diametralPitch\" (1/in)");
             return Optional.empty();
@@ -84,7 +85,8 @@ final class JobParts {
         }
         if (system.isPresent() && !isCustom) {
             f.problem(InputCode.INPUT_CONFLICT, "custom", f.path("custom") + " is only allowed with \"toothSystem\":"
-                    + " \"custom\", this gear uses \"" + system.get() + "\"", "remove custom or set toothSystem to custom");
+                    + " \"custom\", this gear uses \"" + system.get() + "\"",
+                    "remove custom or set toothSystem to custom");
             return Optional.empty();
         }
         Fields c = f.child("custom");

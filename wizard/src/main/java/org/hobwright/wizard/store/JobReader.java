@@ -118,7 +118,8 @@ public final class JobReader {
             if (!root.has("hob")) {
                 root.missing("hob", "describe the hob: module or diametralPitch, starts, hand, outsideDiameter, ...");
             }
-            Optional<GearSpec> gear = root.has("gear") ? JobParts.gear(root.child("gear"), name, out) : Optional.empty();
+            Optional<GearSpec> gear = root.has("gear") ? JobParts.gear(root.child("gear"), name, out)
+                    : Optional.empty();
             Optional<HobSpec> hob = root.has("hob") ? JobParts.hob(root.child("hob"), out) : Optional.empty();
             CycleReader.Values cycle = CycleReader.read(cycleFields, true);
             if (Finding.anyError(out) || gear.isEmpty() || hob.isEmpty() || machine.isEmpty()) {

@@ -125,12 +125,18 @@ public final class Library {
 
     /** The template of that name for that machine. */
     public Loaded<CycleTemplate> template(String machine, String name) {
-        return Shelf.named("machine", machine, () -> shelf.document(TEMPLATES + "/" + machine, "template", name).then(d -> checkStem(
-                        TemplateReader.read(d), name, CycleTemplate::name, "template").then(t -> t.machine().equals(machine)
-                        ? Loaded.of(t)
-                        : Loaded.unreadable(List.of(InputCode.LIBRARY_WRONG_MACHINE.finding("machine", d.at("machine")
-                                + ": template \"" + name + "\" is stored for machine \"" + machine + "\" but names machine \""
-                                + t.machine() + "\"", "correct its \"machine\" key or save it again"))))));
+        return Shelf.named("machine", machine, () -> shelf.document(TEMPLATES + "/" + machine, "template", name)
+                .then(d -> checkStem(TemplateReader.read(d), name, CycleTemplate::name, "template")
+                        .then(t -> belongsTo(t, machine, d))));
+    }
+
+    private static Loaded<CycleTemplate> belongsTo(CycleTemplate t, String machine, JsonDocument d) {
+        if (t.machine().equals(machine)) {
+            return Loaded.of(t);
+        }
+        return Loaded.unreadable(List.of(InputCode.LIBRARY_WRONG_MACHINE.finding("machine", d.at("machine")
+                + ": template \"" + t.name() + "\" is stored for machine \"" + machine + "\" but names machine \""
+                + t.machine() + "\"", "correct its \"machine\" key or save it again")));
     }
 
     /** The file text of a template (for {@code templates show}). */

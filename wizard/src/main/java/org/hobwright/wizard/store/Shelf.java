@@ -130,10 +130,12 @@ final class Shelf {
                 AtomicFiles.writeText(target, text, force);
                 return Loaded.of(target);
             } catch (FileAlreadyExistsException e) {
-                return Loaded.unreadable(List.of(InputCode.LIBRARY_EXISTS.finding(what, target + ": a saved " + what + " \""
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_EXISTS.finding(what,
+                        target + ": a saved " + what + " \""
                         + name + "\" exists already", "add --force to replace it")));
             } catch (IOException | RuntimeException e) {
-                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what, target + ": cannot be written ("
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what,
+                        target + ": cannot be written ("
                         + e.getClass().getSimpleName() + ": " + e.getMessage() + "); nothing was changed", null)));
             }
         });
@@ -147,7 +149,8 @@ final class Shelf {
                     return Loaded.of(target);
                 }
             } catch (IOException e) {
-                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what, target + ": cannot be removed ("
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what,
+                        target + ": cannot be removed ("
                         + e.getMessage() + ")", null)));
             }
             if (builtins.text(folder + "/" + name + ".json").isPresent()) {
