@@ -156,7 +156,7 @@ final class SheetTables {
             m.open("ul", "class", "findings");
             for (Finding x : open) {
                 m.open("li").leaf("strong", x.severity().word() + " " + x.code()).text(" (" + x.field() + "): "
-                        + x.message() + x.fix().map(fx -> " Fix: " + fx).orElse("")).close("li");
+                        + x.message() + x.fix().map(fx -> " — fix: " + fx).orElse("")).close("li");
             }
             m.close("ul");
         }
