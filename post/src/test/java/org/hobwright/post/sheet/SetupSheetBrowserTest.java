@@ -19,7 +19,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 
 /**
- * Renders each setup sheet in headless Chromium: a screenshot and a PDF print. Skipped when no
+ * Renders each setup sheet in headless Chromium (a screenshot; the helical one also printed to PDF). Skipped when no
  * Chromium is found on the PATH (or named by the environment variable {@code HOBWRIGHT_CHROMIUM}).
  * The PNG files are kept in {@code target/sheet-screenshots} for a person to look at.
  */
@@ -40,9 +40,13 @@ class SetupSheetBrowserTest {
         Path png = shots.resolve(f.id() + ".png").toAbsolutePath();
         Path pdf = tmp.resolve(f.id() + ".pdf");
         run(tmp, chromium.get().toString(), "--window-size=900,2000", "--screenshot=" + png, html.toUri().toString());
-        run(tmp, chromium.get().toString(), "--no-pdf-header-footer", "--print-to-pdf=" + pdf, html.toUri().toString());
         assertTrue(Files.size(png) > 10_000, "a screenshot with content");
-        assertTrue(Files.size(pdf) > 10_000, "a printed PDF with content");
+        if (f.cycle().simulation().isPresent()) {
+            // one print is enough to prove the page prints; each Chromium start costs seconds
+            run(tmp, chromium.get().toString(), "--no-pdf-header-footer", "--print-to-pdf=" + pdf,
+                    html.toUri().toString());
+            assertTrue(Files.size(pdf) > 10_000, "a printed PDF with content");
+        }
     }
 
     private static void run(Path dir, String... args) throws Exception {
