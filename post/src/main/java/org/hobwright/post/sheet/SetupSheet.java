@@ -94,7 +94,7 @@ final class SetupSheet {
     private static String swivelCaption(SetupValues s, HobJob job, SheetFormat f) {
         String turn = s.swivelAngleDeg() > 0 ? "clockwise" : s.swivelAngleDeg() < 0 ? "counter-clockwise" : "not";
         boolean exaggerated = s.swivelAngleDeg() != 0 && Math.abs(s.swivelAngleDeg()) < SwivelSvg.MIN_DRAWN;
-        return "Seen from the hob toward the work axis. " + job.hob().hand().word() + "-hand hob, "
+        return "Seen from the hob toward the work axis. " + capitalised(job.hob().hand().word()) + "-hand hob, "
                 + job.hob().starts() + " start(s); gear " + (job.gear().isSpur() ? "spur"
                 : job.gear().hand().word() + "-hand helix " + f.deg(job.gear().helixAngleDeg())) + ". "
                 + "The hob axis is turned " + turn + " from square by η = " + f.deg(s.swivelAngleDeg()) + " ("

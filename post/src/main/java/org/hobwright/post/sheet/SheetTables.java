@@ -148,7 +148,7 @@ final class SheetTables {
     }
 
     void findings(List<Finding> findings) {
-        m.open("section").leaf("h2", "Open warnings").nl();
+        m.open("section").leaf("h2", "Open warnings and notes").nl();
         List<Finding> open = findings.stream().filter(x -> !x.isError()).toList();
         if (open.isEmpty()) {
             m.leaf("p", "None.");
