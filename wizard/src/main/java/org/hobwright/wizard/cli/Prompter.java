@@ -26,6 +26,11 @@ final class Prompter {
         this.echo = echo;
     }
 
+    /** The writer questions go to. */
+    PrintWriter writer() {
+        return out;
+    }
+
     /** Prints a line. */
     void say(String line) {
         out.println(line);

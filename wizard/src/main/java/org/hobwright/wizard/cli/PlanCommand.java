@@ -1,0 +1,60 @@
+package org.hobwright.wizard.cli;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Callable;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.ParentCommand;
+
+/** {@code hobwright plan}: the batch form of the wizard for one or many job files. */
+@Command(name = "plan", mixinStandardHelpOptions = true,
+        description = {"Checks and plans job files and writes the NC program, cycle CSV, setup sheet and report"
+                + " of each into the output folder, all or nothing.",
+                "Several files, or a folder of .json job files, are planned in one run."})
+final class PlanCommand implements Callable<Integer> {
+    @ParentCommand
+    HobwrightCommand parent;
+
+    @CommandLine.Spec
+    CommandLine.Model.CommandSpec spec;
+
+    @Parameters(arity = "1..*", paramLabel = "JOB", description = "Job files (.json) or folders of job files.")
+    List<Path> jobs;
+
+    @Option(names = "--machine", paramLabel = "NAME|FILE",
+            description = "Plan on this machine profile (a library name or a machine file) instead of the job's.")
+    String machine;
+
+    @Option(names = "--template", paramLabel = "NAME",
+            description = "Fill the cycle values the jobs leave out from this template of the machine.")
+    String template;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Output folder (default: hobwright-out; with --json, nothing is written unless given).")
+    Path out;
+
+    @Option(names = "--json", description = "Print the JSON report on standard output (the summary goes to"
+            + " standard error).")
+    boolean json;
+
+    @Option(names = "--fastest", description = "Also ask the optimiser for the shortest cycle within the limits.")
+    boolean fastest;
+
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
+            description = "Date printed in the outputs (default: $SOURCE_DATE_EPOCH, else today).")
+    String date;
+
+    @Override
+    public Integer call() {
+        Optional<Path> folder = Optional.ofNullable(out).or(() -> json ? Optional.empty()
+                : Optional.of(Path.of(DemoCommand.DEFAULT_OUT)));
+        PlanRequest request = new PlanRequest(jobs, Optional.ofNullable(machine), Optional.ofNullable(template),
+                folder, json, fastest, Optional.ofNullable(date), parent.home());
+        CommandLine cl = spec.commandLine();
+        return new PlanRun(parent.env(), cl.getOut(), cl.getErr()).run(request);
+    }
+}
