@@ -49,7 +49,8 @@ final class PlanRun {
                 read.add(store.readJobFile(file, overrides, request.fastest()));
             }
         }
-        CyclePlanner planner = Providers.planner(env.loader());
+        CyclePlanner planner = read.stream().anyMatch(in -> in.job().isPresent()) ? Providers.planner(env.loader())
+                : null;
         List<JobInput> jobs = read.stream()
                 .map(in -> in.job().map(j -> in.planned(planner.plan(j))).orElse(in)).toList();
         return finish(jobs, request, store, generatedOn);
