@@ -22,4 +22,14 @@ final class CliFailure extends RuntimeException {
     int exitCode() {
         return exitCode;
     }
+
+    /** Prints the one line of a failed run and returns its exit code (3 for a fault of Hobwright itself). */
+    static int report(Exception ex, java.io.PrintWriter err) {
+        if (ex instanceof CliFailure f) {
+            err.println("hobwright: " + f.getMessage());
+            return f.exitCode();
+        }
+        err.println("hobwright: internal error: " + ex);
+        return ExitCodes.INTERNAL;
+    }
 }

@@ -1,8 +1,6 @@
 package org.hobwright.wizard.cli;
 
 import java.nio.file.Path;
-import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -14,16 +12,13 @@ import picocli.CommandLine.ParentCommand;
         description = "Plans and posts the built-in sample job " + PlanRun.SAMPLE_JOB
                 + " (an invented metering-pump gear on the invented Varrow SL-16): program, CSV, setup sheet, report.")
 final class DemoCommand implements Callable<Integer> {
-    /** The output folder when none is given. */
-    static final String DEFAULT_OUT = "hobwright-out";
-
     @ParentCommand
     HobwrightCommand parent;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = DEFAULT_OUT,
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = PlanRequest.DEFAULT_OUT,
             description = "Output folder (default: ${DEFAULT-VALUE}).")
     Path out;
 
@@ -33,9 +28,12 @@ final class DemoCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PlanRequest request = new PlanRequest(List.of(), Optional.empty(), Optional.empty(), Optional.of(out),
-                false, false, Optional.ofNullable(date), parent.home());
         CommandLine cl = spec.commandLine();
-        return new PlanRun(parent.env(), cl.getOut(), cl.getErr()).run(request);
+        return new PlanRun(parent.env(), cl.getOut(), cl.getErr()).run(request());
+    }
+
+    /** The run the options ask for. */
+    PlanRequest request() {
+        return PlanRequest.demo(out, date, parent.home().orElse(null));
     }
 }

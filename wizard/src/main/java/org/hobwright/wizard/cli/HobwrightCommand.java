@@ -54,14 +54,7 @@ public final class HobwrightCommand implements Callable<Integer> {
     /** Builds the command line on the given environment with the project's exit codes. */
     public static CommandLine commandLine(CliEnvironment env) {
         CommandLine cl = new CommandLine(new HobwrightCommand(env));
-        cl.setExecutionExceptionHandler((ex, line, parsed) -> {
-            if (ex instanceof CliFailure f) {
-                line.getErr().println("hobwright: " + f.getMessage());
-                return f.exitCode();
-            }
-            line.getErr().println("hobwright: internal error: " + ex);
-            return ExitCodes.INTERNAL;
-        });
+        cl.setExecutionExceptionHandler((ex, line, parsed) -> CliFailure.report(ex, line.getErr()));
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine where = ex.getCommandLine();
             where.getErr().println("hobwright: " + ex.getMessage() + " (see '"

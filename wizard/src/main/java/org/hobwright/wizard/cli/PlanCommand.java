@@ -2,7 +2,6 @@ package org.hobwright.wizard.cli;
 
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -50,11 +49,13 @@ final class PlanCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Optional<Path> folder = Optional.ofNullable(out).or(() -> json ? Optional.empty()
-                : Optional.of(Path.of(DemoCommand.DEFAULT_OUT)));
-        PlanRequest request = new PlanRequest(jobs, Optional.ofNullable(machine), Optional.ofNullable(template),
-                folder, json, fastest, Optional.ofNullable(date), parent.home());
+        Timing.mark("arguments parsed");
         CommandLine cl = spec.commandLine();
-        return new PlanRun(parent.env(), cl.getOut(), cl.getErr()).run(request);
+        return new PlanRun(parent.env(), cl.getOut(), cl.getErr()).run(request());
+    }
+
+    /** The run the options ask for. */
+    PlanRequest request() {
+        return PlanRequest.plan(jobs, machine, template, out, json, fastest, date, parent.home().orElse(null));
     }
 }

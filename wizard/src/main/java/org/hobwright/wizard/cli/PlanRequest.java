@@ -21,4 +21,23 @@ record PlanRequest(List<Path> inputs, Optional<String> machine, Optional<String>
     PlanRequest {
         inputs = List.copyOf(inputs);
     }
+
+    /** The output folder when none is given. */
+    static final String DEFAULT_OUT = "hobwright-out";
+
+    /** A {@code plan} run: without {@code --out}, writes to the default folder unless {@code --json} is asked. */
+    static PlanRequest plan(List<Path> inputs, String machine, String template, Path out, boolean json,
+                            boolean fastest, String date, Path home) {
+        Optional<Path> folder = Optional.ofNullable(out).or(() -> json ? Optional.empty()
+                : Optional.of(Path.of(DEFAULT_OUT)));
+        return new PlanRequest(inputs, Optional.ofNullable(machine), Optional.ofNullable(template), folder, json,
+                fastest, Optional.ofNullable(date), Optional.ofNullable(home));
+    }
+
+    /** A {@code demo} run of the built-in sample job. */
+    static PlanRequest demo(Path out, String date, Path home) {
+        return new PlanRequest(List.of(), Optional.empty(), Optional.empty(),
+                Optional.of(out == null ? Path.of(DEFAULT_OUT) : out), false, false, Optional.ofNullable(date),
+                Optional.ofNullable(home));
+    }
 }

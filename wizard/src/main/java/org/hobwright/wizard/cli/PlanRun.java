@@ -39,6 +39,7 @@ final class PlanRun {
     int run(PlanRequest request) {
         String generatedOn = GeneratedOn.resolve(request.date().orElse(null), env);
         Store store = Store.open(request.home(), env);
+        Timing.mark("library opened");
         JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
         List<JobInput> read = new ArrayList<>();
         if (request.inputs().isEmpty()) {
@@ -49,10 +50,12 @@ final class PlanRun {
                 read.add(store.readJobFile(file, overrides, request.fastest()));
             }
         }
+        Timing.mark("jobs read");
         CyclePlanner planner = read.stream().anyMatch(in -> in.job().isPresent()) ? Providers.planner(env.loader())
                 : null;
         List<JobInput> jobs = read.stream()
                 .map(in -> in.job().map(j -> in.planned(planner.plan(j))).orElse(in)).toList();
+        Timing.mark("jobs planned");
         return finish(jobs, request, store, generatedOn);
     }
 
@@ -74,12 +77,14 @@ final class PlanRun {
     /** Writes every job's outputs, or none when a writer refuses. */
     static int write(Outputs outputs, List<JobInput> jobs, Store store, Path folder, RunPrinter printer) {
         Outputs.Produced produced = outputs.produce(jobs);
+        Timing.mark("outputs formatted");
         printer.findings(produced.findings());
         if (produced.refused()) {
             printer.nothingWritten("a writer refused");
             return ExitCodes.JOB_ERRORS;
         }
         store.writeAll(folder, produced.files());
+        Timing.mark("outputs written");
         printer.written(folder, produced.files().keySet());
         return ExitCodes.OK;
     }

@@ -26,9 +26,9 @@ final class WizardCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = DemoCommand.DEFAULT_OUT,
+    @Option(names = "--out", paramLabel = "DIR", defaultValue = PlanRequest.DEFAULT_OUT,
             description = "Output folder (default: ${DEFAULT-VALUE}).")
-    Path out = Path.of(DemoCommand.DEFAULT_OUT);
+    Path out = Path.of(PlanRequest.DEFAULT_OUT);
 
     @Option(names = "--date", paramLabel = "YYYY-MM-DD",
             description = "Date printed in the outputs (default: $SOURCE_DATE_EPOCH, else today).")
@@ -54,7 +54,7 @@ final class WizardCommand implements Callable<Integer> {
         prompter.say("Hobwright " + ToolVersion.VERSION + " wizard. Enter keeps the value in brackets, '?' explains,"
                 + " 'back' returns.");
         WizardFinish finish = new WizardFinish(session, store, new Outputs(store, env.loader(), generatedOn),
-                Optional.ofNullable(out).orElse(Path.of(DemoCommand.DEFAULT_OUT)));
+                Optional.ofNullable(out).orElse(Path.of(PlanRequest.DEFAULT_OUT)));
         return new TerminalWizard(session, prompter).run(finish);
     }
 }
