@@ -31,6 +31,8 @@ final class TerminalWizard {
 
     private final Wizard wizard;
     private final Prompter prompter;
+    /** The fields to ask again after a blocked step; empty asks the whole step. */
+    private List<String> focus = List.of();
 
     TerminalWizard(Wizard wizard, Prompter prompter) {
         this.wizard = wizard;
@@ -53,17 +55,25 @@ final class TerminalWizard {
                 }
                 continue;
             }
-            prompter.say("");
-            prompter.say("Step " + (view.id().ordinal() + 1) + " of " + STEPS + ": " + view.title());
-            if (askFields(view)) {
-                complete();
+            if (focus.isEmpty()) {
+                prompter.say("");
+                prompter.say("Step " + (view.id().ordinal() + 1) + " of " + STEPS + ": " + view.title());
+            }
+            List<FieldSpec> fields = view.fields().stream()
+                    .filter(f -> focus.isEmpty() || focus.contains(f.key())).toList();
+            boolean subset = !focus.isEmpty();
+            focus = List.of();
+            if (askFields(fields, subset)) {
+                complete(view);
             }
         }
     }
 
-    /** Asks every field of the step; false when the user went back to the previous step. */
-    private boolean askFields(StepView view) {
-        List<FieldSpec> fields = view.fields();
+    /**
+     * Asks the fields; false when the user went back: to the whole step from a subset, else to the
+     * previous step.
+     */
+    private boolean askFields(List<FieldSpec> fields, boolean subset) {
         int i = 0;
         while (i < fields.size()) {
             FieldSpec f = fields.get(i);
@@ -73,7 +83,7 @@ final class TerminalWizard {
             } else if (line.equalsIgnoreCase("back")) {
                 if (i > 0) {
                     i--;
-                } else if (goBack()) {
+                } else if (subset || goBack()) {
                     return false;
                 }
             } else {
@@ -89,21 +99,28 @@ final class TerminalWizard {
         return true;
     }
 
-    /** Completes the step; on warnings asks whether to accept them. */
-    private void complete() {
+    /**
+     * Completes the step; on warnings asks whether to accept them. When the step stays, the
+     * questions the findings name are asked again (the whole step when they name none of them).
+     */
+    private void complete(StepView view) {
         Transition t = wizard.next(false);
         if (t.moved()) {
             return;
         }
         t.findings().forEach(f -> prompter.say("  " + f.line()));
-        if (Finding.anyError(t.findings())) {
-            prompter.say("  Please correct the errors; the step is asked again (Enter keeps a value).");
-            return;
-        }
-        if (t.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING)
+        boolean errors = Finding.anyError(t.findings());
+        if (!errors && t.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING)
                 && yes(read("  Accept these warnings and go on? [yes] > "), true)) {
             wizard.next(true);
+            return;
         }
+        focus = view.fields().stream().map(FieldSpec::key)
+                .filter(k -> t.findings().stream().anyMatch(f -> f.field().equals(k) || f.field().startsWith(k + ".")
+                        || k.startsWith(f.field() + ".")))
+                .toList();
+        prompter.say(focus.isEmpty() ? "  Please correct the step; it is asked again (Enter keeps a value)."
+                : "  Please correct " + String.join(", ", focus) + " ('back' for the whole step).");
     }
 
     private boolean review(StepView view, Finish finish) {

@@ -29,10 +29,15 @@ final class Cli {
 
     /** Runs with the library in {@code home} and {@code input} as the piped answers. */
     static Run piped(Path home, String input, String... args) {
+        return run(home, input, Cli.class.getClassLoader(), args);
+    }
+
+    /** Runs with the library in {@code home}, piped answers, and providers found with {@code loader}. */
+    static Run run(Path home, String input, ClassLoader loader, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         CliEnvironment env = new CliEnvironment(new BufferedReader(new StringReader(input)), CLOCK,
-                Map.of("HOBWRIGHT_HOME", home.toString()), Cli.class.getClassLoader(), true);
+                Map.of("HOBWRIGHT_HOME", home.toString()), loader, true);
         CommandLine cl = HobwrightCommand.commandLine(env);
         cl.setOut(new PrintWriter(out, true));
         cl.setErr(new PrintWriter(err, true));
