@@ -17,7 +17,7 @@ import tools.jackson.databind.node.ObjectNode;
  * empty, so their keys take their defaults.
  */
 final class Fields {
-    /** Millimetres per inch... and metres per foot: 1 ft = 0.3048 m exactly (1959 agreement). */
+    /** Metres per foot: 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959). */
     static final double M_PER_FT = 0.3048;
 
     private final JsonDocument doc;

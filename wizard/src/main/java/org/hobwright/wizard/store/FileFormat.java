@@ -122,17 +122,18 @@ public enum FileFormat {
                     "give a " + word + " file here"));
         }
         JsonNode version = doc.root().get("version");
-        if (version == null || !version.isIntegralNumber()) {
+        if (version == null || !version.isNumber() || version.doubleValue() != Math.rint(version.doubleValue())) {
             return Loaded.unreadable(InputCode.INPUT_VERSION.finding("version",
                     doc.at("version") + ": \"version\" is missing or not a whole number",
                     "add \"version\": " + VERSION));
         }
-        int v = version.intValue();
-        if (v > VERSION || v < 0) {
+        double asNumber = version.doubleValue();
+        int v = asNumber > VERSION || asNumber < 0 ? -1 : (int) asNumber;
+        if (v < 0) {
             return Loaded.unreadable(InputCode.INPUT_VERSION.finding("version",
                     doc.at("version") + ": version " + version + " of " + word + " is not one this program reads"
                             + " (0 to " + VERSION + ")",
-                    v > VERSION ? "use a newer Hobwright, or save the file as version " + VERSION : null));
+                    asNumber > VERSION ? "use a newer Hobwright, or save the file as version " + VERSION : null));
         }
         List<Finding> findings = new ArrayList<>();
         JsonDocument current = doc;

@@ -50,15 +50,13 @@ public enum InputCode {
     /** No saved or built-in machine, template or dialect of that name. */
     LIBRARY_NOT_FOUND(Severity.ERROR, true, "no saved or built-in entry of that name"),
     /** A saved file of that name exists and replacing it was not asked for. */
-    LIBRARY_EXISTS(Severity.ERROR, false, "the entry exists and replacing was not asked for"),
+    LIBRARY_EXISTS(Severity.ERROR, true, "the entry exists and replacing was not asked for"),
     /** A built-in entry cannot be removed or changed. */
-    LIBRARY_READ_ONLY(Severity.ERROR, false, "a built-in entry cannot be removed"),
+    LIBRARY_READ_ONLY(Severity.ERROR, true, "a built-in entry cannot be removed"),
     /** Writing or removing a library file failed; the old file is unchanged. */
-    LIBRARY_WRITE_FAILED(Severity.ERROR, false, "writing or removing a library file failed"),
+    LIBRARY_WRITE_FAILED(Severity.ERROR, true, "writing or removing a library file failed"),
     /** A template made for another machine than the job's. */
-    LIBRARY_WRONG_MACHINE(Severity.ERROR, false, "a template made for another machine"),
-    /** A saved entry hides a built-in one of the same name. */
-    LIBRARY_SHADOWS_BUILTIN(Severity.INFO, false, "a saved entry hides the built-in one of the same name");
+    LIBRARY_WRONG_MACHINE(Severity.ERROR, true, "a template made for another machine");
 
     /** The source named in every finding of this catalogue. */
     public static final String SOURCE = "Hobwright file formats, version 1 (DEVELOPERS.md)";
@@ -78,7 +76,12 @@ public enum InputCode {
         return severity;
     }
 
-    /** True when this problem makes the input unreadable (exit code 2). */
+    /**
+     * True when this problem stops the tool with exit code 2: input that cannot be read as a
+     * file of its format, or a library request that cannot be carried out (bad name, unknown
+     * entry, existing entry without replacing, built-in entry, failing disk). False for wrong
+     * values in a readable file (exit code 1) and for notes.
+     */
     public boolean unreadable() {
         return unreadable;
     }

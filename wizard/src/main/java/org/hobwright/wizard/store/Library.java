@@ -138,7 +138,7 @@ public final class Library {
         return document(TEMPLATES + "/" + machine, "template", name).then(d -> checkStem(
                 TemplateReader.read(d), name, CycleTemplate::name, "template").then(t -> t.machine().equals(machine)
                 ? Loaded.of(t)
-                : Loaded.failed(List.of(InputCode.LIBRARY_WRONG_MACHINE.finding("machine", d.at("machine")
+                : Loaded.unreadable(List.of(InputCode.LIBRARY_WRONG_MACHINE.finding("machine", d.at("machine")
                         + ": template \"" + name + "\" is stored for machine \"" + machine + "\" but names machine \""
                         + t.machine() + "\"", "correct its \"machine\" key or save it again")))));
     }
@@ -330,10 +330,10 @@ public final class Library {
             AtomicFiles.writeText(target, text, force);
             return Loaded.of(target);
         } catch (FileAlreadyExistsException e) {
-            return Loaded.failed(List.of(InputCode.LIBRARY_EXISTS.finding(what, target + ": a saved " + what + " \""
+            return Loaded.unreadable(List.of(InputCode.LIBRARY_EXISTS.finding(what, target + ": a saved " + what + " \""
                     + name + "\" exists already", "add --force to replace it")));
         } catch (IOException | RuntimeException e) {
-            return Loaded.failed(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what, target + ": cannot be written ("
+            return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what, target + ": cannot be written ("
                     + e.getClass().getSimpleName() + ": " + e.getMessage() + "); nothing was changed", null)));
         }
     }
@@ -349,11 +349,11 @@ public final class Library {
                 return Loaded.of(target);
             }
         } catch (IOException e) {
-            return Loaded.failed(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what, target + ": cannot be removed ("
+            return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what, target + ": cannot be removed ("
                     + e.getMessage() + ")", null)));
         }
         if (builtins.text(folder + "/" + name + ".json").isPresent()) {
-            return Loaded.failed(List.of(InputCode.LIBRARY_READ_ONLY.finding(what, "the " + what + " \"" + name
+            return Loaded.unreadable(List.of(InputCode.LIBRARY_READ_ONLY.finding(what, "the " + what + " \"" + name
                     + "\" is built in and cannot be removed", "save one of the same name to use instead of it")));
         }
         return Loaded.unreadable(notFound(folder, what, name));
