@@ -56,7 +56,7 @@ public final class GearChecks {
                 + words.length(shifted.tipDiameterMm()) + ", root diameter " + words.length(shifted.rootDiameterMm())
                 + ", tip thickness " + words.length(shifted.normalThicknessAtMm(shifted.tipDiameterMm()))
                 + "; the mating gear and centre distance must allow for it";
-        EngineeringCode code = xMin - xE <= hStar / 6 ? EngineeringCode.GEAR_UNDERCUT_SLIGHT : EngineeringCode.GEAR_UNDERCUT;
+        EngineeringCode code = xMin - xE <= Undercut.SLIGHT_SHORTFALL * hStar ? EngineeringCode.GEAR_UNDERCUT_SLIGHT : EngineeringCode.GEAR_UNDERCUT;
         out.add(code.at("gear.profileShift", msg, fix));
     }
 
@@ -106,7 +106,10 @@ public final class GearChecks {
         return OptionalDouble.of(lo);
     }
 
-    /** A custom root radius must fit the clearance of its basic rack (ISO 53 §5.9 rule). */
+    /**
+     * A custom root radius must fit the clearance of its basic rack (ISO 53 §5.9 rule), within 0.005 m_n:
+     * ISO 53 itself rounds its factors to two decimals (profile A: 0.38 against the largest 0.37995).
+     */
     public static void customRootRadius(InvoluteGear g, Wording words, List<Finding> out) {
         ToothSystem s = g.system();
         if (!ToothSystem.CUSTOM.equals(s.id())) {
@@ -114,7 +117,7 @@ public final class GearChecks {
         }
         double m = g.normalModuleMm();
         double max = s.maxRootRadiusMm(m, g.normalPressureAngleRad());
-        if (s.rootRadiusMm(m) > max + 1e-12) {
+        if (s.rootRadiusMm(m) > max + 0.005 * m) {
             out.add(EngineeringCode.GEAR_CUSTOM_ROOT_RADIUS.at("gear.custom.rootRadius", "root radius factor "
                     + words.number(s.rootRadiusFactor()) + " is larger than the largest that fits the clearance ("
                     + words.number(max / m) + ")", "use a root radius factor of at most " + words.number(max / m)));

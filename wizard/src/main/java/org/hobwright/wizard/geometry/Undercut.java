@@ -12,11 +12,15 @@ package org.hobwright.wizard.geometry;
  * notebooks drivetrainhub/notebooks-gears (helical_gears.py) for both forms; easyengcalc gear-undercut
  * page for z_min 17 at 20° and 32 at 14.5° (DOMAIN.md §2.3, S3, S9).
  *
- * <p>Practical limit: a slight undercut below the working flank is usually accepted down to about
- * 5/6 of z_min (14 teeth at 20°, 26 at 14.5°, S9); in terms of shift that is a shortfall of up to
- * h* ÷ 6 (the 5/6 rule from memory, Roloff/Matek; it reproduces S9's practical numbers).
+ * <p>Practical limit: a slight undercut below the working flank is usually accepted down to 14 teeth at
+ * 20° and 26 at 14.5° (S9). A profile-shift shortfall of at most h* ÷ 5 ({@link #SLIGHT_SHORTFALL}) gives
+ * exactly those two limits (14 teeth at 20° fall short by 0.181, 13 by 0.240; 26 teeth at 14.5° by 0.185,
+ * 25 by 0.217), so Hobwright calls a shortfall up to h* ÷ 5 slight (rule chosen to match S9).
  */
 public final class Undercut {
+    /** Largest profile-shift shortfall, as a fraction of h*, still called a slight undercut. */
+    public static final double SLIGHT_SHORTFALL = 0.2;
+
     private Undercut() {
     }
 

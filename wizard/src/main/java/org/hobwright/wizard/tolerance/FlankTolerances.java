@@ -2,7 +2,8 @@ package org.hobwright.wizard.tolerance;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import org.hobwright.api.cycle.ToleranceData;
 
 /**
@@ -98,18 +99,18 @@ public final class FlankTolerances {
         check(out, "normal module", mn, 0.5, 70, " mm");
         check(out, "face width", b, 4, 1200, " mm");
         if (helixAngleDeg > 45) {
-            out.add(String.format(Locale.ROOT, "helix angle %.4g° (scope up to 45°)", helixAngleDeg));
+            out.add("helix angle " + fmt(helixAngleDeg) + "° (scope up to 45°)");
         }
         return out;
     }
 
     private static void check(List<String> out, String what, double v, double min, double max, String unit) {
         if (v < min || v > max) {
-            out.add(String.format(Locale.ROOT, "%s %.6g%s (scope %s to %s%s)", what, v, unit, fmt(min), fmt(max), unit));
+            out.add(what + " " + fmt(v) + unit + " (scope " + fmt(min) + " to " + fmt(max) + unit + ")");
         }
     }
 
     private static String fmt(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+        return new BigDecimal(v).round(new MathContext(6)).stripTrailingZeros().toPlainString();
     }
 }
