@@ -5,6 +5,7 @@ import java.util.List;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Pitch;
+import org.hobwright.wizard.geometry.GearGeometry;
 
 /**
  * Plausibility ranges of the gear's own numbers (the api records already refuse impossible ones such
@@ -83,7 +84,7 @@ public final class InputChecks {
     private static void thickness(GearSpec gear, Wording words, List<Finding> out) {
         double m = gear.moduleMm();
         double e = gear.thicknessAllowanceMm();
-        double nominal = m * (Math.PI / 2 + 2 * gear.profileShift() * Math.tan(Math.toRadians(gear.pressureAngleDeg())));
+        double nominal = GearGeometry.normalThickness(m, Math.toRadians(gear.pressureAngleDeg()), gear.profileShift(), 0);
         if (nominal + e <= 0) {
             out.add(EngineeringCode.GEAR_TOOTH_TOO_THIN.at("gear.thicknessAllowance", "thickness allowance "
                     + words.length(e) + " leaves no tooth: the tooth thickness would be " + words.length(nominal + e),

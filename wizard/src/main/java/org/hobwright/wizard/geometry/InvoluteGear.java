@@ -128,8 +128,7 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
      * Technology, Table 10-1.
      */
     public double normalThicknessMm() {
-        return normalModuleMm * (Math.PI / 2 + 2 * profileShift * Math.tan(normalPressureAngleRad))
-                + thicknessAllowanceMm;
+        return GearGeometry.normalThickness(normalModuleMm, normalPressureAngleRad, profileShift, thicknessAllowanceMm);
     }
 
     /** Transverse tooth thickness at the reference circle s_t = s_n / cos β, mm. */
@@ -150,9 +149,8 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
      * cos α_yt = d_b / d_y, mm (d_y at least d_b). ISO 21771; drivetrainhub notebooks-gears.
      */
     public double transverseThicknessAtMm(double dy) {
-        double alphaY = Math.acos(Math.min(1.0, baseDiameterMm() / dy));
-        return dy * (transverseThicknessMm() / referenceDiameterMm() + Involute.inv(transversePressureAngleRad())
-                - Involute.inv(alphaY));
+        return GearGeometry.transverseThicknessAt(dy, referenceDiameterMm(), baseDiameterMm(), transverseThicknessMm(),
+                transversePressureAngleRad());
     }
 
     /**

@@ -33,6 +33,18 @@ class UndercutAndInvoluteTest {
         assertTrue(Undercut.minProfileShift(1.0, TestGears.gear(practical - 1, 1, alpha, 0, 0)) > limit);
     }
 
+    // Two derivations meet: at the undercut limit x_min the root form circle (start of the generated involute)
+    // falls on the base circle; above it the form circle lies above the base circle (generating geometry).
+    @ParameterizedTest
+    @CsvSource({"12, 0, iso53-a", "12, 15, iso53-a", "20, 30, iso53-c", "30, 0, full-depth-14.5"})
+    void formCircleMeetsBaseCircleAtTheUndercutLimit(int z, double beta, String system) {
+        InvoluteGear g = TestGears.gear(z, 2, system.equals("full-depth-14.5") ? 14.5 : 20, beta, 0, system);
+        double xMin = Undercut.minProfileShift(Undercut.hStar(g), g);
+        InvoluteGear limit = g.withProfileShift(xMin);
+        assertEquals(limit.baseDiameterMm(), limit.rootFormDiameterMm(), 1e-6);
+        assertTrue(g.withProfileShift(xMin + 0.1).rootFormDiameterMm() > limit.baseDiameterMm());
+    }
+
     // Newton's iteration for q = 0.05 gives 0.5120398143 rad = 29.3377° (DOMAIN case 22, section 3.2).
     @Test
     void inverseInvoluteOfWorkedExample() {
