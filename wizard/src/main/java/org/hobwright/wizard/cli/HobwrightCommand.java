@@ -51,6 +51,11 @@ public final class HobwrightCommand implements Callable<Integer> {
         return new WizardCommand().run(this, spec.commandLine());
     }
 
+    /** Builds the command line on the real terminal, the system clock and the process environment. */
+    public static CommandLine commandLine() {
+        return commandLine(CliEnvironment.system());
+    }
+
     /** Builds the command line on the given environment with the project's exit codes. */
     public static CommandLine commandLine(CliEnvironment env) {
         CommandLine cl = new CommandLine(new HobwrightCommand(env));

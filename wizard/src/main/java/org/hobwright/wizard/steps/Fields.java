@@ -19,6 +19,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Stream;
+import org.hobwright.api.check.Finding;
 import org.hobwright.api.wizard.StepId;
 import org.hobwright.wizard.geometry.ToothSystem;
 
@@ -201,6 +202,20 @@ public final class Fields {
             return StepId.CYCLE;
         }
         return StepId.REVIEW;
+    }
+
+    /**
+     * The step at which a finding is shown and may block: the later of its field's step and the
+     * step whose answers its check depends on, told by the code's prefix ({@code HOB_} needs the
+     * hob, {@code MACHINE_} the machine, {@code PLAN_} the cycle). So a helical gear is not refused
+     * at GEAR for a machine that has not been chosen yet; the finding waits for MACHINE.
+     */
+    public static StepId stepOf(Finding finding) {
+        StepId field = stepOf(finding.field());
+        String code = finding.code();
+        StepId needs = code.startsWith("HOB_") ? StepId.CUTTER : code.startsWith("MACHINE_") ? StepId.MACHINE
+                : code.startsWith("PLAN_") ? StepId.CYCLE : StepId.GEAR;
+        return field.compareTo(needs) >= 0 ? field : needs;
     }
 
     /** A title for a step. */

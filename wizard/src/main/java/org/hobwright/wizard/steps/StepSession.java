@@ -149,7 +149,7 @@ public final class StepSession implements Wizard {
         StepServices.JobRead read = services.read(answers.toTree());
         List<Finding> all = new ArrayList<>(read.findings());
         read.job().ifPresent(j -> all.addAll(services.check(j)));
-        all.stream().filter(f -> Fields.stepOf(f.field()) == step).forEach(out::add);
+        all.stream().filter(f -> Fields.stepOf(f) == step).forEach(out::add);
         return List.copyOf(new LinkedHashSet<>(out));
     }
 

@@ -166,6 +166,24 @@ class StepSessionTest {
     }
 
     @Test
+    void aMachineCheckWaitsForTheMachineStep() {
+        Wizard w = session();
+        assertTrue(w.answer("gear.helixAngle", "15").isEmpty());
+        assertTrue(w.answer("gear.hand", "right").isEmpty());
+        assertTrue(w.answer("gear.blankDiameter", "").isEmpty());
+        Transition gear = w.next(true);
+        assertTrue(gear.moved(), gear::toString);
+        assertTrue(w.next(true).moved());
+        // the sample's machine, varrow-sl16, cannot follow a helix (samples/scenario/machines/varrow-sl16.json)
+        Transition machine = w.next(true);
+        assertFalse(machine.moved());
+        assertTrue(machine.findings().stream().anyMatch(f -> f.code().equals("MACHINE_NO_HELIX")), machine::toString);
+        assertTrue(w.answer(Fields.MACHINE, "ottmere-tl40").isEmpty());
+        Transition other = w.next(true);
+        assertTrue(other.moved(), other::toString);
+    }
+
+    @Test
     void machineChoicesComeFromTheLibrary() {
         Wizard w = session();
         w.next(true);
