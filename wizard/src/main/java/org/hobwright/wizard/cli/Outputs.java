@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
@@ -24,10 +25,8 @@ final class Outputs {
     static final String REPORT = "report";
 
     private final Store store;
-    private final ClassLoader loader;
     private final String generatedOn;
-    private List<CycleWriter> writers;
-    private final List<Finding> lookupProblems = new ArrayList<>();
+    private final CompletableFuture<Providers.Loaded<CycleWriter>> lookup;
 
     /**
      * The files and the findings of the writers for some jobs.
@@ -41,10 +40,11 @@ final class Outputs {
         }
     }
 
+    /** Starts looking the writers up at once, beside whatever the caller does next. */
     Outputs(Store store, ClassLoader loader, String generatedOn) {
         this.store = store;
-        this.loader = loader;
         this.generatedOn = generatedOn;
+        this.lookup = CompletableFuture.supplyAsync(() -> Providers.writers(loader));
     }
 
     /** Every writer's files for every job; a file name written twice is an error. */
@@ -60,8 +60,8 @@ final class Outputs {
             HobJob job = in.job().orElseThrow();
             HobCycle cycle = in.cycle().orElseThrow();
             WriteContext context = context(job);
-            for (CycleWriter w : writers()) {
-                WriteResult r = w.write(cycle, context);
+            // the writers are independent: run them side by side, keep their order
+            for (WriteResult r : writers().parallelStream().map(w -> w.write(cycle, context)).toList()) {
                 findings.addAll(r.findings());
                 for (OutputFile f : r.files()) {
                     String before = owner.putIfAbsent(f.fileName(), in.source());
@@ -94,16 +94,10 @@ final class Outputs {
     }
 
     private List<Finding> lookupProblems() {
-        writers();
-        return lookupProblems;
+        return lookup.join().problems();
     }
 
     private List<CycleWriter> writers() {
-        if (writers == null) {
-            Providers.Loaded<CycleWriter> loaded = Providers.writers(loader);
-            writers = loaded.providers();
-            lookupProblems.addAll(loaded.problems());
-        }
-        return writers;
+        return lookup.join().providers();
     }
 }

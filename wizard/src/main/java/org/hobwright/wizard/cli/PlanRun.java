@@ -6,6 +6,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import java.util.stream.Stream;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.Providers;
@@ -38,7 +40,10 @@ final class PlanRun {
      */
     int run(PlanRequest request) {
         String generatedOn = GeneratedOn.resolve(request.date().orElse(null), env);
+        // the planner and the writers are looked up beside the reading of the jobs
+        CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> Providers.planner(env.loader()));
         Store store = Store.open(request.home(), env);
+        Outputs outputs = new Outputs(store, env.loader(), generatedOn);
         Timing.mark("library opened");
         JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
         List<JobInput> read = new ArrayList<>();
@@ -51,18 +56,24 @@ final class PlanRun {
             }
         }
         Timing.mark("jobs read");
-        CyclePlanner planner = read.stream().anyMatch(in -> in.job().isPresent()) ? Providers.planner(env.loader())
-                : null;
         List<JobInput> jobs = read.stream()
-                .map(in -> in.job().map(j -> in.planned(planner.plan(j))).orElse(in)).toList();
+                .map(in -> in.job().map(j -> in.planned(join(planner).plan(j))).orElse(in)).toList();
         Timing.mark("jobs planned");
-        return finish(jobs, request, store, generatedOn);
+        return finish(jobs, request, store, outputs);
     }
 
-    private int finish(List<JobInput> jobs, PlanRequest request, Store store, String generatedOn) {
+    /** The looked-up planner; a missing one is reported as the exception the look-up threw. */
+    private static CyclePlanner join(CompletableFuture<CyclePlanner> planner) {
+        try {
+            return planner.join();
+        } catch (CompletionException e) {
+            throw e.getCause() instanceof RuntimeException r ? r : e;
+        }
+    }
+
+    private int finish(List<JobInput> jobs, PlanRequest request, Store store, Outputs outputs) {
         RunPrinter printer = new RunPrinter(request.json() ? err : out);
         jobs.forEach(printer::job);
-        Outputs outputs = new Outputs(store, env.loader(), generatedOn);
         if (request.json()) {
             out.println(new JsonReports(outputs).of(jobs));
             out.flush();
