@@ -34,10 +34,15 @@ final class Cli {
 
     /** Runs with the library in {@code home}, piped answers, and providers found with {@code loader}. */
     static Run run(Path home, String input, ClassLoader loader, String... args) {
+        return run(Map.of("HOBWRIGHT_HOME", home.toString()), input, loader, args);
+    }
+
+    /** Runs with the given environment variables, piped answers and providers found with {@code loader}. */
+    static Run run(Map<String, String> variables, String input, ClassLoader loader, String... args) {
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
-        CliEnvironment env = new CliEnvironment(new BufferedReader(new StringReader(input)), CLOCK,
-                Map.of("HOBWRIGHT_HOME", home.toString()), loader, true);
+        CliEnvironment env = new CliEnvironment(new BufferedReader(new StringReader(input)), CLOCK, variables,
+                loader, true);
         CommandLine cl = HobwrightCommand.commandLine(env);
         cl.setOut(new PrintWriter(out, true));
         cl.setErr(new PrintWriter(err, true));
