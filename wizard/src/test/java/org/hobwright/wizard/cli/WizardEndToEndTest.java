@@ -89,6 +89,32 @@ class WizardEndToEndTest {
     }
 
     @Test
+    void theCycleAnswersAreSavedAsATemplateThatPlanCanApply() throws IOException {
+        List<String> in = new ArrayList<>();
+        in.addAll(step(StepId.GEAR, java.util.Map.of()));
+        in.addAll(step(StepId.CUTTER, java.util.Map.of()));
+        in.addAll(step(StepId.MACHINE, java.util.Map.of()));
+        in.addAll(step(StepId.CYCLE, java.util.Map.of("cycle.finishFeed", List.of("0.4"))));
+        in.add("no");                                         // no outputs this time
+        in.add("../x");                                       // a name that would leave the folder
+        in.add("fine-finish");
+        Path home = dir.resolve("home");
+        Cli.Run wizard = Cli.run(home, String.join("\n", in) + "\n", loader, "wizard", "--out",
+                dir.resolve("out").toString());
+        assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
+        assertFalse(Files.exists(dir.resolve("out")));
+        assertTrue(wizard.out().contains("Saved template fine-finish"), wizard::toString);
+        Path saved = home.resolve("templates/varrow-sl16/fine-finish.json");
+        assertTrue(Files.readString(saved).contains("\"finishFeed\""), Files.readString(saved));
+
+        Path job = Files.writeString(dir.resolve("job.json"), Store.builtinText("jobs/metering-pump-gear.json"));
+        Cli.Run plan = Cli.run(home, "", loader, "plan", job.toString(), "--template", "fine-finish", "--json");
+        assertEquals(ExitCodes.OK, plan.code(), plan::toString);
+        var report = tools.jackson.databind.json.JsonMapper.shared().readTree(plan.out());
+        assertEquals(0.4, report.at("/cycle/axialFeed").doubleValue(), 1e-12, plan::toString);
+    }
+
+    @Test
     void inputEndingEarlyIsAUsageErrorAndWritesNothing() {
         Path out = dir.resolve("out");
         Cli.Run r = Cli.run(dir.resolve("home"), "\n\n", loader, "wizard", "--out", out.toString());
