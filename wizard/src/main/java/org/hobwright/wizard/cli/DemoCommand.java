@@ -1,10 +1,8 @@
 package org.hobwright.wizard.cli;
 
-import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.ParentCommand;
 
 /** {@code hobwright demo}: plans and posts the built-in sample job. */
@@ -18,13 +16,8 @@ final class DemoCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = PlanRequest.DEFAULT_OUT,
-            description = "Output folder (default: ${DEFAULT-VALUE}).")
-    Path out;
-
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
-            description = "Date printed in the outputs (default: $SOURCE_DATE_EPOCH, else today).")
-    String date;
+    @CommandLine.Mixin
+    OutputOptions output = new OutputOptions();
 
     @Override
     public Integer call() {
@@ -34,6 +27,6 @@ final class DemoCommand implements Callable<Integer> {
 
     /** The run the options ask for. */
     PlanRequest request() {
-        return PlanRequest.demo(out, date, parent.home().orElse(null));
+        return PlanRequest.demo(output.folder(), output.date, parent.home().orElse(null));
     }
 }

@@ -32,9 +32,8 @@ final class PlanCommand implements Callable<Integer> {
             description = "Fill the cycle values the jobs leave out from this template of the machine.")
     String template;
 
-    @Option(names = "--out", paramLabel = "DIR",
-            description = "Output folder (default: hobwright-out; with --json, nothing is written unless given).")
-    Path out;
+    @CommandLine.Mixin
+    OutputOptions output = new OutputOptions();
 
     @Option(names = "--json", description = "Print the JSON report on standard output (the summary goes to"
             + " standard error).")
@@ -42,10 +41,6 @@ final class PlanCommand implements Callable<Integer> {
 
     @Option(names = "--fastest", description = "Also ask the optimiser for the shortest cycle within the limits.")
     boolean fastest;
-
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
-            description = "Date printed in the outputs (default: $SOURCE_DATE_EPOCH, else today).")
-    String date;
 
     @Override
     public Integer call() {
@@ -56,6 +51,7 @@ final class PlanCommand implements Callable<Integer> {
 
     /** The run the options ask for. */
     PlanRequest request() {
-        return PlanRequest.plan(jobs, machine, template, out, json, fastest, date, parent.home().orElse(null));
+        return PlanRequest.plan(jobs, machine, template, output.out, json, fastest, output.date,
+                parent.home().orElse(null));
     }
 }

@@ -5,37 +5,26 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.ParentCommand;
 
 /** {@code hobwright templates list|show|save|remove}: the cycle templates of each machine. */
 @Command(name = "templates", mixinStandardHelpOptions = true,
         description = "Lists, shows, saves and removes cycle templates; each belongs to one machine."
                 + " 'plan JOB --template NAME' applies one.",
         subcommands = {CommandLine.HelpCommand.class})
-final class TemplatesCommand {
-    @ParentCommand
-    HobwrightCommand parent;
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
-    private Store store() {
-        return Store.open(parent.home(), parent.env());
-    }
-
+final class TemplatesCommand extends LibraryVerb {
     @Command(name = "list", mixinStandardHelpOptions = true,
             description = "Lists the templates of every machine, or of one.")
     int list(@Option(names = "--machine", paramLabel = "NAME", description = "Only this machine's.") String machine) {
         var library = store().library();
         return LibraryCommands.list(machine == null ? library.templates() : library.templates(machine),
-                spec.commandLine().getOut(), "No templates.");
+                out(), "No templates.");
     }
 
     @Command(name = "show", mixinStandardHelpOptions = true, description = "Prints a template file.")
     int show(@Parameters(paramLabel = "NAME", description = "Template name.") String name,
              @Option(names = "--machine", required = true, paramLabel = "NAME", description = "Its machine.")
              String machine) {
-        return LibraryCommands.show(store().library().templateText(machine, name), spec.commandLine().getOut());
+        return LibraryCommands.show(store().library().templateText(machine, name), out());
     }
 
     @Command(name = "save", mixinStandardHelpOptions = true,
@@ -43,7 +32,7 @@ final class TemplatesCommand {
     int save(@Parameters(paramLabel = "FILE", description = "Template file (.json).") Path file,
              @Option(names = "--force", description = "Replace a saved template of the same name.") boolean force) {
         return LibraryCommands.changed(store().library().saveTemplate(file, force), "Saved",
-                spec.commandLine().getOut());
+                out());
     }
 
     @Command(name = "remove", mixinStandardHelpOptions = true, description = "Removes a saved template.")
@@ -51,6 +40,6 @@ final class TemplatesCommand {
                @Option(names = "--machine", required = true, paramLabel = "NAME", description = "Its machine.")
                String machine) {
         return LibraryCommands.changed(store().library().removeTemplate(machine, name), "Removed",
-                spec.commandLine().getOut());
+                out());
     }
 }

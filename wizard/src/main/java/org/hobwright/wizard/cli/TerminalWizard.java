@@ -10,6 +10,7 @@ import org.hobwright.api.wizard.StepId;
 import org.hobwright.api.wizard.StepView;
 import org.hobwright.api.wizard.Transition;
 import org.hobwright.api.wizard.Wizard;
+import org.hobwright.wizard.steps.FieldCheck;
 
 /**
  * Walks a {@link Wizard} field by field on a terminal or piped input. Enter takes the value shown
@@ -162,8 +163,8 @@ final class TerminalWizard {
         if (!f.choices().isEmpty()) {
             prompter.say("  Choices: " + String.join(", ", f.choices()));
         }
-        f.min().ifPresent(min -> prompter.say("  Smallest: " + plain(min) + (f.max().isPresent()
-                ? ", largest: " + plain(f.max().getAsDouble()) : "")));
+        f.min().ifPresent(min -> prompter.say("  Smallest: " + FieldCheck.plain(min) + (f.max().isPresent()
+                ? ", largest: " + FieldCheck.plain(f.max().getAsDouble()) : "")));
         if (f.type() == FieldType.ANGLE) {
             prompter.say("  Angles: decimal degrees (13.2368) or degrees-minutes-seconds (13°14'12\" or 13 14 12).");
         }
@@ -192,9 +193,5 @@ final class TerminalWizard {
     static boolean yes(String line, boolean dflt) {
         String l = line.strip().toLowerCase(java.util.Locale.ROOT);
         return l.isEmpty() ? dflt : l.startsWith("y");
-    }
-
-    private static String plain(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 }

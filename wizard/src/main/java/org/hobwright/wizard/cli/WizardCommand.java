@@ -1,7 +1,6 @@
 package org.hobwright.wizard.cli;
 
 import java.nio.file.Path;
-import java.util.Optional;
 import java.util.concurrent.Callable;
 import org.hobwright.wizard.steps.Answers;
 import org.hobwright.wizard.steps.LibraryServices;
@@ -26,13 +25,8 @@ final class WizardCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
-    @Option(names = "--out", paramLabel = "DIR", defaultValue = PlanRequest.DEFAULT_OUT,
-            description = "Output folder (default: ${DEFAULT-VALUE}).")
-    Path out = Path.of(PlanRequest.DEFAULT_OUT);
-
-    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
-            description = "Date printed in the outputs (default: $SOURCE_DATE_EPOCH, else today).")
-    String date;
+    @CommandLine.Mixin
+    OutputOptions output = new OutputOptions();
 
     @Option(names = "--job", paramLabel = "FILE", description = "Start from this job file instead of the sample.")
     Path job;
@@ -45,7 +39,7 @@ final class WizardCommand implements Callable<Integer> {
     /** Runs the wizard with this command's options (the defaults when run without the verb). */
     int run(HobwrightCommand top, CommandLine cl) {
         CliEnvironment env = top.env();
-        String generatedOn = GeneratedOn.resolve(date, env);
+        String generatedOn = GeneratedOn.resolve(output.date, env);
         Store store = Store.open(top.home(), env);
         Answers defaults = job == null ? StepWizardFactory.sampleAnswers()
                 : Answers.fromTree(Store.readable(JsonDocument.read(job)).get().root());
@@ -54,7 +48,7 @@ final class WizardCommand implements Callable<Integer> {
         prompter.say("Hobwright " + ToolVersion.VERSION + " wizard. Enter keeps the value in brackets, '?' explains,"
                 + " 'back' returns.");
         WizardFinish finish = new WizardFinish(session, store, new Outputs(store, env.loader(), generatedOn),
-                Optional.ofNullable(out).orElse(Path.of(PlanRequest.DEFAULT_OUT)));
+                output.folder());
         return new TerminalWizard(session, prompter).run(finish);
     }
 }

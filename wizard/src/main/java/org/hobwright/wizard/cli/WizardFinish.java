@@ -13,6 +13,7 @@ import org.hobwright.wizard.store.CycleTemplate;
 import org.hobwright.wizard.store.Loaded;
 import org.hobwright.wizard.store.Names;
 import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
 
 /** The end of a terminal wizard: write the outputs, then offer to save the cycle answers as a template. */
@@ -40,7 +41,7 @@ final class WizardFinish implements TerminalWizard.Finish {
         if (TerminalWizard.yes(line, true)) {
             HobJob job = wizard.job().orElseThrow();
             JobInput in = new JobInput("wizard answers", Optional.of(job), List.of(), wizard.cycle());
-            RunPrinter printer = new RunPrinter(promptWriter(prompter));
+            RunPrinter printer = new RunPrinter(prompter.writer());
             if (PlanRun.write(outputs, List.of(in), store, folder, printer) != ExitCodes.OK) {
                 return true;
             }
@@ -78,17 +79,12 @@ final class WizardFinish implements TerminalWizard.Finish {
     /** The cycle answers as a template's {@code cycle} object (without the template choice itself). */
     private ObjectNode cycleTree() {
         JsonNode cycle = session.answers().toTree().get("cycle");
-        ObjectNode c = cycle instanceof ObjectNode o ? o.deepCopy() : tools.jackson.databind.node.JsonNodeFactory
-                .instance.objectNode();
+        ObjectNode c = cycle instanceof ObjectNode o ? o.deepCopy() : JsonNodeFactory.instance.objectNode();
         c.remove("template");
         return c;
     }
 
     private Units units() {
         return "in".equals(session.value(Fields.UNITS)) ? Units.IN : Units.MM;
-    }
-
-    private static java.io.PrintWriter promptWriter(Prompter prompter) {
-        return prompter.writer();
     }
 }

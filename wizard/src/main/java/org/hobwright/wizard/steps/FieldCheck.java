@@ -101,8 +101,8 @@ public final class FieldCheck {
         return "from " + plain(field.min().orElse(0)) + " to " + plain(field.max().getAsDouble());
     }
 
-    /** A number without a needless ".0". */
-    static String plain(double v) {
+    /** A number without a needless ".0", e.g. {@code 1}, {@code 0.25}. */
+    public static String plain(double v) {
         return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
