@@ -1,5 +1,6 @@
 package org.hobwright.wizard.check;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
@@ -39,24 +40,26 @@ public final class DrawingCheck {
         InvoluteGear nominal = g.withoutAllowance();
         Checker c = new Checker(g, words, out);
         dv.pitchDiameterMm().ifPresent(v -> c.compare(EngineeringCode.DRAWING_PITCH_DIAMETER, "pitchDiameter",
-                "pitch diameter", v, g.referenceDiameterMm(), g.referenceDiameterMm(), false, null,
+                "pitch diameter", v, g.referenceDiameterMm(), g.referenceDiameterMm(), false, null, null,
                 "check the tooth count, the pitch and the helix angle"));
         dv.outsideDiameterMm().ifPresent(v -> c.compare(EngineeringCode.DRAWING_OUTSIDE_DIAMETER, "outsideDiameter",
                 "outside diameter", v, g.tipDiameterMm(), g.tipDiameterMm(), false,
-                x -> g.withProfileShift(x).tipDiameterMm(), "check the profile shift and the tooth system"));
+                x -> g.withProfileShift(x).tipDiameterMm(), null, "check the profile shift and the tooth system"));
         dv.rootDiameterMm().ifPresent(v -> c.compare(EngineeringCode.DRAWING_ROOT_DIAMETER, "rootDiameter",
                 "root diameter", v, g.rootDiameterMm(), nominal.rootDiameterMm(), false,
-                x -> g.withProfileShift(x).rootDiameterMm(), "check the profile shift and the tooth system"));
+                x -> g.withProfileShift(x).rootDiameterMm(), x -> nominal.withProfileShift(x).rootDiameterMm(),
+                "check the profile shift and the tooth system"));
         dv.wholeDepthMm().ifPresent(v -> c.compare(EngineeringCode.DRAWING_WHOLE_DEPTH, "wholeDepth",
-                "whole depth", v, g.wholeDepthMm(), nominal.wholeDepthMm(), false, null, "check the tooth system"));
+                "whole depth", v, g.wholeDepthMm(), nominal.wholeDepthMm(), false, null, null, "check the tooth system"));
         dv.spanWidthMm().ifPresent(v -> span(dv, g, nominal, v, c, words, out));
         dv.overPinsMm().ifPresent(v -> {
             double pin = dv.pinDiameterMm().orElse(pinMm);
             c.compare(EngineeringCode.DRAWING_OVER_PINS, "overPins", "measurement over "
                     + (g.isSpur() ? "pins" : "balls") + " of " + words.length(pin), v, OverPins.of(g, pin).overPinsMm(),
                     OverPins.of(nominal, pin).overPinsMm(), true, x -> OverPins.of(g.withProfileShift(x), pin).overPinsMm(),
-                    "check the pin diameter, the profile shift and the thickness allowance");
+                    null, "check the pin diameter, the profile shift and the thickness allowance");
         });
+        c.consistency();
     }
 
     private static void span(DrawingValues dv, InvoluteGear g, InvoluteGear nominal, double v, Checker c,
@@ -70,29 +73,82 @@ public final class DrawingCheck {
         }
         c.compare(EngineeringCode.DRAWING_SPAN, "span", "span over " + k + " teeth", v,
                 SpanMeasurement.widthMm(g, k), SpanMeasurement.widthMm(nominal, k), true,
-                x -> SpanMeasurement.widthMm(g.withProfileShift(x), k),
+                x -> SpanMeasurement.widthMm(g.withProfileShift(x), k), null,
                 "check the number of teeth spanned, the profile shift and the thickness allowance");
     }
 
-    /** Compares one value. */
-    private record Checker(InvoluteGear g, Wording words, List<Finding> out) {
+    /** A printed value that depends on the profile shift. */
+    private record Implied(String name, double printed, DoubleUnaryOperator ofShift) {
+    }
+
+    /** Compares values one by one, then whether the shift-dependent ones fit one profile shift. */
+    private static final class Checker {
+        private final InvoluteGear g;
+        private final Wording words;
+        private final List<Finding> out;
+        private final List<Implied> implied = new ArrayList<>();
+        private int mismatches;
+
+        Checker(InvoluteGear g, Wording words, List<Finding> out) {
+            this.g = g;
+            this.words = words;
+            this.out = out;
+        }
 
         void compare(EngineeringCode code, String key, String name, double printed, double computed,
-                     double withoutAllowance, boolean allowanceMatters, DoubleUnaryOperator ofShift, String hint) {
-            if (Math.abs(printed - computed) <= tolerance(computed)) {
-                return;
-            }
-            String field = "gear.drawing." + key;
+                     double withoutAllowance, boolean allowanceMatters, DoubleUnaryOperator ofShift,
+                     DoubleUnaryOperator nominalOfShift, String hint) {
             boolean nominalFits = Math.abs(printed - withoutAllowance) <= tolerance(withoutAllowance);
-            if (nominalFits && !allowanceMatters) {
+            boolean fits = Math.abs(printed - computed) <= tolerance(computed);
+            if (ofShift != null) {
+                boolean nominalForm = !fits && nominalFits && nominalOfShift != null;
+                implied.add(new Implied(name, printed, nominalForm ? nominalOfShift : ofShift));
+            }
+            if (fits || nominalFits && !allowanceMatters) {
                 return;
             }
+            mismatches++;
+            String field = "gear.drawing." + key;
             String off = name + " on the drawing " + words.length(printed) + " differs from the computed "
                     + words.length(computed) + " by " + signed(printed - computed);
             String why = nominalFits
                     ? "; it fits the tooth without the thickness allowance " + words.length(g.thicknessAllowanceMm())
                     : impliedShift(ofShift, printed);
             out.add(code.at(field, off + why, "the " + name + " should be " + words.length(computed) + "; " + hint));
+        }
+
+        /**
+         * With a mismatch and two or more shift-dependent values: either they all fit one profile shift
+         * (then the job's shift is probably wrong) or no gear has all of them (the drawing contradicts itself).
+         */
+        void consistency() {
+            if (mismatches == 0 || implied.size() < 2) {
+                return;
+            }
+            double sum = 0;
+            List<String> each = new ArrayList<>();
+            for (Implied i : implied) {
+                OptionalDouble x = solve(i.ofShift(), i.printed());
+                if (x.isEmpty()) {
+                    return;
+                }
+                sum += x.getAsDouble();
+                each.add(i.name() + " " + words.number(x.getAsDouble()));
+            }
+            double mean = sum / implied.size();
+            boolean one = implied.stream().allMatch(
+                    i -> Math.abs(i.ofShift().applyAsDouble(mean) - i.printed()) <= tolerance(i.printed()));
+            if (one) {
+                out.add(EngineeringCode.DRAWING_IMPLIES_SHIFT.at("gear.profileShift", "the drawing's values ("
+                        + String.join(", ", implied.stream().map(Implied::name).toList())
+                        + ") all fit a profile shift of " + words.number(mean) + "; the job has "
+                        + words.number(g.profileShift()), "if the drawing is right, set gear.profileShift to "
+                        + words.number(mean)));
+            } else {
+                out.add(EngineeringCode.DRAWING_INCONSISTENT.at("gear.drawing", "the drawing's values fit different"
+                        + " profile shifts (" + String.join(", ", each) + "): no gear has all of them",
+                        "ask the designer which value is right before a hob is ordered"));
+            }
         }
 
         private String signed(double mm) {

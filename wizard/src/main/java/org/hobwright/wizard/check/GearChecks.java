@@ -48,15 +48,17 @@ public final class GearChecks {
         double allowanceShift = g.profileShift() - xE;
         double proposed = Math.ceil((xMin + allowanceShift) * 100 - 1e-9) / 100;
         InvoluteGear shifted = g.withProfileShift(proposed);
-        String zMin = words.number(Undercut.minTeeth(hStar, g));
-        String msg = String.format(Locale.ROOT, "%d teeth with profile shift %s: the hob undercuts the tooth roots"
+        boolean slight = xMin - xE <= Undercut.SLIGHT_SHORTFALL * hStar;
+        String zMin = Wording.plain(Undercut.minTeeth(hStar, g), 1);
+        String msg = String.format(Locale.ROOT, "%d teeth with profile shift %s: the hob undercuts the tooth roots%s"
                         + " (no undercut from %s teeth at zero shift; this tooth count needs a shift of at least %s)",
-                g.teeth(), words.number(g.profileShift()), zMin, words.number(xMin + allowanceShift));
+                g.teeth(), words.number(g.profileShift()), slight ? " slightly, below the working flank" : "",
+                zMin, words.number(xMin + allowanceShift));
         String fix = "set gear.profileShift to " + words.number(proposed) + ": tip diameter "
                 + words.length(shifted.tipDiameterMm()) + ", root diameter " + words.length(shifted.rootDiameterMm())
                 + ", tip thickness " + words.length(shifted.normalThicknessAtMm(shifted.tipDiameterMm()))
                 + "; the mating gear and centre distance must allow for it";
-        EngineeringCode code = xMin - xE <= Undercut.SLIGHT_SHORTFALL * hStar ? EngineeringCode.GEAR_UNDERCUT_SLIGHT : EngineeringCode.GEAR_UNDERCUT;
+        EngineeringCode code = slight ? EngineeringCode.GEAR_UNDERCUT_SLIGHT : EngineeringCode.GEAR_UNDERCUT;
         out.add(code.at("gear.profileShift", msg, fix));
     }
 

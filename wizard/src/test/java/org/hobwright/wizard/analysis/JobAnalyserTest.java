@@ -103,7 +103,32 @@ class JobAnalyserTest {
                 + " it would fit a profile shift of 1 (the job has 0)", f.message());
         assertEquals("the outside diameter should be 21 mm; check the profile shift and the tooth system",
                 f.fix().orElseThrow());
-        assertEquals(1, a.findings().stream().filter(Finding::isError).count(), lines(a));
+        Finding both = only(a, "DRAWING_INCONSISTENT");
+        assertEquals("gear.drawing", both.field());
+        assertEquals("the drawing's values fit different profile shifts (outside diameter 1, root diameter 0):"
+                + " no gear has all of them", both.message());
+        assertEquals(2, a.findings().stream().filter(Finding::isError).count(), lines(a));
+    }
+
+    // A drawing made for x = 0.25 on a job entered with x = 0.2: every shift-dependent value points to 0.25.
+    @Test
+    void drawingForAnotherShiftProposesIt() {
+        JobBuilder b = new JobBuilder();
+        b.shift = 0.25;
+        b.allowance = -0.02;
+        b.pin = OptionalDouble.of(1.75);
+        JobAnalysis right = JobAnalyser.analyse(b.build());
+        var gear = right.gear().orElseThrow();
+        var insp = right.inspection().orElseThrow();
+        b.shift = 0.2;
+        b.drawing = JobBuilder.drawing(null, gear.tipDiameterMm(), gear.rootDiameterMm(), null, insp.spanTeeth(),
+                insp.spanWidthMm(), null, insp.overPinsMm());
+        JobAnalysis a = JobAnalyser.analyse(b.build());
+        Finding f = only(a, "DRAWING_IMPLIES_SHIFT");
+        assertEquals("gear.profileShift", f.field());
+        assertEquals("if the drawing is right, set gear.profileShift to 0.25", f.fix().orElseThrow());
+        assertFalse(has(a, "DRAWING_INCONSISTENT"));
+        assertTrue(has(a, "DRAWING_OUTSIDE_DIAMETER") && has(a, "DRAWING_SPAN") && has(a, "DRAWING_OVER_PINS"));
     }
 
     // Span and over-pins printed without the thickness allowance: W_3 of m 1, z 24 is 7.71645 mm
