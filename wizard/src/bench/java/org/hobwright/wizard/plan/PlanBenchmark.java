@@ -38,9 +38,7 @@ public class PlanBenchmark {
 
     private static HobJob fastest(HobJob j) {
         CycleSettings c = j.cycle();
-        return TestJobs.with(j, new CycleSettings(c.workMaterial(), c.cuttingSpeedMPerMin(), c.roughFeedMmPerRev(),
-                c.finishFeedMmPerRev(), c.roughDepthMm(), c.finishStockMm(), c.method(), c.axialClearanceMm(),
-                c.radialClearanceMm(), c.coolant(), c.targets(), c.hobShiftPerPartMm(), c.hobShiftEveryParts(), true));
+        return TestJobs.with(j, TestJobs.shiftAndFastest(c, c.hobShiftPerPartMm(), c.hobShiftEveryParts(), true));
     }
 
     /** Plans and optimises one job. */

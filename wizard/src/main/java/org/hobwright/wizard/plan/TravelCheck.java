@@ -24,17 +24,21 @@ public final class TravelCheck {
         double minAx = Double.POSITIVE_INFINITY;
         double maxAx = Double.NEGATIVE_INFINITY;
         for (CycleStep s : steps) {
+            double dia;
+            double ax;
             if (s instanceof CycleStep.Rapid r) {
-                minDia = Math.min(minDia, r.diameterMm());
-                maxDia = Math.max(maxDia, r.diameterMm());
-                minAx = Math.min(minAx, r.axialMm());
-                maxAx = Math.max(maxAx, r.axialMm());
+                dia = r.diameterMm();
+                ax = r.axialMm();
             } else if (s instanceof CycleStep.Feed f) {
-                minDia = Math.min(minDia, f.diameterMm());
-                maxDia = Math.max(maxDia, f.diameterMm());
-                minAx = Math.min(minAx, f.axialMm());
-                maxAx = Math.max(maxAx, f.axialMm());
+                dia = f.diameterMm();
+                ax = f.axialMm();
+            } else {
+                continue;
             }
+            minDia = Math.min(minDia, dia);
+            maxDia = Math.max(maxDia, dia);
+            minAx = Math.min(minAx, ax);
+            maxAx = Math.max(maxAx, ax);
         }
         List<Finding> out = new ArrayList<>(2);
         double tol = 1e-9;
