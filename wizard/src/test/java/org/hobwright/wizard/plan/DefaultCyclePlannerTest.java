@@ -152,10 +152,10 @@ class DefaultCyclePlannerTest {
         HobCycle a = planner.plan(axial);
         assertTrue(a.hasErrors());
         assertTrue(a.steps().isEmpty());
-        assertTrue(has(a, PlanCodes.TRAVEL_AXIAL));
+        assertEquals("machine.travel.axialMin", finding(a, PlanCodes.TRAVEL_AXIAL).field());
         assertTrue(a.summary().isPresent(), "the summary is still computed");
         HobJob radial = TestJobs.with(SampleJobs.spurMetric(), TestJobs.travels(SampleJobs.machine(true), 40, -200, 300));
-        assertTrue(has(planner.plan(radial), PlanCodes.TRAVEL_RADIAL));
+        assertEquals("machine.travel.radialMax", finding(planner.plan(radial), PlanCodes.TRAVEL_RADIAL).field());
     }
 
     @Test
