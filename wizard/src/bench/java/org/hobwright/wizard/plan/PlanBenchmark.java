@@ -36,7 +36,7 @@ import org.openjdk.jmh.annotations.Warmup;
 @State(Scope.Thread)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
-@Warmup(iterations = 5, time = 2)
+@Warmup(iterations = 10, time = 2)
 @Measurement(iterations = 5, time = 2)
 @Fork(1)
 @Threads(1)
