@@ -35,7 +35,8 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
         }
         double rough;
         if (in.rough().isPresent()) {
-            rough = last == 0 ? in.rough().getAsDouble() : given(in.rough().getAsDouble(), in.row().map(CuttingData::roughFeed), "cycle.roughFeed", findings);
+            rough = last == 0 ? in.rough().getAsDouble()
+                    : given(in.rough().getAsDouble(), in.row().map(CuttingData::roughFeed), "cycle.roughFeed", findings);
         } else {
             ValueRange r = in.row().get().roughFeed();
             double limit = in.targets().hasChipLimit() && heaviestRough > 0
