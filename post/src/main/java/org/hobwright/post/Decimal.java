@@ -5,8 +5,9 @@ import java.math.RoundingMode;
 
 /**
  * Fixed-point number text, independent of the default locale: a point as the decimal separator,
- * no grouping, no exponent, no negative zero. Values are rounded half-up on their exact binary
- * value, so the text is the same on every machine.
+ * no grouping, no exponent, no negative zero. Values are rounded half-up on the shortest decimal
+ * that identifies the double (what {@link Double#toString(double)} prints), so 27.7705 gives 27.771
+ * as a person reading the value expects, and the text is the same on every machine.
  */
 public final class Decimal {
     private Decimal() {
@@ -26,7 +27,7 @@ public final class Decimal {
         if (!Double.isFinite(value)) {
             throw new IllegalArgumentException("value must be a finite number, was " + value);
         }
-        BigDecimal rounded = new BigDecimal(value).setScale(decimals, RoundingMode.HALF_UP);
+        BigDecimal rounded = BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_UP);
         if (rounded.signum() == 0) {
             rounded = rounded.abs();
         }

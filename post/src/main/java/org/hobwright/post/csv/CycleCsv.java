@@ -94,17 +94,19 @@ public final class CycleCsv {
         } else if (step instanceof CycleStep.HobShift h) {
             row.put(CsvColumn.HOB_SHIFT_MM, Decimal.exact(h.positionMm()));
         } else if (step instanceof CycleStep.Rapid r) {
-            row.put(CsvColumn.PASS_NO, String.valueOf(r.pass()));
-            row.put(CsvColumn.DIAMETER_MM, Decimal.exact(r.diameterMm()));
-            row.put(CsvColumn.AXIAL_MM, Decimal.exact(r.axialMm()));
+            move(row, r.pass(), r.diameterMm(), r.axialMm());
         } else if (step instanceof CycleStep.Feed f) {
-            row.put(CsvColumn.PASS_NO, String.valueOf(f.pass()));
-            row.put(CsvColumn.DIAMETER_MM, Decimal.exact(f.diameterMm()));
-            row.put(CsvColumn.AXIAL_MM, Decimal.exact(f.axialMm()));
+            move(row, f.pass(), f.diameterMm(), f.axialMm());
             row.put(CsvColumn.FEED_MM_PER_REV, Decimal.exact(f.feedMmPerRev()));
             row.put(CsvColumn.CUTTING, String.valueOf(f.cutting()));
         }
         // sync-off, spindles-stop and dwell carry only their time
+    }
+
+    private static void move(Map<CsvColumn, String> row, int pass, double diameterMm, double axialMm) {
+        row.put(CsvColumn.PASS_NO, String.valueOf(pass));
+        row.put(CsvColumn.DIAMETER_MM, Decimal.exact(diameterMm));
+        row.put(CsvColumn.AXIAL_MM, Decimal.exact(axialMm));
     }
 
     /** {@code clockwise} or {@code counter-clockwise}. */

@@ -41,7 +41,7 @@ final class CommentText {
                 out.append(c);
             }
         }
-        String collapsed = out.toString().strip().replaceAll(" {2,}", " ");
+        String collapsed = out.toString().strip().replaceAll(" {2,}", " ").replaceAll(" ([,;:.])", "$1");
         return rules.upperCase() ? collapsed.toUpperCase(Locale.ROOT) : collapsed;
     }
 

@@ -232,7 +232,7 @@ public final class DialectLoader {
                             "use one of the template names listed in post/README.md");
                     continue;
                 }
-                out.put(key.get(), lines(key.get(), e.getValue(), pointer));
+                out.put(key.get(), templateLines(key.get(), e.getValue(), pointer));
             }
             for (TemplateKey k : TemplateKey.values()) {
                 if (k.required() && !raw.containsKey(k.key())) {
@@ -253,7 +253,7 @@ public final class DialectLoader {
             }
         }
 
-        private List<LineTemplate> lines(TemplateKey key, List<String> texts, String pointer) {
+        private List<LineTemplate> templateLines(TemplateKey key, List<String> texts, String pointer) {
             List<LineTemplate> out = new ArrayList<>();
             if (texts == null) {
                 error("NC_DIALECT_BAD_VALUE", pointer, "template \"" + key.key() + "\" is null",
@@ -291,7 +291,7 @@ public final class DialectLoader {
         }
 
         private List<String> plain(List<String> texts) {
-            return texts == null ? List.of() : texts.stream().filter(t -> t != null).toList();
+            return texts == null ? List.of() : texts.stream().filter(java.util.Objects::nonNull).toList();
         }
 
         private <T> T present(T value, String pointer) {

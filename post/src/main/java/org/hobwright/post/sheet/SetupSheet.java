@@ -35,13 +35,13 @@ final class SetupSheet {
             thead th { background: #e4e4e4; }
             section { break-inside: avoid; page-break-inside: avoid; }
             td.ok { color: #0a5d00; } td.bad { color: #b00000; font-weight: bold; }
-            svg text { font-family: inherit; }
+            svg text { font-family: inherit; } svg { overflow: visible; display: block; }
             .frame { fill: #fff; stroke: #bbb; }
             .tip, .ref, .base, .root, .simulated, .nominal { fill: none; stroke-width: 1.6; }
             .tip { stroke: #1f4e9c; } .ref { stroke: #2a8a2a; stroke-dasharray: 7 4; }
             .base { stroke: #c27c00; stroke-dasharray: 2 3; } .root { stroke: #8c1c1c; }
             .simulated { stroke: #000; stroke-width: 1.2; } .nominal { stroke: #9b30b0; stroke-dasharray: 4 3; }
-            .label { font-size: 12px; fill: #111; } .note { font-size: 11px; fill: #555; font-style: italic; }
+            .label { font-size: 16px; fill: #111; } .note { font-size: 14px; fill: #555; font-style: italic; }
             .workaxis, .hobaxis { stroke: #333; stroke-dasharray: 12 3 2 3; stroke-width: 1; }
             .square { stroke: #777; stroke-dasharray: 5 4; } .gear { fill: #e9eef5; stroke: #456; }
             .tooth { stroke: #6b7f99; stroke-width: 1.4; } .hob { fill: #f7e3c0; fill-opacity: 0.9; stroke: #7a4b00; }
@@ -94,12 +94,16 @@ final class SetupSheet {
     private static String swivelCaption(SetupValues s, HobJob job, SheetFormat f) {
         String turn = s.swivelAngleDeg() > 0 ? "clockwise" : s.swivelAngleDeg() < 0 ? "counter-clockwise" : "not";
         boolean exaggerated = s.swivelAngleDeg() != 0 && Math.abs(s.swivelAngleDeg()) < SwivelSvg.MIN_DRAWN;
-        return "Seen from the hob toward the work axis. " + job.hob().hand().word() + "-hand hob, "
+        return "Seen from the hob toward the work axis. " + capitalised(job.hob().hand().word()) + "-hand hob, "
                 + job.hob().starts() + " start(s); gear " + (job.gear().isSpur() ? "spur"
                 : job.gear().hand().word() + "-hand helix " + f.deg(job.gear().helixAngleDeg())) + ". "
                 + "The hob axis is turned " + turn + " from square by η = " + f.deg(s.swivelAngleDeg()) + " ("
                 + s.swivelAngleDms() + ")" + (exaggerated ? ", drawn at " + Decimal.fixed(SwivelSvg.MIN_DRAWN, 0)
                 + "° so the direction shows" : "") + ". On this machine set " + s.swivelSettingText() + "; a positive "
-                + "setting means: " + job.machine().swivel().positiveSense() + ". " + s.swivelDirection() + ".";
+                + "setting means: " + job.machine().swivel().positiveSense() + ". " + capitalised(s.swivelDirection()) + ".";
+    }
+
+    private static String capitalised(String text) {
+        return text.isEmpty() ? text : text.substring(0, 1).toUpperCase(java.util.Locale.ROOT) + text.substring(1);
     }
 }

@@ -148,7 +148,7 @@ final class SheetTables {
     }
 
     void findings(List<Finding> findings) {
-        m.open("section").leaf("h2", "Open warnings").nl();
+        m.open("section").leaf("h2", "Open warnings and notes").nl();
         List<Finding> open = findings.stream().filter(x -> !x.isError()).toList();
         if (open.isEmpty()) {
             m.leaf("p", "None.");
@@ -156,7 +156,7 @@ final class SheetTables {
             m.open("ul", "class", "findings");
             for (Finding x : open) {
                 m.open("li").leaf("strong", x.severity().word() + " " + x.code()).text(" (" + x.field() + "): "
-                        + x.message() + x.fix().map(fx -> " Fix: " + fx).orElse("")).close("li");
+                        + x.message() + x.fix().map(fx -> " — fix: " + fx).orElse("")).close("li");
             }
             m.close("ul");
         }

@@ -37,7 +37,7 @@ final class SwivelSvg {
         Markup m = new Markup();
         m.open("svg", "xmlns", "http://www.w3.org/2000/svg", "viewBox", "0 0 480 300", "width", "100%",
                 "role", "img", "aria-label", "hob swivel direction seen from the hob toward the work axis");
-        m.empty("rect", "x", "0.5", "y", "0.5", "width", "479", "height", "299", "class", "frame");
+        m.empty("rect", "x", "1", "y", "1", "width", "478", "height", "298", "class", "frame");
         m.open("defs").open("marker", "id", "arrow", "viewBox", "0 0 10 10", "refX", "9", "refY", "5",
                 "markerWidth", "7", "markerHeight", "7", "orient", "auto-start-reverse")
                 .empty("path", "d", "M0,0 L10,5 L0,10 z", "class", "arrowhead").close("marker").close("defs");

@@ -17,7 +17,7 @@ final class ToothSpaceSvg {
 
     private static final double W = 480;
     private static final double H = 250;
-    private static final double LEGEND = 78;
+    private static final double LEGEND = 132;
     private static final double PAD = 14;
     private static final int SAMPLES = 72;
 
@@ -50,22 +50,22 @@ final class ToothSpaceSvg {
         Markup m = new Markup();
         m.open("svg", "xmlns", "http://www.w3.org/2000/svg", "viewBox", "0 0 " + n(W) + " " + n(H + LEGEND),
                 "width", "100%", "role", "img", "aria-label", "tooth space with tip, reference, base and root circles");
-        m.empty("rect", "x", "0.5", "y", "0.5", "width", n(W - 1), "height", n(H - 1), "class", "frame");
+        m.empty("rect", "x", "1", "y", "1", "width", n(W - 2), "height", n(H - 2), "class", "frame");
         m.raw(d.arc(ra, theta, "tip")).raw(d.arc(g.referenceDiameterMm() / 2, theta, "ref"))
                 .raw(d.arc(g.baseDiameterMm() / 2, theta, "base")).raw(d.arc(g.rootDiameterMm() / 2, theta, "root"));
         simulation.ifPresent(s -> m.raw(d.polyline(s.nominalProfile(), "nominal"))
                 .raw(d.polyline(s.simulatedProfile(), "simulated")));
-        double ly = H + 18;
-        d.legend(m, 10, ly, "tip", "tip circle ⌀ " + f.lenU(g.tipDiameterMm()));
-        d.legend(m, 250, ly, "ref", "reference circle ⌀ " + f.lenU(g.referenceDiameterMm()));
-        d.legend(m, 10, ly + 20, "base", "base circle ⌀ " + f.lenU(g.baseDiameterMm()));
-        d.legend(m, 250, ly + 20, "root", "root circle ⌀ " + f.lenU(g.rootDiameterMm()));
+        double ly = H + 22;
+        d.legend(m, ly, "tip", "tip circle ⌀ " + f.lenU(g.tipDiameterMm()));
+        d.legend(m, ly + 20, "ref", "reference circle ⌀ " + f.lenU(g.referenceDiameterMm()));
+        d.legend(m, ly + 40, "base", "base circle ⌀ " + f.lenU(g.baseDiameterMm()));
+        d.legend(m, ly + 60, "root", "root circle ⌀ " + f.lenU(g.rootDiameterMm()));
         if (simulation.isPresent()) {
-            d.legend(m, 10, ly + 40, "simulated", "simulated tooth space (generating simulation)");
-            d.legend(m, 250, ly + 40, "nominal", "true involute flanks");
+            d.legend(m, ly + 80, "simulated", "simulated tooth space");
+            d.legend(m, ly + 100, "nominal", "true involute flanks");
         } else {
-            m.leaf("text", "Flank profiles appear here when the generating simulation has run.", "x", "10",
-                    "y", n(ly + 44), "class", "note");
+            m.leaf("text", "Flanks are drawn when the generating simulation has run.", "x", "10",
+                    "y", n(ly + 84), "class", "note");
         }
         m.close("svg");
         return m.toString();
@@ -88,9 +88,9 @@ final class ToothSpaceSvg {
         return "<polyline class=\"" + cls + "\" points=\"" + pts + "\"/>\n";
     }
 
-    private void legend(Markup m, double x, double y, String cls, String text) {
-        m.empty("line", "x1", n(x), "y1", n(y - 4), "x2", n(x + 26), "y2", n(y - 4), "class", cls);
-        m.leaf("text", text, "x", n(x + 32), "y", n(y), "class", "label").nl();
+    private void legend(Markup m, double y, String cls, String text) {
+        m.empty("line", "x1", "10", "y1", n(y - 5), "x2", "44", "y2", n(y - 5), "class", cls);
+        m.leaf("text", text, "x", "52", "y", n(y), "class", "label").nl();
     }
 
     private String x(double mm) {

@@ -132,6 +132,17 @@ class NcWriterTest {
         }
     }
 
+    @ParameterizedTest(name = "{0} {1}")
+    @MethodSource("cases")
+    void programIsInTheJobsUnits(String dialect, Fixture f) {
+        NcReader reader = new NcReader(Fixtures.dialectText(dialect));
+        List<NcReader.Block> blocks = reader.blocks(program(dialect, f));
+        boolean inch = f.job().units() == Units.IN;
+        assertTrue(index(blocks, reader.literalWords(inch ? "unitsIn" : "unitsMm", 0), false) >= 0, "units word");
+        assertEquals(-1, index(blocks, reader.literalWords(inch ? "unitsMm" : "unitsIn", 0), false),
+                "no word of the other unit");
+    }
+
     private static String letterBefore(String template, String placeholder) {
         int i = template.indexOf(placeholder);
         int s = i;

@@ -152,10 +152,10 @@ class DefaultCyclePlannerTest {
         HobCycle a = planner.plan(axial);
         assertTrue(a.hasErrors());
         assertTrue(a.steps().isEmpty());
-        assertTrue(has(a, PlanCodes.TRAVEL_AXIAL));
+        assertEquals("machine.travel.axialMin", finding(a, PlanCodes.TRAVEL_AXIAL).field());
         assertTrue(a.summary().isPresent(), "the summary is still computed");
         HobJob radial = TestJobs.with(SampleJobs.spurMetric(), TestJobs.travels(SampleJobs.machine(true), 40, -200, 300));
-        assertTrue(has(planner.plan(radial), PlanCodes.TRAVEL_RADIAL));
+        assertEquals("machine.travel.radialMax", finding(planner.plan(radial), PlanCodes.TRAVEL_RADIAL).field());
     }
 
     @Test
@@ -187,6 +187,22 @@ class DefaultCyclePlannerTest {
         assertEquals(1.0, p.get(2).feedMmPerRev(), "last pass at the finishing feed");
         close(CutGeometry.approachSpur(2.0, 70), p.get(0).approachMm(), "each pass its own approach");
         assertEquals(1.0, c.summary().orElseThrow().finishFeedMmPerRev());
+    }
+
+    @Test
+    void defaultRoughingDepthByModule() {
+        // common practice, no source (DOMAIN §7.5): full depth in one pass up to module 2.5 mm, else
+        // 1.25 m_n per pass; m 3 on ISO 53 A cuts 2.25 · 3 = 6.75 mm in two passes
+        HobJob m3 = new HobJob("m3", SampleJobs.spurMetric().units(), SampleJobs.gear(20, 3, 0,
+                org.hobwright.api.job.Hand.RIGHT, 0), new org.hobwright.api.job.HobSpec(
+                new org.hobwright.api.job.Pitch.Module(3), 20, 1, org.hobwright.api.job.Hand.RIGHT, 100,
+                OptionalDouble.empty(), OptionalDouble.empty(), 12, 100, OptionalDouble.empty(), "hss"),
+                SampleJobs.machine(true), SampleJobs.cycle());
+        List<PassSummary> p = planner.plan(m3).summary().orElseThrow().passes();
+        assertEquals(2, p.size());
+        assertEquals(3.375, p.get(0).radialDepthMm(), 1e-12);
+        assertEquals(6.75, p.get(1).radialDepthMm(), 1e-12);
+        assertEquals(1, planner.plan(SampleJobs.spurMetric()).summary().orElseThrow().passes().size(), "m 2: one pass");
     }
 
     @Test
@@ -271,11 +287,7 @@ class DefaultCyclePlannerTest {
     @Test
     void hobShiftIsPartOfTheCycle() {
         HobJob base = SampleJobs.spurMetric();
-        var c0 = base.cycle();
-        HobJob job = TestJobs.with(base, new org.hobwright.api.job.CycleSettings(c0.workMaterial(),
-                c0.cuttingSpeedMPerMin(), c0.roughFeedMmPerRev(), c0.finishFeedMmPerRev(), c0.roughDepthMm(),
-                c0.finishStockMm(), c0.method(), c0.axialClearanceMm(), c0.radialClearanceMm(), c0.coolant(),
-                c0.targets(), 0.5, 10, false));
+        HobJob job = TestJobs.with(base, TestJobs.shiftAndFastest(base.cycle(), 0.5, 10, false));
         HobCycle c = planner.plan(job);
         assertEquals(1, steps(c, CycleStep.HobShift.class).size());
         assertTrue(c.steps().stream().anyMatch(s -> s instanceof CycleStep.Comment m && m.text().startsWith(

@@ -131,13 +131,11 @@ class SetupRulesTest {
     @Test
     void hobShiftWithinTheUsableLength() {
         var job = SampleJobs.spurMetric();
-        var c = job.cycle();
-        var cycle = new org.hobwright.api.job.CycleSettings(c.workMaterial(), c.cuttingSpeedMPerMin(),
-                c.roughFeedMmPerRev(), c.finishFeedMmPerRev(), c.roughDepthMm(), c.finishStockMm(), c.method(),
-                c.axialClearanceMm(), c.radialClearanceMm(), c.coolant(), c.targets(), 0.5, 10, false);
+        var cycle = TestJobs.shiftAndFastest(job.cycle(), 0.5, 10, false);
         List<Finding> f = new ArrayList<>();
         HobShiftPlan p = HobShiftPlan.of(job.machine(), job.hob(), cycle, 4.5, 20, f).orElseThrow();
-        // working width 2·4.5/tan 20° + π·2 = 31.0105 mm; hob 80 mm, axis 60 mm → usable 48.9895 mm
+        // working width 2·4.5/tan 20° (generating zone, DOMAIN §7.2, derived) + π·2 (one axial pitch,
+        // common practice, no source) = 31.0105 mm; hob 80 mm, axis 60 mm → usable 48.9895 mm
         assertEquals(80 - (9 / Math.tan(Math.toRadians(20)) + 2 * Math.PI), p.usableMm(), 1e-9);
         assertEquals(98, p.positions());
         assertEquals(0, p.positionForPart(9));
@@ -145,9 +143,7 @@ class SetupRulesTest {
         assertEquals(48.5, p.positionForPart(979), 1e-12);
         assertEquals(0, p.positionForPart(980), "wraps back to the start");
         assertTrue(f.isEmpty());
-        var tooFar = new org.hobwright.api.job.CycleSettings(c.workMaterial(), c.cuttingSpeedMPerMin(),
-                c.roughFeedMmPerRev(), c.finishFeedMmPerRev(), c.roughDepthMm(), c.finishStockMm(), c.method(),
-                c.axialClearanceMm(), c.radialClearanceMm(), c.coolant(), c.targets(), 70, 1, false);
+        var tooFar = TestJobs.shiftAndFastest(job.cycle(), 70, 1, false);
         HobShiftPlan.of(job.machine(), job.hob(), tooFar, 4.5, 20, f);
         assertEquals(PlanCodes.HOB_SHIFT_STEP_TOO_LARGE, f.get(0).code());
     }
