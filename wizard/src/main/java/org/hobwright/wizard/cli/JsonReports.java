@@ -10,7 +10,8 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * What {@code plan --json} prints: the report writer's text for each job that could be read
- * (also when it has errors). A job that could not be read, or a report that was refused, gets a
+ * (also when it has errors: then with its error findings and without the parts that could not be
+ * computed). A job whose values do not make a job, or whose report the writer refuses, gets a
  * small object with the job's source and its {@code /findings}. Several jobs: a JSON array.
  */
 final class JsonReports {

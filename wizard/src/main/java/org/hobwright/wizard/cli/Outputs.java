@@ -24,6 +24,12 @@ final class Outputs {
     /** Id of the report writer, whose text {@code plan --json} prints. */
     static final String REPORT = "report";
 
+    /**
+     * Resource the report writer reads: {@code true} asks for the report also of a cycle with
+     * errors, with its findings and without the parts that could not be computed.
+     */
+    static final String REPORT_WITH_ERRORS = "report.withErrors";
+
     private final Store store;
     private final String generatedOn;
     private final CompletableFuture<Providers.Loaded<CycleWriter>> lookup;
@@ -79,8 +85,12 @@ final class Outputs {
 
     /** The report writer's text for one job, if a report writer is present and does not refuse. */
     Optional<String> report(HobJob job, HobCycle cycle) {
+        WriteContext base = context(job);
+        Map<String, String> resources = new HashMap<>(base.resources());
+        resources.put(REPORT_WITH_ERRORS, "true");
+        WriteContext context = new WriteContext(job, base.generatedOn(), base.toolVersion(), resources);
         return writers().stream().filter(w -> w.id().equals(REPORT)).findFirst()
-                .map(w -> w.write(cycle, context(job)))
+                .map(w -> w.write(cycle, context))
                 .filter(r -> !r.files().isEmpty())
                 .map(r -> r.files().get(0).text());
     }

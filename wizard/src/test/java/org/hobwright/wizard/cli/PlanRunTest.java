@@ -90,6 +90,20 @@ class PlanRunTest {
     }
 
     @Test
+    void theJsonReportOfAJobWithErrorsHasItsFindingsAndWhatCouldBeComputed() throws IOException {
+        Path bad = Files.writeString(dir.resolve("bad.json"), SAMPLE
+                .replace("\"helixAngle\": 0", "\"helixAngle\": 15, \"hand\": \"left\""));
+        Cli.Run r = Cli.run(dir.resolve("home"), "plan", bad.toString(), "--json");
+        assertEquals(ExitCodes.JOB_ERRORS, r.code(), r::toString);
+        JsonNode report = JsonMapper.shared().readTree(r.out());
+        assertTrue(report.at("/findings").valueStream().anyMatch(f -> f.at("/code").asString()
+                .equals("MACHINE_NO_HELIX")), r::toString);
+        // d = z m_n / cos β = 24 × 1 / cos 15° (ISO 21771 reference diameter)
+        assertEquals(24 / Math.cos(Math.toRadians(15)), report.at("/gear/referenceDiameter").doubleValue(), 1e-9,
+                r::toString);
+    }
+
+    @Test
     void theMachineAndFastestOptionsReachThePlan() throws IOException {
         Path job = Files.writeString(dir.resolve("job.json"), SAMPLE.replace("\"helixAngle\": 0",
                 "\"helixAngle\": 15, \"hand\": \"right\"").replace("\"blankDiameter\": 26.0,", ""));
