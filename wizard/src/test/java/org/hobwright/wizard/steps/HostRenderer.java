@@ -16,4 +16,7 @@ interface HostRenderer {
 
     /** Whether the user accepts these warnings. */
     boolean acceptWarnings(List<Finding> warnings);
+
+    /** Whether the user pressed Back on this step instead of completing it. */
+    boolean back(StepView view);
 }

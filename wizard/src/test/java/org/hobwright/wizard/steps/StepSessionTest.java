@@ -59,9 +59,13 @@ class StepSessionTest {
 
     /** What a host does: render, answer each field, complete the step, accept warnings when the user does. */
     private void drive(Wizard w) {
-        for (int i = 0; i < 10 && w.view().id() != StepId.REVIEW; i++) {
+        for (int i = 0; i < 20 && w.view().id() != StepId.REVIEW; i++) {
             StepView v = w.view();
             host.render(v);
+            if (host.back(v)) {
+                w.back();
+                continue;
+            }
             v.fields().forEach(f -> host.answer(f).ifPresent(a -> w.answer(f.key(), a)));
             Transition t = w.next(false);
             if (!t.moved() && !Finding.anyError(t.findings()) && host.acceptWarnings(t.findings())) {
@@ -78,6 +82,43 @@ class StepSessionTest {
         for (StepId id : StepId.values()) {
             order.verify(host).render(argThat(v -> v != null && v.id() == id));
         }
+    }
+
+    private static org.mockito.ArgumentMatcher<StepView> on(StepId id) {
+        return v -> v != null && v.id() == id;
+    }
+
+    @Test
+    void anErrorBlocksNextWhileTheHostRendersTheStepAgain() {
+        // first GEAR visit: module and diametral pitch both given (job file format: exactly one)
+        when(host.answer(argThat(f -> f != null && f.key().equals("gear.diametralPitch"))))
+                .thenReturn(Optional.of("25.4")).thenReturn(Optional.of(""));
+        drive(session());
+        InOrder order = inOrder(host);
+        order.verify(host).render(argThat(on(StepId.GEAR)));
+        order.verify(host).render(argThat(v -> v != null && v.id() == StepId.GEAR
+                && v.findings().stream().anyMatch(f -> f.isError() && f.field().startsWith("gear."))));
+        order.verify(host).render(argThat(on(StepId.CUTTER)));
+        order.verify(host).render(argThat(on(StepId.REVIEW)));
+    }
+
+    @Test
+    void backFromTheHostKeepsAnswersAndChecksTheStepAgain() {
+        when(host.back(argThat(on(StepId.CUTTER)))).thenReturn(true, false);
+        when(host.answer(argThat(f -> f != null && f.key().equals("hob.gashes")))).thenReturn(Optional.of("14"));
+        // after going back, the host enters a pitch that conflicts: completing GEAR again finds it
+        when(host.answer(argThat(f -> f != null && f.key().equals("gear.diametralPitch"))))
+                .thenReturn(Optional.empty()).thenReturn(Optional.of("25.4")).thenReturn(Optional.of(""));
+        Wizard w = session();
+        drive(w);
+        InOrder order = inOrder(host);
+        order.verify(host).render(argThat(on(StepId.GEAR)));
+        order.verify(host).render(argThat(on(StepId.CUTTER)));
+        order.verify(host).render(argThat(on(StepId.GEAR)));
+        order.verify(host).render(argThat(v -> v != null && v.id() == StepId.GEAR && Finding.anyError(v.findings())));
+        order.verify(host).render(argThat(on(StepId.CUTTER)));
+        order.verify(host).render(argThat(on(StepId.REVIEW)));
+        assertEquals("14", w.value("hob.gashes"));
     }
 
     @Test
