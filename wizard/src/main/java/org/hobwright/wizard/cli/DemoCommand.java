@@ -3,26 +3,18 @@ package org.hobwright.wizard.cli;
 import java.util.concurrent.Callable;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.ParentCommand;
 
 /** {@code hobwright demo}: plans and posts the built-in sample job. */
 @Command(name = "demo", mixinStandardHelpOptions = true,
         description = "Plans and posts the built-in sample job " + PlanRun.SAMPLE_JOB
                 + " (an invented metering-pump gear on the invented Varrow SL-16): program, CSV, setup sheet, report.")
-final class DemoCommand implements Callable<Integer> {
-    @ParentCommand
-    HobwrightCommand parent;
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
+final class DemoCommand extends Verb implements Callable<Integer> {
     @CommandLine.Mixin
     OutputOptions output = new OutputOptions();
 
     @Override
     public Integer call() {
-        CommandLine cl = spec.commandLine();
-        return new PlanRun(parent.env(), cl.getOut(), cl.getErr()).run(request());
+        return plan(request());
     }
 
     /** The run the options ask for. */

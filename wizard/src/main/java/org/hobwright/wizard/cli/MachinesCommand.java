@@ -11,7 +11,7 @@ import picocli.CommandLine.Parameters;
         description = "Lists, shows, saves and removes machine profiles. The built-in invented machines are"
                 + " always there, read-only; a saved profile of the same name wins.",
         subcommands = {CommandLine.HelpCommand.class})
-final class MachinesCommand extends LibraryVerb {
+final class MachinesCommand extends Verb {
     @Command(name = "list", mixinStandardHelpOptions = true, description = "Lists every machine profile.")
     int list() {
         return LibraryCommands.list(store().library().machines(), out(), "No machines.");

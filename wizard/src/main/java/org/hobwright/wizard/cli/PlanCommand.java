@@ -7,20 +7,13 @@ import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
-import picocli.CommandLine.ParentCommand;
 
 /** {@code hobwright plan}: the batch form of the wizard for one or many job files. */
 @Command(name = "plan", mixinStandardHelpOptions = true,
         description = {"Checks and plans job files and writes the NC program, cycle CSV, setup sheet and report"
                 + " of each into the output folder, all or nothing.",
                 "Several files, or a folder of .json job files, are planned in one run."})
-final class PlanCommand implements Callable<Integer> {
-    @ParentCommand
-    HobwrightCommand parent;
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
+final class PlanCommand extends Verb implements Callable<Integer> {
     @Parameters(arity = "1..*", paramLabel = "JOB", description = "Job files (.json) or folders of job files.")
     List<Path> jobs;
 
@@ -45,8 +38,7 @@ final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Timing.mark("arguments parsed");
-        CommandLine cl = spec.commandLine();
-        return new PlanRun(parent.env(), cl.getOut(), cl.getErr()).run(request());
+        return plan(request());
     }
 
     /** The run the options ask for. */

@@ -11,7 +11,7 @@ import picocli.CommandLine.Parameters;
         description = "Lists, shows, saves and removes cycle templates; each belongs to one machine."
                 + " 'plan JOB --template NAME' applies one.",
         subcommands = {CommandLine.HelpCommand.class})
-final class TemplatesCommand extends LibraryVerb {
+final class TemplatesCommand extends Verb {
     @Command(name = "list", mixinStandardHelpOptions = true,
             description = "Lists the templates of every machine, or of one.")
     int list(@Option(names = "--machine", paramLabel = "NAME", description = "Only this machine's.") String machine) {

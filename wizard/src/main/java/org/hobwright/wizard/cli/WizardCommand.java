@@ -10,7 +10,6 @@ import org.hobwright.wizard.store.JsonDocument;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.ParentCommand;
 
 /** {@code hobwright wizard}: the interactive walk-through, also on piped input. */
 @Command(name = "wizard", mixinStandardHelpOptions = true,
@@ -18,13 +17,7 @@ import picocli.CommandLine.ParentCommand;
                 + " every answer; at REVIEW offers to write the outputs and to save the cycle as a template.",
                 "Enter keeps the value in brackets, '?' explains the question, '-' clears an optional value,"
                         + " 'back' returns to the previous question. Angles: decimal or degrees-minutes-seconds."})
-final class WizardCommand implements Callable<Integer> {
-    @ParentCommand
-    HobwrightCommand parent;
-
-    @CommandLine.Spec
-    CommandLine.Model.CommandSpec spec;
-
+final class WizardCommand extends Verb implements Callable<Integer> {
     @CommandLine.Mixin
     OutputOptions output = new OutputOptions();
 

@@ -4,8 +4,8 @@ import java.io.PrintWriter;
 import picocli.CommandLine;
 import picocli.CommandLine.ParentCommand;
 
-/** What the {@code machines} and {@code templates} verbs share: the library and the output writer. */
-abstract class LibraryVerb {
+/** What every verb shares: the top command (environment, {@code --home}) and its own output writer. */
+abstract class Verb {
     @ParentCommand
     HobwrightCommand parent;
 
@@ -19,5 +19,10 @@ abstract class LibraryVerb {
 
     PrintWriter out() {
         return spec.commandLine().getOut();
+    }
+
+    /** A plan or demo run on this verb's writers. */
+    int plan(PlanRequest request) {
+        return new PlanRun(parent.env(), out(), spec.commandLine().getErr()).run(request);
     }
 }
