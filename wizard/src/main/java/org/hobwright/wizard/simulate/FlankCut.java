@@ -1,0 +1,150 @@
+package org.hobwright.wizard.simulate;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The profile the discrete cuts leave on the right-hand side of the tooth space (the left side is
+ * the mirror image with the cut phase negated), measured along the nominal path's normals, and the
+ * exact cusps between neighbouring cuts on the involute.
+ */
+final class FlankCut {
+    private static final int MAX_DEPTH = 40;
+
+    final NominalPath path;
+    /** Material left standing along each nominal normal, mm (≥ 0 up to rounding). */
+    final double[] excess;
+    /** The boundary point: nominal point + excess · normal. */
+    final double[] bx;
+    final double[] by;
+    /** Which rack feature cut each boundary point (ordinal of {@link TransverseRack.Feature}). */
+    final int[] feature;
+    /** Cusps on the involute: roll length and height, mm, in roll order. */
+    final List<double[]> cusps;
+    /**
+     * Radius of the start of the active involute, mm: the lowest point below which, scanning down from
+     * the tip, every point is cut by a straight flank and none lies inside the true involute.
+     */
+    final double involuteStartRadius;
+
+    FlankCut(NominalPath path, double phase) {
+        this.path = path;
+        CutEnvelope env = new CutEnvelope(path, phase);
+        int n = path.size;
+        excess = new double[n];
+        bx = new double[n];
+        by = new double[n];
+        feature = new int[n];
+        int[] arg = new int[n];
+        int[] out = new int[2];
+        for (int i = 0; i < n; i++) {
+            double t = env.boundary(path.x[i], path.y[i], path.nx[i], path.ny[i], path.phi[i], out);
+            if (!Double.isFinite(t)) {
+                t = 0;
+            }
+            excess[i] = t;
+            bx[i] = path.x[i] + t * path.nx[i];
+            by[i] = path.y[i] + t * path.ny[i];
+            feature[i] = out[1];
+            arg[i] = out[0];
+        }
+        cusps = new ArrayList<>();
+        double[] c = new double[7];
+        for (int i = 0; i + 1 < n; i++) {
+            if (path.kind[i] == NominalPath.FLANK && path.kind[i + 1] == NominalPath.FLANK && arg[i] != arg[i + 1]) {
+                refine(env, path.param[i], arg[i], path.param[i + 1], arg[i + 1], c, 0);
+            }
+        }
+        int start = n - 1;
+        while (start > 0 && feature[start - 1] == TransverseRack.Feature.FLANK.ordinal()
+                && path.excess(bx[start - 1], by[start - 1]) >= -UndercutCheck.TOLERANCE_MM) {
+            start--;
+        }
+        involuteStartRadius = Math.hypot(bx[start], by[start]);
+    }
+
+    private void refine(CutEnvelope env, double la, int ka, double lb, int kb, double[] c, int depth) {
+        if (ka == kb || depth > MAX_DEPTH) {
+            return;
+        }
+        if (Math.abs(ka - kb) == 1) {
+            double lo = la;
+            double hi = lb;
+            double gLo = difference(env, lo, ka, kb, c);
+            for (int it = 0; it < 60; it++) {
+                double mid = (lo + hi) / 2;
+                double g = difference(env, mid, ka, kb, c);
+                if ((g <= 0) == (gLo <= 0)) {
+                    lo = mid;
+                    gLo = g;
+                } else {
+                    hi = mid;
+                }
+            }
+            double l = (lo + hi) / 2;
+            double h = entryAt(env, l, ka, c);
+            if (Double.isFinite(h)) {
+                cusps.add(new double[] {path.rollOfLambda(l), h});
+            }
+            return;
+        }
+        double mid = (la + lb) / 2;
+        path.contact(NominalPath.FLANK, mid, c);
+        int[] out = new int[2];
+        env.boundary(c[0], c[1], c[2], c[3], c[4], out);
+        refine(env, la, ka, mid, out[0], c, depth + 1);
+        refine(env, mid, out[0], lb, kb, c, depth + 1);
+    }
+
+    private double difference(CutEnvelope env, double lambda, int ka, int kb, double[] c) {
+        return entryAt(env, lambda, ka, c) - entryAt(env, lambda, kb, c);
+    }
+
+    private double entryAt(CutEnvelope env, double lambda, int k, double[] c) {
+        path.contact(NominalPath.FLANK, lambda, c);
+        return env.entry(k, c[0], c[1], c[2], c[3], new int[1]);
+    }
+
+    /** Largest excess over the involute part (samples and cusps), mm. */
+    double maxInvoluteExcess() {
+        double m = 0;
+        for (int i = 0; i < path.size; i++) {
+            if (path.kind[i] == NominalPath.FLANK) {
+                m = Math.max(m, Math.abs(excess[i]));
+            }
+        }
+        for (double[] cusp : cusps) {
+            m = Math.max(m, Math.abs(cusp[1]));
+        }
+        return m;
+    }
+
+    /**
+     * Height of the cusp at roll length L, mm: the cusps on either side interpolated as h/L (a
+     * cusp between two tangents is ρ Δφ²/8 and the involute's radius of curvature ρ equals the roll
+     * length; DOMAIN.md §6.2), then multiplied back by L. NaN without cusps.
+     */
+    double cuspHeightAt(double roll) {
+        if (cusps.isEmpty()) {
+            return Double.NaN;
+        }
+        double[] below = null;
+        double[] above = null;
+        for (double[] cusp : cusps) {
+            if (cusp[0] <= roll && (below == null || cusp[0] > below[0])) {
+                below = cusp;
+            }
+            if (cusp[0] >= roll && (above == null || cusp[0] < above[0])) {
+                above = cusp;
+            }
+        }
+        if (below == null) {
+            return above[1] / above[0] * roll;
+        }
+        if (above == null || above[0] == below[0]) {
+            return below[1] / below[0] * roll;
+        }
+        double w = (roll - below[0]) / (above[0] - below[0]);
+        return (below[1] / below[0] * (1 - w) + above[1] / above[0] * w) * roll;
+    }
+}
