@@ -1,0 +1,244 @@
+package org.hobwright.wizard.store;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Atomic file writes: content goes to a temporary file in the target's own folder, is forced to
+ * disk, and is then moved over the target in one step ({@link StandardCopyOption#ATOMIC_MOVE}).
+ * A reader sees the old file or the new one, never a part; a write that fails half way leaves
+ * the old file and no temporary file behind. Temporary files start with a dot and end in
+ * {@value #TEMP_SUFFIX}, so listings can skip them.
+ */
+public final class AtomicFiles {
+    /** Suffix of temporary files. */
+    public static final String TEMP_SUFFIX = ".tmp";
+
+    private AtomicFiles() {
+    }
+
+    /** Writes the content to a stream; may fail half way. */
+    @FunctionalInterface
+    public interface Content {
+        /** Writes all bytes to {@code out}. */
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    /** Content of a UTF-8 text. */
+    public static Content text(String text) {
+        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
+        return out -> out.write(bytes);
+    }
+
+    /**
+     * Writes one file atomically, creating its folder when needed.
+     *
+     * @param target  the file to write
+     * @param content what to write
+     * @param replace true to replace an existing file; false fails with
+     *                {@link FileAlreadyExistsException} when the target exists, also when another
+     *                process creates it at the same moment
+     * @throws IOException when writing fails; the target is then unchanged
+     */
+    public static void write(Path target, Content content, boolean replace) throws IOException {
+        Path folder = target.toAbsolutePath().getParent();
+        Files.createDirectories(folder);
+        Path temp = writeTemp(folder, target.getFileName().toString(), content);
+        try {
+            if (replace) {
+                move(temp, target);
+            } else {
+                createNew(temp, target);
+            }
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    /** Writes one UTF-8 text file atomically; see {@link #write(Path, Content, boolean)}. */
+    public static void writeText(Path target, String text, boolean replace) throws IOException {
+        write(target, text(text), replace);
+    }
+
+    /**
+     * Writes a set of files into a folder, all or nothing. When the folder does not exist yet,
+     * the files are written into a temporary sibling folder that is then moved into place in one
+     * step. When it exists, every file is first written to a temporary file; only when all are
+     * written are they moved into place, and if a move fails the files already moved are put
+     * back as they were.
+     *
+     * @param folder  the output folder
+     * @param files   plain file name to content, written in this order
+     * @param replace true to replace existing files of the same names
+     * @throws IOException when anything fails; the folder is then as it was
+     */
+    public static void writeAll(Path folder, Map<String, Content> files, boolean replace) throws IOException {
+        Map<String, Content> ordered = new LinkedHashMap<>(files);
+        for (String name : ordered.keySet()) {
+            if (name.isEmpty() || name.startsWith(".") || name.contains("/") || name.contains("\\")) {
+                throw new IllegalArgumentException("output file name \"" + name + "\" is not a plain file name");
+            }
+        }
+        Path abs = folder.toAbsolutePath();
+        if (!Files.exists(abs)) {
+            writeNewFolder(abs, ordered);
+        } else {
+            writeIntoFolder(abs, ordered, replace);
+        }
+    }
+
+    private static void writeNewFolder(Path folder, Map<String, Content> files) throws IOException {
+        Path parent = folder.getParent();
+        Files.createDirectories(parent);
+        Path staging = Files.createTempDirectory(parent, "." + folder.getFileName() + ".");
+        try {
+            for (Map.Entry<String, Content> e : files.entrySet()) {
+                writeFully(staging.resolve(e.getKey()), e.getValue());
+            }
+            try {
+                Files.move(staging, folder, StandardCopyOption.ATOMIC_MOVE);
+            } catch (FileSystemException raced) {
+                if (!Files.isDirectory(folder)) {
+                    throw raced;
+                }
+                // another writer created the folder meanwhile: fall back to file by file
+                Map<String, Content> again = new LinkedHashMap<>();
+                for (String name : files.keySet()) {
+                    Path staged = staging.resolve(name);
+                    again.put(name, out -> Files.copy(staged, out));
+                }
+                writeIntoFolder(folder, again, false);
+            }
+        } finally {
+            deleteTree(staging);
+        }
+    }
+
+    private static void writeIntoFolder(Path folder, Map<String, Content> files, boolean replace) throws IOException {
+        if (!replace) {
+            for (String name : files.keySet()) {
+                if (Files.exists(folder.resolve(name))) {
+                    throw new FileAlreadyExistsException(folder.resolve(name).toString());
+                }
+            }
+        }
+        Map<String, Path> temps = new LinkedHashMap<>();
+        List<Path> backups = new ArrayList<>();
+        List<String> moved = new ArrayList<>();
+        try {
+            for (Map.Entry<String, Content> e : files.entrySet()) {
+                temps.put(e.getKey(), writeTemp(folder, e.getKey(), e.getValue()));
+            }
+            for (Map.Entry<String, Path> e : temps.entrySet()) {
+                Path target = folder.resolve(e.getKey());
+                Path backup = null;
+                if (Files.exists(target)) {
+                    backup = folder.resolve("." + e.getKey() + ".old" + TEMP_SUFFIX);
+                    Files.copy(target, backup, StandardCopyOption.REPLACE_EXISTING);
+                }
+                backups.add(backup);
+                move(e.getValue(), target);
+                moved.add(e.getKey());
+            }
+        } catch (IOException | RuntimeException failure) {
+            rollBack(folder, moved, backups, failure);
+            throw failure;
+        } finally {
+            for (Path t : temps.values()) {
+                Files.deleteIfExists(t);
+            }
+            for (Path b : backups) {
+                if (b != null) {
+                    Files.deleteIfExists(b);
+                }
+            }
+        }
+    }
+
+    private static void rollBack(Path folder, List<String> moved, List<Path> backups, Exception failure) {
+        for (int i = 0; i < moved.size(); i++) {
+            Path target = folder.resolve(moved.get(i));
+            try {
+                if (backups.get(i) != null) {
+                    move(backups.get(i), target);
+                } else {
+                    Files.deleteIfExists(target);
+                }
+            } catch (IOException e) {
+                failure.addSuppressed(e);
+            }
+        }
+    }
+
+    private static Path writeTemp(Path folder, String name, Content content) throws IOException {
+        Path temp = Files.createTempFile(folder, "." + name + ".", TEMP_SUFFIX);
+        try {
+            writeFully(temp, content);
+            return temp;
+        } catch (IOException | RuntimeException e) {
+            Files.deleteIfExists(temp);
+            throw e;
+        }
+    }
+
+    private static void writeFully(Path file, Content content) throws IOException {
+        try (FileChannel ch = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
+                StandardOpenOption.TRUNCATE_EXISTING);
+             OutputStream out = java.nio.channels.Channels.newOutputStream(ch)) {
+            content.writeTo(out);
+            out.flush();
+            ch.force(true);
+        }
+    }
+
+    private static void move(Path from, Path to) throws IOException {
+        try {
+            Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(from, to, StandardCopyOption.REPLACE_EXISTING);
+        }
+    }
+
+    /**
+     * Puts {@code temp} in place as {@code target} only if no target exists, atomically also
+     * against other processes: a hard link fails when the name is taken. Where the file system
+     * has no hard links, falls back to a check followed by an atomic move.
+     */
+    private static void createNew(Path temp, Path target) throws IOException {
+        try {
+            Files.createLink(target, temp);
+        } catch (FileAlreadyExistsException e) {
+            throw e;
+        } catch (UnsupportedOperationException | FileSystemException e) {
+            if (Files.exists(target)) {
+                throw new FileAlreadyExistsException(target.toString());
+            }
+            move(temp, target);
+        }
+    }
+
+    private static void deleteTree(Path dir) throws IOException {
+        if (!Files.exists(dir)) {
+            return;
+        }
+        try (var files = Files.list(dir)) {
+            for (Path p : (Iterable<Path>) files::iterator) {
+                Files.deleteIfExists(p);
+            }
+        }
+        Files.deleteIfExists(dir);
+    }
+}

@@ -1,0 +1,208 @@
+package org.hobwright.wizard.store;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.CycleSettings;
+import org.hobwright.api.job.GearSpec;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.HobSpec;
+import org.hobwright.api.job.Units;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.node.ObjectNode;
+
+/**
+ * Reads a job (file, text, or a tree built in memory, e.g. from the wizard's answers) into a
+ * {@link HobJob} in canonical units. Resolves a machine given by name and the cycle template
+ * through the {@link Library}; a template's values fill the cycle keys the job leaves out.
+ * Lengths are converted from the job's units once, here; angles may be decimal degrees or
+ * degrees-minutes-seconds. Every bad value is a finding; nothing throws for bad input.
+ */
+public final class JobReader {
+    private final Library library;
+
+    /** A reader that finds machines and templates in {@code library}. */
+    public JobReader(Library library) {
+        this.library = Objects.requireNonNull(library, "library");
+    }
+
+    /**
+     * What the command line may put in place of the job's own choices.
+     *
+     * @param machine  a machine name, or the path of a machine profile file (a value ending in
+     *                 {@code .json} or naming an existing file), replacing the job's machine
+     * @param template a template name of that machine, replacing {@code cycle.template}
+     */
+    public record Overrides(Optional<String> machine, Optional<String> template) {
+        /** No overrides. */
+        public static final Overrides NONE = new Overrides(Optional.empty(), Optional.empty());
+
+        public Overrides {
+            Objects.requireNonNull(machine, "machine");
+            Objects.requireNonNull(template, "template");
+        }
+    }
+
+    /** Reads a job file. */
+    public Loaded<HobJob> read(Path file) {
+        return read(file, Overrides.NONE);
+    }
+
+    /** Reads a job file with overrides. */
+    public Loaded<HobJob> read(Path file, Overrides overrides) {
+        return JsonDocument.read(file).then(d -> read(d, overrides));
+    }
+
+    /** Reads a job from JSON text; {@code sourceName} names it in messages. */
+    public Loaded<HobJob> read(String json, String sourceName) {
+        return read(json, sourceName, Overrides.NONE);
+    }
+
+    /** Reads a job from JSON text with overrides. */
+    public Loaded<HobJob> read(String json, String sourceName, Overrides overrides) {
+        return JsonDocument.parse(json, sourceName).then(d -> read(d, overrides));
+    }
+
+    /**
+     * Reads a job from a tree built in memory. {@code format} and {@code version} may be left
+     * out (the current ones are assumed); everything else is checked as in a file.
+     */
+    public Loaded<HobJob> read(JsonNode tree, String sourceName) {
+        return read(tree, sourceName, Overrides.NONE);
+    }
+
+    /** Reads a job from a tree built in memory, with overrides. */
+    public Loaded<HobJob> read(JsonNode tree, String sourceName, Overrides overrides) {
+        if (tree == null || !tree.isObject()) {
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("job", sourceName
+                    + ": a job must be a JSON object", null));
+        }
+        ObjectNode copy = ((ObjectNode) tree).deepCopy();
+        if (!copy.has("format")) {
+            copy.put("format", FileFormat.JOB.word());
+        }
+        if (!copy.has("version")) {
+            copy.put("version", FileFormat.VERSION);
+        }
+        return read(JsonDocument.ofTree(copy, sourceName), overrides);
+    }
+
+    private Loaded<HobJob> read(JsonDocument raw, Overrides overrides) {
+        return FileFormat.JOB.open(raw).then(doc -> {
+            List<Finding> out = new ArrayList<>();
+            Optional<Units> units = Fields.root(doc, out, Units.MM).units("units");
+            if (units.isEmpty()) {
+                return Loaded.unreadable(out);
+            }
+            Fields root = Fields.root(doc, out, units.get());
+            Optional<MachineFile> machine;
+            JsonNode m = root.raw("machine");
+            if (overrides.machine().isPresent() || m != null && m.isString()) {
+                Loaded<MachineFile> named = lookUpMachine(overrides.machine().orElseGet(m::stringValue),
+                        overrides.machine().isPresent());
+                out.addAll(named.findings());
+                if (named.unreadable()) {
+                    return Loaded.unreadable(out);
+                }
+                machine = named.value();
+            } else if (m != null) {
+                Optional<Fields> inline = inlineMachineFields(root);
+                if (inline.isEmpty()) {
+                    return Loaded.unreadable(out);
+                }
+                machine = MachineReader.body(inline.get(), out);
+            } else {
+                root.missing("machine", "name a machine profile, e.g. \"machine\": \"varrow-sl16\", or describe it"
+                        + " inline");
+                machine = Optional.empty();
+            }
+            Fields cycleFields = cycleWithTemplate(doc, root, machine, overrides, out);
+            if (cycleFields == null) {
+                return Loaded.unreadable(out);
+            }
+            String name = root.requiredText("name", "give the job a name; it names the output files").orElse("job");
+            if (root.has("name")) {
+                root.checkName("name", name);
+            }
+            if (!root.has("gear")) {
+                root.missing("gear", "describe the gear: teeth, module or diametralPitch, pressureAngle, ...");
+            }
+            if (!root.has("hob")) {
+                root.missing("hob", "describe the hob: module or diametralPitch, starts, hand, outsideDiameter, ...");
+            }
+            Optional<GearSpec> gear = root.has("gear") ? JobParts.gear(root.child("gear"), name, out) : Optional.empty();
+            Optional<HobSpec> hob = root.has("hob") ? JobParts.hob(root.child("hob"), out) : Optional.empty();
+            int before = JobParts.errors(out);
+            CycleReader.Values cycle = CycleReader.read(cycleFields, true);
+            if (JobParts.errors(out) > before || Finding.anyError(out) || gear.isEmpty() || hob.isEmpty()
+                    || machine.isEmpty()) {
+                return Loaded.failed(withError(out));
+            }
+            try {
+                CycleSettings settings = cycle.settings();
+                return Loaded.of(new HobJob(name, units.get(), gear.get(), hob.get(), machine.get().profile(),
+                        settings), out);
+            } catch (IllegalArgumentException | NullPointerException | java.util.NoSuchElementException e) {
+                out.add(InputCode.INPUT_VALUE.finding("job", doc.source() + ": " + e.getMessage(), null));
+                return Loaded.failed(out);
+            }
+        });
+    }
+
+    private static List<Finding> withError(List<Finding> out) {
+        if (!Finding.anyError(out)) {
+            out.add(InputCode.INPUT_VALUE.finding("job", "the job could not be read", null));
+        }
+        return out;
+    }
+
+    /** A machine by name, or from a file when an override names one. */
+    private Loaded<MachineFile> lookUpMachine(String nameOrFile, boolean mayBeFile) {
+        if (mayBeFile && (nameOrFile.endsWith(".json") || nameOrFile.contains("/") || nameOrFile.contains("\\")
+                || Files.isRegularFile(Path.of(nameOrFile)))) {
+            return Library.readMachineFile(Path.of(nameOrFile));
+        }
+        return library.machineFile(nameOrFile);
+    }
+
+    /** The fields of an inline machine, in its own units when it states them; empty when they are wrong. */
+    private static Optional<Fields> inlineMachineFields(Fields root) {
+        Fields inline = root.child("machine");
+        if (!inline.has("units")) {
+            return Optional.of(inline);
+        }
+        return inline.units("units").map(inline::withUnits);
+    }
+
+    /**
+     * The cycle keys to read: the job's own, filled with the template's (converted to the job's
+     * units). Returns null (with a finding) when the template cannot be read.
+     */
+    private Fields cycleWithTemplate(JsonDocument doc, Fields root, Optional<MachineFile> machine,
+                                     Overrides overrides, List<Finding> out) {
+        Fields cycle = root.child("cycle");
+        Optional<String> templateName = overrides.template().or(() -> cycle.text("template"));
+        if (templateName.isEmpty()) {
+            return cycle;
+        }
+        if (machine.isEmpty()) {
+            return cycle;
+        }
+        Loaded<CycleTemplate> t = library.template(machine.get().name(), templateName.get());
+        out.addAll(t.findings());
+        if (t.unreadable()) {
+            return null;
+        }
+        if (t.value().isEmpty()) {
+            return cycle;
+        }
+        ObjectNode merged = cycle.objectOrEmpty().deepCopy();
+        merged.remove("template");
+        CycleReader.fill(merged, t.get().cycleIn(root.units()));
+        return new Fields(doc, merged, "cycle", out, root.units());
+    }
+}

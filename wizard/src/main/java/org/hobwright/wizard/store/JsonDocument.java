@@ -1,0 +1,202 @@
+package org.hobwright.wizard.store;
+
+import java.io.IOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.Map;
+import java.util.Objects;
+import tools.jackson.core.JacksonException;
+import tools.jackson.core.JsonParser;
+import tools.jackson.core.JsonToken;
+import tools.jackson.core.TokenStreamLocation;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ArrayNode;
+import tools.jackson.databind.node.JsonNodeFactory;
+import tools.jackson.databind.node.ObjectNode;
+
+/**
+ * A JSON text read into a tree, remembering the line of every key so that findings can say
+ * where a problem is. Field paths use dots and brackets: {@code gear.module}, {@code list[2]}.
+ *
+ * @param source name of the file or text, for messages
+ * @param root   the tree (an object)
+ * @param lines  line number (1-based) of each key's path; empty for trees not read from text
+ */
+public record JsonDocument(String source, ObjectNode root, Map<String, Integer> lines) {
+    /** Largest file read, in bytes (1 MB): job and library files are a few kilobytes. */
+    public static final long MAX_BYTES = 1_000_000;
+
+    static final JsonMapper MAPPER = JsonMapper.builder().build();
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
+
+    public JsonDocument {
+        Objects.requireNonNull(source, "source");
+        Objects.requireNonNull(root, "root");
+        lines = Map.copyOf(lines);
+    }
+
+    /** A tree built in memory (no lines known); the tree is copied. */
+    public static JsonDocument ofTree(ObjectNode tree, String source) {
+        return new JsonDocument(source, tree.deepCopy(), Map.of());
+    }
+
+    /**
+     * Reads a file: it must exist, be a regular file of at most {@link #MAX_BYTES} bytes, be
+     * UTF-8, and hold one JSON object with no repeated keys.
+     */
+    public static Loaded<JsonDocument> read(Path file) {
+        String source = file.toString();
+        if (!Files.exists(file)) {
+            return Loaded.unreadable(InputCode.INPUT_NO_FILE.finding("file",
+                    source + ": no such file", "check the path"));
+        }
+        if (!Files.isRegularFile(file)) {
+            return Loaded.unreadable(InputCode.INPUT_NOT_A_FILE.finding("file",
+                    source + ": is a folder, not a file", "name a .json file"));
+        }
+        try {
+            long size = Files.size(file);
+            if (size > MAX_BYTES) {
+                return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.finding("file",
+                        source + ": " + size + " bytes is more than the limit of " + MAX_BYTES + " bytes",
+                        "a job or library file is a few kilobytes; check that this is the right file"));
+            }
+            byte[] bytes = Files.readAllBytes(file);
+            if (bytes.length > MAX_BYTES) {
+                return read(file);
+            }
+            String text = StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)
+                    .decode(ByteBuffer.wrap(bytes)).toString();
+            return parse(text, source);
+        } catch (CharacterCodingException e) {
+            return Loaded.unreadable(InputCode.INPUT_IO.finding("file",
+                    source + ": not UTF-8 text", "save the file as UTF-8"));
+        } catch (IOException e) {
+            return Loaded.unreadable(InputCode.INPUT_IO.finding("file",
+                    source + ": cannot be read (" + e.getClass().getSimpleName() + ": " + e.getMessage() + ")",
+                    "check the file's permissions"));
+        }
+    }
+
+    /** Parses a JSON text; {@code source} names it in messages. */
+    public static Loaded<JsonDocument> parse(String json, String source) {
+        if (json.length() > MAX_BYTES) {
+            return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.finding("file",
+                    source + ": more than the limit of " + MAX_BYTES + " characters", null));
+        }
+        Map<String, Integer> lines = new HashMap<>();
+        try (JsonParser p = MAPPER.createParser(json)) {
+            JsonToken first = p.nextToken();
+            if (first != JsonToken.START_OBJECT) {
+                return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
+                        source + ":" + line(p.currentTokenLocation()) + ": the file must hold one JSON object { ... }",
+                        null));
+            }
+            ObjectNode root = readObject(p, "", lines, source);
+            JsonToken after = p.nextToken();
+            if (after != null) {
+                return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
+                        source + ":" + line(p.currentTokenLocation()) + ": text after the end of the JSON object",
+                        "remove everything after the closing brace"));
+            }
+            return Loaded.of(new JsonDocument(source, root, lines));
+        } catch (DuplicateKey e) {
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding(e.path,
+                    source + ":" + e.line + ": key \"" + e.path + "\" appears twice", "keep one of them"));
+        } catch (JacksonException e) {
+            String msg = e.getOriginalMessage() == null ? e.getClass().getSimpleName() : e.getOriginalMessage();
+            msg = msg.replaceAll("\\s+", " ").strip();
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
+                    source + ":" + line(e.getLocation()) + ": malformed JSON: " + msg,
+                    "check brackets, commas and quotes near that line"));
+        }
+    }
+
+    /** Where a key is: {@code source:line}, or just the source when the line is not known. */
+    public String at(String path) {
+        Integer line = lines.get(path);
+        if (line == null && path.contains(".")) {
+            line = lines.get(path.substring(0, path.lastIndexOf('.')));
+        }
+        return line == null ? source : source + ":" + line;
+    }
+
+    private static String line(TokenStreamLocation loc) {
+        return loc == null || loc.getLineNr() < 0 ? "?" : Integer.toString(loc.getLineNr());
+    }
+
+    private static ObjectNode readObject(JsonParser p, String path, Map<String, Integer> lines, String source) {
+        ObjectNode node = NODES.objectNode();
+        JsonToken t;
+        while ((t = p.nextToken()) == JsonToken.PROPERTY_NAME) {
+            String key = p.currentName();
+            String child = path.isEmpty() ? key : path + "." + key;
+            int line = p.currentTokenLocation().getLineNr();
+            if (node.has(key)) {
+                throw new DuplicateKey(child, line);
+            }
+            lines.put(child, line);
+            p.nextToken();
+            node.set(key, readValue(p, child, lines, source));
+        }
+        if (t != JsonToken.END_OBJECT) {
+            throw new IllegalStateException("parser gave " + t + " inside an object");
+        }
+        return node;
+    }
+
+    private static JsonNode readValue(JsonParser p, String path, Map<String, Integer> lines, String source) {
+        JsonToken t = p.currentToken();
+        switch (t) {
+            case START_OBJECT:
+                return readObject(p, path, lines, source);
+            case START_ARRAY: {
+                ArrayNode a = NODES.arrayNode();
+                int i = 0;
+                while (p.nextToken() != JsonToken.END_ARRAY) {
+                    String child = path + "[" + i++ + "]";
+                    lines.put(child, p.currentTokenLocation().getLineNr());
+                    a.add(readValue(p, child, lines, source));
+                }
+                return a;
+            }
+            case VALUE_STRING:
+                return NODES.stringNode(p.getString());
+            case VALUE_NUMBER_INT:
+                return p.getNumberType() == JsonParser.NumberType.INT ? NODES.numberNode(p.getIntValue())
+                        : p.getNumberType() == JsonParser.NumberType.LONG ? NODES.numberNode(p.getLongValue())
+                        : NODES.numberNode(p.getDoubleValue());
+            case VALUE_NUMBER_FLOAT:
+                return NODES.numberNode(p.getDoubleValue());
+            case VALUE_TRUE:
+                return NODES.booleanNode(true);
+            case VALUE_FALSE:
+                return NODES.booleanNode(false);
+            case VALUE_NULL:
+                return NODES.nullNode();
+            default:
+                throw new IllegalStateException("unexpected token " + t + " at " + path);
+        }
+    }
+
+    /** A key that appears twice in one object. */
+    private static final class DuplicateKey extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+        final String path;
+        final int line;
+
+        DuplicateKey(String path, int line) {
+            super(path, null, false, false);
+            this.path = path;
+            this.line = line;
+        }
+    }
+}
