@@ -8,7 +8,7 @@ import picocli.CommandLine.Command;
 @Command(name = "hobwright", mixinStandardHelpOptions = true, versionProvider = ToolVersion.class,
         description = "Plans gear hobbing: checks the drawing, sets up the hob, synchronises the spindles,"
                 + " plans feeds and passes, and posts the program, cycle CSV and setup sheet.",
-        subcommands = {CommandLine.HelpCommand.class},
+        subcommands = {SimulateCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit codes: 0 done, 1 the job has errors (findings printed), 2 usage or input problem.",
                 "Caution: a hobbing cycle drives a rotating cutter and synchronised spindles. Prove out every"
                         + " program at reduced override with the guards closed, following the machine builder's"
