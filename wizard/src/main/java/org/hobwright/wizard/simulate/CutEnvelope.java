@@ -81,12 +81,17 @@ final class CutEnvelope {
         return rack.entry(rx, ry, rdx, rdy, hit);
     }
 
-    /** Depth of a gear-frame point inside the rack tooth at position k (positive inside). */
-    double depthInside(int k, double px, double py) {
+    /** Deepest of the gear-frame points inside the rack tooth at position k (positive inside), mm. */
+    double depthInside(int k, double[] px, double[] py) {
         double f = angle(k);
         double c = Math.cos(f);
         double s = Math.sin(f);
-        return rack.depthInside(px * c - py * s + r * f, px * s + py * c - a);
+        double sh = r * f;
+        double worst = Double.NEGATIVE_INFINITY;
+        for (int j = 0; j < px.length; j++) {
+            worst = Math.max(worst, rack.depthInside(px[j] * c - py[j] * s + sh, px[j] * s + py[j] * c - a));
+        }
+        return worst;
     }
 
     /**
@@ -115,7 +120,7 @@ final class CutEnvelope {
         for (int dir = -1; dir <= 1; dir += 2) {
             int k = kc + 2 * dir;
             int worse = 0;
-            while (worse < 2) {
+            while (worse < 1) {
                 double t = entry(k, px, py, dx, dy, hit);
                 if (t < best) {
                     best = t;

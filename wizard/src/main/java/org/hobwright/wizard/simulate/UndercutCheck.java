@@ -42,9 +42,7 @@ final class UndercutCheck {
         }
         double worst = Double.NEGATIVE_INFINITY;
         for (int k = env.firstPosition(); k <= env.lastPosition(); k++) {
-            for (int j = 0; j < SAMPLES; j++) {
-                worst = Math.max(worst, env.depthInside(k, px[j], py[j]));
-            }
+            worst = Math.max(worst, env.depthInside(k, px, py));
         }
         return worst;
     }
