@@ -28,7 +28,8 @@ public record Prediction(double feedMarkFlankUm, double feedMarkRootUm, double e
             findings.add(Finding.warning(PlanCodes.FEED_MARK_OVER_TARGET, "cycle.finishFeed", String.format(Locale.ROOT,
                     "predicted flank feed marks %.2f µm exceed the %.2f µm target (%s)", feedMarkFlankUm,
                     t.feedMarkUm(), t.feedMarkSource()), String.format(Locale.ROOT,
-                    "finish at %.3f mm per work revolution or less", model.feedForFeedMark(t.feedMarkUm())),
+                    "finish at %.3f mm per work revolution or less",
+                    Math.floor(model.feedForFeedMark(t.feedMarkUm()) * 1000) / 1000),
                     "feed-mark depth, DOMAIN §6.1 (derived for helical gears)"));
         }
         if (envelopingUm > t.envelopingUm() * (1 + 1e-9)) {
