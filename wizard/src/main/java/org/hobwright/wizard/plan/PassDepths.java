@@ -27,10 +27,13 @@ public record PassDepths(double[] depthsMm) {
      *
      * @param totalMm     depth from touch-off to the final root diameter, greater than 0
      * @param roughMm     largest depth of one roughing pass, greater than 0
-     * @param stockMm     finishing stock, 0 or more (at least the total depth means one pass)
+     * @param stockMm     finishing stock, 0 or more (at least the total depth means one finishing pass to full depth)
      */
     public static PassDepths of(double totalMm, double roughMm, double stockMm) {
-        double stock = stockMm >= totalMm ? 0 : stockMm;
+        if (stockMm >= totalMm) {
+            return new PassDepths(new double[] {totalMm});
+        }
+        double stock = stockMm;
         double roughRegion = totalMm - stock;
         int rough = (int) Math.max(1, Math.ceil(roughRegion / roughMm - SLACK));
         int n = rough + (stock > 0 ? 1 : 0);
