@@ -75,6 +75,7 @@ public final class FastestCycle {
                 workRpm * Math.max(limits.row().roughFeed().max(), limits.row().finishFeed().max()));
         double total = g.totalDepthMm();
         double stock = limits.finishStockMm() >= total ? 0 : limits.finishStockMm();
+        Words words = new Words(limits.targets());
         Candidate best = null;
         for (int rough = 1; rough <= MAX_PASSES; rough++) {
             PassDepths depths = PassDepths.of(total, (total - stock) / rough, stock);
@@ -85,7 +86,7 @@ public final class FastestCycle {
                     / ceiling >= best.bound) {
                 break;
             }
-            Candidate c = candidate(g, drive, model, limits, depths, rpm, workRpm);
+            Candidate c = candidate(g, drive, model, limits, depths, rpm, workRpm, words);
             if (c != null && (best == null || c.bound < best.bound)) {
                 best = c;
             }
@@ -106,19 +107,17 @@ public final class FastestCycle {
     }
 
     private static Candidate candidate(CycleGeometry g, Drive drive, CutModel model, Limits limits,
-                                       PassDepths depths, double rpm, double workRpm) {
+                                       PassDepths depths, double rpm, double workRpm, Words words) {
         int last = depths.count() - 1;
-        FeedLimit finish = FeedLimit.table(limits.row().finishFeed().max(), "finishing feed range of the cutting-data table")
-                .orBelow(limits.maxFeedRateMmPerMin() / workRpm, "machine maximum feed rate")
-                .orBelow(model.feedForFeedMark(limits.targets().feedMarkUm()), "feed-mark depth target ("
-                        + limits.targets().feedMarkSource() + ")");
-        FeedLimit rough = FeedLimit.table(limits.row().roughFeed().max(), "roughing feed range of the cutting-data table")
-                .orBelow(limits.maxFeedRateMmPerMin() / workRpm, "machine maximum feed rate");
+        FeedLimit finish = new FeedLimit(limits.row().finishFeed().max(), Words.FINISH_TABLE)
+                .orBelow(limits.maxFeedRateMmPerMin() / workRpm, Words.FEED_RATE)
+                .orBelow(model.feedForFeedMark(limits.targets().feedMarkUm()), words.feedMark);
+        FeedLimit rough = new FeedLimit(limits.row().roughFeed().max(), Words.ROUGH_TABLE)
+                .orBelow(limits.maxFeedRateMmPerMin() / workRpm, Words.FEED_RATE);
         if (limits.targets().hasChipLimit()) {
-            String words = "chip thickness limit (" + limits.targets().chipSource() + ")";
-            finish = finish.orBelow(model.feedForChip(limits.targets().chipMm(), depths.increment(last)), words);
+            finish = finish.orBelow(model.feedForChip(limits.targets().chipMm(), depths.increment(last)), words.chip);
             for (int i = 0; i < last; i++) {
-                rough = rough.orBelow(model.feedForChip(limits.targets().chipMm(), depths.increment(i)), words);
+                rough = rough.orBelow(model.feedForChip(limits.targets().chipMm(), depths.increment(i)), words.chip);
             }
         }
         if (!(finish.feed > 0) || !(rough.feed > 0) || !Double.isFinite(finish.feed) || !Double.isFinite(rough.feed)) {
@@ -149,12 +148,22 @@ public final class FastestCycle {
         return fixed + feeding;
     }
 
+    /** The names of the limits, built once per search. */
+    private static final class Words {
+        static final String FINISH_TABLE = "finishing feed range of the cutting-data table";
+        static final String ROUGH_TABLE = "roughing feed range of the cutting-data table";
+        static final String FEED_RATE = "machine maximum feed rate";
+        final String feedMark;
+        final String chip;
+
+        Words(Targets t) {
+            feedMark = "feed-mark depth target (" + t.feedMarkSource() + ")";
+            chip = "chip thickness limit (" + t.chipSource() + ")";
+        }
+    }
+
     /** A feed limit and the words that name it. */
     private record FeedLimit(double feed, String limit) {
-        static FeedLimit table(double feed, String words) {
-            return new FeedLimit(feed, words);
-        }
-
         FeedLimit orBelow(double other, String words) {
             return other < feed ? new FeedLimit(other, words) : this;
         }

@@ -2,14 +2,12 @@ package org.hobwright.wizard.plan;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
-import org.hobwright.wizard.setup.Angles;
 
 /**
  * The steps before the synchronisation: comment lines (part, gear, hob, swivel, sync, cautions,
@@ -27,27 +25,38 @@ public final class HeaderSteps {
     private HeaderSteps() {
     }
 
-    /** The header steps of a job. */
-    public static List<CycleStep> of(HobJob job, double swivelAngleDeg, SwivelSetting swivel, Drive drive,
-                                     PlanSettings s, Optional<HobShiftPlan> shift) {
+    /**
+     * The header steps of a job.
+     *
+     * @param job            the job
+     * @param swivelAngleDeg η, signed, degrees
+     * @param swivelDms      η as degrees-minutes-seconds
+     * @param swivel         the machine's setting
+     * @param drive          ratio, senses and differential
+     * @param s              speeds of the plan
+     * @param shift          hob shift, on machines with a shift axis
+     */
+    public static List<CycleStep> of(HobJob job, double swivelAngleDeg, String swivelDms, SwivelSetting swivel,
+                                     Drive drive, PlanSettings s, Optional<HobShiftPlan> shift) {
         GearSpec g = job.gear();
         HobSpec h = job.hob();
         List<CycleStep> out = new ArrayList<>(12);
         out.add(comment(g.partName() + " - job " + job.name()));
-        out.add(comment(String.format(Locale.ROOT, "gear: %d teeth, normal module %.4f mm, pressure angle %.2f deg,"
-                + " helix %s, face width %.3f mm", g.teeth(), g.moduleMm(), g.pressureAngleDeg(),
-                g.isSpur() ? "0 (spur)" : String.format(Locale.ROOT, "%.4f deg %s hand", g.helixAngleDeg(),
-                        g.hand().word()), g.faceWidthMm())));
-        out.add(comment(String.format(Locale.ROOT, "hob: %d start(s), %s hand, outside diameter %.3f mm, %d gashes,"
-                + " %s", h.starts(), h.hand().word(), h.outsideDiameterMm(), h.gashes(), h.material())));
-        out.add(comment(String.format(Locale.ROOT, "swivel: %s; angle %.4f deg = %s (right hand positive)",
-                swivel.direction(), swivelAngleDeg, Angles.dms(swivelAngleDeg))));
-        out.add(comment(String.format(Locale.ROOT, "sync: hob %d : work %d turns; hob %.1f rpm %s seen from its drive end; work %.4f rpm %s seen from the entry face",
-                drive.ratio().hobTurns(), drive.ratio().workTurns(), s.hobRpm(), words(drive.senses().hob()),
-                drive.workRpm(s.hobRpm()), words(drive.senses().work()))));
+        out.add(comment("gear: " + g.teeth() + " teeth, normal module " + Text.fixed(g.moduleMm(), 4)
+                + " mm, pressure angle " + Text.fixed(g.pressureAngleDeg(), 2) + " deg, helix "
+                + (g.isSpur() ? "0 (spur)" : Text.fixed(g.helixAngleDeg(), 4) + " deg " + g.hand().word() + " hand")
+                + ", face width " + Text.fixed(g.faceWidthMm(), 3) + " mm"));
+        out.add(comment("hob: " + h.starts() + " start(s), " + h.hand().word() + " hand, outside diameter "
+                + Text.fixed(h.outsideDiameterMm(), 3) + " mm, " + h.gashes() + " gashes, " + h.material()));
+        out.add(comment("swivel: " + swivel.direction() + "; angle " + Text.fixed(swivelAngleDeg, 4) + " deg = "
+                + swivelDms + " (right hand positive)"));
+        out.add(comment("sync: hob " + drive.ratio().hobTurns() + " : work " + drive.ratio().workTurns()
+                + " turns; hob " + Text.fixed(s.hobRpm(), 1) + " rpm " + words(drive.senses().hob())
+                + " seen from its drive end; work " + Text.fixed(drive.workRpm(s.hobRpm()), 4) + " rpm "
+                + words(drive.senses().work()) + " seen from the entry face"));
         if (drive.differentialDegPerMm() != 0) {
-            out.add(comment(String.format(Locale.ROOT, "differential: %+.6f deg of work rotation per mm of axial feed",
-                    drive.differentialDegPerMm())));
+            out.add(comment("differential: " + Text.signed(drive.differentialDegPerMm(), 6)
+                    + " deg of work rotation per mm of axial feed"));
         }
         out.add(comment(CAUTION));
         out.add(comment(CUTTING_DATA));

@@ -69,9 +69,9 @@ public record HobShiftPlan(double positionMm, double usableMm, double stepMm, in
     /** One line for the program header. */
     public String describe() {
         if (stepMm <= 0) {
-            return String.format(Locale.ROOT, "hob shift position %.3f mm (no shifting between parts)", positionMm);
+            return "hob shift position " + Text.fixed(positionMm, 3) + " mm (no shifting between parts)";
         }
-        return String.format(Locale.ROOT, "hob shift %.3f mm every %d part(s), from 0 to %.3f mm, then back to 0",
-                stepMm, everyParts, (positions - 1) * stepMm);
+        return "hob shift " + Text.fixed(stepMm, 3) + " mm every " + everyParts + " part(s), from 0 to "
+                + Text.fixed((positions - 1) * stepMm, 3) + " mm, then back to 0";
     }
 }

@@ -1,7 +1,6 @@
 package org.hobwright.wizard.plan;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleSummary;
@@ -66,9 +65,9 @@ final class JobPlanning {
         }
         double machineSignedEta = machine.swivel().positiveIsRight() ? hs.swivelAngleDeg() : -hs.swivelAngleDeg();
         if (Math.abs(swivel.machineAngleDeg() - machineSignedEta) > 1e-9) {
-            findings.add(Finding.info(PlanCodes.SWIVEL_ROUNDED, "machine.swivel.resolution", String.format(Locale.ROOT,
-                    "the holder's resolution rounds the swivel from %s to %s", Angles.dms(machineSignedEta),
-                    Angles.dms(swivel.machineAngleDeg())), PlanCodes.MACHINE));
+            findings.add(Finding.info(PlanCodes.SWIVEL_ROUNDED, "machine.swivel.resolution",
+                    "the holder's resolution rounds the swivel setting from " + Angles.dms(machineSignedEta) + " to "
+                    + swivel.text(), PlanCodes.MACHINE));
         }
         double rpm = SpeedChoice.hobRpm(boxed(cycle.cuttingSpeedMPerMin()), row, hob.outsideDiameterMm(), window,
                 findings).orElseThrow();
@@ -87,8 +86,9 @@ final class JobPlanning {
                 gear.pressureAngleDeg(), hs.swivelAngleDeg(), !gear.isSpur(), cycle.axialClearanceMm(),
                 cycle.radialClearanceMm(), machine.radialMaxMm(), machine.rapidMmPerMin(), machine.syncSettleS());
         Optional<HobShiftPlan> shift = HobShiftPlan.of(machine, hob, cycle, depth, gear.pressureAngleDeg(), findings);
+        String swivelDms = Angles.dms(hs.swivelAngleDeg());
         Toolpath path = ToolpathBuilder.build(geometry, drive, settings,
-                HeaderSteps.of(job, hs.swivelAngleDeg(), swivel, drive, settings, shift), cycle.coolant());
+                HeaderSteps.of(job, hs.swivelAngleDeg(), swivelDms, swivel, drive, settings, shift), cycle.coolant());
         Prediction prediction = Prediction.of(model, settings);
         prediction.check(targets, model, findings);
         findings.addAll(TravelCheck.check(path.steps(), machine));
@@ -98,7 +98,7 @@ final class JobPlanning {
         Optional<FastestProposal> fastest = cycle.fastest()
                 ? fastest(geometry, drive, model, window, row, targets, path.cycleTimeS()) : Optional.empty();
         SetupValues setup = new SetupValues(touchOff, touchOff, root, hs.leadAngleDeg(), hs.swivelAngleDeg(),
-                swivel.machineAngleDeg(), swivel.text(), Angles.dms(hs.swivelAngleDeg()), swivel.direction(),
+                swivel.machineAngleDeg(), swivel.text(), swivelDms, swivel.direction(),
                 settings.cuttingSpeedMPerMin(), rpm, drive.workRpm(rpm), ratio.hobTurns(), ratio.workTurns(),
                 drive.differentialDegPerMm(), shift.map(HobShiftPlan::positionMm).orElse(0.0));
         PassSummary last = path.passes().get(path.passes().size() - 1);
@@ -141,11 +141,12 @@ final class JobPlanning {
             return Optional.empty();
         }
         FastestProposal p = r.get().proposal();
-        findings.add(Finding.info(PlanCodes.FASTEST, "cycle.fastest", String.format(Locale.ROOT,
-                "fastest cycle %.1f s (proved lower bound %.1f s) against %.1f s planned: %.1f m/min, %d pass(es),"
-                        + " roughing %.3f mm, finishing %.3f mm per work revolution; limits: %s", p.cycleTimeS(),
-                p.lowerBoundS(), userTimeS, p.cuttingSpeedMPerMin(), p.passes(), p.roughFeedMmPerRev(),
-                p.finishFeedMmPerRev(), p.bindingLimit()), "fastest-cycle search (derived)"));
+        findings.add(Finding.info(PlanCodes.FASTEST, "cycle.fastest", "fastest cycle " + Text.fixed(p.cycleTimeS(), 1)
+                + " s (proved lower bound " + Text.fixed(p.lowerBoundS(), 1) + " s) against "
+                + Text.fixed(userTimeS, 1) + " s planned: " + Text.fixed(p.cuttingSpeedMPerMin(), 1) + " m/min, "
+                + p.passes() + " pass(es), roughing " + Text.fixed(p.roughFeedMmPerRev(), 3) + " mm, finishing "
+                + Text.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(),
+                "fastest-cycle search (derived)"));
         return Optional.of(p);
     }
 

@@ -1,7 +1,6 @@
 package org.hobwright.wizard.plan;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 
@@ -35,23 +34,26 @@ public final class SpeedChoice {
         if (wanted > window.maxRpm()) {
             rpm = window.maxRpm();
             limited = true;
-            findings.add(Finding.warning(PlanCodes.HOB_RPM_CAPPED, "cycle.cuttingSpeed", String.format(Locale.ROOT,
-                    "%.1f m/min needs %.1f rpm on a %.3f mm hob; the %s allows %.1f rpm, so the cut runs at %.1f m/min",
-                    vc.get(), wanted, hobOutsideMm, window.maxLimit(), rpm, Kinematics.cuttingSpeed(rpm, hobOutsideMm)),
+            findings.add(Finding.warning(PlanCodes.HOB_RPM_CAPPED, "cycle.cuttingSpeed", Text.fixed(vc.get(), 1)
+                    + " m/min needs " + Text.fixed(wanted, 1) + " rpm on a " + Text.fixed(hobOutsideMm, 3)
+                    + " mm hob; the " + window.maxLimit() + " allows " + Text.fixed(rpm, 1)
+                    + " rpm, so the cut runs at " + Text.fixed(Kinematics.cuttingSpeed(rpm, hobOutsideMm), 1) + " m/min",
                     "accept the lower speed, or use a smaller hob or a faster spindle", PlanCodes.MACHINE));
         } else if (wanted < window.minRpm()) {
             rpm = window.minRpm();
             limited = true;
-            findings.add(Finding.warning(PlanCodes.HOB_RPM_RAISED, "cycle.cuttingSpeed", String.format(Locale.ROOT,
-                    "%.1f m/min needs %.1f rpm; the %s is %.1f rpm, so the cut runs at %.1f m/min", vc.get(), wanted,
-                    window.minLimit(), rpm, Kinematics.cuttingSpeed(rpm, hobOutsideMm)),
+            findings.add(Finding.warning(PlanCodes.HOB_RPM_RAISED, "cycle.cuttingSpeed", Text.fixed(vc.get(), 1)
+                    + " m/min needs " + Text.fixed(wanted, 1) + " rpm; the " + window.minLimit() + " is "
+                    + Text.fixed(rpm, 1) + " rpm, so the cut runs at "
+                    + Text.fixed(Kinematics.cuttingSpeed(rpm, hobOutsideMm), 1) + " m/min",
                     "check the higher cutting speed with the hob supplier", PlanCodes.MACHINE));
         }
         double used = Kinematics.cuttingSpeed(rpm, hobOutsideMm);
         if (row.isPresent() && !row.get().cuttingSpeed().contains(used)) {
             ValueRange r = row.get().cuttingSpeed();
-            String msg = String.format(Locale.ROOT, "cutting speed %.1f m/min is outside the typical %.0f to %.0f m/min"
-                    + " for %s with a %s hob", used, r.min(), r.max(), row.get().workMaterial(), row.get().hobMaterial());
+            String msg = "cutting speed " + Text.fixed(used, 1) + " m/min is outside the typical " + Text.fixed(r.min(), 0)
+                    + " to " + Text.fixed(r.max(), 0) + " m/min for " + row.get().workMaterial() + " with a "
+                    + row.get().hobMaterial() + " hob";
             findings.add(limited ? Finding.info(PlanCodes.CUTTING_SPEED_OUTSIDE_TABLE, "cycle.cuttingSpeed", msg,
                     PlanCodes.TABLE) : Finding.warning(PlanCodes.CUTTING_SPEED_OUTSIDE_TABLE, "cycle.cuttingSpeed",
                     msg, "confirm the speed with the hob supplier", PlanCodes.TABLE));

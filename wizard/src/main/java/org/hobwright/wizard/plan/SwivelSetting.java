@@ -1,6 +1,5 @@
 package org.hobwright.wizard.plan;
 
-import java.util.Locale;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.wizard.setup.Angles;
 
@@ -50,6 +49,6 @@ public record SwivelSetting(double machineAngleDeg, String text, String directio
             return res < 1.0 / 60 - 1e-12 ? Angles.dms(deg) : Angles.degreesMinutes(deg);
         }
         int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(res) - 1e-9)));
-        return String.format(Locale.ROOT, "%." + decimals + "f°", deg);
+        return Text.fixed(deg, decimals) + "°";
     }
 }
