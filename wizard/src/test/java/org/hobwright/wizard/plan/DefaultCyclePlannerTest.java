@@ -190,6 +190,22 @@ class DefaultCyclePlannerTest {
     }
 
     @Test
+    void defaultRoughingDepthByModule() {
+        // common practice, no source (DOMAIN §7.5): full depth in one pass up to module 2.5 mm, else
+        // 1.25 m_n per pass; m 3 on ISO 53 A cuts 2.25 · 3 = 6.75 mm in two passes
+        HobJob m3 = new HobJob("m3", SampleJobs.spurMetric().units(), SampleJobs.gear(20, 3, 0,
+                org.hobwright.api.job.Hand.RIGHT, 0), new org.hobwright.api.job.HobSpec(
+                new org.hobwright.api.job.Pitch.Module(3), 20, 1, org.hobwright.api.job.Hand.RIGHT, 100,
+                OptionalDouble.empty(), OptionalDouble.empty(), 12, 100, OptionalDouble.empty(), "hss"),
+                SampleJobs.machine(true), SampleJobs.cycle());
+        List<PassSummary> p = planner.plan(m3).summary().orElseThrow().passes();
+        assertEquals(2, p.size());
+        assertEquals(3.375, p.get(0).radialDepthMm(), 1e-12);
+        assertEquals(6.75, p.get(1).radialDepthMm(), 1e-12);
+        assertEquals(1, planner.plan(SampleJobs.spurMetric()).summary().orElseThrow().passes().size(), "m 2: one pass");
+    }
+
+    @Test
     void openFeedsComeFromTheTableAndMeetTheTargets() {
         HobJob job = TestJobs.with(SampleJobs.spurMetric(), TestJobs.cycle("steel-case-hardening", OptionalDouble.empty(),
                 OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty(), 0, QualityTargets.DEFAULTS,

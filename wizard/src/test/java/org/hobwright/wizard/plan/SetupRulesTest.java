@@ -137,7 +137,8 @@ class SetupRulesTest {
                 c.axialClearanceMm(), c.radialClearanceMm(), c.coolant(), c.targets(), 0.5, 10, false);
         List<Finding> f = new ArrayList<>();
         HobShiftPlan p = HobShiftPlan.of(job.machine(), job.hob(), cycle, 4.5, 20, f).orElseThrow();
-        // working width 2·4.5/tan 20° + π·2 = 31.0105 mm; hob 80 mm, axis 60 mm → usable 48.9895 mm
+        // working width 2·4.5/tan 20° (generating zone, DOMAIN §7.2, derived) + π·2 (one axial pitch,
+        // common practice, no source) = 31.0105 mm; hob 80 mm, axis 60 mm → usable 48.9895 mm
         assertEquals(80 - (9 / Math.tan(Math.toRadians(20)) + 2 * Math.PI), p.usableMm(), 1e-9);
         assertEquals(98, p.positions());
         assertEquals(0, p.positionForPart(9));
