@@ -68,6 +68,11 @@ final class FlankCut {
             return;
         }
         if (Math.abs(ka - kb) == 1) {
+            double[] corner = corner(env, Math.min(ka, kb));
+            if (corner != null) {
+                cusps.add(corner);
+                return;
+            }
             double lo = la;
             double hi = lb;
             double gLo = difference(env, lo, ka, kb, c);
@@ -94,6 +99,48 @@ final class FlankCut {
         env.boundary(c[0], c[1], c[2], c[3], c[4], out);
         refine(env, la, ka, mid, out[0], c, depth + 1);
         refine(env, mid, out[0], lb, kb, c, depth + 1);
+    }
+
+    /**
+     * The cusp of two neighbouring straight-flank cuts k and k + 1: where their flank lines cross
+     * (in the gear frame, each line R(−φ)·(E − (r φ, −a)) + s R(−φ)(sin α_t, cos α_t)). Its height is
+     * its distance from the involute ({@link NominalPath#excess}); its roll length that of the
+     * involute point on the same base tangent. Null when the crossing is not on both straight flanks.
+     */
+    private double[] corner(CutEnvelope env, int k) {
+        double[] p1 = new double[4];
+        double[] p2 = new double[4];
+        flankLine(env.angle(k), p1);
+        flankLine(env.angle(k + 1), p2);
+        double det = p1[2] * p2[3] - p1[3] * p2[2];
+        if (Math.abs(det) < 1e-15) {
+            return null;
+        }
+        double s1 = ((p2[0] - p1[0]) * p2[3] - (p2[1] - p1[1]) * p2[2]) / det;
+        double s2 = ((p2[0] - p1[0]) * p1[3] - (p2[1] - p1[1]) * p1[2]) / det;
+        if (s1 < 0 || s2 < 0) {
+            return null;
+        }
+        double x = p1[0] + s1 * p1[2];
+        double y = p1[1] + s1 * p1[3];
+        double height = path.excess(x, y);
+        if (Double.isNaN(height)) {
+            return null;
+        }
+        double rr = Math.hypot(x, y);
+        return new double[] {Math.sqrt(rr * rr - path.rb * path.rb) - height, height};
+    }
+
+    /** Gear-frame point (the straight flank's lower end) and unit direction (upward) of the flank at φ. */
+    private void flankLine(double phi, double[] out) {
+        double c = Math.cos(phi);
+        double s = Math.sin(phi);
+        double gx = path.flankEnd[0] - path.r * phi;
+        double gy = path.a + path.flankEnd[1];
+        out[0] = gx * c + gy * s;
+        out[1] = -gx * s + gy * c;
+        out[2] = path.rack.sinA * c + path.rack.cosA * s;
+        out[3] = -path.rack.sinA * s + path.rack.cosA * c;
     }
 
     private double difference(CutEnvelope env, double lambda, int ka, int kb, double[] c) {

@@ -20,7 +20,7 @@ final class NominalPath {
     static final byte ROOT = 0;
     static final byte FILLET = 1;
     static final byte FLANK = 2;
-    private static final int TABLE = 256;
+    private static final int TABLE = 64;
 
     final GeneratingSetup setup;
     final TransverseRack rack;
@@ -71,7 +71,9 @@ final class NominalPath {
         double lStart = 0;
         boolean cross = false;
         double startRadius;
-        double nuCross = findCrossing(c);
+        // the corner's path can only cross the involute when the straight flank works past the
+        // interference point (otherwise the fillet meets the involute tangentially at the flank end)
+        double nuCross = rollAtFlankEnd < 0 ? findCrossing(c) : Double.NaN;
         if (!Double.isNaN(nuCross)) {
             cross = true;
             nuEnd = nuCross;
@@ -181,6 +183,16 @@ final class NominalPath {
         out[4] = f;
         out[5] = qx;
         out[6] = qy;
+    }
+
+    /**
+     * Roll length at which the rack flank rolled by φ touches the involute (or, when negative, the
+     * involute's other branch beyond the interference point): L = L_E + (r φ − u_E) cos α_t, since
+     * the contact runs along the line of action at r_b per radian of rolling.
+     */
+    double rollOfPosition(double phiRad) {
+        double uE = flankEnd[0] - (rollingY - flankEnd[1]) * rack.cosA / rack.sinA;
+        return rollAtFlankEnd + (r * phiRad - uE) * rack.cosA;
     }
 
     /** Roll length of the involute point generated at flank parameter λ: L = L_E + λ cot α_t. */

@@ -108,7 +108,11 @@ public final class ToothSpaceSimulation {
         return outline(lx, ly, rx, ry);
     }
 
-    /** Deviation of the right flank from the true involute: x = roll length, y = deviation, mm; cusps included. */
+    /**
+     * Deviation of the right flank from the true involute: x = roll length, y = deviation, mm; the
+     * exact cusps and the touching points of the cuts included, so even a coarse sampling shows
+     * every scallop.
+     */
     public List<Point> deviation() {
         List<Point> pts = new ArrayList<>();
         for (int i = 0; i < path.size; i++) {
@@ -118,6 +122,16 @@ public final class ToothSpaceSimulation {
         }
         for (double[] c : right.cusps) {
             pts.add(new Point(c[0], c[1]));
+        }
+        // where each cut touches the involute the deviation is 0
+        double first = path.rollOfLambda(path.lambdaStart);
+        double last = path.rollOfLambda(path.lambdaEnd);
+        CutEnvelope env = new CutEnvelope(path, path.setup.phase());
+        for (int k = env.firstPosition(); k <= env.lastPosition(); k++) {
+            double roll = path.rollOfPosition(env.angle(k));
+            if (roll > first && roll < last) {
+                pts.add(new Point(roll, 0));
+            }
         }
         pts.sort(Comparator.comparingDouble(Point::x));
         return pts;

@@ -8,8 +8,10 @@ import org.hobwright.wizard.geometry.Involute;
  * involute is convex and each straight flank is one of its tangents), so any penetration comes
  * from a straight flank working beyond the interference point or from the tip corner.
  *
- * <p>The involute is sampled by roll length ℓ_j = L_a (j/N)³, dense at the base circle where an
- * undercut begins; each sample is tested against every cut position.
+ * <p>Only positions whose flank line touches the involute's other branch (contact roll length
+ * below 0) can reach inside: every other position lies wholly on the far side of a tangent of the
+ * convex involute. The involute is sampled by roll length ℓ_j = L_a (j/N)³, dense at the base
+ * circle where an undercut begins; each sample is tested against each such position.
  */
 final class UndercutCheck {
     /** Penetrations below this are rounding, mm. */
@@ -42,7 +44,9 @@ final class UndercutCheck {
         }
         double worst = Double.NEGATIVE_INFINITY;
         for (int k = env.firstPosition(); k <= env.lastPosition(); k++) {
-            worst = Math.max(worst, env.depthInside(k, px, py));
+            if (path.rollOfPosition(env.angle(k)) < TOLERANCE_MM) {
+                worst = Math.max(worst, env.depthInside(k, px, py));
+            }
         }
         return worst;
     }

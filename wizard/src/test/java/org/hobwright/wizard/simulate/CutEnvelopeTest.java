@@ -95,4 +95,30 @@ class CutEnvelopeTest {
         }
         return Double.POSITIVE_INFINITY;
     }
+
+    /**
+     * Each cusp the simulation reports (crossing of two neighbouring flank lines) is a local maximum
+     * of the material measured along the involute normals, and has that height.
+     */
+    @Test
+    void cuspsAreTheLocalMaximaOfTheEnvelope() {
+        for (GeneratingSetup s : SETUPS) {
+            NominalPath path = new NominalPath(s);
+            FlankCut cut = new FlankCut(path, 0.2);
+            CutEnvelope env = new CutEnvelope(path, 0.2);
+            double[] c = new double[7];
+            int[] out = new int[2];
+            assertTrue(cut.cusps.size() > 3);
+            for (double[] cusp : cut.cusps) {
+                double lambda = (cusp[0] - path.rollAtFlankEnd) * path.rack.sinA / path.rack.cosA;
+                double[] t = new double[3];
+                for (int j = -1; j <= 1; j++) {
+                    path.contact(NominalPath.FLANK, lambda + j * 1e-4, c);
+                    t[j + 1] = env.boundary(c[0], c[1], c[2], c[3], c[4], out);
+                }
+                assertEquals(cusp[1], t[1], 1e-9 * s.normalModuleMm() + 1e-6 * cusp[1], "cusp height at " + cusp[0]);
+                assertTrue(t[0] < t[1] && t[2] < t[1], "local maximum at " + cusp[0]);
+            }
+        }
+    }
 }
