@@ -56,9 +56,12 @@ final class FlankCut {
             }
         }
         int start = n - 1;
-        while (start > 0 && feature[start - 1] == TransverseRack.Feature.FLANK.ordinal()
-                && path.excess(bx[start - 1], by[start - 1]) >= -UndercutCheck.TOLERANCE_MM) {
+        while (start > 0 && feature[start - 1] == TransverseRack.Feature.FLANK.ordinal()) {
             start--;
+        }
+        // straight flanks working past the interference point cut inside the involute: not involute
+        while (start < n - 1 && !(path.excess(bx[start], by[start]) >= -UndercutCheck.TOLERANCE_MM)) {
+            start++;
         }
         involuteStartRadius = Math.hypot(bx[start], by[start]);
     }

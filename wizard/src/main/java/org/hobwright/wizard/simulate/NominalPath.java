@@ -20,7 +20,7 @@ final class NominalPath {
     static final byte ROOT = 0;
     static final byte FILLET = 1;
     static final byte FLANK = 2;
-    private static final int TABLE = 64;
+    private static final int TABLE = 32;
 
     final GeneratingSetup setup;
     final TransverseRack rack;
@@ -128,8 +128,9 @@ final class NominalPath {
         double hi = Double.NEGATIVE_INFINITY;
         for (byte f = ROOT; f <= FLANK; f++) {
             double end = f == ROOT ? Math.max(0, rack.vx) : f == FILLET ? nuMax : lambdaEnd;
-            for (int j = 0; j <= 32; j++) {
-                contact(f, end * j / 32, c);
+            // the contact rolling angle runs monotonically along each feature
+            for (int j = 0; j <= 1; j++) {
+                contact(f, end * j, c);
                 lo = Math.min(lo, c[4]);
                 hi = Math.max(hi, c[4]);
             }

@@ -29,6 +29,10 @@ final class UndercutCheck {
      */
     static double depth(NominalPath path, double phase) {
         CutEnvelope env = new CutEnvelope(path, phase);
+        if (path.rollOfPosition(env.angle(env.firstPosition())) >= TOLERANCE_MM
+                && path.rollOfPosition(env.angle(env.lastPosition())) >= TOLERANCE_MM) {
+            return Double.NEGATIVE_INFINITY;
+        }
         double rb = path.rb;
         double ra = path.setup.tipRadiusMm();
         double rollTip = Math.sqrt(Math.max(0, ra * ra - rb * rb));
