@@ -109,84 +109,63 @@ final class TransverseRack {
         double t0 = Double.NEGATIVE_INFINITY;
         double t1 = Double.POSITIVE_INFINITY;
         int feature = Feature.NONE.ordinal();
-        // tip: −Y ≤ −tipY
-        double gp = -py;
-        double gd = -dy;
-        double h = -tipY;
-        if (gd > 0) {
-            t1 = Math.min(t1, (h - gp) / gd);
-        } else if (gd < 0) {
-            double t = (h - gp) / gd;
-            if (t > t0) {
-                t0 = t;
-                feature = Feature.TIP.ordinal();
+        // the offset half-planes g·q ≤ h of tip, right flank and left flank (scaled frame)
+        for (int i = 0; i < 3; i++) {
+            double gx = i == 0 ? 0 : i == 1 ? mRx : -mRx;
+            double gy = i == 0 ? -1 : mRy;
+            double h = i == 0 ? -tipY : hR;
+            double gp = gx * sx + gy * py;
+            double gd = gx * sdx + gy * dy;
+            if (gd > 0) {
+                t1 = Math.min(t1, (h - gp) / gd);
+            } else if (gd < 0) {
+                double t = (h - gp) / gd;
+                if (t > t0) {
+                    t0 = t;
+                    feature = (i == 0 ? Feature.TIP : i == 1 ? Feature.FLANK : Feature.OTHER_FLANK).ordinal();
+                }
+            } else if (gp > h) {
+                hit[0] = Feature.NONE.ordinal();
+                return Double.POSITIVE_INFINITY;
             }
-        } else if (gp > h) {
-            return Double.POSITIVE_INFINITY;
-        }
-        // right flank
-        gp = mRx * sx + mRy * py;
-        gd = mRx * sdx + mRy * dy;
-        if (gd > 0) {
-            t1 = Math.min(t1, (hR - gp) / gd);
-        } else if (gd < 0) {
-            double t = (hR - gp) / gd;
-            if (t > t0) {
-                t0 = t;
-                feature = Feature.FLANK.ordinal();
-            }
-        } else if (gp > hR) {
-            return Double.POSITIVE_INFINITY;
-        }
-        // left flank
-        gp = -mRx * sx + mRy * py;
-        gd = -mRx * sdx + mRy * dy;
-        if (gd > 0) {
-            t1 = Math.min(t1, (hR - gp) / gd);
-        } else if (gd < 0) {
-            double t = (hR - gp) / gd;
-            if (t > t0) {
-                t0 = t;
-                feature = Feature.OTHER_FLANK.ordinal();
-            }
-        } else if (gp > hR) {
-            return Double.POSITIVE_INFINITY;
         }
         if (t0 > t1 || t0 == Double.NEGATIVE_INFINITY) {
             hit[0] = Feature.NONE.ordinal();
             return t0 > t1 ? Double.POSITIVE_INFINITY : t0;
         }
-        if (rho > 0) {
-            double qx = sx + t0 * sdx;
-            double qy = py + t0 * dy;
-            double cx = Double.NaN;
-            if (qx - vxs > 0 && (qx - vxs) * fRx + (qy - vy) * fRy < 0) {
-                cx = vxs;
-            } else if (qx + vxs < 0 && -(qx + vxs) * fRx + (qy - vy) * fRy < 0) {
-                cx = -vxs;
+        int corner = rho > 0 ? corner(sx + t0 * sdx, py + t0 * dy) : 0;
+        if (corner != 0) {
+            // in a corner's wedge the tooth is the circle of radius ρ about that corner
+            double ex = sx - corner * vxs;
+            double ey = py - vy;
+            double a = sdx * sdx + dy * dy;
+            double b = ex * sdx + ey * dy;
+            double c = ex * ex + ey * ey - rho * rho;
+            double disc = b * b - a * c;
+            double t = disc < 0 ? Double.POSITIVE_INFINITY : (-b - Math.sqrt(disc)) / a;
+            if (disc < 0 || t > t1) {
+                hit[0] = Feature.NONE.ordinal();
+                return Double.POSITIVE_INFINITY;
             }
-            if (!Double.isNaN(cx)) {
-                double ex = sx - cx;
-                double ey = py - vy;
-                double a = sdx * sdx + dy * dy;
-                double b = ex * sdx + ey * dy;
-                double c = ex * ex + ey * ey - rho * rho;
-                double disc = b * b - a * c;
-                if (disc < 0) {
-                    hit[0] = Feature.NONE.ordinal();
-                    return Double.POSITIVE_INFINITY;
-                }
-                double t = (-b - Math.sqrt(disc)) / a;
-                if (t > t1) {
-                    hit[0] = Feature.NONE.ordinal();
-                    return Double.POSITIVE_INFINITY;
-                }
-                hit[0] = Feature.FILLET.ordinal();
-                return Math.max(t, t0);
-            }
+            hit[0] = Feature.FILLET.ordinal();
+            return Math.max(t, t0);
         }
         hit[0] = feature;
         return t0;
+    }
+
+    /**
+     * Which corner's wedge a scaled-frame point lies in: beyond the tip edge and below the flank's
+     * start at that corner. 1 right, −1 left, 0 neither.
+     */
+    private int corner(double qx, double qy) {
+        if (qx - vxs > 0 && (qx - vxs) * fRx + (qy - vy) * fRy < 0) {
+            return 1;
+        }
+        if (qx + vxs < 0 && -(qx + vxs) * fRx + (qy - vy) * fRy < 0) {
+            return -1;
+        }
+        return 0;
     }
 
     /**
@@ -196,15 +175,14 @@ final class TransverseRack {
      */
     double depthInside(double px, double py) {
         double sx = px * cosBeta;
-        double dTip = tipY + rho - py;
-        double dRight = mRx * sx + mRy * py - (hR - rho);
-        double dLeft = -mRx * sx + mRy * py - (hR - rho);
+        int corner = corner(sx, py);
         double dist;
-        if (sx - vxs > 0 && (sx - vxs) * fRx + (py - vy) * fRy < 0) {
-            dist = Math.hypot(sx - vxs, py - vy);
-        } else if (sx + vxs < 0 && -(sx + vxs) * fRx + (py - vy) * fRy < 0) {
-            dist = Math.hypot(sx + vxs, py - vy);
+        if (corner != 0) {
+            dist = Math.hypot(sx - corner * vxs, py - vy);
         } else {
+            double dTip = tipY + rho - py;
+            double dRight = mRx * sx + mRy * py - (hR - rho);
+            double dLeft = -mRx * sx + mRy * py - (hR - rho);
             dist = Math.max(dTip, Math.max(dRight, dLeft));
         }
         return rho - dist;

@@ -3,6 +3,7 @@ package org.hobwright.wizard.simulate;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import java.util.function.ToDoubleBiFunction;
 import org.apache.commons.math3.optim.MaxEval;
 import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
 import org.apache.commons.math3.optim.univariate.BrentOptimizer;
@@ -31,11 +32,8 @@ class ConvergenceTest {
         for (int gashes : GASHES) {
             GeneratingSetup s = spur(gashes);
             ToothSpaceSimulation sim = GeneratingSimulation.run(s);
-            double worst = 0;
-            for (Point p : every(sim.rightInvolute(), 400)) {
-                worst = Math.max(worst, distanceToInvolute(s, p));
-            }
-            // the envelope never cuts into the involute, and its distance falls about as 1/i²
+            double worst = worst(s, sim.rightInvolute(), 400, ConvergenceTest::distanceToInvolute);
+            // the envelope never cuts into the involute (checked in worst), and its distance falls about as 1/i²
             // (cusp ρ Δφ²/8, DOMAIN.md §6.2): a fourfold gash count divides it by about 16
             assertTrue(worst < previous / 10, gashes + " gashes: " + worst + " vs " + previous);
             // the reported maximum sits on exact cusps; the sampled brute force may only fall short of it
@@ -53,13 +51,7 @@ class ConvergenceTest {
         for (int gashes : GASHES) {
             GeneratingSetup s = spur(gashes);
             ToothSpaceSimulation sim = GeneratingSimulation.run(s);
-            List<Point> root = sim.rightRoot();
-            double worst = 0;
-            for (Point p : every(root, 300)) {
-                double d = distanceToRootForm(s, p);
-                assertTrue(d > -1e-9, "the cut root lies beyond the exact root form by " + d);
-                worst = Math.max(worst, d);
-            }
+            double worst = worst(s, sim.rightRoot(), 300, ConvergenceTest::distanceToRootForm);
             assertTrue(worst < previous / 8, gashes + " gashes: " + worst + " vs " + previous);
             previous = worst;
         }
@@ -126,6 +118,21 @@ class ConvergenceTest {
             return Math.max(insideCorner, Math.hypot(p.x(), p.y()) - (a - s.hobAddendumMm()));
         }
         return insideCorner;
+    }
+
+    /**
+     * The largest distance of about {@code count} of the points, checking that none lies beyond the
+     * exact curve (the discrete cuts remove less than continuous rolling, never more).
+     */
+    private static double worst(GeneratingSetup s, List<Point> points, int count,
+                                ToDoubleBiFunction<GeneratingSetup, Point> distance) {
+        double worst = 0;
+        for (Point p : every(points, count)) {
+            double d = distance.applyAsDouble(s, p);
+            assertTrue(d > -1e-9, "a cut point lies beyond the exact curve by " + d + " mm");
+            worst = Math.max(worst, d);
+        }
+        return worst;
     }
 
     /** About {@code count} points spread over the list, always with its last point. */
