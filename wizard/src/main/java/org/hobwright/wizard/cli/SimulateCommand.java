@@ -16,6 +16,7 @@ import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
 import org.hobwright.wizard.geometry.GearGeometry;
 import org.hobwright.wizard.geometry.ToothSystem;
+import org.hobwright.wizard.plan.DefaultCyclePlanner;
 import org.hobwright.wizard.simulate.FeedMarks;
 import org.hobwright.wizard.simulate.GeneratingSimulation;
 import org.hobwright.wizard.simulate.SimulationInputException;
@@ -127,10 +128,13 @@ public final class SimulateCommand implements Callable<Integer> {
         return option == null ? Optional.empty() : Optional.ofNullable((Path) option.getValue());
     }
 
-    /** The feed that leaves the finishing marks: the finishing feed, else the roughing feed. */
+    /**
+     * The feed that leaves the finishing marks: the finishing feed the planner chooses for the job
+     * (which honours the job's own feeds), when the job can be planned.
+     */
     private static OptionalDouble feed(HobJob j) {
-        return j.cycle().finishFeedMmPerRev().isPresent() ? j.cycle().finishFeedMmPerRev()
-                : j.cycle().roughFeedMmPerRev();
+        return new DefaultCyclePlanner().plan(j).summary()
+                .map(s -> OptionalDouble.of(s.finishFeedMmPerRev())).orElse(OptionalDouble.empty());
     }
 
     private static void summary(PrintWriter o, Units units, ToothSpaceSimulation sim, Optional<FeedMarks> marks) {
@@ -144,6 +148,6 @@ public final class SimulateCommand implements Callable<Integer> {
                 units.fromMm(sim.activeInvoluteStartDiameterMm()), u, units.fromMm(sim.rootFormDiameterMm()), u);
         marks.ifPresentOrElse(m -> o.printf(Locale.ROOT, "feed marks at the root  %.6g %s at %.6g %s per work turn%n",
                 units.fromMm(m.depthMm()), u, units.fromMm(m.feedMm()), u),
-                () -> o.println("feed marks at the root  no feed in the job (the planner chooses it)"));
+                () -> o.println("feed marks at the root  not drawn: the job cannot be planned (see 'hobwright plan')"));
     }
 }

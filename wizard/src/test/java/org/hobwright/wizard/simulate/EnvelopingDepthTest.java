@@ -43,4 +43,25 @@ class EnvelopingDepthTest {
         assertEquals(closed, sim.envelopingDepthMm(), 0.10 * closed);
         assertEquals(closed, sim.closedFormEnvelopingDepthMm(), 1e-12);
     }
+
+    /**
+     * Feed marks at the root: the envelope of hob tip circles measured by the simulation against the
+     * sagitta rule δ_root = f_a² / (4 d_a0 cos² β) (DOMAIN.md §6.1; §10 case 32: f_a 2, d_a0 70 →
+     * 14.2857 µm) as the planner computes it. The exact sagitta is a little deeper (r − √(r² − s²/4)).
+     */
+    @ParameterizedTest(name = "f {0}, d_a0 {1}, beta {2}")
+    @CsvSource({
+        "2, 70, 0, 14.2857",    // DOMAIN.md §6.1 table and §10 case 32
+        "1.5, 70, 0, 8.03571",  // DOMAIN.md §6.1 table
+        "2, 70, 15, 15.3113",   // the same rule with 1/cos² β, computed by hand
+        "0.5, 32, 0, 1.95313",  // the same rule, computed by hand
+    })
+    void feedMarksMeetTheSagittaRule(double feed, double hobDiameter, double betaDeg, double expectedUm) {
+        FeedMarks marks = FeedMarks.of(hobDiameter / 2, feed, Math.toRadians(betaDeg), 0.001);
+        double rule = org.hobwright.wizard.plan.FinishFormulas.feedMarkRootUm(feed, hobDiameter, betaDeg);
+        assertEquals(expectedUm, rule, 1e-4 * expectedUm);
+        assertEquals(rule, 1000 * marks.depthMm(), 1e-3 * rule);
+        double deepest = marks.profile().stream().mapToDouble(p -> -p.y()).max().orElseThrow();
+        assertEquals(marks.depthMm(), deepest, 0.01 * marks.depthMm(), "the drawn section shows the scallops");
+    }
 }
