@@ -162,10 +162,29 @@ public final class ToothSpaceSimulation {
         return pts;
     }
 
+    /**
+     * The true involute of the right flank from the base circle to the tip, gear frame:
+     * polar angle ψ₀ + inv α at radius r_b / cos α ({@link GeneratingSetup#flankBaseAngleRad}).
+     *
+     * @param points number of points, at least 2
+     */
+    public List<Point> trueInvolute(int points) {
+        GeneratingSetup s = path.setup;
+        double rollTip = Math.sqrt(Math.max(0, s.tipRadiusMm() * s.tipRadiusMm() - path.rb * path.rb));
+        List<Point> pts = new ArrayList<>(points);
+        for (int i = 0; i < points; i++) {
+            double alpha = Math.atan(rollTip * i / (points - 1) / path.rb);
+            double rr = path.rb / Math.cos(alpha);
+            double psi = s.flankBaseAngleRad() + Math.tan(alpha) - alpha;
+            pts.add(new Point(rr * Math.sin(psi), rr * Math.cos(psi)));
+        }
+        return pts;
+    }
+
     /** The results as the api carries them. */
     public SimulationData toData() {
         double measured = envelopingDepthMm();
-        return new SimulationData(profileDeviationMaxMm(), Double.isFinite(measured) ? measured : 0,
+        return new SimulationData(profileDeviationMaxMm(), Double.isFinite(measured) ? Math.max(0, measured) : 0,
                 closedFormEnvelopingDepthMm(), undercut(), activeInvoluteStartDiameterMm(), simulatedProfile(),
                 nominalProfile(), deviation());
     }

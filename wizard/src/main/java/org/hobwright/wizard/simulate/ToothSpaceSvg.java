@@ -59,8 +59,8 @@ public final class ToothSpaceSvg {
         text(s, MARGIN, 22, 14, escape(title) + " — generating simulation, one tooth space (transverse section)");
         GeneratingSetup st = sim.setup();
         text(s, MARGIN, height - 14, 11, String.format(Locale.ROOT,
-                "z %d, m_n %s mm, β %s°, x %s, hob %d start(s), %d gashes. Grey: continuous rolling; red: cut profile,"
-                        + " deviation × %s.", st.teeth(), num(st.normalModuleMm()),
+                "z %d, m_n %s mm, β %s°, x %s (with the thickness allowance), hob %d start(s), %d gashes."
+                        + " Blue: true involute; grey: continuous rolling; red: cut profile, deviation × %s.", st.teeth(), num(st.normalModuleMm()),
                 num(Math.toDegrees(st.helixAngleRad())), num(st.profileShift()), st.starts(), st.gashes(), num(k)));
         toothSpace(s, sim, k, MARGIN, 2 * MARGIN);
         deviation(s, sim, 2 * MARGIN + PANEL, 2 * MARGIN);
@@ -83,6 +83,9 @@ public final class ToothSpaceSvg {
         circle(s, f, st.referenceRadiusMm(), box, "#8a8", "reference circle");
         circle(s, f, sim.activeInvoluteStartDiameterMm() / 2, box, "#c80", "start of active involute");
         polyline(s, f, nominal, "#999", 1.6);
+        List<Point> involute = sim.trueInvolute(96);
+        polyline(s, f, involute, "#36c", 0.6);
+        polyline(s, f, involute.stream().map(p -> new Point(-p.x(), p.y())).toList(), "#36c", 0.6);
         polyline(s, f, cut, "#c00", 0.8);
         double y = oy + 14;
         for (String line : new String[] {
