@@ -50,7 +50,7 @@ public final class ToothSpaceSvg {
         double k = exaggeration(sim);
         int panels = marks.isPresent() ? 3 : 2;
         double width = panels * (PANEL + MARGIN) + MARGIN;
-        double height = PANEL + 3 * MARGIN + 40;
+        double height = PANEL + 3 * MARGIN + 56;
         StringBuilder s = new StringBuilder();
         s.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
         s.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"%.0f\" height=\"%.0f\""
@@ -58,10 +58,12 @@ public final class ToothSpaceSvg {
         s.append("<rect width=\"100%\" height=\"100%\" fill=\"white\"/>\n");
         text(s, MARGIN, 22, 14, escape(title) + " — generating simulation, one tooth space (transverse section)");
         GeneratingSetup st = sim.setup();
-        text(s, MARGIN, height - 14, 11, String.format(Locale.ROOT,
-                "z %d, m_n %s mm, β %s°, x %s (with the thickness allowance), hob %d start(s), %d gashes."
-                        + " Blue: true involute; grey: continuous rolling; red: cut profile, deviation × %s.", st.teeth(), num(st.normalModuleMm()),
-                num(Math.toDegrees(st.helixAngleRad())), num(st.profileShift()), st.starts(), st.gashes(), num(k)));
+        text(s, MARGIN, height - 28, 11, String.format(Locale.ROOT,
+                "z %d, m_n %s mm, β %s°, x %s (with the thickness allowance), hob %d start(s), %d gashes.",
+                st.teeth(), num(st.normalModuleMm()), num(Math.toDegrees(st.helixAngleRad())), num(st.profileShift()),
+                st.starts(), st.gashes()));
+        text(s, MARGIN, height - 12, 11, String.format(Locale.ROOT,
+                "Blue: true involute; grey: continuous rolling; red: cut profile with its deviation × %s.", num(k)));
         toothSpace(s, sim, k, MARGIN, 2 * MARGIN);
         deviation(s, sim, 2 * MARGIN + PANEL, 2 * MARGIN);
         marks.ifPresent(m -> feedMarks(s, m, 3 * MARGIN + 2 * PANEL, 2 * MARGIN));

@@ -85,7 +85,8 @@ class ConvergenceTest {
         double best = bruteThenBrent(f, 0, thetaMax);
         double polar = Math.atan2(p.x(), p.y());
         double rr = Math.hypot(p.x(), p.y());
-        double onCurve = start + Math.sqrt(Math.max(0, rr * rr / (rb * rb) - 1)) - Math.atan(Math.sqrt(Math.max(0, rr * rr / (rb * rb) - 1)));
+        double roll = Math.sqrt(Math.max(0, rr * rr / (rb * rb) - 1));
+        double onCurve = start + roll - Math.atan(roll);
         return polar < onCurve ? best : -best;
     }
 
