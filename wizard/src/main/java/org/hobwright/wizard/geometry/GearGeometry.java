@@ -5,7 +5,8 @@ import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.job.GearSpec;
 
 /**
- * Involute geometry of an external spur or helical gear, ISO 21771:2007 relations.
+ * Involute geometry of an external spur or helical gear as the api's {@link GearData}, ISO 21771:2007
+ * relations (see {@link InvoluteGear} for each formula and its source).
  *
  * <pre>
  * m_t = m_n / cos β                              ISO 21771 eq. (2)
@@ -34,29 +35,21 @@ public final class GearGeometry {
      * @return the geometry (tip thickness may be negative for a pointed tooth: the checks report it)
      */
     public static GearData of(GearSpec gear, ToothSystem system) {
-        double mn = gear.moduleMm();
-        double beta = Math.toRadians(gear.helixAngleDeg());
-        double alphaN = Math.toRadians(gear.pressureAngleDeg());
-        double x = gear.profileShift();
-        double mt = mn / Math.cos(beta);
-        double alphaT = Math.atan(Math.tan(alphaN) / Math.cos(beta));
-        double d = gear.teeth() * mt;
-        double db = d * Math.cos(alphaT);
-        double haP = system.addendumMm(mn);
-        double hfP = system.dedendumMm(mn);
-        double da = d + 2 * (x * mn + haP);
-        double df = d - 2 * (hfP - x * mn);
-        double betaB = Math.asin(Math.sin(beta) * Math.cos(alphaN));
-        OptionalDouble lead = gear.isSpur() ? OptionalDouble.empty()
-                : OptionalDouble.of(Math.PI * d / Math.tan(beta));
-        double sn = normalThickness(mn, alphaN, x, gear.thicknessAllowanceMm());
-        double st = sn / Math.cos(beta);
-        double tipT = transverseThicknessAt(da, d, db, st, alphaT);
-        double betaA = Math.atan(Math.tan(beta) * da / d);
-        double tipN = tipT * Math.cos(betaA);
-        double zn = gear.teeth() / (Math.pow(Math.cos(betaB), 2) * Math.cos(beta));
-        return new GearData(mt, Math.toDegrees(alphaT), d, db, da, df, (da - d) / 2, (d - df) / 2, (da - df) / 2,
-                Math.toDegrees(betaB), lead, sn, tipN, zn);
+        return of(InvoluteGear.of(gear, system));
+    }
+
+    /**
+     * Computes the gear data of an involute gear.
+     *
+     * @param g the gear
+     * @return the geometry; the tip thickness is the normal thickness at the tip diameter d_a
+     */
+    public static GearData of(InvoluteGear g) {
+        OptionalDouble lead = g.isSpur() ? OptionalDouble.empty() : OptionalDouble.of(g.leadMm());
+        return new GearData(g.transverseModuleMm(), Math.toDegrees(g.transversePressureAngleRad()),
+                g.referenceDiameterMm(), g.baseDiameterMm(), g.tipDiameterMm(), g.rootDiameterMm(), g.addendumMm(),
+                g.dedendumMm(), g.wholeDepthMm(), Math.toDegrees(g.baseHelixAngleRad()), lead, g.normalThicknessMm(),
+                g.normalThicknessAtMm(g.tipDiameterMm()), g.virtualTeeth());
     }
 
     /** Normal tooth thickness at the reference circle, s_n = m_n (π/2 + 2 x tan α_n) + E_sn, mm. */

@@ -2,6 +2,7 @@ package org.hobwright.wizard.geometry;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.stream.Stream;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.ToothProportions;
 
@@ -14,6 +15,12 @@ import org.hobwright.api.job.ToothProportions;
  * b = 1.200/P + 0.002 in (R. L. Mott, Machine Elements in Mechanical Design, 4th ed., Table 8-4);
  * 14½° full depth a = 1/P, b = 1.157/P (from memory, ASA B6.1). With a = 1/P the factor of the
  * module is the same number, since m = 25.4/P mm and 1/P in = m mm.
+ *
+ * <p>Root radii where no standard value was read: AGMA coarse 0.30/P (from memory, AGMA 201.02);
+ * AGMA fine pitch 0.30/P (the coarse-pitch value; the largest radius that fits the fine-pitch
+ * clearance by the ISO 53 §5.9 rule is 0.304/P + 0.003 in, so 0.30/P fits); 14½° full depth
+ * 0.209/P (from memory, and equal to the largest radius that fits its 0.157/P clearance by the
+ * ISO 53 §5.9 rule: 0.157/(1 − sin 14.5°) = 0.2094).
  *
  * @param id                      identifier used in job files
  * @param addendumFactor          h_aP / m_n
@@ -35,18 +42,18 @@ public record ToothSystem(String id, double addendumFactor, double dedendumFacto
             new ToothSystem("agma-coarse", 1.0, 1.25, 0.30, 0, 20,
                     "AGMA/ANSI 20° full depth, coarse pitch (Mott, Machine Elements, 4th ed., Table 8-4);"
                             + " root radius 0.30/P from memory (AGMA 201.02)"),
-            new ToothSystem("agma-fine", 1.0, 1.2, 0.0, 0.002 * 25.4, 20,
-                    "AGMA/ANSI 20° fine pitch, b = 1.200/P + 0.002 in (Mott, Machine Elements, 4th ed., Table 8-4)"),
-            new ToothSystem("full-depth-14.5", 1.0, 1.157, 0.0, 0, 14.5,
-                    "ASA 14½° full depth, b = 1.157/P (from memory)"));
+            new ToothSystem("agma-fine", 1.0, 1.2, 0.30, 0.002 * 25.4, 20,
+                    "AGMA/ANSI 20° fine pitch, b = 1.200/P + 0.002 in (Mott, Machine Elements, 4th ed., Table 8-4);"
+                            + " root radius 0.30/P assumed (fits the clearance by the ISO 53 §5.9 rule)"),
+            new ToothSystem("full-depth-14.5", 1.0, 1.157, 0.209, 0, 14.5,
+                    "ASA 14½° full depth, b = 1.157/P, root radius 0.209/P (from memory)"));
 
     /** Identifier of the user-defined system. */
     public static final String CUSTOM = "custom";
 
     /** Every identifier a job may use. */
     public static List<String> ids() {
-        return java.util.stream.Stream.concat(BUILT_IN.stream().map(ToothSystem::id), java.util.stream.Stream.of(CUSTOM))
-                .toList();
+        return Stream.concat(BUILT_IN.stream().map(ToothSystem::id), Stream.of(CUSTOM)).toList();
     }
 
     /** The built-in system with this id. */
@@ -72,5 +79,46 @@ public record ToothSystem(String id, double addendumFactor, double dedendumFacto
     /** Basic rack dedendum h_fP for a module, mm (equals the standard hob's addendum h_aP0). */
     public double dedendumMm(double moduleMm) {
         return dedendumFactor * moduleMm + dedendumAdditionMm;
+    }
+
+    /** Basic rack root-fillet radius ρ_fP for a module, mm (equals the standard hob's tip radius ρ_aP0). */
+    public double rootRadiusMm(double moduleMm) {
+        return rootRadiusFactor * moduleMm;
+    }
+
+    /**
+     * Height of the straight flank of the standard hob above its datum line, mm: the part of the
+     * hob tooth that generates involute.
+     *
+     * <pre>h_s = h_aP0 − ρ_aP0 (1 − sin α_n),  h_aP0 = h_fP, ρ_aP0 = ρ_fP</pre>
+     * Derived from the rack geometry (a tip radius tangent to the flank and the tip line); for
+     * ISO 53 A it gives 0.99997 m, the classic "h* = 1" of the undercut rule.
+     *
+     * @param moduleMm            normal module, mm
+     * @param pressureAngleRad    normal pressure angle α_n, rad
+     */
+    public double straightFlankHeightMm(double moduleMm, double pressureAngleRad) {
+        return dedendumMm(moduleMm) - rootRadiusMm(moduleMm) * (1 - Math.sin(pressureAngleRad));
+    }
+
+    /**
+     * Largest root-fillet radius that fits the basic rack's clearance, mm.
+     *
+     * <pre>ρ_fPmax = min( c_P / (1 − sin α_P),  (π m/4 − h_fP tan α_P) / tan((90° − α_P)/2) )</pre>
+     * The first term is the fillet tangent to the flank and the root line with its top at the
+     * datum-plus-addendum level; the second the fillet whose two sides meet in the middle of the tooth
+     * space. ISO 53:1998 §5.9 gives the two forms for c_P ≤ 0.295 m and 0.295 m &lt; c_P ≤ 0.396 m
+     * (as implemented in the public repository gfsReboucas/Drivetrain-python, racks.py); taking the
+     * smaller of the two is the same rule for any clearance (derived).
+     *
+     * @param moduleMm         normal module, mm
+     * @param pressureAngleRad profile angle α_P, rad
+     */
+    public double maxRootRadiusMm(double moduleMm, double pressureAngleRad) {
+        double clearance = dedendumMm(moduleMm) - addendumMm(moduleMm);
+        double tangent = clearance / (1 - Math.sin(pressureAngleRad));
+        double meeting = (Math.PI * moduleMm / 4 - dedendumMm(moduleMm) * Math.tan(pressureAngleRad))
+                / Math.tan((Math.PI / 2 - pressureAngleRad) / 2);
+        return Math.min(tangent, meeting);
     }
 }

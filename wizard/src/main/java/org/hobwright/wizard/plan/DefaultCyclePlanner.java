@@ -53,7 +53,12 @@ public final class DefaultCyclePlanner implements CyclePlanner {
     public HobCycle plan(HobJob job) {
         JobAnalysis analysis = JobAnalyser.analyse(job);
         List<Finding> findings = new ArrayList<>(analysis.findings());
-        if (analysis.hasErrors() || analysis.gear().isEmpty() || analysis.hobSetup().isEmpty()) {
+        if (!analysis.hasErrors() && (analysis.gear().isEmpty() || analysis.hobSetup().isEmpty())) {
+            findings.add(Finding.error(PlanCodes.INVARIANT_BROKEN, "job", "the analysis gave no gear geometry or hob"
+                    + " setup and no error", "do not post; report this job to the Hobwright developers",
+                    "Hobwright safety invariants"));
+        }
+        if (Finding.anyError(findings)) {
             return unplanned(analysis, findings);
         }
         return new JobPlanning(job, analysis, table, findings).run();

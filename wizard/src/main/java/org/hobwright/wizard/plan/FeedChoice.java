@@ -11,7 +11,7 @@ import org.hobwright.api.check.Finding;
  * outside the cutting-data range). An open feed starts at the middle of the table's range and is
  * lowered, when needed, to meet the chip-thickness limit (Hoffmeister, DOMAIN §8.1) and, for the
  * finishing pass, the feed-mark target (DOMAIN §6.1). Both are then held within the machine's
- * maximum feed rate.
+ * maximum feed rate. A single pass runs at the finishing feed; its roughing feed is reported equal to it.
  *
  * @param roughMmPerRev  roughing feed, mm per work revolution
  * @param finishMmPerRev finishing feed, mm per work revolution
@@ -35,7 +35,8 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
         }
         double rough;
         if (in.rough().isPresent()) {
-            rough = given(in.rough().getAsDouble(), in.row().map(CuttingData::roughFeed), "cycle.roughFeed", findings);
+            rough = last == 0 ? in.rough().getAsDouble()
+                    : given(in.rough().getAsDouble(), in.row().map(CuttingData::roughFeed), "cycle.roughFeed", findings);
         } else {
             ValueRange r = in.row().get().roughFeed();
             double limit = in.targets().hasChipLimit() && heaviestRough > 0
@@ -55,8 +56,8 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
                     mark <= chip ? "feed-mark target" : "chip thickness limit", findings);
         }
         double rateCap = in.maxFeedRateMmPerMin() / in.workRpm();
-        rough = capped(rough, rateCap, "cycle.roughFeed", in.maxFeedRateMmPerMin(), findings);
         finish = capped(finish, rateCap, "cycle.finishFeed", in.maxFeedRateMmPerMin(), findings);
+        rough = last == 0 ? finish : capped(rough, rateCap, "cycle.roughFeed", in.maxFeedRateMmPerMin(), findings);
         return Optional.of(new FeedChoice(rough, finish));
     }
 

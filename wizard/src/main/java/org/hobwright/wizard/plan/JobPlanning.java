@@ -70,19 +70,11 @@ final class JobPlanning {
                     "the holder's resolution rounds the swivel setting from " + Angles.dms(machineSignedEta) + " to "
                     + swivel.text(), PlanCodes.MACHINE));
         }
-        double rpm = SpeedChoice.hobRpm(boxed(cycle.cuttingSpeedMPerMin()), row, hob.outsideDiameterMm(), window,
-                findings).orElseThrow();
         double depth = (touchOff - root) / 2;
-        double roughDepth = cycle.roughDepthMm().orElse(gear.moduleMm() <= ONE_PASS_MODULE_MM ? depth
-                : ROUGH_DEPTH_PER_MODULE * gear.moduleMm());
-        PassDepths depths = PassDepths.of(depth, roughDepth, cycle.finishStockMm());
         Targets targets = Targets.of(cycle.targets(), analysis.tolerances(), table.qualityDefaults(), row);
         CutModel model = CutModel.of(gear, hob);
         Drive drive = drive(ratio);
-        FeedChoice feeds = FeedChoice.of(new FeedChoice.Inputs(cycle.roughFeedMmPerRev(), cycle.finishFeedMmPerRev(),
-                row, targets, model, depths, drive.workRpm(rpm), machine.maxFeedMmPerMin()), findings).orElseThrow();
-        PlanSettings settings = new PlanSettings(Kinematics.cuttingSpeed(rpm, hob.outsideDiameterMm()), rpm,
-                feeds.roughMmPerRev(), feeds.finishMmPerRev(), depths);
+        PlanSettings settings = settings(depth, window, row, targets, model, drive);
         CycleGeometry geometry = new CycleGeometry(touchOff, root, gear.faceWidthMm(), hob.outsideDiameterMm(),
                 gear.pressureAngleDeg(), hs.swivelAngleDeg(), !gear.isSpur(), cycle.axialClearanceMm(),
                 cycle.radialClearanceMm(), machine.radialMaxMm(), machine.rapidMmPerMin(), machine.syncSettleS());
@@ -93,14 +85,15 @@ final class JobPlanning {
         Prediction prediction = Prediction.of(model, settings);
         prediction.check(targets, model, findings);
         findings.addAll(TravelCheck.check(path.steps(), machine));
-        invariants(root, window).violations(path.steps()).forEach(v -> findings.add(Finding.error(
+        invariants(root).violations(path.steps()).forEach(v -> findings.add(Finding.error(
                 PlanCodes.INVARIANT_BROKEN, "job", "planner safety check failed: " + v,
                 "do not post; report this job to the Hobwright developers", "Hobwright safety invariants")));
         Optional<FastestProposal> fastest = cycle.fastest()
                 ? fastest(geometry, drive, model, window, row, targets, path.cycleTimeS()) : Optional.empty();
         SetupValues setup = new SetupValues(touchOff, touchOff, root, hs.leadAngleDeg(), hs.swivelAngleDeg(),
                 swivel.machineAngleDeg(), swivel.text(), swivelDms, swivel.direction(),
-                settings.cuttingSpeedMPerMin(), rpm, drive.workRpm(rpm), ratio.hobTurns(), ratio.workTurns(),
+                settings.cuttingSpeedMPerMin(), settings.hobRpm(), drive.workRpm(settings.hobRpm()), ratio.hobTurns(),
+                ratio.workTurns(),
                 drive.differentialDegPerMm(), shift.map(HobShiftPlan::positionMm).orElse(0.0));
         PassSummary last = path.passes().get(path.passes().size() - 1);
         CycleSummary summary = new CycleSummary(path.cycleTimeS(), path.passes(), settings.finishFeedMmPerRev(),
@@ -119,7 +112,21 @@ final class JobPlanning {
         return new Drive(ratio, senses, differential);
     }
 
-    private CycleInvariants invariants(double root, SpeedWindow window) {
+    /** The user's speeds, passes and feeds: given values kept, open ones chosen, limits applied. */
+    private PlanSettings settings(double depth, SpeedWindow window, Optional<CuttingData> row, Targets targets,
+                                  CutModel model, Drive drive) {
+        double rpm = SpeedChoice.hobRpm(boxed(cycle.cuttingSpeedMPerMin()), row, hob.outsideDiameterMm(), window,
+                findings).orElseThrow();
+        double roughDepth = cycle.roughDepthMm().orElse(gear.moduleMm() <= ONE_PASS_MODULE_MM ? depth
+                : ROUGH_DEPTH_PER_MODULE * gear.moduleMm());
+        PassDepths depths = PassDepths.of(depth, roughDepth, cycle.finishStockMm());
+        FeedChoice feeds = FeedChoice.of(new FeedChoice.Inputs(cycle.roughFeedMmPerRev(), cycle.finishFeedMmPerRev(),
+                row, targets, model, depths, drive.workRpm(rpm), machine.maxFeedMmPerMin()), findings).orElseThrow();
+        return new PlanSettings(Kinematics.cuttingSpeed(rpm, hob.outsideDiameterMm()), rpm, feeds.roughMmPerRev(),
+                feeds.finishMmPerRev(), depths);
+    }
+
+    private CycleInvariants invariants(double root) {
         return new CycleInvariants(machine.hobMinRpm(), Math.min(machine.hobMaxRpm(), hob.maxRpm().orElse(
                 Double.POSITIVE_INFINITY)), machine.workMinRpm(), machine.workMaxRpm(), machine.maxSyncRatio(),
                 machine.maxFeedMmPerMin(), machine.syncSettleS(), root);

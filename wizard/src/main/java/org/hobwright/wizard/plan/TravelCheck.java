@@ -24,29 +24,35 @@ public final class TravelCheck {
         double minAx = Double.POSITIVE_INFINITY;
         double maxAx = Double.NEGATIVE_INFINITY;
         for (CycleStep s : steps) {
+            double dia;
+            double ax;
             if (s instanceof CycleStep.Rapid r) {
-                minDia = Math.min(minDia, r.diameterMm());
-                maxDia = Math.max(maxDia, r.diameterMm());
-                minAx = Math.min(minAx, r.axialMm());
-                maxAx = Math.max(maxAx, r.axialMm());
+                dia = r.diameterMm();
+                ax = r.axialMm();
             } else if (s instanceof CycleStep.Feed f) {
-                minDia = Math.min(minDia, f.diameterMm());
-                maxDia = Math.max(maxDia, f.diameterMm());
-                minAx = Math.min(minAx, f.axialMm());
-                maxAx = Math.max(maxAx, f.axialMm());
+                dia = f.diameterMm();
+                ax = f.axialMm();
+            } else {
+                continue;
             }
+            minDia = Math.min(minDia, dia);
+            maxDia = Math.max(maxDia, dia);
+            minAx = Math.min(minAx, ax);
+            maxAx = Math.max(maxAx, ax);
         }
         List<Finding> out = new ArrayList<>(2);
         double tol = 1e-9;
         if (minDia < machine.radialMinMm() - tol || maxDia > machine.radialMaxMm() + tol) {
-            out.add(Finding.error(PlanCodes.TRAVEL_RADIAL, "machine.travel.radialMax",
+            out.add(Finding.error(PlanCodes.TRAVEL_RADIAL, maxDia > machine.radialMaxMm() + tol
+                            ? "machine.travel.radialMax" : "machine.travel.radialMin",
                     String.format(Locale.ROOT, "the cycle needs work diameters %.3f to %.3f mm, the machine reaches"
                             + " %.3f to %.3f mm", minDia, maxDia, machine.radialMinMm(), machine.radialMaxMm()),
                     "reduce cycle.radialClearance or the blank diameter, or use a machine with more radial travel",
                     PlanCodes.MACHINE));
         }
         if (minAx < machine.axialMinMm() - tol || maxAx > machine.axialMaxMm() + tol) {
-            out.add(Finding.error(PlanCodes.TRAVEL_AXIAL, "machine.travel.axialMin",
+            out.add(Finding.error(PlanCodes.TRAVEL_AXIAL, minAx < machine.axialMinMm() - tol
+                            ? "machine.travel.axialMin" : "machine.travel.axialMax",
                     String.format(Locale.ROOT, "the cycle needs axial positions %.3f to %.3f mm from the entry face,"
                             + " the machine reaches %.3f to %.3f mm", minAx, maxAx, machine.axialMinMm(),
                             machine.axialMaxMm()),

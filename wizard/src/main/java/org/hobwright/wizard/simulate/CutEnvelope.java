@@ -81,6 +81,11 @@ final class CutEnvelope {
         return rack.entry(rx, ry, rdx, rdy, hit);
     }
 
+    /** Depth of a gear-frame point inside the rack tooth at position k (positive inside), mm. */
+    double depthInside(int k, double px, double py) {
+        return depthInside(k, new double[] {px}, new double[] {py});
+    }
+
     /** Deepest of the gear-frame points inside the rack tooth at position k (positive inside), mm. */
     double depthInside(int k, double[] px, double[] py) {
         double f = angle(k);

@@ -10,6 +10,8 @@ import java.util.List;
  */
 final class FlankCut {
     private static final int MAX_DEPTH = 40;
+    /** Cut positions on either side searched for one that covers a flank end. */
+    private static final int NEIGHBOURS = 8;
 
     final NominalPath path;
     /** Material left standing along each nominal normal, mm (≥ 0 up to rounding). */
@@ -21,10 +23,7 @@ final class FlankCut {
     final int[] feature;
     /** Cusps on the involute: roll length and height, mm, in roll order. */
     final List<double[]> cusps;
-    /**
-     * Radius of the start of the active involute, mm: the lowest point below which, scanning down from
-     * the tip, every point is cut by a straight flank and none lies inside the true involute.
-     */
+    /** Radius of the start of the active involute, mm ({@link #activeStart}). */
     final double involuteStartRadius;
 
     FlankCut(NominalPath path, double phase) {
@@ -55,15 +54,35 @@ final class FlankCut {
                 refine(env, path.param[i], arg[i], path.param[i + 1], arg[i + 1], c, 0);
             }
         }
-        int start = n - 1;
-        while (start > 0 && feature[start - 1] == TransverseRack.Feature.FLANK.ordinal()) {
-            start--;
+        involuteStartRadius = activeStart(env);
+    }
+
+    /**
+     * The start of the active involute: below the highest straight-flank end E_k that lies on the
+     * cut boundary, the profile is cut by a tip rounding; above it, by straight flanks only (each
+     * cut's outline turns from flank to rounding exactly at E_k). E_k is on the boundary when no
+     * other cut position contains it; ends inside the true involute (undercut) do not count.
+     * Independent of the sampling.
+     */
+    private double activeStart(CutEnvelope env) {
+        double best = Double.NaN;
+        double[] e = new double[4];
+        for (int k = env.firstPosition(); k <= env.lastPosition(); k++) {
+            flankLine(env.angle(k), e);
+            double rr = Math.hypot(e[0], e[1]);
+            if (rr > path.setup.tipRadiusMm() || !(path.excess(e[0], e[1]) >= -UndercutCheck.TOLERANCE_MM)
+                    || rr <= best) {
+                continue;
+            }
+            boolean covered = false;
+            for (int j = k - NEIGHBOURS; j <= k + NEIGHBOURS && !covered; j++) {
+                covered = j != k && env.depthInside(j, e[0], e[1]) > 1e-12;
+            }
+            if (!covered) {
+                best = rr;
+            }
         }
-        // straight flanks working past the interference point cut inside the involute: not involute
-        while (start < n - 1 && !(path.excess(bx[start], by[start]) >= -UndercutCheck.TOLERANCE_MM)) {
-            start++;
-        }
-        involuteStartRadius = Math.hypot(bx[start], by[start]);
+        return Double.isNaN(best) ? path.involuteStartRadius : best;
     }
 
     private void refine(CutEnvelope env, double la, int ka, double lb, int kb, double[] c, int depth) {

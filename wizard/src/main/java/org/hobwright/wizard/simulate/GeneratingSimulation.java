@@ -24,15 +24,15 @@ public final class GeneratingSimulation {
     public static final double RESOLUTION_MM = 0.001;
     /** Most points per side of the tooth space before the spacing is widened. */
     static final int MAX_POINTS_PER_SIDE = 8000;
-    /** Spacing of the profile points in {@link #simulate}, as a fraction of the module (about 150 points a side). */
-    static final double REPORT_SPACING = 0.02;
+    /** Spacing of the profile points in {@link #simulate}, as a fraction of the module (about 75 points a side). */
+    static final double REPORT_SPACING = 0.04;
 
     private GeneratingSimulation() {
     }
 
     /**
      * Simulates the job's gear as its hob generates it, for the cycle report: profile points about
-     * m_n/50 apart (every cusp and touching point is still computed exactly, so the numbers do not
+     * m_n/25 apart (every cusp and touching point is still computed exactly, so the numbers do not
      * depend on the spacing; only the drawn outlines are coarser than {@link #setupOf}'s).
      *
      * @param job  the job (gear, hob)

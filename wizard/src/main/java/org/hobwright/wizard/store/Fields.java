@@ -253,9 +253,9 @@ final class Fields {
     private OptionalDouble checked(String key, double raw, double canonical, Kind kind, Limit limit) {
         Optional<String> why = limit.violation(canonical, kind == Kind.PLAIN ? "" : unitWord(kind));
         if (why.isPresent()) {
+            boolean sameUnit = kind == Kind.PLAIN || units == Units.MM && kind != Kind.CUTTING_SPEED;
             error(InputCode.INPUT_VALUE, key, why.get() + ", was " + format(raw)
-                    + (kind == Kind.PLAIN || units == Units.MM && kind != Kind.CUTTING_SPEED ? "" : " " + fileUnitWord(kind)),
-                    null);
+                    + (sameUnit ? "" : " " + fileUnitWord(kind)), null);
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(canonical);

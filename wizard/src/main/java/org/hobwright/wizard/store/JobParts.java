@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
+import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.DrawingValues;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
@@ -31,7 +32,8 @@ final class JobParts {
         boolean dp = f.has("diametralPitch");
         if (m == dp) {
             f.problem(InputCode.INPUT_PITCH, m ? "diametralPitch" : "module",
-                    f.path("module") + " and " + f.path("diametralPitch") + (m ? " are both given" : " are both missing")
+                    f.path("module") + " and " + f.path("diametralPitch")
+                            + (m ? " are both given" : " are both missing")
                             + "; exactly one gives the normal pitch",
                     m ? "keep one of them" : "add \"module\" (mm) or \"diametralPitch\" (1/in)");
             return Optional.empty();
@@ -43,7 +45,7 @@ final class JobParts {
                 .map(Pitch.Diametral::new);
     }
 
-    static Optional<GearSpec> gear(Fields f, String jobName, List<org.hobwright.api.check.Finding> out) {
+    static Optional<GearSpec> gear(Fields f, String jobName, List<Finding> out) {
         int before = errors(out);
         String part = f.text("partName").orElse(jobName);
         int teeth = f.requiredInt("teeth", 1, 100_000, "give the number of teeth");
@@ -83,7 +85,8 @@ final class JobParts {
         }
         if (system.isPresent() && !isCustom) {
             f.problem(InputCode.INPUT_CONFLICT, "custom", f.path("custom") + " is only allowed with \"toothSystem\":"
-                    + " \"custom\", this gear uses \"" + system.get() + "\"", "remove custom or set toothSystem to custom");
+                    + " \"custom\", this gear uses \"" + system.get() + "\"",
+                    "remove custom or set toothSystem to custom");
             return Optional.empty();
         }
         Fields c = f.child("custom");
@@ -110,7 +113,7 @@ final class JobParts {
                 d.number("overPins", Kind.LENGTH, Limit.POSITIVE));
     }
 
-    static Optional<HobSpec> hob(Fields f, List<org.hobwright.api.check.Finding> out) {
+    static Optional<HobSpec> hob(Fields f, List<Finding> out) {
         int before = errors(out);
         Optional<Pitch> pitch = pitch(f);
         double alpha = f.requiredAngle("pressureAngle", Limit.range(1, 45), "give the hob's pressure angle, e.g. 20");
@@ -132,7 +135,7 @@ final class JobParts {
                 lead, reference, gashes, length, maxRpm, material.orElseThrow()));
     }
 
-    static int errors(List<org.hobwright.api.check.Finding> out) {
-        return (int) out.stream().filter(org.hobwright.api.check.Finding::isError).count();
+    static int errors(List<Finding> out) {
+        return (int) out.stream().filter(Finding::isError).count();
     }
 }

@@ -99,27 +99,11 @@ public final class JobReader {
                 return Loaded.unreadable(out);
             }
             Fields root = Fields.root(doc, out, units.get());
-            Optional<MachineFile> machine;
-            JsonNode m = root.raw("machine");
-            if (overrides.machine().isPresent() || m != null && m.isString()) {
-                Loaded<MachineFile> named = lookUpMachine(overrides.machine().orElseGet(m::stringValue),
-                        overrides.machine().isPresent());
-                out.addAll(named.findings());
-                if (named.unreadable()) {
-                    return Loaded.unreadable(out);
-                }
-                machine = named.value();
-            } else if (m != null) {
-                Optional<Fields> inline = inlineMachineFields(root);
-                if (inline.isEmpty()) {
-                    return Loaded.unreadable(out);
-                }
-                machine = MachineReader.body(inline.get(), out);
-            } else {
-                root.missing("machine", "name a machine profile, e.g. \"machine\": \"varrow-sl16\", or describe it"
-                        + " inline");
-                machine = Optional.empty();
+            MachineChoice choice = machine(root, overrides, out);
+            if (choice.unreadable()) {
+                return Loaded.unreadable(out);
             }
+            Optional<MachineFile> machine = choice.machine();
             Fields cycleFields = cycleWithTemplate(doc, root, machine, overrides, out);
             if (cycleFields == null) {
                 return Loaded.unreadable(out);
@@ -134,13 +118,12 @@ public final class JobReader {
             if (!root.has("hob")) {
                 root.missing("hob", "describe the hob: module or diametralPitch, starts, hand, outsideDiameter, ...");
             }
-            Optional<GearSpec> gear = root.has("gear") ? JobParts.gear(root.child("gear"), name, out) : Optional.empty();
+            Optional<GearSpec> gear = root.has("gear") ? JobParts.gear(root.child("gear"), name, out)
+                    : Optional.empty();
             Optional<HobSpec> hob = root.has("hob") ? JobParts.hob(root.child("hob"), out) : Optional.empty();
-            int before = JobParts.errors(out);
             CycleReader.Values cycle = CycleReader.read(cycleFields, true);
-            if (JobParts.errors(out) > before || Finding.anyError(out) || gear.isEmpty() || hob.isEmpty()
-                    || machine.isEmpty()) {
-                return Loaded.failed(withError(out));
+            if (Finding.anyError(out) || gear.isEmpty() || hob.isEmpty() || machine.isEmpty()) {
+                return Loaded.failed(out);
             }
             try {
                 CycleSettings settings = cycle.settings();
@@ -153,20 +136,47 @@ public final class JobReader {
         });
     }
 
-    private static List<Finding> withError(List<Finding> out) {
-        if (!Finding.anyError(out)) {
-            out.add(InputCode.INPUT_VALUE.finding("job", "the job could not be read", null));
+    /** The machine, or empty with an error finding; {@code unreadable} when reading must stop. */
+    private record MachineChoice(Optional<MachineFile> machine, boolean unreadable) {
+    }
+
+    /** The machine: the override, the named profile, or the inline object. Findings go to {@code out}. */
+    private MachineChoice machine(Fields root, Overrides overrides, List<Finding> out) {
+        JsonNode m = root.raw("machine");
+        if (overrides.machine().isPresent() || m != null && m.isString()) {
+            Loaded<MachineFile> named = lookUpMachine(overrides.machine().orElseGet(m::stringValue),
+                    overrides.machine().isPresent());
+            out.addAll(named.findings());
+            return new MachineChoice(named.value(), named.unreadable());
         }
-        return out;
+        if (m == null) {
+            root.missing("machine", "name a machine profile, e.g. \"machine\": \"varrow-sl16\", or describe it inline");
+            return new MachineChoice(Optional.empty(), false);
+        }
+        Optional<Fields> inline = inlineMachineFields(root);
+        return inline.isEmpty() ? new MachineChoice(Optional.empty(), true)
+                : new MachineChoice(MachineReader.body(inline.get(), out), false);
     }
 
     /** A machine by name, or from a file when an override names one. */
     private Loaded<MachineFile> lookUpMachine(String nameOrFile, boolean mayBeFile) {
         if (mayBeFile && (nameOrFile.endsWith(".json") || nameOrFile.contains("/") || nameOrFile.contains("\\")
-                || Files.isRegularFile(Path.of(nameOrFile)))) {
-            return Library.readMachineFile(Path.of(nameOrFile));
+                || isFile(nameOrFile))) {
+            try {
+                return Library.readMachineFile(Path.of(nameOrFile));
+            } catch (java.nio.file.InvalidPathException e) {
+                return library.machineFile(nameOrFile);
+            }
         }
         return library.machineFile(nameOrFile);
+    }
+
+    private static boolean isFile(String text) {
+        try {
+            return Files.isRegularFile(Path.of(text));
+        } catch (java.nio.file.InvalidPathException e) {
+            return false;
+        }
     }
 
     /** The fields of an inline machine, in its own units when it states them; empty when they are wrong. */

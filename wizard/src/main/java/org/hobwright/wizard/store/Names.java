@@ -33,9 +33,11 @@ public final class Names {
         if (valid(name)) {
             return Optional.empty();
         }
-        String shown = name == null ? "(none)" : name.length() > 40 ? "\"" + name.substring(0, 40) + "...\"" : "\"" + name + "\"";
+        String shown = name == null ? "(none)"
+                : "\"" + (name.length() > 40 ? name.substring(0, 40) + "..." : name) + "\"";
         String why = name == null || name.isEmpty() ? "it is empty"
-                : name.length() > MAX_LENGTH ? "it has " + name.length() + " characters, at most " + MAX_LENGTH + " are allowed"
+                : name.length() > MAX_LENGTH
+                ? "it has " + name.length() + " characters, at most " + MAX_LENGTH + " are allowed"
                 : name.startsWith(".") ? "it starts with a dot"
                 : "only letters, digits, '.', '_' and '-' are allowed";
         return Optional.of(InputCode.LIBRARY_BAD_NAME.finding(what,

@@ -152,10 +152,10 @@ class DefaultCyclePlannerTest {
         HobCycle a = planner.plan(axial);
         assertTrue(a.hasErrors());
         assertTrue(a.steps().isEmpty());
-        assertTrue(has(a, PlanCodes.TRAVEL_AXIAL));
+        assertEquals("machine.travel.axialMin", finding(a, PlanCodes.TRAVEL_AXIAL).field());
         assertTrue(a.summary().isPresent(), "the summary is still computed");
         HobJob radial = TestJobs.with(SampleJobs.spurMetric(), TestJobs.travels(SampleJobs.machine(true), 40, -200, 300));
-        assertTrue(has(planner.plan(radial), PlanCodes.TRAVEL_RADIAL));
+        assertEquals("machine.travel.radialMax", finding(planner.plan(radial), PlanCodes.TRAVEL_RADIAL).field());
     }
 
     @Test
@@ -287,11 +287,7 @@ class DefaultCyclePlannerTest {
     @Test
     void hobShiftIsPartOfTheCycle() {
         HobJob base = SampleJobs.spurMetric();
-        var c0 = base.cycle();
-        HobJob job = TestJobs.with(base, new org.hobwright.api.job.CycleSettings(c0.workMaterial(),
-                c0.cuttingSpeedMPerMin(), c0.roughFeedMmPerRev(), c0.finishFeedMmPerRev(), c0.roughDepthMm(),
-                c0.finishStockMm(), c0.method(), c0.axialClearanceMm(), c0.radialClearanceMm(), c0.coolant(),
-                c0.targets(), 0.5, 10, false));
+        HobJob job = TestJobs.with(base, TestJobs.shiftAndFastest(base.cycle(), 0.5, 10, false));
         HobCycle c = planner.plan(job);
         assertEquals(1, steps(c, CycleStep.HobShift.class).size());
         assertTrue(c.steps().stream().anyMatch(s -> s instanceof CycleStep.Comment m && m.text().startsWith(

@@ -131,10 +131,7 @@ class SetupRulesTest {
     @Test
     void hobShiftWithinTheUsableLength() {
         var job = SampleJobs.spurMetric();
-        var c = job.cycle();
-        var cycle = new org.hobwright.api.job.CycleSettings(c.workMaterial(), c.cuttingSpeedMPerMin(),
-                c.roughFeedMmPerRev(), c.finishFeedMmPerRev(), c.roughDepthMm(), c.finishStockMm(), c.method(),
-                c.axialClearanceMm(), c.radialClearanceMm(), c.coolant(), c.targets(), 0.5, 10, false);
+        var cycle = TestJobs.shiftAndFastest(job.cycle(), 0.5, 10, false);
         List<Finding> f = new ArrayList<>();
         HobShiftPlan p = HobShiftPlan.of(job.machine(), job.hob(), cycle, 4.5, 20, f).orElseThrow();
         // working width 2·4.5/tan 20° (generating zone, DOMAIN §7.2, derived) + π·2 (one axial pitch,
@@ -146,9 +143,7 @@ class SetupRulesTest {
         assertEquals(48.5, p.positionForPart(979), 1e-12);
         assertEquals(0, p.positionForPart(980), "wraps back to the start");
         assertTrue(f.isEmpty());
-        var tooFar = new org.hobwright.api.job.CycleSettings(c.workMaterial(), c.cuttingSpeedMPerMin(),
-                c.roughFeedMmPerRev(), c.finishFeedMmPerRev(), c.roughDepthMm(), c.finishStockMm(), c.method(),
-                c.axialClearanceMm(), c.radialClearanceMm(), c.coolant(), c.targets(), 70, 1, false);
+        var tooFar = TestJobs.shiftAndFastest(job.cycle(), 70, 1, false);
         HobShiftPlan.of(job.machine(), job.hob(), tooFar, 4.5, 20, f);
         assertEquals(PlanCodes.HOB_SHIFT_STEP_TOO_LARGE, f.get(0).code());
     }

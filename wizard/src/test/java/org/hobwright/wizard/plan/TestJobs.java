@@ -58,6 +58,13 @@ final class TestJobs {
                 m.hobShiftTravelMm(), m.rapidMmPerMin(), m.maxFeedMmPerMin(), m.syncSettleS(), m.maxHobDiameterMm());
     }
 
+    /** The same cycle settings with another hob shift and fastest-cycle choice. */
+    static CycleSettings shiftAndFastest(CycleSettings c, double perPart, int everyParts, boolean fastest) {
+        return new CycleSettings(c.workMaterial(), c.cuttingSpeedMPerMin(), c.roughFeedMmPerRev(),
+                c.finishFeedMmPerRev(), c.roughDepthMm(), c.finishStockMm(), c.method(), c.axialClearanceMm(),
+                c.radialClearanceMm(), c.coolant(), c.targets(), perPart, everyParts, fastest);
+    }
+
     /** Cycle settings with every value given. */
     static CycleSettings cycle(String material, OptionalDouble vc, OptionalDouble rough, OptionalDouble finish,
                                OptionalDouble roughDepth, double stock, QualityTargets targets, boolean fastest) {

@@ -1,0 +1,60 @@
+package org.hobwright.post.csv;
+
+/**
+ * The columns of the cycle CSV, version {@value CycleCsv#VERSION}, in file order. Header names
+ * carry the unit ({@code _mm}, {@code _s}, {@code _rpm}, {@code _deg}); columns without a unit are
+ * counts, words or flags. Readers look columns up by header name.
+ */
+public enum CsvColumn {
+    /** Version of the column set; the same on every row. */
+    FORMAT_VERSION("format_version"),
+    /** Step number, 1 = first. */
+    STEP_NO("step_no"),
+    /** Step kind: comment, coolant, swivel, sync-on, sync-off, spindles-stop, dwell, hob-shift, rapid, feed. */
+    KIND("kind"),
+    /** Pass number (rapid, feed), 0 outside the passes. */
+    PASS_NO("pass_no"),
+    /** Work diameter the hob tip reaches at the end of the move (rapid, feed), mm. */
+    DIAMETER_MM("diameter_mm"),
+    /** Hob centre along the work axis from the entry face (rapid, feed), mm. */
+    AXIAL_MM("axial_mm"),
+    /** Feed per work revolution (feed), mm. */
+    FEED_MM_PER_REV("feed_mm_per_rev"),
+    /** true when the hob cuts (feed). */
+    CUTTING("cutting"),
+    /** Hob turns of the ratio (sync-on). */
+    HOB_TURNS("hob_turns"),
+    /** Work turns of the ratio (sync-on). */
+    WORK_TURNS("work_turns"),
+    /** Hob speed (sync-on), rpm. */
+    HOB_RPM("hob_rpm"),
+    /** Work speed (sync-on), rpm. */
+    WORK_RPM("work_rpm"),
+    /** Hob sense of rotation (sync-on): clockwise or counter-clockwise. */
+    HOB_ROTATION("hob_rotation"),
+    /** Work sense of rotation (sync-on). */
+    WORK_ROTATION("work_rotation"),
+    /** Helical addition (sync-on), degrees of work rotation per mm of axial travel. */
+    DIFFERENTIAL_DEG_PER_MM("differential_deg_per_mm"),
+    /** Swivel setting in the machine's sign convention (swivel), degrees. */
+    SWIVEL_DEG("swivel_deg"),
+    /** Hob shift position (hob-shift), mm. */
+    HOB_SHIFT_MM("hob_shift_mm"),
+    /** true for coolant on, false for off (coolant). */
+    COOLANT("coolant"),
+    /** Duration of the step, s. */
+    TIME_S("time_s"),
+    /** Comment text (comment). */
+    TEXT("text");
+
+    private final String header;
+
+    CsvColumn(String header) {
+        this.header = header;
+    }
+
+    /** The header name. */
+    public String header() {
+        return header;
+    }
+}

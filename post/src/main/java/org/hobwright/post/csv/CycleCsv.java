@@ -1,0 +1,181 @@
+package org.hobwright.post.csv;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.cycle.CycleStep;
+import org.hobwright.api.cycle.Rotation;
+import org.hobwright.post.Decimal;
+import tools.jackson.core.JacksonException;
+import tools.jackson.databind.MappingIterator;
+import tools.jackson.dataformat.csv.CsvMapper;
+import tools.jackson.dataformat.csv.CsvReadFeature;
+import tools.jackson.dataformat.csv.CsvSchema;
+import tools.jackson.dataformat.csv.CsvWriteFeature;
+
+/**
+ * The cycle CSV: one row per step, canonical millimetres, seconds, rpm and degrees, RFC 4180
+ * (comma, CRLF, double quotes only where needed), a point as the decimal separator whatever the
+ * locale. Numbers are written as the shortest decimal that reads back to the same double, so
+ * {@link #read(String)} rebuilds the steps exactly.
+ */
+public final class CycleCsv {
+
+    /** The column-set version written in every row. */
+    public static final int VERSION = 1;
+
+    private static final String SOURCE = "Hobwright cycle CSV, post/README.md";
+
+    private static final CsvMapper MAPPER = CsvMapper.builder()
+            .enable(CsvWriteFeature.STRICT_CHECK_FOR_QUOTING)
+            .build();
+
+    private static final CsvSchema SCHEMA = schema();
+
+    private CycleCsv() {
+    }
+
+    private static CsvSchema schema() {
+        CsvSchema.Builder b = CsvSchema.builder();
+        for (CsvColumn c : CsvColumn.values()) {
+            b.addColumn(c.header());
+        }
+        return b.setUseHeader(true).setLineSeparator("\r\n").build();
+    }
+
+    /**
+     * Writes the steps.
+     *
+     * @param steps the cycle's steps
+     * @return the CSV text, header first, CRLF line ends
+     */
+    public static String write(List<CycleStep> steps) {
+        List<Map<String, String>> rows = new ArrayList<>();
+        for (int i = 0; i < steps.size(); i++) {
+            Map<CsvColumn, String> row = new EnumMap<>(CsvColumn.class);
+            row.put(CsvColumn.FORMAT_VERSION, String.valueOf(VERSION));
+            row.put(CsvColumn.STEP_NO, String.valueOf(i + 1));
+            row.put(CsvColumn.KIND, steps.get(i).kind());
+            row.put(CsvColumn.TIME_S, Decimal.exact(steps.get(i).seconds()));
+            fill(steps.get(i), row);
+            Map<String, String> named = new LinkedHashMap<>();
+            for (CsvColumn c : CsvColumn.values()) {
+                named.put(c.header(), row.getOrDefault(c, ""));
+            }
+            rows.add(named);
+        }
+        if (rows.isEmpty()) {
+            return String.join(",", Arrays.stream(CsvColumn.values()).map(CsvColumn::header).toList()) + "\r\n";
+        }
+        return MAPPER.writer(SCHEMA).writeValueAsString(rows);
+    }
+
+    private static void fill(CycleStep step, Map<CsvColumn, String> row) {
+        if (step instanceof CycleStep.Comment c) {
+            row.put(CsvColumn.TEXT, c.text());
+        } else if (step instanceof CycleStep.Coolant c) {
+            row.put(CsvColumn.COOLANT, String.valueOf(c.on()));
+        } else if (step instanceof CycleStep.Swivel s) {
+            row.put(CsvColumn.SWIVEL_DEG, Decimal.exact(s.machineAngleDeg()));
+        } else if (step instanceof CycleStep.SyncOn s) {
+            row.put(CsvColumn.HOB_TURNS, String.valueOf(s.hobTurns()));
+            row.put(CsvColumn.WORK_TURNS, String.valueOf(s.workTurns()));
+            row.put(CsvColumn.HOB_RPM, Decimal.exact(s.hobRpm()));
+            row.put(CsvColumn.WORK_RPM, Decimal.exact(s.workRpm()));
+            row.put(CsvColumn.HOB_ROTATION, word(s.hobRotation()));
+            row.put(CsvColumn.WORK_ROTATION, word(s.workRotation()));
+            row.put(CsvColumn.DIFFERENTIAL_DEG_PER_MM, Decimal.exact(s.differentialDegPerMm()));
+        } else if (step instanceof CycleStep.HobShift h) {
+            row.put(CsvColumn.HOB_SHIFT_MM, Decimal.exact(h.positionMm()));
+        } else if (step instanceof CycleStep.Rapid r) {
+            move(row, r.pass(), r.diameterMm(), r.axialMm());
+        } else if (step instanceof CycleStep.Feed f) {
+            move(row, f.pass(), f.diameterMm(), f.axialMm());
+            row.put(CsvColumn.FEED_MM_PER_REV, Decimal.exact(f.feedMmPerRev()));
+            row.put(CsvColumn.CUTTING, String.valueOf(f.cutting()));
+        }
+        // sync-off, spindles-stop and dwell carry only their time
+    }
+
+    private static void move(Map<CsvColumn, String> row, int pass, double diameterMm, double axialMm) {
+        row.put(CsvColumn.PASS_NO, String.valueOf(pass));
+        row.put(CsvColumn.DIAMETER_MM, Decimal.exact(diameterMm));
+        row.put(CsvColumn.AXIAL_MM, Decimal.exact(axialMm));
+    }
+
+    /** {@code clockwise} or {@code counter-clockwise}. */
+    static String word(Rotation r) {
+        return r.name().toLowerCase(Locale.ROOT).replace('_', '-');
+    }
+
+    /**
+     * What {@link #read(String)} found.
+     *
+     * @param steps    the steps, empty when any finding is an error
+     * @param findings problems, each naming the line and column
+     */
+    public record Read(List<CycleStep> steps, List<Finding> findings) {
+        public Read {
+            steps = List.copyOf(steps);
+            findings = List.copyOf(findings);
+        }
+    }
+
+    /**
+     * Reads a cycle CSV of version {@value #VERSION}. Columns are found by header name, so their
+     * order does not matter. Never throws for bad input.
+     *
+     * @param text the CSV text
+     * @return the steps, or findings naming the line and column of each problem
+     */
+    public static Read read(String text) {
+        List<String[]> rows = new ArrayList<>();
+        try (MappingIterator<String[]> it = MAPPER.readerFor(String[].class)
+                .with(CsvReadFeature.WRAP_AS_ARRAY).with(CsvReadFeature.SKIP_EMPTY_LINES).readValues(text)) {
+            while (it.hasNextValue()) {
+                rows.add(it.nextValue());
+            }
+        } catch (JacksonException e) {
+            int line = e.getLocation() == null ? 1 : e.getLocation().getLineNr();
+            return new Read(List.of(), List.of(problem("csv", "line " + line + ": " + e.getOriginalMessage())));
+        }
+        if (rows.isEmpty()) {
+            return new Read(List.of(), List.of(problem("csv", "the text has no header line")));
+        }
+        Map<String, Integer> index = new HashMap<>();
+        String[] header = rows.get(0);
+        for (int i = 0; i < header.length; i++) {
+            index.put(header[i].strip(), i);
+        }
+        List<Finding> findings = new ArrayList<>();
+        for (CsvColumn c : CsvColumn.values()) {
+            if (!index.containsKey(c.header())) {
+                findings.add(problem("csv." + c.header(), "line 1: column \"" + c.header() + "\" is missing"));
+            }
+        }
+        if (!findings.isEmpty()) {
+            return new Read(List.of(), findings);
+        }
+        List<CycleStep> steps = new ArrayList<>();
+        for (int r = 1; r < rows.size(); r++) {
+            RowReader row = new RowReader(rows.get(r), index);
+            try {
+                steps.add(row.step());
+            } catch (IllegalArgumentException e) {
+                findings.add(problem("csv", "line " + (r + 1) + ": " + e.getMessage()));
+            }
+        }
+        return findings.isEmpty() ? new Read(steps, List.of()) : new Read(List.of(), findings);
+    }
+
+    private static Finding problem(String field, String message) {
+        return Finding.error("CSV_UNREADABLE", field, "Cycle CSV " + message,
+                "write the file with Hobwright's cycle CSV writer, version " + VERSION, SOURCE);
+    }
+}

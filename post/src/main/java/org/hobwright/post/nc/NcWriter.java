@@ -1,0 +1,103 @@
+package org.hobwright.post.nc;
+
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.cycle.CycleStep;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.spi.CycleWriter;
+import org.hobwright.api.spi.OutputFile;
+import org.hobwright.api.spi.Spi;
+import org.hobwright.api.spi.WriteContext;
+import org.hobwright.api.spi.WriteResult;
+import org.hobwright.post.PostFindings;
+
+/**
+ * Writes the NC program ({@code JOB.nc}) with the dialect given in the context under
+ * {@link WriteContext#DIALECT}. Refuses, with findings naming the dialect line, when the dialect
+ * does not load or lacks a template the cycle needs, and refuses when a safety invariant is broken.
+ */
+public final class NcWriter implements CycleWriter {
+
+    private static final String SOURCE = "Hobwright dialect format, post/README.md";
+
+    @Override
+    public String id() {
+        return "nc";
+    }
+
+    @Override
+    public int spiVersion() {
+        return Spi.VERSION;
+    }
+
+    @Override
+    public String description() {
+        return "NC program for the machine's control, from its dialect file";
+    }
+
+    @Override
+    public WriteResult write(HobCycle cycle, WriteContext context) {
+        Optional<WriteResult> refusal = PostFindings.refusal(cycle, id());
+        if (refusal.isPresent()) {
+            return refusal.get();
+        }
+        String dialectName = context.resource(WriteContext.DIALECT_NAME).orElse(context.job().machine().dialect());
+        Optional<String> json = context.resource(WriteContext.DIALECT);
+        if (json.isEmpty()) {
+            return WriteResult.refused(List.of(Finding.error("NC_DIALECT_MISSING", "machine.dialect",
+                    "No dialect text was given for \"" + dialectName + "\"; the NC program needs one",
+                    "save the dialect file " + dialectName + ".json in the library's dialects folder", SOURCE)));
+        }
+        DialectLoader.Loaded loaded = DialectLoader.load(dialectName, json.get());
+        if (loaded.dialect().isEmpty()) {
+            return WriteResult.refused(loaded.findings());
+        }
+        Dialect dialect = loaded.dialect().get();
+        List<Finding> missing = missingTemplates(cycle, dialect);
+        if (!missing.isEmpty()) {
+            return WriteResult.refused(missing);
+        }
+        NcProgram program = NcProgramBuilder.build(cycle, NcHeader.lines(cycle, context, dialect),
+                context.job().units());
+        List<Finding> unsafe = SafetyCheck.check(program, cycle.setup().orElseThrow().finalInfeedDiameterMm(),
+                context.job());
+        if (!unsafe.isEmpty()) {
+            return WriteResult.refused(unsafe);
+        }
+        NcRenderer.Rendered r = new NcRenderer(dialect, context.job()).render(program);
+        if (!r.findings().isEmpty()) {
+            return WriteResult.refused(r.findings());
+        }
+        String text = String.join(dialect.lineEnding(), r.lines()) + dialect.lineEnding();
+        return new WriteResult(List.of(new OutputFile(context.job().name() + ".nc", text)), loaded.findings());
+    }
+
+    /** Templates the cycle needs beyond the required ones. */
+    private static List<Finding> missingTemplates(HobCycle cycle, Dialect dialect) {
+        Set<TemplateKey> needed = EnumSet.noneOf(TemplateKey.class);
+        for (CycleStep s : cycle.steps()) {
+            if (s instanceof CycleStep.SyncOn on && on.differentialDegPerMm() != 0) {
+                needed.add(TemplateKey.SYNC_ON_HELIX);
+            } else if (s instanceof CycleStep.Swivel) {
+                needed.add(TemplateKey.SWIVEL_TO);
+            } else if (s instanceof CycleStep.HobShift) {
+                needed.add(TemplateKey.HOB_SHIFT);
+            }
+        }
+        List<Finding> out = new ArrayList<>();
+        for (TemplateKey k : needed) {
+            if (dialect.template(k).isEmpty()) {
+                out.add(Finding.error("NC_DIALECT_MISSING_TEMPLATE", "dialect.templates", dialect.name() + " line "
+                        + dialect.lines().templates() + ": the cycle needs template \"" + k.key()
+                        + "\", which the dialect does not have",
+                        "add \"" + k.key() + "\" to \"templates\" with the words from the control builder's manual",
+                        SOURCE));
+            }
+        }
+        return out;
+    }
+}

@@ -1,0 +1,221 @@
+package org.hobwright.post.report;
+
+import java.util.List;
+import java.util.Optional;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.cycle.CycleStep;
+import org.hobwright.api.cycle.CycleSummary;
+import org.hobwright.api.cycle.FastestProposal;
+import org.hobwright.api.cycle.GearData;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.cycle.InspectionData;
+import org.hobwright.api.cycle.PassSummary;
+import org.hobwright.api.cycle.SetupValues;
+import org.hobwright.api.cycle.SimulationData;
+import org.hobwright.api.cycle.ToleranceData;
+import org.hobwright.api.job.GearSpec;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.spi.WriteContext;
+import org.hobwright.post.JobUnits;
+import tools.jackson.databind.node.ArrayNode;
+import tools.jackson.databind.node.JsonNodeFactory;
+import tools.jackson.databind.node.ObjectNode;
+
+/**
+ * Builds the JSON report tree. Lengths in the job's units, angles in degrees, times in seconds,
+ * speeds in rpm, cutting speed in m/min or ft/min, quality values (feed marks, enveloping cuts,
+ * tolerances) in micrometres; numbers unrounded. Parts of the cycle that could not be computed are
+ * left out. The pointers listed in ARCHITECTURE.md ("The JSON report") are a contract.
+ */
+final class ReportBuilder {
+
+    /** The {@code format} of the report. */
+    static final String FORMAT = "hobwright-report";
+
+    /** The report version. */
+    static final int VERSION = 1;
+
+    private final JsonNodeFactory nodes = JsonNodeFactory.instance;
+    private final HobJob job;
+    private final JobUnits u;
+
+    ReportBuilder(HobJob job) {
+        this.job = job;
+        this.u = new JobUnits(job.units());
+    }
+
+    ObjectNode build(HobCycle cycle, WriteContext context) {
+        ObjectNode root = nodes.objectNode();
+        root.put("format", FORMAT);
+        root.put("version", VERSION);
+        root.put("generatedOn", context.generatedOn());
+        root.put("toolVersion", context.toolVersion());
+        root.put("job", job.name());
+        root.put("part", job.gear().partName());
+        root.put("machine", job.machine().name());
+        ObjectNode units = root.putObject("units");
+        units.put("length", u.lengthSymbol());
+        units.put("angle", "deg");
+        units.put("time", "s");
+        units.put("speed", "rpm");
+        units.put("cuttingSpeed", u.speedSymbol());
+        units.put("quality", "um");
+        cycle.gear().ifPresent(g -> root.set("gear", gear(g)));
+        cycle.inspection().ifPresent(i -> root.set("inspection", inspection(i)));
+        cycle.tolerances().ifPresent(t -> root.set("tolerances", tolerances(t)));
+        cycle.setup().ifPresent(s -> root.set("setup", setup(s)));
+        cycle.summary().ifPresent(s -> root.set("cycle", cycle(s, cycle.steps(), cycle.setup())));
+        cycle.simulation().ifPresent(s -> root.set("simulation", simulation(s)));
+        root.set("findings", findings(cycle.findings()));
+        return root;
+    }
+
+    private ObjectNode gear(GearData g) {
+        GearSpec spec = job.gear();
+        ObjectNode n = nodes.objectNode();
+        n.put("teeth", spec.teeth());
+        n.put("module", spec.moduleMm());
+        n.put("diametralPitch", spec.pitch().diametralPitch());
+        n.put("pressureAngle", spec.pressureAngleDeg());
+        n.put("helixAngle", spec.signedHelixAngleDeg());
+        n.put("hand", spec.isSpur() ? "spur" : spec.hand().word());
+        n.put("profileShift", spec.profileShift());
+        n.put("faceWidth", u.length(spec.faceWidthMm()));
+        n.put("referenceDiameter", u.length(g.referenceDiameterMm()));
+        n.put("baseDiameter", u.length(g.baseDiameterMm()));
+        n.put("tipDiameter", u.length(g.tipDiameterMm()));
+        n.put("rootDiameter", u.length(g.rootDiameterMm()));
+        n.put("wholeDepth", u.length(g.wholeDepthMm()));
+        n.put("toothThickness", u.length(g.toothThicknessMm()));
+        n.put("tipThickness", u.length(g.tipThicknessMm()));
+        n.put("addendum", u.length(g.addendumMm()));
+        n.put("dedendum", u.length(g.dedendumMm()));
+        n.put("transverseModule", g.transverseModuleMm());
+        n.put("transversePressureAngle", g.transversePressureAngleDeg());
+        n.put("baseHelixAngle", g.baseHelixAngleDeg());
+        g.leadMm().ifPresent(l -> n.put("lead", u.length(l)));
+        n.put("virtualTeeth", g.virtualTeeth());
+        return n;
+    }
+
+    private ObjectNode inspection(InspectionData i) {
+        ObjectNode n = nodes.objectNode();
+        n.put("spanTeeth", i.spanTeeth());
+        n.put("spanWidth", u.length(i.spanWidthMm()));
+        n.put("spanContactDiameter", u.length(i.spanContactDiameterMm()));
+        n.put("pinDiameter", u.length(i.pinDiameterMm()));
+        n.put("overPins", u.length(i.overPinsMm()));
+        n.put("balls", i.balls());
+        n.put("chordalThickness", u.length(i.chordalThicknessMm()));
+        n.put("chordalHeight", u.length(i.chordalHeightMm()));
+        return n;
+    }
+
+    private ObjectNode tolerances(ToleranceData t) {
+        ObjectNode n = nodes.objectNode();
+        n.put("standard", "ISO 1328-1:2013");
+        n.put("flankToleranceClass", t.flankToleranceClass());
+        n.put("singlePitchUm", t.singlePitchUm());
+        n.put("totalPitchUm", t.totalPitchUm());
+        n.put("profileSlopeUm", t.profileSlopeUm());
+        n.put("profileFormUm", t.profileFormUm());
+        n.put("profileTotalUm", t.profileTotalUm());
+        n.put("helixSlopeUm", t.helixSlopeUm());
+        n.put("helixFormUm", t.helixFormUm());
+        n.put("helixTotalUm", t.helixTotalUm());
+        return n;
+    }
+
+    private ObjectNode setup(SetupValues s) {
+        ObjectNode n = nodes.objectNode();
+        n.put("blankDiameter", u.length(s.blankDiameterMm()));
+        n.put("touchOffDiameter", u.length(s.touchOffDiameterMm()));
+        n.put("finalInfeedDiameter", u.length(s.finalInfeedDiameterMm()));
+        n.put("leadAngle", s.leadAngleDeg());
+        n.put("swivelAngle", s.swivelAngleDeg());
+        n.put("swivelAngleDms", s.swivelAngleDms());
+        n.put("swivelSetting", s.swivelSettingDeg());
+        n.put("swivelSettingText", s.swivelSettingText());
+        n.put("swivelDirection", s.swivelDirection());
+        n.put("swivelPositiveSense", job.machine().swivel().positiveSense());
+        n.put("cuttingSpeed", u.cuttingSpeed(s.cuttingSpeedMPerMin()));
+        n.put("hobRpm", s.hobRpm());
+        n.put("workRpm", s.workRpm());
+        n.put("syncHobTurns", s.syncHobTurns());
+        n.put("syncWorkTurns", s.syncWorkTurns());
+        n.put("differential", s.differentialDegPerMm() * job.units().toMm(1));
+        n.put("hobShift", u.length(s.hobShiftMm()));
+        return n;
+    }
+
+    private ObjectNode cycle(CycleSummary s, List<CycleStep> steps, Optional<SetupValues> setup) {
+        ObjectNode n = nodes.objectNode();
+        setup.ifPresent(v -> {
+            n.put("hobRpm", v.hobRpm());
+            n.put("workRpm", v.workRpm());
+        });
+        n.put("axialFeed", u.length(s.finishFeedMmPerRev()));
+        n.put("passes", s.passes().size());
+        n.put("approachLength", u.length(s.approachLengthMm()));
+        n.put("overrunLength", u.length(s.overrunLengthMm()));
+        n.put("cuttingTime", steps.stream().filter(CycleStep.Feed.class::isInstance)
+                .mapToDouble(CycleStep::seconds).sum());
+        n.put("cycleTime", s.cycleTimeS());
+        n.put("feedMarkDepth", s.feedMarkFlankUm());
+        n.put("feedMarkRootDepth", s.feedMarkRootUm());
+        n.put("envelopingDepth", s.envelopingDepthUm());
+        n.put("maxChipThickness", u.length(s.maxChipThicknessMm()));
+        n.put("steps", steps.size());
+        ArrayNode passes = n.putArray("passList");
+        for (PassSummary p : s.passes()) {
+            ObjectNode pn = passes.addObject();
+            pn.put("pass", p.pass());
+            pn.put("infeedDiameter", u.length(p.infeedDiameterMm()));
+            pn.put("radialDepth", u.length(p.radialDepthMm()));
+            pn.put("axialFeed", u.length(p.feedMmPerRev()));
+            pn.put("approachLength", u.length(p.approachMm()));
+            pn.put("overrunLength", u.length(p.overrunMm()));
+            pn.put("axialTravel", u.length(p.axialTravelMm()));
+            pn.put("time", p.seconds());
+        }
+        s.fastest().ifPresent(f -> n.set("fastest", fastest(f)));
+        return n;
+    }
+
+    private ObjectNode fastest(FastestProposal f) {
+        ObjectNode n = nodes.objectNode();
+        n.put("cycleTime", f.cycleTimeS());
+        n.put("lowerBound", f.lowerBoundS());
+        n.put("bindingLimit", f.bindingLimit());
+        n.put("cuttingSpeed", u.cuttingSpeed(f.cuttingSpeedMPerMin()));
+        n.put("hobRpm", f.hobRpm());
+        n.put("roughFeed", u.length(f.roughFeedMmPerRev()));
+        n.put("finishFeed", u.length(f.finishFeedMmPerRev()));
+        n.put("passes", f.passes());
+        return n;
+    }
+
+    private ObjectNode simulation(SimulationData s) {
+        ObjectNode n = nodes.objectNode();
+        n.put("envelopingDepth", u.length(s.envelopingDepthMm()));
+        n.put("closedFormEnvelopingDepth", u.length(s.closedFormEnvelopingDepthMm()));
+        n.put("profileDeviationMax", u.length(s.profileDeviationMaxMm()));
+        n.put("undercut", s.undercut());
+        n.put("activeInvoluteStartDiameter", u.length(s.activeInvoluteStartDiameterMm()));
+        return n;
+    }
+
+    private ArrayNode findings(List<Finding> findings) {
+        ArrayNode a = nodes.arrayNode();
+        for (Finding f : findings) {
+            ObjectNode n = a.addObject();
+            n.put("severity", f.severity().word());
+            n.put("code", f.code());
+            n.put("field", f.field());
+            n.put("message", f.message());
+            f.fix().ifPresent(x -> n.put("fix", x));
+            n.put("source", f.source());
+        }
+        return a;
+    }
+}

@@ -1,0 +1,59 @@
+package org.hobwright.post.report;
+
+import java.util.List;
+import java.util.Optional;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.spi.CycleWriter;
+import org.hobwright.api.spi.OutputFile;
+import org.hobwright.api.spi.Spi;
+import org.hobwright.api.spi.WriteContext;
+import org.hobwright.api.spi.WriteResult;
+import org.hobwright.post.PostFindings;
+import tools.jackson.core.util.DefaultIndenter;
+import tools.jackson.core.util.DefaultPrettyPrinter;
+import tools.jackson.databind.ObjectWriter;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * Writes the JSON report ({@code JOB.report.json}) with the pointers of ARCHITECTURE.md. Like every
+ * writer it writes nothing for a cycle with errors, unless the context's resource
+ * {@value #WITH_ERRORS} is {@code true}: then it writes the report with the error findings and
+ * without the parts that could not be computed (what {@code plan --json} prints).
+ */
+public final class ReportWriter implements CycleWriter {
+
+    /** Resource key: {@code true} writes the report also for a cycle with errors. */
+    public static final String WITH_ERRORS = "report.withErrors";
+
+    private static final ObjectWriter JSON = JsonMapper.builder().build().writer().with(
+            new DefaultPrettyPrinter().withObjectIndenter(new DefaultIndenter("  ", "\n"))
+                    .withArrayIndenter(new DefaultIndenter("  ", "\n")));
+
+    @Override
+    public String id() {
+        return "report";
+    }
+
+    @Override
+    public int spiVersion() {
+        return Spi.VERSION;
+    }
+
+    @Override
+    public String description() {
+        return "JSON report: gear data, inspection, setup, cycle, findings";
+    }
+
+    @Override
+    public WriteResult write(HobCycle cycle, WriteContext context) {
+        boolean always = context.resource(WITH_ERRORS).map("true"::equals).orElse(false);
+        if (!always || !cycle.hasErrors()) {
+            Optional<WriteResult> refusal = PostFindings.refusal(cycle, id());
+            if (refusal.isPresent()) {
+                return refusal.get();
+            }
+        }
+        String text = JSON.writeValueAsString(new ReportBuilder(context.job()).build(cycle, context)) + "\n";
+        return new WriteResult(List.of(new OutputFile(context.job().name() + ".report.json", text)), List.of());
+    }
+}

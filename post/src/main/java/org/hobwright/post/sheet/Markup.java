@@ -1,0 +1,87 @@
+package org.hobwright.post.sheet;
+
+/**
+ * A tiny writer of well-formed XML (XHTML with inline SVG): every element is closed, every text
+ * and attribute value escaped. Attributes are given as name, value pairs.
+ */
+final class Markup {
+    private final StringBuilder sb = new StringBuilder();
+
+    /** Opens an element. */
+    Markup open(String tag, String... attributes) {
+        sb.append('<').append(tag);
+        attributes(attributes);
+        sb.append('>');
+        return this;
+    }
+
+    /** Closes an element. */
+    Markup close(String tag) {
+        sb.append("</").append(tag).append(">\n");
+        return this;
+    }
+
+    /** An element with text content. */
+    Markup leaf(String tag, String text, String... attributes) {
+        open(tag, attributes);
+        sb.append(escape(text));
+        sb.append("</").append(tag).append('>');
+        return this;
+    }
+
+    /** An empty element. */
+    Markup empty(String tag, String... attributes) {
+        sb.append('<').append(tag);
+        attributes(attributes);
+        sb.append("/>");
+        return this;
+    }
+
+    /** Escaped text. */
+    Markup text(String text) {
+        sb.append(escape(text));
+        return this;
+    }
+
+    /** Markup written elsewhere, already well-formed. */
+    Markup raw(String markup) {
+        sb.append(markup);
+        return this;
+    }
+
+    /** A line break in the source, for readability. */
+    Markup nl() {
+        sb.append('\n');
+        return this;
+    }
+
+    private void attributes(String[] attributes) {
+        if (attributes.length % 2 != 0) {
+            throw new IllegalArgumentException("attributes come in name, value pairs, got " + attributes.length);
+        }
+        for (int i = 0; i < attributes.length; i += 2) {
+            sb.append(' ').append(attributes[i]).append("=\"").append(escape(attributes[i + 1])).append('"');
+        }
+    }
+
+    /** Escapes the five XML special characters. */
+    static String escape(String s) {
+        StringBuilder out = new StringBuilder(s.length());
+        for (char c : s.toCharArray()) {
+            switch (c) {
+                case '&' -> out.append("&amp;");
+                case '<' -> out.append("&lt;");
+                case '>' -> out.append("&gt;");
+                case '"' -> out.append("&quot;");
+                case '\'' -> out.append("&#39;");
+                default -> out.append(c);
+            }
+        }
+        return out.toString();
+    }
+
+    @Override
+    public String toString() {
+        return sb.toString();
+    }
+}

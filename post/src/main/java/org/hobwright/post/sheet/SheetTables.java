@@ -1,0 +1,177 @@
+package org.hobwright.post.sheet;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.cycle.CycleSummary;
+import org.hobwright.api.cycle.GearData;
+import org.hobwright.api.cycle.InspectionData;
+import org.hobwright.api.cycle.PassSummary;
+import org.hobwright.api.cycle.SetupValues;
+import org.hobwright.api.cycle.SimulationData;
+import org.hobwright.api.cycle.ToleranceData;
+import org.hobwright.api.job.GearSpec;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.Pitch;
+import org.hobwright.api.job.QualityTargets;
+import org.hobwright.post.Decimal;
+
+/** The tables of the setup sheet, each a {@code section} element. */
+final class SheetTables {
+    private final Markup m;
+    private final SheetFormat f;
+    private final HobJob job;
+
+    SheetTables(Markup m, SheetFormat f, HobJob job) {
+        this.m = m;
+        this.f = f;
+        this.job = job;
+    }
+
+    void setup(SetupValues s, CycleSummary sum, boolean coolant) {
+        section("Setup");
+        row("Turn the blank to ⌀", f.lenU(s.blankDiameterMm()));
+        row("Touch-off ⌀ (hob tip meets the blank)", f.lenU(s.touchOffDiameterMm()));
+        row("Final infeed ⌀ (root)", f.lenU(s.finalInfeedDiameterMm()));
+        row("Hob lead angle γ", f.deg(s.leadAngleDeg()));
+        row("Swivel angle η = β − γ", f.deg(s.swivelAngleDeg()) + " = " + s.swivelAngleDms());
+        row("Holder setting", s.swivelSettingText() + " — " + s.swivelDirection());
+        row("Cutting speed", f.cuttingSpeed(s.cuttingSpeedMPerMin()));
+        row("Hob speed", f.hobRpm(s.hobRpm()));
+        row("Work speed", f.workRpm(s.workRpm()));
+        row("Sync ratio hob : work", s.syncHobTurns() + " : " + s.syncWorkTurns());
+        if (s.differentialDegPerMm() != 0) {
+            row("Helical addition", Decimal.fixed(s.differentialDegPerMm() * job.units().toMm(1), 6) + " °/"
+                    + f.u().lengthSymbol() + " of axial travel");
+        }
+        row("Finishing feed", f.feed(sum.finishFeedMmPerRev()));
+        row("Passes", String.valueOf(sum.passes().size()));
+        row("Approach / overrun (last pass)", f.lenU(sum.approachLengthMm()) + " / " + f.lenU(sum.overrunLengthMm()));
+        row("Hob shift position", f.lenU(s.hobShiftMm()));
+        row("Coolant", coolant ? "on" : "off");
+        row("Cycle time", f.seconds(sum.cycleTimeS()) + " (" + Decimal.fixed(sum.cycleTimeS() / 60, 2) + " min)");
+        m.close("tbody").close("table");
+        passes(sum.passes());
+        m.close("section");
+    }
+
+    private void passes(List<PassSummary> passes) {
+        m.open("table", "class", "passes").open("thead").open("tr");
+        for (String h : List.of("Pass", "Infeed ⌀", "Depth", "Feed", "Approach", "Overrun", "Travel", "Time")) {
+            m.leaf("th", h);
+        }
+        m.close("tr").close("thead").open("tbody");
+        for (PassSummary p : passes) {
+            m.open("tr").leaf("td", String.valueOf(p.pass())).leaf("td", f.lenU(p.infeedDiameterMm()))
+                    .leaf("td", f.lenU(p.radialDepthMm())).leaf("td", f.feed(p.feedMmPerRev()))
+                    .leaf("td", f.lenU(p.approachMm())).leaf("td", f.lenU(p.overrunMm()))
+                    .leaf("td", f.lenU(p.axialTravelMm())).leaf("td", f.seconds(p.seconds())).close("tr");
+        }
+        m.close("tbody").close("table");
+    }
+
+    void gear(GearData g) {
+        GearSpec s = job.gear();
+        section("Gear");
+        row("Part", s.partName());
+        row("Teeth z", String.valueOf(s.teeth()));
+        row(s.pitch() instanceof Pitch.Diametral ? "Diametral pitch" : "Module",
+                s.pitch() instanceof Pitch.Diametral d ? Decimal.fixed(d.perInch(), 4) + " /in"
+                        : Decimal.fixed(s.moduleMm(), 4) + " mm");
+        row("Pressure angle", f.deg(s.pressureAngleDeg()));
+        row("Helix", s.isSpur() ? "spur" : f.deg(s.helixAngleDeg()) + " " + s.hand().word() + " hand");
+        row("Profile shift x", Decimal.fixed(s.profileShift(), 4));
+        row("Face width", f.lenU(s.faceWidthMm()));
+        row("Reference ⌀", f.lenU(g.referenceDiameterMm()));
+        row("Base ⌀", f.lenU(g.baseDiameterMm()));
+        row("Tip ⌀", f.lenU(g.tipDiameterMm()));
+        row("Root ⌀", f.lenU(g.rootDiameterMm()));
+        row("Whole depth", f.lenU(g.wholeDepthMm()));
+        row("Tooth thickness (normal, reference circle)", f.lenU(g.toothThicknessMm()));
+        end();
+    }
+
+    void inspection(InspectionData i) {
+        section("Inspection");
+        row("Span over k teeth", "k = " + i.spanTeeth() + ", W = " + f.lenU(i.spanWidthMm()));
+        row("Anvil contact ⌀", f.lenU(i.spanContactDiameterMm()));
+        row(i.balls() ? "Ball ⌀" : "Pin ⌀", f.lenU(i.pinDiameterMm()));
+        row(i.balls() ? "Over two balls" : "Over two pins", f.lenU(i.overPinsMm()));
+        row("Chordal thickness / height", f.lenU(i.chordalThicknessMm()) + " / " + f.lenU(i.chordalHeightMm()));
+        end();
+    }
+
+    void quality(CycleSummary sum, QualityTargets t, Optional<ToleranceData> tol,
+                 Optional<SimulationData> sim) {
+        m.open("section").leaf("h2", "Predicted quality against targets").nl();
+        m.open("table").open("thead").open("tr").leaf("th", "Value").leaf("th", "Predicted").leaf("th", "Target")
+                .leaf("th", "Verdict").close("tr").close("thead").open("tbody");
+        verdict("Feed-mark depth on the flank", sum.feedMarkFlankUm(), t.feedMarkDepthUm(), f.um(sum.feedMarkFlankUm()),
+                t.feedMarkDepthUm().isPresent() ? f.um(t.feedMarkDepthUm().getAsDouble()) : "");
+        verdict("Enveloping-cut depth", sum.envelopingDepthUm(), t.envelopingDepthUm(), f.um(sum.envelopingDepthUm()),
+                t.envelopingDepthUm().isPresent() ? f.um(t.envelopingDepthUm().getAsDouble()) : "");
+        verdict("Largest chip thickness", sum.maxChipThicknessMm(), t.maxChipThicknessMm(),
+                f.lenU(sum.maxChipThicknessMm()),
+                t.maxChipThicknessMm().isPresent() ? f.lenU(t.maxChipThicknessMm().getAsDouble()) : "");
+        m.open("tr").leaf("td", "Feed-mark depth in the root").leaf("td", f.um(sum.feedMarkRootUm())).leaf("td", "—")
+                .leaf("td", "").close("tr");
+        sim.ifPresent(s -> {
+            OptionalDouble profileLimit = tol.isPresent()
+                    ? OptionalDouble.of(tol.get().profileFormUm()) : OptionalDouble.empty();
+            verdict("Simulated profile deviation", s.profileDeviationMaxMm() * 1000, profileLimit,
+                    f.um(s.profileDeviationMaxMm() * 1000),
+                    profileLimit.isPresent() ? f.um(profileLimit.getAsDouble()) + " (f_fαT)" : "");
+            m.open("tr").leaf("td", "Undercut in the simulation").leaf("td", s.undercut() ? "yes" : "no")
+                    .leaf("td", "no").leaf("td", s.undercut() ? "check" : "within").close("tr");
+        });
+        m.close("tbody").close("table");
+        tol.ifPresent(this::tolerances);
+        m.close("section");
+    }
+
+    private void verdict(String name, double value, OptionalDouble target, String shown, String targetText) {
+        String v = target.isEmpty() ? "no target" : value <= target.getAsDouble() ? "within" : "over the target";
+        m.open("tr").leaf("td", name).leaf("td", shown).leaf("td", targetText.isEmpty() ? "—" : targetText)
+                .leaf("td", v, "class", v.startsWith("over") ? "bad" : "ok").close("tr");
+    }
+
+    private void tolerances(ToleranceData t) {
+        m.leaf("p", "ISO 1328-1:2013 flank tolerance class " + t.flankToleranceClass()
+                + " (what the inspector measures against):");
+        m.open("table").open("tbody");
+        m.open("tr").leaf("td", "f_pT " + f.um(t.singlePitchUm())).leaf("td", "F_pT " + f.um(t.totalPitchUm()))
+                .leaf("td", "F_αT " + f.um(t.profileTotalUm())).leaf("td", "F_βT " + f.um(t.helixTotalUm())).close("tr");
+        m.open("tr").leaf("td", "f_Hα " + f.um(t.profileSlopeUm())).leaf("td", "f_fα " + f.um(t.profileFormUm()))
+                .leaf("td", "f_Hβ " + f.um(t.helixSlopeUm())).leaf("td", "f_fβ " + f.um(t.helixFormUm())).close("tr");
+        m.close("tbody").close("table");
+    }
+
+    void findings(List<Finding> findings) {
+        m.open("section").leaf("h2", "Open warnings and notes").nl();
+        List<Finding> open = findings.stream().filter(x -> !x.isError()).toList();
+        if (open.isEmpty()) {
+            m.leaf("p", "None.");
+        } else {
+            m.open("ul", "class", "findings");
+            for (Finding x : open) {
+                m.open("li").leaf("strong", x.severity().word() + " " + x.code()).text(" (" + x.field() + "): "
+                        + x.message() + x.fix().map(fx -> " — fix: " + fx).orElse("")).close("li");
+            }
+            m.close("ul");
+        }
+        m.close("section");
+    }
+
+    private void section(String title) {
+        m.open("section").leaf("h2", title).nl().open("table").open("tbody");
+    }
+
+    private void row(String name, String value) {
+        m.open("tr").leaf("th", name, "scope", "row").leaf("td", value).close("tr");
+    }
+
+    private void end() {
+        m.close("tbody").close("table").close("section");
+    }
+}

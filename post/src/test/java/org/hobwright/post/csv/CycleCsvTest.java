@@ -1,0 +1,141 @@
+package org.hobwright.post.csv;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.SplittableRandom;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.cycle.CycleStep;
+import org.hobwright.api.cycle.Rotation;
+import org.hobwright.api.spi.WriteResult;
+import org.hobwright.post.Fixtures;
+import org.hobwright.post.Fixtures.Fixture;
+import org.hobwright.post.GoldenFiles;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
+
+/** The cycle CSV: golden files, exact round trip, RFC 4180 form, units in the headers, reader findings. */
+class CycleCsvTest {
+
+    static List<Fixture> fixtures() {
+        return Fixtures.all();
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("fixtures")
+    void matchesGoldenFile(Fixture f) {
+        WriteResult r = new CsvWriter().write(f.cycle(), f.plainContext());
+        assertEquals(f.job().name() + ".csv", r.files().get(0).fileName());
+        GoldenFiles.check(f.id() + ".csv", r.files().get(0).text());
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("fixtures")
+    void roundTripIsExact(Fixture f) {
+        CycleCsv.Read back = CycleCsv.read(CycleCsv.write(f.cycle().steps()));
+        assertTrue(back.findings().isEmpty(), back.findings()::toString);
+        assertEquals(f.cycle().steps(), back.steps());
+    }
+
+    @Test
+    void roundTripIsExactForRandomSteps() {
+        // fixed seed, so a failure can be replayed
+        SplittableRandom random = new SplittableRandom(20261201L);
+        for (int run = 0; run < 200; run++) {
+            List<CycleStep> steps = new ArrayList<>();
+            for (int i = 0; i < 50; i++) {
+                steps.add(randomStep(random));
+            }
+            String text = CycleCsv.write(steps);
+            CycleCsv.Read back = CycleCsv.read(text);
+            assertEquals(steps, back.steps(), () -> "run with text:\n" + text);
+        }
+    }
+
+    @Test
+    void commentsWithCommasQuotesAndNonAsciiAreQuotedByRfc4180() {
+        List<CycleStep> steps = List.of(new CycleStep.Comment("Pass 1, \"finish\" at 13° 14′"),
+                new CycleStep.Dwell(1.5));
+        String text = CycleCsv.write(steps);
+        assertTrue(text.contains(",\"Pass 1, \"\"finish\"\" at 13° 14′\"\r\n"), text);
+        List<List<String>> rows = Rfc4180.parse(text);
+        assertEquals(3, rows.size());
+        rows.forEach(r -> assertEquals(CsvColumn.values().length, r.size(), r::toString));
+        assertEquals("Pass 1, \"finish\" at 13° 14′", rows.get(1).get(CsvColumn.TEXT.ordinal()));
+        assertEquals(steps, CycleCsv.read(text).steps());
+    }
+
+    @Test
+    void everyRowEndsWithCrlfAndNumbersUseAPointUnderADecimalCommaLocale() {
+        Locale before = Locale.getDefault();
+        try {
+            Locale.setDefault(Locale.GERMANY);
+            String text = CycleCsv.write(Fixtures.helicalMetric().cycle().steps());
+            assertEquals(CycleCsv.write(Fixtures.helicalMetric().cycle().steps()), text);
+            assertFalse(text.replace("\r\n", "").contains("\n"), "no bare line feeds");
+            for (List<String> row : Rfc4180.parse(text).subList(1, Rfc4180.parse(text).size())) {
+                for (CsvColumn c : List.of(CsvColumn.DIAMETER_MM, CsvColumn.AXIAL_MM, CsvColumn.TIME_S)) {
+                    String cell = row.get(c.ordinal());
+                    assertTrue(cell.isEmpty() || cell.matches("-?\\d+(\\.\\d+)?"), () -> c + ": " + cell);
+                }
+            }
+        } finally {
+            Locale.setDefault(before);
+        }
+    }
+
+    @Test
+    void headerNamesCarryTheirUnits() {
+        List<String> header = Rfc4180.parse(CycleCsv.write(List.of())).get(0);
+        List<String> unitless = List.of("format_version", "step_no", "kind", "pass_no", "cutting", "hob_turns",
+                "work_turns", "hob_rotation", "work_rotation", "coolant", "text");
+        for (String h : header) {
+            assertTrue(unitless.contains(h) || h.matches(".*_(mm|s|rpm|deg|deg_per_mm|mm_per_rev)"), h);
+        }
+        assertEquals(CsvColumn.values().length, header.size());
+    }
+
+    @Test
+    void readerNamesLineAndColumnOfBadCells() {
+        String good = CycleCsv.write(Fixtures.spurMetric().cycle().steps());
+        String[] lines = good.split("\r\n");
+        lines[5] = lines[5].replaceFirst(",48,", ",\"48,5\",");
+        Finding f = CycleCsv.read(String.join("\r\n", lines) + "\r\n").findings().get(0);
+        assertTrue(f.message().contains("line 6") && f.message().contains("diameter_mm"), f.message());
+    }
+
+    @Test
+    void readerRefusesAnotherVersionAndMissingColumns() {
+        String good = CycleCsv.write(Fixtures.spurMetric().cycle().steps());
+        String v2 = good.replace("\r\n1,3,", "\r\n2,3,");
+        assertTrue(CycleCsv.read(v2).findings().get(0).message().contains("format_version 2"));
+        String noText = good.replace(",text\r\n", ",txt\r\n");
+        Finding f = CycleCsv.read(noText).findings().get(0);
+        assertTrue(f.message().contains("\"text\" is missing"), f.message());
+        assertTrue(CycleCsv.read(noText).steps().isEmpty());
+    }
+
+    private static CycleStep randomStep(SplittableRandom r) {
+        double s = r.nextDouble() * 100;
+        return switch (r.nextInt(10)) {
+            case 0 -> new CycleStep.Comment("note " + r.nextInt(1000) + ", \"q\"");
+            case 1 -> new CycleStep.Coolant(r.nextBoolean());
+            case 2 -> new CycleStep.Swivel(r.nextDouble(-45, 45), s);
+            case 3 -> new CycleStep.SyncOn(1 + r.nextInt(10), 1 + r.nextInt(200), r.nextDouble(50, 6000),
+                    r.nextDouble(1e-3, 100), r.nextBoolean() ? Rotation.CLOCKWISE : Rotation.COUNTER_CLOCKWISE,
+                    r.nextBoolean() ? Rotation.CLOCKWISE : Rotation.COUNTER_CLOCKWISE, r.nextDouble(-2, 2) * 1e-3, s);
+            case 4 -> new CycleStep.SyncOff(s);
+            case 5 -> new CycleStep.SpindlesStop(s);
+            case 6 -> new CycleStep.Dwell(s);
+            case 7 -> new CycleStep.HobShift(r.nextDouble() * 1e-5, s);
+            case 8 -> new CycleStep.Rapid(r.nextInt(4), r.nextDouble(0, 500), r.nextDouble(-1e3, 1e3) * 1e-7, s);
+            default -> new CycleStep.Feed(r.nextInt(4), r.nextDouble(0, 500), r.nextDouble(-300, 300),
+                    r.nextDouble(1e-4, 5), r.nextBoolean(), s);
+        };
+    }
+}

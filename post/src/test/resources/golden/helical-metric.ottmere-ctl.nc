@@ -1,0 +1,48 @@
+; program 7300 helical-metric
+G90 G17
+; Hobwright hobbing program - a starting point to be proved out
+; Part HX-30 pump drive gear
+; Job helical-metric date 2026-12-01 Hobwright 0.1.0-test
+; Machine ottmere-tl40 dialect ottmere-ctl units mm
+; Gear z 30 module 2 mm pressure angle 20.0000 deg helix 15.0000 deg right hand
+; x 0.2000 face 20.000 mm
+; Tip dia 66.917 ref dia 62.117 root dia 57.917 mm
+; Hob module 2 mm 1 start right hand OD 70.000 mm 14 gashes hss-coated lead
+; angle 1.7632 deg
+; Swivel angle 13.2368 deg = 13 deg 14 min 12.4 sec
+; Swivel setting -13.237 deg: turn the hob head clockwise seen from the operator
+; side by 13.237 deg
+; Blank dia 66.917 touch-off dia 66.917 final dia 57.917 mm
+; Cutting speed 60.0 m/min hob 272.8 rpm work 9.095 rpm
+; Ratio hob:work 30:1 helical addition 0.494308 deg/mm
+; Passes 1 finish feed 1.5000 mm/rev cycle time 209.0 s
+; Caution: rotating multi-tooth cutter and synchronised spindles.
+; Keep the guards closed and never reach into the working area while the
+; spindles are locked together.
+; Prove the program out in single block at reduced feed and speed override
+; before the first part.
+; Check every word of this program against the machine builder's and control
+; builder's manuals.
+; Follow the machine builder's manual, local codes and your shop's licensed
+; practice.
+; Cutting data are typical values: confirm them with the hob supplier.
+G71
+G95
+T21 D1
+M206
+; Pass 1 of 1: full depth, climb, helical addition on
+M8
+G0 A-13.237
+G0 Y0.5
+G0 X35.458 Z20.133
+S9.1 M304
+G133 P30 Q1 E272.8 M213 K0.494308
+G4 F2.
+G0 X28.958 Z20.133
+G1 X28.958 Z-24.831 F1.5
+G0 X35.458 Z-24.831
+G132
+M205 M305
+G0 X35.458 Z20.133
+M9
+M30

@@ -1,0 +1,47 @@
+; program 7300 spur-metric
+G90 G17
+; Hobwright hobbing program - a starting point to be proved out
+; Part SP-20 idler gear
+; Job spur-metric date 2026-12-01 Hobwright 0.1.0-test
+; Machine ottmere-tl40 dialect ottmere-ctl units mm
+; Gear z 20 module 2 mm pressure angle 20.0000 deg spur x 0.0000 face 20.000 mm
+; Tip dia 44.000 ref dia 40.000 root dia 35.000 mm
+; Hob module 2 mm 1 start right hand OD 70.000 mm 14 gashes hss-coated lead
+; angle 1.7632 deg
+; Swivel angle -1.7632 deg = -1 deg 45 min 47.6 sec
+; Swivel setting 1.763 deg: turn the hob head counter-clockwise seen from the
+; operator side by 1.763 deg
+; Blank dia 44.000 touch-off dia 44.000 final dia 35.000 mm
+; Cutting speed 60.0 m/min hob 272.8 rpm work 13.642 rpm
+; Ratio hob:work 20:1
+; Passes 1 finish feed 1.5000 mm/rev cycle time 130.9 s
+; Caution: rotating multi-tooth cutter and synchronised spindles.
+; Keep the guards closed and never reach into the working area while the
+; spindles are locked together.
+; Prove the program out in single block at reduced feed and speed override
+; before the first part.
+; Check every word of this program against the machine builder's and control
+; builder's manuals.
+; Follow the machine builder's manual, local codes and your shop's licensed
+; practice.
+; Cutting data are typical values: confirm them with the hob supplier.
+G71
+G95
+T21 D1
+M206
+; Pass 1 of 1: full depth, climb
+M8
+G0 A1.763
+G0 Y0.
+G0 X24. Z19.168
+S13.6 M304
+G133 P20 Q1 E272.8 M213
+G4 F2.
+G0 X17.5 Z19.168
+G1 X17.5 Z-22. F1.5
+G0 X24. Z-22.
+G132
+M205 M305
+G0 X24. Z19.168
+M9
+M30

@@ -1,0 +1,184 @@
+package org.hobwright.wizard.geometry;
+
+import org.hobwright.api.job.GearSpec;
+
+/**
+ * An external involute spur or helical gear cut by a standard hob of its tooth system, with the
+ * relations of ISO 21771:2007 (equation numbers as cited in DOMAIN.md §1.2, secondary source: the
+ * public notebooks drivetrainhub/notebooks-gears, helical_gears.py). Lengths mm, angles rad.
+ *
+ * <p>The helix angle is the magnitude |β|; its hand does not change any size.
+ *
+ * @param teeth                  number of teeth z
+ * @param normalModuleMm         normal module m_n, mm
+ * @param normalPressureAngleRad normal pressure angle α_n, rad
+ * @param helixAngleRad          helix angle |β| at the reference cylinder, rad (0 = spur)
+ * @param profileShift           profile shift coefficient x
+ * @param thicknessAllowanceMm   normal tooth-thickness allowance E_sn, mm (negative thins the tooth)
+ * @param system                 the basic rack; the hob is its counterpart (h_aP0 = h_fP, ρ_aP0 = ρ_fP)
+ */
+public record InvoluteGear(int teeth, double normalModuleMm, double normalPressureAngleRad, double helixAngleRad,
+                           double profileShift, double thicknessAllowanceMm, ToothSystem system) {
+
+    /** The gear of a job's gear record. */
+    public static InvoluteGear of(GearSpec gear, ToothSystem system) {
+        return new InvoluteGear(gear.teeth(), gear.moduleMm(), Math.toRadians(gear.pressureAngleDeg()),
+                Math.toRadians(gear.helixAngleDeg()), gear.profileShift(), gear.thicknessAllowanceMm(), system);
+    }
+
+    /** The same gear with another profile shift. */
+    public InvoluteGear withProfileShift(double x) {
+        return new InvoluteGear(teeth, normalModuleMm, normalPressureAngleRad, helixAngleRad, x,
+                thicknessAllowanceMm, system);
+    }
+
+    /** The same gear without its thickness allowance (the tooth as the basic rack gives it). */
+    public InvoluteGear withoutAllowance() {
+        return new InvoluteGear(teeth, normalModuleMm, normalPressureAngleRad, helixAngleRad, profileShift, 0,
+                system);
+    }
+
+    /** The same gear with another number of teeth. */
+    public InvoluteGear withTeeth(int z) {
+        return new InvoluteGear(z, normalModuleMm, normalPressureAngleRad, helixAngleRad, profileShift,
+                thicknessAllowanceMm, system);
+    }
+
+    /** True for a spur gear. */
+    public boolean isSpur() {
+        return helixAngleRad == 0.0;
+    }
+
+    /** Transverse module m_t = m_n / cos β, mm. ISO 21771 eq. (2). */
+    public double transverseModuleMm() {
+        return normalModuleMm / Math.cos(helixAngleRad);
+    }
+
+    /** Transverse pressure angle α_t, tan α_t = tan α_n / cos β, rad. ISO 21771 eq. (14). */
+    public double transversePressureAngleRad() {
+        return Math.atan(Math.tan(normalPressureAngleRad) / Math.cos(helixAngleRad));
+    }
+
+    /** Reference diameter d = z m_n / cos β, mm. ISO 21771 eq. (1). */
+    public double referenceDiameterMm() {
+        return teeth * transverseModuleMm();
+    }
+
+    /** Base diameter d_b = d cos α_t, mm. ISO 21771 eq. (13). */
+    public double baseDiameterMm() {
+        return referenceDiameterMm() * Math.cos(transversePressureAngleRad());
+    }
+
+    /** Base helix angle β_b, sin β_b = sin β cos α_n, rad. ISO 21771. */
+    public double baseHelixAngleRad() {
+        return Math.asin(Math.sin(helixAngleRad) * Math.cos(normalPressureAngleRad));
+    }
+
+    /** Addendum h_a = h_aP + x m_n (tip alteration k = 0), mm. ISO 21771 eq. (36). */
+    public double addendumMm() {
+        return system.addendumMm(normalModuleMm) + profileShift * normalModuleMm;
+    }
+
+    /**
+     * Dedendum as cut by the hob, h_f = h_aP0 − x_E m_n with h_aP0 = h_fP (standard hob), mm.
+     * ISO 21771 eq. (37); DOMAIN.md §1.2 note on hobbed gears. The hob makes the thickness allowance
+     * by cutting deeper: it sits at x_E ({@link #effectiveProfileShift()}), so a negative allowance
+     * deepens the root by |E_sn| / (2 tan α_n) (derived from s_n = m_n (π/2 + 2 x tan α_n)).
+     */
+    public double dedendumMm() {
+        return system.dedendumMm(normalModuleMm) - effectiveProfileShift() * normalModuleMm;
+    }
+
+    /** Tip diameter d_a = d + 2 (x m_n + h_aP), mm. ISO 21771 eq. (33), k = 0. */
+    public double tipDiameterMm() {
+        return referenceDiameterMm() + 2 * addendumMm();
+    }
+
+    /**
+     * Root diameter cut by the hob d_f = d − 2 (h_aP0 − x_E m_n), mm. ISO 21771 eq. (34), with the hob
+     * fed in to make the thickness allowance (see {@link #dedendumMm()}).
+     */
+    public double rootDiameterMm() {
+        return referenceDiameterMm() - 2 * dedendumMm();
+    }
+
+    /** Tooth depth h = h_a + h_f = (d_a − d_f) / 2, mm. ISO 21771 eq. (35). */
+    public double wholeDepthMm() {
+        return addendumMm() + dedendumMm();
+    }
+
+    /**
+     * Lead of the helix p_z = π d / tan β = π z m_n / sin β, mm; infinite for a spur gear.
+     * Sources: drivetrainhub notebooks-gears (helical_gears.py); zhygear article on differential
+     * change gears (DOMAIN.md S3, S11).
+     */
+    public double leadMm() {
+        return isSpur() ? Double.POSITIVE_INFINITY : Math.PI * referenceDiameterMm() / Math.tan(helixAngleRad);
+    }
+
+    /** Virtual number of teeth z_n = z / (cos² β_b cos β). ISO 21771. */
+    public double virtualTeeth() {
+        double cb = Math.cos(baseHelixAngleRad());
+        return teeth / (cb * cb * Math.cos(helixAngleRad));
+    }
+
+    /**
+     * Normal tooth thickness at the reference circle with allowance,
+     * s_n = m_n (π/2 + 2 x tan α_n) + E_sn, mm. ISO 21771; SDP/SI Elements of Metric Gear
+     * Technology, Table 10-1.
+     */
+    public double normalThicknessMm() {
+        return GearGeometry.normalThickness(normalModuleMm, normalPressureAngleRad, profileShift, thicknessAllowanceMm);
+    }
+
+    /** Transverse tooth thickness at the reference circle s_t = s_n / cos β, mm. */
+    public double transverseThicknessMm() {
+        return normalThicknessMm() / Math.cos(helixAngleRad);
+    }
+
+    /**
+     * The profile shift that gives the thinned tooth with no allowance:
+     * x_E = x + E_sn / (2 m_n tan α_n). Every inspection value is computed for x_E (DOMAIN.md §2.1).
+     */
+    public double effectiveProfileShift() {
+        return profileShift + thicknessAllowanceMm / (2 * normalModuleMm * Math.tan(normalPressureAngleRad));
+    }
+
+    /**
+     * Transverse tooth thickness at a diameter d_y, s_yt = d_y (s_t/d + inv α_t − inv α_yt),
+     * cos α_yt = d_b / d_y, mm (d_y at least d_b). ISO 21771; drivetrainhub notebooks-gears.
+     */
+    public double transverseThicknessAtMm(double dy) {
+        return GearGeometry.transverseThicknessAt(dy, referenceDiameterMm(), baseDiameterMm(), transverseThicknessMm(),
+                transversePressureAngleRad());
+    }
+
+    /**
+     * Normal tooth thickness at a diameter d_y, s_yn ≈ s_yt cos β_y with tan β_y = tan β · d_y / d, mm.
+     * The usual approximation (derived; DOMAIN.md §2.2).
+     */
+    public double normalThicknessAtMm(double dy) {
+        double betaY = Math.atan(Math.tan(helixAngleRad) * dy / referenceDiameterMm());
+        return transverseThicknessAtMm(dy) * Math.cos(betaY);
+    }
+
+    /**
+     * Root form diameter: where the involute generated by the straight flank of the hob begins.
+     *
+     * <pre>d_Ff = sqrt( d_b² + ( d sin α_t − 2 (h_s − x m_n) / sin α_t )² )</pre>
+     * with h_s the straight-flank height of the hob ({@link ToothSystem#straightFlankHeightMm}) and x
+     * taken as x_E, where the hob actually cuts.
+     * Derived from the generating geometry (the rack line at height h_s − x m_n below the rolling
+     * line meets the line of action at (h_s − x m_n)/sin α_t from the pitch point); the same form is
+     * in DIN 3960 (from memory). When the bracket is negative the gear is undercut and the base
+     * diameter is returned.
+     */
+    public double rootFormDiameterMm() {
+        double alphaT = transversePressureAngleRad();
+        double hs = system.straightFlankHeightMm(normalModuleMm, normalPressureAngleRad)
+                - effectiveProfileShift() * normalModuleMm;
+        double t = referenceDiameterMm() * Math.sin(alphaT) - 2 * hs / Math.sin(alphaT);
+        double db = baseDiameterMm();
+        return t <= 0 ? db : Math.sqrt(db * db + t * t);
+    }
+}

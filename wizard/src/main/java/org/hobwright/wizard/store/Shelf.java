@@ -1,0 +1,163 @@
+package org.hobwright.wizard.store;
+
+import java.io.IOException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.TreeMap;
+import java.util.function.Function;
+import java.util.function.Supplier;
+import java.util.stream.Stream;
+import org.hobwright.api.check.Finding;
+
+/**
+ * The files of the library folder over the built-in ones: find, list, save and remove entries
+ * by folder and name. Every name is checked before it touches the file system.
+ */
+final class Shelf {
+    private final Path home;
+    private final Builtins builtins;
+
+    Shelf(Path home, Builtins builtins) {
+        this.home = home;
+        this.builtins = builtins;
+    }
+
+    Path home() {
+        return home;
+    }
+
+    Builtins builtins() {
+        return builtins;
+    }
+
+    Path folder(String relative) {
+        return home.resolve(relative);
+    }
+
+    Path file(String folder, String name) {
+        return folder(folder).resolve(name + ".json");
+    }
+
+    Loaded<JsonDocument> document(String folder, String what, String name) {
+        return named(what, name, () -> {
+            Path saved = file(folder, name);
+            if (Files.exists(saved)) {
+                return JsonDocument.read(saved);
+            }
+            Optional<String> text = builtins.text(folder + "/" + name + ".json");
+            if (text.isPresent()) {
+                return JsonDocument.parse(text.get(), "built-in " + folder + "/" + name + ".json");
+            }
+            return Loaded.unreadable(notFound(folder, what, name));
+        });
+    }
+
+    Loaded<String> text(String folder, String what, String name) {
+        return named(what, name, () -> {
+            Path saved = file(folder, name);
+            if (Files.isRegularFile(saved)) {
+                return JsonDocument.read(saved).then(d -> {
+                    try {
+                        return Loaded.of(Files.readString(saved));
+                    } catch (IOException e) {
+                        return Loaded.unreadable(InputCode.INPUT_IO.finding("file", saved + ": cannot be read", null));
+                    }
+                });
+            }
+            return builtins.text(folder + "/" + name + ".json").map(Loaded::of)
+                    .orElseGet(() -> Loaded.unreadable(notFound(folder, what, name)));
+        });
+    }
+
+    /** Checks a name first: a bad name is unreadable input and nothing else is done. */
+    static <T> Loaded<T> named(String what, String name, Supplier<Loaded<T>> then) {
+        return Names.check(what, name).<Loaded<T>>map(Loaded::unreadable).orElseGet(then);
+    }
+
+    Finding notFound(String folder, String what, String name) {
+        return InputCode.LIBRARY_NOT_FOUND.finding(what, "no " + what + " \"" + name + "\" in " + folder(folder)
+                + " or among the built-in ones", "list them with the " + (what.equals("template") ? "templates"
+                : what + "s") + " list command, or save one first");
+    }
+
+    List<LibraryEntry> list(String folder, String machine, Function<JsonDocument, String> describe) {
+        TreeMap<String, LibraryEntry> out = new TreeMap<>();
+        for (String n : builtins.names(folder)) {
+            String desc = builtins.text(folder + "/" + n + ".json")
+                    .flatMap(t -> JsonDocument.parse(t, n).value()).map(describe).orElse("");
+            out.put(n, new LibraryEntry(n, machine, true, false, desc, "built-in"));
+        }
+        for (String n : savedNames(folder(folder))) {
+            Path p = file(folder, n);
+            String desc = JsonDocument.read(p).value().map(describe).orElse("");
+            out.put(n, new LibraryEntry(n, machine, false, out.containsKey(n), desc, p.toString()));
+        }
+        return List.copyOf(out.values());
+    }
+
+    private static List<String> savedNames(Path dir) {
+        if (!Files.isDirectory(dir)) {
+            return List.of();
+        }
+        try (Stream<Path> s = Files.list(dir)) {
+            return s.filter(Files::isRegularFile).map(p -> p.getFileName().toString())
+                    .filter(n -> n.endsWith(".json")).map(n -> n.substring(0, n.length() - 5))
+                    .filter(Names::valid).sorted().toList();
+        } catch (IOException e) {
+            return List.of();
+        }
+    }
+
+    static List<String> savedFolders(Path dir) {
+        if (!Files.isDirectory(dir)) {
+            return List.of();
+        }
+        try (Stream<Path> s = Files.list(dir)) {
+            return s.filter(Files::isDirectory).map(p -> p.getFileName().toString()).filter(Names::valid)
+                    .sorted().toList();
+        } catch (IOException e) {
+            return List.of();
+        }
+    }
+
+    Loaded<Path> save(String folder, String name, String what, String text, boolean force) {
+        return named(what, name, () -> {
+            Path target = file(folder, name);
+            try {
+                AtomicFiles.writeText(target, text, force);
+                return Loaded.of(target);
+            } catch (FileAlreadyExistsException e) {
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_EXISTS.finding(what,
+                        target + ": a saved " + what + " \""
+                        + name + "\" exists already", "add --force to replace it")));
+            } catch (IOException | RuntimeException e) {
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what,
+                        target + ": cannot be written ("
+                        + e.getClass().getSimpleName() + ": " + e.getMessage() + "); nothing was changed", null)));
+            }
+        });
+    }
+
+    Loaded<Path> remove(String folder, String what, String name) {
+        return named(what, name, () -> {
+            Path target = file(folder, name);
+            try {
+                if (Files.deleteIfExists(target)) {
+                    return Loaded.of(target);
+                }
+            } catch (IOException e) {
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what,
+                        target + ": cannot be removed ("
+                        + e.getMessage() + ")", null)));
+            }
+            if (builtins.text(folder + "/" + name + ".json").isPresent()) {
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_READ_ONLY.finding(what, "the " + what + " \"" + name
+                        + "\" is built in and cannot be removed", "save one of the same name to use instead of it")));
+            }
+            return Loaded.unreadable(notFound(folder, what, name));
+        });
+    }
+}
