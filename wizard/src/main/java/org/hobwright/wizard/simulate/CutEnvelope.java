@@ -18,7 +18,6 @@ final class CutEnvelope {
     private final int kLo;
     private final double[] cos;
     private final double[] sin;
-    private final double[] shift;
 
     /**
      * @param path      the nominal path (gives the rack, radii and the rolling range)
@@ -35,12 +34,10 @@ final class CutEnvelope {
         int n = kHi - kLo + 1;
         cos = new double[n];
         sin = new double[n];
-        shift = new double[n];
         for (int i = 0; i < n; i++) {
             double f = angle(kLo + i);
             cos[i] = Math.cos(f);
             sin[i] = Math.sin(f);
-            shift[i] = r * f;
         }
     }
 
@@ -60,43 +57,34 @@ final class CutEnvelope {
 
     /** Entry parameter of the gear-frame line p + t d into the rack tooth at position k (see {@link TransverseRack#entry}). */
     double entry(int k, double px, double py, double dx, double dy, int[] hit) {
-        int i = k - kLo;
-        double c;
-        double s;
-        double sh;
-        if (i >= 0 && i < cos.length) {
-            c = cos[i];
-            s = sin[i];
-            sh = shift[i];
-        } else {
-            double f = angle(k);
-            c = Math.cos(f);
-            s = Math.sin(f);
-            sh = r * f;
-        }
-        double rx = px * c - py * s + sh;
-        double ry = px * s + py * c - a;
-        double rdx = dx * c - dy * s;
-        double rdy = dx * s + dy * c;
-        return rack.entry(rx, ry, rdx, rdy, hit);
+        double c = cosOf(k);
+        double s = sinOf(k);
+        double sh = r * angle(k);
+        return rack.entry(px * c - py * s + sh, px * s + py * c - a, dx * c - dy * s, dx * s + dy * c, hit);
     }
 
     /** Depth of a gear-frame point inside the rack tooth at position k (positive inside), mm. */
     double depthInside(int k, double px, double py) {
-        return depthInside(k, new double[] {px}, new double[] {py});
+        return rack.depthInside(px * cosOf(k) - py * sinOf(k) + r * angle(k), px * sinOf(k) + py * cosOf(k) - a);
     }
 
     /** Deepest of the gear-frame points inside the rack tooth at position k (positive inside), mm. */
     double depthInside(int k, double[] px, double[] py) {
-        double f = angle(k);
-        double c = Math.cos(f);
-        double s = Math.sin(f);
-        double sh = r * f;
         double worst = Double.NEGATIVE_INFINITY;
         for (int j = 0; j < px.length; j++) {
-            worst = Math.max(worst, rack.depthInside(px[j] * c - py[j] * s + sh, px[j] * s + py[j] * c - a));
+            worst = Math.max(worst, depthInside(k, px[j], py[j]));
         }
         return worst;
+    }
+
+    private double cosOf(int k) {
+        int i = k - kLo;
+        return i >= 0 && i < cos.length ? cos[i] : Math.cos(angle(k));
+    }
+
+    private double sinOf(int k) {
+        int i = k - kLo;
+        return i >= 0 && i < sin.length ? sin[i] : Math.sin(angle(k));
     }
 
     /**

@@ -117,9 +117,13 @@ public final class GeneratingSimulation {
     public static ToothSpaceSimulation run(GeneratingSetup setup) {
         NominalPath path = new NominalPath(setup);
         FlankCut right = new FlankCut(path, setup.phase());
-        FlankCut left = new FlankCut(path, -setup.phase());
-        double undercutDepth = Math.max(UndercutCheck.depth(path, setup.phase()),
-                UndercutCheck.depth(path, -setup.phase()));
+        double undercutDepth = UndercutCheck.depth(path, setup.phase());
+        // the left flank is the mirror image cut at phase −p; with p a multiple of ½ that is the same cut
+        boolean symmetric = Math.rint(2 * setup.phase()) == 2 * setup.phase();
+        FlankCut left = symmetric ? right : new FlankCut(path, -setup.phase());
+        if (!symmetric) {
+            undercutDepth = Math.max(undercutDepth, UndercutCheck.depth(path, -setup.phase()));
+        }
         return new ToothSpaceSimulation(path, right, left, Math.max(0, undercutDepth));
     }
 }
