@@ -98,11 +98,12 @@ final class CutEnvelope {
      */
     double boundary(double px, double py, double dx, double dy, double phiHint, int[] out) {
         int[] hit = new int[1];
-        int kc = (int) Math.round(phiHint / step - phase);
+        int kc = (int) Math.floor(phiHint / step - phase);
         double best = Double.POSITIVE_INFINITY;
         int arg = kc;
         int feature = TransverseRack.Feature.NONE.ordinal();
-        for (int k = kc - 1; k <= kc + 1; k++) {
+        // the two positions on either side of the contact, then outward
+        for (int k = kc; k <= kc + 1; k++) {
             double t = entry(k, px, py, dx, dy, hit);
             if (t < best) {
                 best = t;
@@ -111,7 +112,7 @@ final class CutEnvelope {
             }
         }
         for (int dir = -1; dir <= 1; dir += 2) {
-            int k = kc + 2 * dir;
+            int k = dir < 0 ? kc - 1 : kc + 2;
             int worse = 0;
             while (worse < 1) {
                 double t = entry(k, px, py, dx, dy, hit);

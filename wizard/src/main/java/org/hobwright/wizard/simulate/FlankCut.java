@@ -70,8 +70,8 @@ final class FlankCut {
         for (int k = env.firstPosition(); k <= env.lastPosition(); k++) {
             flankLine(env.angle(k), e);
             double rr = Math.hypot(e[0], e[1]);
-            if (rr > path.setup.tipRadiusMm() || !(path.excess(e[0], e[1]) >= -UndercutCheck.TOLERANCE_MM)
-                    || rr <= best) {
+            if (rr <= best || rr > path.setup.tipRadiusMm()
+                    || !(path.excess(e[0], e[1]) >= -UndercutCheck.TOLERANCE_MM)) {
                 continue;
             }
             boolean covered = false;

@@ -20,7 +20,7 @@ final class NominalPath {
     static final byte ROOT = 0;
     static final byte FILLET = 1;
     static final byte FLANK = 2;
-    private static final int TABLE = 32;
+    private static final int TABLE = 16;
 
     final GeneratingSetup setup;
     final TransverseRack rack;
