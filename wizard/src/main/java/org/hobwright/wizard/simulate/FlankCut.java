@@ -19,8 +19,6 @@ final class FlankCut {
     /** The boundary point: nominal point + excess · normal. */
     final double[] bx;
     final double[] by;
-    /** Which rack feature cut each boundary point (ordinal of {@link TransverseRack.Feature}). */
-    final int[] feature;
     /** Cusps on the involute: roll length and height, mm, in roll order. */
     final List<double[]> cusps;
     /** Radius of the start of the active involute, mm ({@link #activeStart}). */
@@ -33,7 +31,6 @@ final class FlankCut {
         excess = new double[n];
         bx = new double[n];
         by = new double[n];
-        feature = new int[n];
         int[] arg = new int[n];
         int[] out = new int[2];
         for (int i = 0; i < n; i++) {
@@ -44,7 +41,6 @@ final class FlankCut {
             excess[i] = t;
             bx[i] = path.x[i] + t * path.nx[i];
             by[i] = path.y[i] + t * path.ny[i];
-            feature[i] = out[1];
             arg[i] = out[0];
         }
         cusps = new ArrayList<>();
