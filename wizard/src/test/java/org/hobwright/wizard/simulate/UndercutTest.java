@@ -6,12 +6,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.SplittableRandom;
+import org.hobwright.api.job.GearSpec;
+import org.hobwright.wizard.geometry.InvoluteGear;
 import org.hobwright.wizard.geometry.ToothSystem;
+import org.hobwright.wizard.geometry.Undercut;
 import org.junit.jupiter.api.Test;
 
 /**
  * The simulation's undercut (some cut reaches inside the true involute) against the engineering
- * rule for rack generation, DOMAIN.md §2.3 (source S3, numbers S9):
+ * rule for rack generation, DOMAIN.md §2.3 (source S3, numbers S9), which the engineering core's
+ * undercut check ({@link Undercut}) also applies:
  * x_min = h* − z sin² α_t / (2 cos β), h* = h_aP0* − ρ_aP0* (1 − sin α_n) the height of the
  * tool's straight flank below the datum line.
  */
@@ -68,6 +72,10 @@ class UndercutTest {
             double x = below ? xMin - margin : xMin + margin;
             GeneratingSetup s = Jobs.setup(teeth, 1.5, helix, x, system, 1, 400)
                     .withHob(1, 400, random.nextDouble());
+            // the engineering core's undercut check uses the same limit
+            GearSpec g = Jobs.gear(teeth, 1.5, helix, x, system);
+            InvoluteGear ig = InvoluteGear.of(g, ToothSystem.of(g).orElseThrow());
+            assertEquals(xMin, Undercut.minProfileShift(Undercut.hStar(ig), ig), 1e-9, "engineering check's limit");
             ToothSpaceSimulation sim = GeneratingSimulation.run(s);
             assertEquals(below, sim.undercut(), String.format(java.util.Locale.ROOT,
                     "z %d, %s, beta %.2f, x %.4f (limit %.4f): depth %.3g mm", teeth, system, helix, x, xMin,
