@@ -145,4 +145,29 @@ class GeneratingSimulationTest {
         assertEquals(closed, data.envelopingDepthMm(), 0.1 * closed);
         assertFalse(data.undercut());
     }
+
+    /**
+     * The root form circle from the simulated rack (where its tip rounding meets the straight flank,
+     * found as a support point of the transverse ellipse) equals the engineering core's
+     * {@code InvoluteGear.rootFormDiameterMm} (DIN 3960 form from the straight-flank height,
+     * derived there). Fixed-seed loop over gears, tooth systems, helix angles and shifts.
+     */
+    @Test
+    void rootFormCircleAgreesWithTheEngineeringCore() {
+        java.util.SplittableRandom random = new java.util.SplittableRandom(3L);
+        List<String> systems = List.of("iso53-a", "iso53-b", "iso53-c", "iso53-d", "agma-coarse", "full-depth-14.5");
+        for (int n = 0; n < 60; n++) {
+            String system = systems.get(random.nextInt(systems.size()));
+            GearSpec g = new GearSpec("t", 10 + random.nextInt(80), new Pitch.Module(0.5 + 4 * random.nextDouble()),
+                    system.equals("full-depth-14.5") ? 14.5 : 20, random.nextBoolean() ? 0 : 35 * random.nextDouble(),
+                    org.hobwright.api.job.Hand.LEFT, 10, -0.5 + random.nextDouble(), -0.04 * random.nextDouble(), system,
+                    Optional.empty(), OptionalDouble.empty(), OptionalDouble.empty(), OptionalInt.empty(),
+                    org.hobwright.api.job.DrawingValues.NONE);
+            ToothSystem ts = ToothSystem.of(g).orElseThrow();
+            ToothSpaceSimulation sim = GeneratingSimulation.run(GeneratingSimulation.setupOf(Jobs.job(g, 1, 12),
+                    GearGeometry.of(g, ts), 0.05));
+            double engineering = org.hobwright.wizard.geometry.InvoluteGear.of(g, ts).rootFormDiameterMm();
+            assertEquals(engineering, sim.rootFormDiameterMm(), 1e-9 * engineering, g.teeth() + " teeth, " + system);
+        }
+    }
 }
