@@ -1,5 +1,7 @@
 package org.hobwright.wizard.plan;
 
+import org.hobwright.wizard.simulate.EnvelopingDepth;
+
 /**
  * Predicted finish and chip load of hobbing.
  *
@@ -7,8 +9,10 @@ package org.hobwright.wizard.plan;
  * feed mark, flank   δ_x = f_a² · sin α_n / (4 d_a0 cos² β)        (DOMAIN §6.1: spur form as commonly published,
  *                                                                   from memory; the 1/cos² β factor derived)
  * feed mark, root    δ_root = f_a² / (4 d_a0 cos² β)               (DOMAIN §6.1: sagitta geometry, derived)
- * enveloping depth   δ_y = π² z₀² m_n sin α_n cos³ β / (4 z₂ i²)   (DOMAIN §6.2, derived; matches the
- *                                                                   hob-maker handbook form from memory)
+ * enveloping depth   δ_y = π² z₀² m_n sin α_n / (4 z₂ i² cos β)    (DOMAIN §6.2, derived; spur form matches the
+ *                                                                   hob-maker handbook form from memory; the
+ *                                                                   1/cos β factor settled by the generating
+ *                                                                   simulation, see EnvelopingDepth)
  * Hoffmeister        h_max = 4.9 m_n z₂^(9.25·10⁻³ β^1.25 − 0.542) e^(−0.015 β) e^(−0.015 x)
  *                          (r_a0/m_n)^(−8.25·10⁻³ β − 0.225) i^(−0.877) (f_a/m_n)^0.511 (T/m_n)^0.319
  *                    B. Hoffmeister, Über den Verschleiß am Wälzfräser, dissertation, RWTH Aachen, 1970
@@ -45,12 +49,11 @@ public final class FinishFormulas {
                 / Math.sin(Math.toRadians(pressureAngleDeg)));
     }
 
-    /** Enveloping-cut depth δ_y = π² z₀² m_n sin α_n cos³ β / (4 z₂ i²), µm. */
+    /** Enveloping-cut depth δ_y = π² z₀² m_n sin α_n / (4 z₂ i² cos β), normal to the flank, µm ({@link EnvelopingDepth}). */
     public static double envelopingDepthUm(double moduleMm, int teeth, int starts, int gashes,
                                            double pressureAngleDeg, double helixAngleDeg) {
-        double cosB = Math.cos(Math.toRadians(helixAngleDeg));
-        return 1000.0 * Math.PI * Math.PI * starts * starts * moduleMm * Math.sin(Math.toRadians(pressureAngleDeg))
-                * cosB * cosB * cosB / (4.0 * teeth * gashes * gashes);
+        return 1000.0 * EnvelopingDepth.closedFormMm(moduleMm, teeth, starts, gashes,
+                Math.toRadians(pressureAngleDeg), Math.toRadians(helixAngleDeg));
     }
 
     /**

@@ -17,6 +17,7 @@ import org.hobwright.api.job.MachineProfile;
 import org.hobwright.wizard.analysis.JobAnalysis;
 import org.hobwright.wizard.setup.Angles;
 import org.hobwright.wizard.setup.HobSetup;
+import org.hobwright.wizard.simulate.GeneratingSimulation;
 
 /**
  * Plans one analysed job: checks what would stop the cycle, resolves speeds, passes and feeds,
@@ -100,8 +101,8 @@ final class JobPlanning {
                 prediction.envelopingUm(), prediction.maxChipMm(), fastest);
         boolean errors = Finding.anyError(findings);
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.of(setup),
-                errors ? List.of() : path.steps(), Optional.of(summary), Optional.empty(),
-                DefaultCyclePlanner.sorted(findings));
+                errors ? List.of() : path.steps(), Optional.of(summary),
+                GeneratingSimulation.forCycle(job, gd, findings), DefaultCyclePlanner.sorted(findings));
     }
 
     private Drive drive(SyncRatio ratio) {
