@@ -1,0 +1,21 @@
+package org.hobwright.wizard.cli;
+
+import java.nio.file.Path;
+import java.util.Optional;
+import picocli.CommandLine.Option;
+
+/** The output options of {@code wizard}, {@code demo} and {@code plan}. */
+final class OutputOptions {
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "Output folder (default: " + PlanRequest.DEFAULT_OUT + "; for plan --json, none unless given).")
+    Path out;
+
+    @Option(names = "--date", paramLabel = "YYYY-MM-DD",
+            description = "Date printed in the outputs (default: $SOURCE_DATE_EPOCH, else today).")
+    String date;
+
+    /** The folder given, or the default one. */
+    Path folder() {
+        return Optional.ofNullable(out).orElse(Path.of(PlanRequest.DEFAULT_OUT));
+    }
+}

@@ -1,0 +1,113 @@
+package org.hobwright.wizard.cli;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.spi.CycleWriter;
+import org.hobwright.api.spi.OutputFile;
+import org.hobwright.api.spi.Providers;
+import org.hobwright.api.spi.WriteContext;
+import org.hobwright.api.spi.WriteResult;
+
+/**
+ * Runs the writers found through the SPI (NC program, cycle CSV, setup sheet, report, and any a
+ * host adds) over planned jobs and collects their files; nothing touches the disk here.
+ */
+final class Outputs {
+    /** Id of the report writer, whose text {@code plan --json} prints. */
+    static final String REPORT = "report";
+
+    /**
+     * Resource the report writer reads: {@code true} asks for the report also of a cycle with
+     * errors, with its findings and without the parts that could not be computed.
+     */
+    static final String REPORT_WITH_ERRORS = "report.withErrors";
+
+    private final Store store;
+    private final String generatedOn;
+    private final CompletableFuture<Providers.Loaded<CycleWriter>> lookup;
+
+    /**
+     * The files and the findings of the writers for some jobs.
+     *
+     * @param files    file name → text, in the order written
+     * @param findings the writers' findings (an error means nothing may be written)
+     */
+    record Produced(Map<String, String> files, List<Finding> findings) {
+        boolean refused() {
+            return Finding.anyError(findings);
+        }
+    }
+
+    /** Starts looking the writers up at once, beside whatever the caller does next. */
+    Outputs(Store store, ClassLoader loader, String generatedOn) {
+        this.store = store;
+        this.generatedOn = generatedOn;
+        this.lookup = CompletableFuture.supplyAsync(() -> Providers.writers(loader));
+    }
+
+    /** Every writer's files for every job; a file name written twice is an error. */
+    Produced produce(List<JobInput> jobs) {
+        Map<String, String> files = new LinkedHashMap<>();
+        List<Finding> findings = new ArrayList<>(lookupProblems());
+        if (writers().isEmpty()) {
+            findings.add(Finding.error("OUTPUT_NO_WRITERS", "job", "no output writer was found",
+                    "put hobwright-post on the class path", "Hobwright SPI"));
+        }
+        Map<String, String> owner = new HashMap<>();
+        for (JobInput in : jobs) {
+            HobJob job = in.job().orElseThrow();
+            HobCycle cycle = in.cycle().orElseThrow();
+            WriteContext context = context(job);
+            // the writers are independent: run them side by side, keep their order
+            for (WriteResult r : writers().parallelStream().map(w -> w.write(cycle, context)).toList()) {
+                findings.addAll(r.findings());
+                for (OutputFile f : r.files()) {
+                    String before = owner.putIfAbsent(f.fileName(), in.source());
+                    if (before != null) {
+                        findings.add(Finding.error("OUTPUT_NAME_TWICE", "name", "jobs " + before + " and "
+                                + in.source() + " both write " + f.fileName(), "give the jobs different names",
+                                "common practice, no source"));
+                    }
+                    files.put(f.fileName(), f.text());
+                }
+            }
+        }
+        return new Produced(files, findings);
+    }
+
+    /** The report writer's text for one job, if a report writer is present and does not refuse. */
+    Optional<String> report(HobJob job, HobCycle cycle) {
+        WriteContext base = context(job);
+        Map<String, String> resources = new HashMap<>(base.resources());
+        resources.put(REPORT_WITH_ERRORS, "true");
+        WriteContext context = new WriteContext(job, base.generatedOn(), base.toolVersion(), resources);
+        return writers().stream().filter(w -> w.id().equals(REPORT)).findFirst()
+                .map(w -> w.write(cycle, context))
+                .filter(r -> !r.files().isEmpty())
+                .map(r -> r.files().get(0).text());
+    }
+
+    private WriteContext context(HobJob job) {
+        String dialect = job.machine().dialect();
+        Map<String, String> resources = new HashMap<>();
+        resources.put(WriteContext.DIALECT_NAME, dialect);
+        store.dialectText(dialect).ifPresent(t -> resources.put(WriteContext.DIALECT, t));
+        return new WriteContext(job, generatedOn, ToolVersion.VERSION, resources);
+    }
+
+    private List<Finding> lookupProblems() {
+        return lookup.join().problems();
+    }
+
+    private List<CycleWriter> writers() {
+        return lookup.join().providers();
+    }
+}

@@ -1,0 +1,197 @@
+package org.hobwright.wizard.cli;
+
+import java.util.List;
+import java.util.Optional;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.Severity;
+import org.hobwright.api.wizard.FieldSpec;
+import org.hobwright.api.wizard.FieldType;
+import org.hobwright.api.wizard.StepId;
+import org.hobwright.api.wizard.StepView;
+import org.hobwright.api.wizard.Transition;
+import org.hobwright.api.wizard.Wizard;
+import org.hobwright.wizard.steps.FieldCheck;
+
+/**
+ * Walks a {@link Wizard} field by field on a terminal or piped input. Enter takes the value shown
+ * in brackets, {@code ?} prints the field's help, {@code -} clears an optional value, {@code back}
+ * returns to the previous field (or step); a bad answer is asked again with the reason.
+ */
+final class TerminalWizard {
+    /** What to do at REVIEW once the job is planned without errors. */
+    interface Finish {
+        /**
+         * Offers to write the outputs and to save a template.
+         *
+         * @return true when done, false to go back a step
+         */
+        boolean offer(Wizard wizard, Prompter prompter);
+    }
+
+    private static final int STEPS = StepId.values().length;
+
+    private final Wizard wizard;
+    private final Prompter prompter;
+    /** The fields to ask again after a blocked step; empty asks the whole step. */
+    private List<String> focus = List.of();
+
+    TerminalWizard(Wizard wizard, Prompter prompter) {
+        this.wizard = wizard;
+        this.prompter = prompter;
+    }
+
+    /**
+     * Runs the walk-through to REVIEW and then hands over to {@code finish}.
+     *
+     * @return the exit code: 0 done, 1 the job has errors
+     * @throws CliFailure (exit 2) when the input ends before the walk-through does
+     */
+    int run(Finish finish) {
+        while (true) {
+            StepView view = wizard.view();
+            if (view.id() == StepId.REVIEW) {
+                if (review(view, finish)) {
+                    return wizard.cycle().filter(c -> !c.hasErrors()).isPresent()
+                            ? ExitCodes.OK : ExitCodes.JOB_ERRORS;
+                }
+                continue;
+            }
+            if (focus.isEmpty()) {
+                prompter.say("");
+                prompter.say("Step " + (view.id().ordinal() + 1) + " of " + STEPS + ": " + view.title());
+            }
+            List<FieldSpec> fields = view.fields().stream()
+                    .filter(f -> focus.isEmpty() || focus.contains(f.key())).toList();
+            boolean subset = !focus.isEmpty();
+            focus = List.of();
+            if (askFields(fields, subset)) {
+                complete(view);
+            }
+        }
+    }
+
+    /**
+     * Asks the fields; false when the user went back: to the whole step from a subset, else to the
+     * previous step.
+     */
+    private boolean askFields(List<FieldSpec> fields, boolean subset) {
+        int i = 0;
+        while (i < fields.size()) {
+            FieldSpec f = fields.get(i);
+            String line = read(prompt(f, wizard.value(f.key())));
+            if (line.equals("?")) {
+                help(f);
+            } else if (line.equalsIgnoreCase("back")) {
+                if (i > 0) {
+                    i--;
+                } else if (subset || goBack()) {
+                    return false;
+                }
+            } else {
+                String text = line.isEmpty() ? wizard.value(f.key()) : line.equals("-") ? "" : line;
+                List<Finding> problems = wizard.answer(f.key(), text);
+                if (problems.isEmpty()) {
+                    i++;
+                } else {
+                    problems.forEach(p -> prompter.say("  ! " + p.message() + p.fix().map(x -> "; " + x).orElse("")));
+                }
+            }
+        }
+        return true;
+    }
+
+    /**
+     * Completes the step; on warnings asks whether to accept them. When the step stays, the
+     * questions the findings name are asked again (the whole step when they name none of them).
+     */
+    private void complete(StepView view) {
+        Transition t = wizard.next(false);
+        if (t.moved()) {
+            return;
+        }
+        t.findings().forEach(f -> prompter.say("  " + f.line()));
+        boolean errors = Finding.anyError(t.findings());
+        if (!errors && t.findings().stream().anyMatch(f -> f.severity() == Severity.WARNING)
+                && yes(read("  Accept these warnings and go on? [yes] > "), true)) {
+            wizard.next(true);
+            return;
+        }
+        focus = view.fields().stream().map(FieldSpec::key)
+                .filter(k -> t.findings().stream().anyMatch(f -> f.field().equals(k) || f.field().startsWith(k + ".")
+                        || k.startsWith(f.field() + ".")))
+                .toList();
+        prompter.say(focus.isEmpty() ? "  Please correct the step; it is asked again (Enter keeps a value)."
+                : "  Please correct " + String.join(", ", focus) + " ('back' for the whole step).");
+    }
+
+    private boolean review(StepView view, Finish finish) {
+        prompter.say("");
+        prompter.say("Step " + STEPS + " of " + STEPS + ": " + view.title());
+        view.summary().forEach(prompter::say);
+        if (view.findings().isEmpty()) {
+            prompter.say("No open findings.");
+        } else {
+            prompter.say("Open findings:");
+            view.findings().forEach(f -> prompter.say("  " + f.line()));
+        }
+        if (wizard.cycle().filter(c -> !c.hasErrors()).isEmpty()) {
+            prompter.say("The job has errors; nothing can be written.");
+            String line = read("  Go back and correct it? [yes] > ");
+            if (yes(line, true)) {
+                wizard.back();
+                return false;
+            }
+            return true;
+        }
+        if (finish.offer(wizard, prompter)) {
+            return true;
+        }
+        wizard.back();
+        return false;
+    }
+
+    private boolean goBack() {
+        Transition t = wizard.back();
+        if (!t.moved()) {
+            prompter.say("  This is the first step.");
+        }
+        return t.moved();
+    }
+
+    private void help(FieldSpec f) {
+        prompter.say("  " + f.help());
+        if (!f.choices().isEmpty()) {
+            prompter.say("  Choices: " + String.join(", ", f.choices()));
+        }
+        f.min().ifPresent(min -> prompter.say("  Smallest: " + FieldCheck.plain(min) + (f.max().isPresent()
+                ? ", largest: " + FieldCheck.plain(f.max().getAsDouble()) : "")));
+        if (f.type() == FieldType.ANGLE) {
+            prompter.say("  Angles: decimal degrees (13.2368) or degrees-minutes-seconds (13°14'12\" or 13 14 12).");
+        }
+        prompter.say("  Enter keeps the value in brackets" + (f.required() ? "" : ", '-' clears it")
+                + ", 'back' returns to the previous question.");
+    }
+
+    private static String prompt(FieldSpec f, String current) {
+        StringBuilder sb = new StringBuilder("  ").append(f.label());
+        if (!f.unit().isEmpty()) {
+            sb.append(" (").append(f.unit()).append(')');
+        }
+        if (f.type() == FieldType.CHOICE && !f.choices().isEmpty() && f.choices().size() <= 8) {
+            sb.append(" {").append(String.join("|", f.choices())).append('}');
+        }
+        return sb.append(" [").append(current).append("] > ").toString();
+    }
+
+    /** Reads one answer. */
+    String read(String prompt) {
+        Optional<String> line = prompter.ask(prompt);
+        return line.orElseThrow(() -> CliFailure.usage("the input ended before the wizard was finished"));
+    }
+
+    /** Reads yes or no, with a default for Enter. */
+    static boolean yes(String line, boolean dflt) {
+        String l = line.strip().toLowerCase(java.util.Locale.ROOT);
+        return l.isEmpty() ? dflt : l.startsWith("y");
+    }
+}

@@ -1,0 +1,52 @@
+package org.hobwright.wizard.plan;
+
+import java.util.List;
+import java.util.Locale;
+import org.hobwright.api.check.Finding;
+
+/**
+ * The predicted finish and chip load of a plan (formulas in {@link FinishFormulas}), and the
+ * findings where they exceed the targets.
+ *
+ * @param feedMarkFlankUm flank feed mark of the finishing pass, µm
+ * @param feedMarkRootUm  root feed mark of the finishing pass, µm
+ * @param envelopingUm    enveloping-cut depth, µm
+ * @param maxChipMm       largest Hoffmeister chip thickness over the passes, mm
+ */
+public record Prediction(double feedMarkFlankUm, double feedMarkRootUm, double envelopingUm, double maxChipMm) {
+
+    /** Predicts a plan. */
+    public static Prediction of(CutModel model, PlanSettings s) {
+        double f = s.finishFeedMmPerRev();
+        return new Prediction(model.feedMarkFlankUm(f), model.feedMarkRootUm(f), model.envelopingUm(),
+                model.maxChipMm(s));
+    }
+
+    /** Adds a finding for every target this prediction exceeds. */
+    public void check(Targets t, CutModel model, List<Finding> findings) {
+        if (feedMarkFlankUm > t.feedMarkUm() * (1 + 1e-9)) {
+            findings.add(Finding.warning(PlanCodes.FEED_MARK_OVER_TARGET, "cycle.finishFeed", String.format(Locale.ROOT,
+                    "predicted flank feed marks %.2f µm exceed the %.2f µm target (%s)", feedMarkFlankUm,
+                    t.feedMarkUm(), t.feedMarkSource()), String.format(Locale.ROOT,
+                    "finish at %.3f mm per work revolution or less",
+                    Math.floor(model.feedForFeedMark(t.feedMarkUm()) * 1000) / 1000),
+                    "feed-mark depth, DOMAIN §6.1 (derived for helical gears)"));
+        }
+        if (envelopingUm > t.envelopingUm() * (1 + 1e-9)) {
+            findings.add(Finding.warning(PlanCodes.ENVELOPING_OVER_TARGET, "hob.gashes", String.format(Locale.ROOT,
+                    "predicted enveloping flats %.2f µm exceed the %.2f µm target (%s)", envelopingUm,
+                    t.envelopingUm(), t.envelopingSource()),
+                    "use a hob with more gashes or fewer starts", "enveloping depth, DOMAIN §6.2 (derived)"));
+        }
+        if (t.hasChipLimit() && maxChipMm > t.chipMm() * (1 + 1e-9)) {
+            findings.add(Finding.warning(PlanCodes.CHIP_OVER_LIMIT, "cycle.roughFeed", String.format(Locale.ROOT,
+                    "predicted chip thickness %.4f mm exceeds the %.4f mm limit (%s)", maxChipMm, t.chipMm(),
+                    t.chipSource()), "lower the feed or take more passes (cycle.roughDepth)",
+                    "Hoffmeister 1970 (exponents from memory)"));
+        } else if (!t.hasChipLimit()) {
+            findings.add(Finding.info(PlanCodes.CHIP_LIMIT_UNKNOWN, "cycle.targets.maxChipThickness",
+                    "no chip-thickness limit is known for this material and hob, so chip load is not checked",
+                    PlanCodes.TABLE));
+        }
+    }
+}

@@ -1,0 +1,102 @@
+package org.hobwright.wizard.plan;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.hobwright.api.cycle.CycleStep;
+import org.hobwright.api.cycle.PassSummary;
+
+/**
+ * Builds the ordered steps of a cycle.
+ *
+ * <pre>
+ * header steps (comments, swivel, hob shift)
+ * sync on → settle dwell → coolant on
+ * per pass k (depth h_k, feed f_k, approach E_k, overrun U_k, clearances c_ax and c_r):
+ *   rapid to start          (retract diameter, −(E_k + c_ax))
+ *   rapid in air            (pass diameter + 2 c_r, same axial position)
+ *   radial infeed in air    feed to the pass diameter
+ *   axial feed              to b + U_k + c_ax (approach + face + overrun), cutting
+ *   retract                 rapid to the retract diameter
+ *   return                  rapid back to −(E_k + c_ax)
+ * coolant off → sync off → spindles stop
+ * </pre>
+ * Times: a feed of length L takes 60 L / (f n₂) s; a rapid moves both axes together at the rapid
+ * rate, 60 max(|Δr|, |Δz|) / v_rapid s (common practice, no source); the first rapid starts from the
+ * safe diameter at the first start position; the settle dwell is the machine's; other steps take
+ * no time in this estimate.
+ */
+public final class ToolpathBuilder {
+    private ToolpathBuilder() {
+    }
+
+    /**
+     * Builds the steps.
+     *
+     * @param g        the fixed geometry
+     * @param drive    ratio, senses and differential
+     * @param s        speeds, feeds and passes
+     * @param header   steps before the synchronisation (comments, swivel, hob shift)
+     * @param coolant  true to switch coolant on for the cut
+     */
+    public static Toolpath build(CycleGeometry g, Drive drive, PlanSettings s, List<CycleStep> header,
+                                 boolean coolant) {
+        double workRpm = drive.workRpm(s.hobRpm());
+        List<CycleStep> steps = new ArrayList<>(header.size() + 8 + 6 * s.passes().count());
+        steps.addAll(header);
+        steps.add(new CycleStep.SyncOn(drive.ratio().hobTurns(), drive.ratio().workTurns(), s.hobRpm(), workRpm,
+                drive.senses().hob(), drive.senses().work(), drive.differentialDegPerMm(), 0));
+        steps.add(new CycleStep.Dwell(g.syncSettleS()));
+        if (coolant) {
+            steps.add(new CycleStep.Coolant(true));
+        }
+        double retract = g.retractDiameterMm();
+        double dia = g.safeDiameterMm();
+        double ax = Double.NaN;
+        List<PassSummary> passes = new ArrayList<>(s.passes().count());
+        for (int i = 0; i < s.passes().count(); i++) {
+            int pass = i + 1;
+            double depth = s.passes().depth(i);
+            double feed = s.feed(i);
+            double approach = g.approachMm(depth);
+            double overrun = g.overrunMm(depth);
+            double start = -(approach + g.axialClearanceMm());
+            double end = g.faceWidthMm() + overrun + g.axialClearanceMm();
+            double passDia = g.touchOffDiameterMm() - 2 * depth;
+            if (Double.isNaN(ax)) {
+                ax = start;
+            }
+            double t0 = sum(steps);
+            steps.add(rapid(g, pass, dia, ax, retract, start));
+            steps.add(rapid(g, pass, retract, start, passDia + 2 * g.radialClearanceMm(), start));
+            steps.add(new CycleStep.Feed(pass, passDia, start, feed, false,
+                    Kinematics.feedSeconds(g.radialClearanceMm(), feed, workRpm)));
+            steps.add(new CycleStep.Feed(pass, passDia, end, feed, true,
+                    Kinematics.feedSeconds(end - start, feed, workRpm)));
+            steps.add(rapid(g, pass, passDia, end, retract, end));
+            steps.add(rapid(g, pass, retract, end, retract, start));
+            dia = retract;
+            ax = start;
+            passes.add(new PassSummary(pass, passDia, depth, feed, approach, overrun, end - start, sum(steps) - t0));
+        }
+        if (coolant) {
+            steps.add(new CycleStep.Coolant(false));
+        }
+        steps.add(new CycleStep.SyncOff(0));
+        steps.add(new CycleStep.SpindlesStop(0));
+        return new Toolpath(steps, passes, sum(steps));
+    }
+
+    private static CycleStep.Rapid rapid(CycleGeometry g, int pass, double fromDia, double fromAx, double toDia,
+                                         double toAx) {
+        double move = Math.max(Math.abs(fromDia - toDia) / 2, Math.abs(fromAx - toAx));
+        return new CycleStep.Rapid(pass, toDia, toAx, 60.0 * move / g.rapidMmPerMin());
+    }
+
+    private static double sum(List<CycleStep> steps) {
+        double t = 0;
+        for (CycleStep step : steps) {
+            t += step.seconds();
+        }
+        return t;
+    }
+}

@@ -1,0 +1,76 @@
+package org.hobwright.wizard.steps;
+
+import java.util.List;
+import java.util.Optional;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.spi.CyclePlanner;
+import org.hobwright.api.spi.ProviderMissingException;
+import org.hobwright.api.spi.Providers;
+import org.hobwright.wizard.analysis.JobAnalyser;
+import org.hobwright.wizard.store.JobReader;
+import org.hobwright.wizard.store.Library;
+import org.hobwright.wizard.store.LibraryEntry;
+import org.hobwright.wizard.store.Loaded;
+import tools.jackson.databind.node.ObjectNode;
+
+/**
+ * The step model's services on a real library: the store's job reader, the engineering checks
+ * ({@link JobAnalyser}) and the planner found through the SPI (looked up once, when first needed).
+ */
+public final class LibraryServices implements StepServices {
+    /** Name of the answers in the reader's messages. */
+    static final String SOURCE = "wizard answers";
+
+    private final Library library;
+    private final JobReader reader;
+    private final ClassLoader loader;
+    private CyclePlanner planner;
+
+    /**
+     * @param library the machine and template library
+     * @param loader  the class loader the planner is found with
+     */
+    public LibraryServices(Library library, ClassLoader loader) {
+        this.library = library;
+        this.reader = new JobReader(library);
+        this.loader = loader;
+    }
+
+    @Override
+    public JobRead read(ObjectNode tree) {
+        Loaded<HobJob> loaded = reader.read(tree, SOURCE);
+        return new JobRead(loaded.value(), loaded.findings());
+    }
+
+    @Override
+    public List<Finding> check(HobJob job) {
+        return JobAnalyser.analyse(job).findings();
+    }
+
+    @Override
+    public HobCycle plan(HobJob job) {
+        try {
+            if (planner == null) {
+                planner = Providers.planner(loader);
+            }
+            return planner.plan(job);
+        } catch (ProviderMissingException e) {
+            return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(),
+                    Optional.empty(), List.of(), Optional.empty(), Optional.empty(),
+                    List.of(Finding.error("WIZARD_NO_PLANNER", "job", e.getMessage(),
+                            "put hobwright-wizard on the class path", "Hobwright SPI")));
+        }
+    }
+
+    @Override
+    public List<String> machines() {
+        return library.machines().stream().map(LibraryEntry::name).toList();
+    }
+
+    @Override
+    public List<String> templates(String machine) {
+        return library.templates(machine).stream().map(LibraryEntry::name).toList();
+    }
+}

@@ -1,0 +1,191 @@
+package org.hobwright.wizard.steps;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.Severity;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.Units;
+import org.hobwright.api.wizard.FieldSpec;
+import org.hobwright.api.wizard.FieldType;
+import org.hobwright.api.wizard.StepId;
+import org.hobwright.api.wizard.StepView;
+import org.hobwright.api.wizard.Transition;
+import org.hobwright.api.wizard.Wizard;
+
+/**
+ * One wizard session over the steps GEAR → CUTTER → MACHINE → CYCLE → REVIEW.
+ *
+ * <p>Each answer is checked at once ({@link FieldCheck}). Completing a step checks its fields
+ * again, then builds the job tree from every answer, reads it and runs the job checks, and keeps
+ * the findings whose field belongs to this step: errors block, warnings block unless accepted.
+ * Going back keeps every answer; each step is checked afresh whenever it is completed. A field's
+ * {@link FieldSpec#defaultValue()} is its current answer, which starts as the default of the
+ * sample or of the given job. Nothing here prints.
+ */
+public final class StepSession implements Wizard {
+    private static final StepId[] ORDER = StepId.values();
+
+    private final StepServices services;
+    private final Answers answers;
+    private int index;
+    private List<Finding> shown = List.of();
+    private Optional<HobJob> job = Optional.empty();
+    private Optional<HobCycle> cycle = Optional.empty();
+    private List<Finding> review = List.of();
+
+    /**
+     * Starts a session on GEAR.
+     *
+     * @param services the reader, checks, planner and library names
+     * @param defaults the answers to start from
+     */
+    public StepSession(StepServices services, Answers defaults) {
+        this.services = services;
+        this.answers = defaults;
+    }
+
+    /** The step the session is on. */
+    public StepId current() {
+        return ORDER[index];
+    }
+
+    /** The answers so far (for saving them as a template). */
+    public Answers answers() {
+        return answers;
+    }
+
+    @Override
+    public StepView view() {
+        StepId id = current();
+        if (id == StepId.REVIEW) {
+            List<String> summary = cycle.map(c -> ReviewLines.of(c, units())).orElse(List.of());
+            return new StepView(id, Fields.title(id), List.of(), review, summary);
+        }
+        List<FieldSpec> specs = Fields.of(id).stream().map(this::spec).toList();
+        return new StepView(id, Fields.title(id), specs, shown, List.of());
+    }
+
+    @Override
+    public List<Finding> answer(String key, String text) {
+        Optional<Field> field = Fields.of(current()).stream().filter(f -> f.key().equals(key)).findFirst();
+        if (field.isEmpty()) {
+            return List.of(Finding.error("WIZARD_UNKNOWN_FIELD", key, "step " + current() + " has no field \""
+                    + key + "\"", "answer one of the fields of the current step", FieldCheck.SOURCE));
+        }
+        String value = text == null ? "" : text.strip();
+        Optional<Finding> problem = FieldCheck.check(field.get(), value, choices(field.get()));
+        if (problem.isPresent()) {
+            return List.of(problem.get());
+        }
+        if (field.get().type() == FieldType.BOOLEAN && !value.isEmpty()) {
+            value = FieldCheck.yesNo(value).orElseThrow() ? "yes" : "no";
+        }
+        answers.put(key, value);
+        if (key.equals(Fields.MACHINE) && !services.templates(value).contains(answers.get(Fields.TEMPLATE))) {
+            answers.put(Fields.TEMPLATE, "");
+        }
+        return List.of();
+    }
+
+    @Override
+    public String value(String key) {
+        return answers.get(key);
+    }
+
+    @Override
+    public Transition next(boolean acceptWarnings) {
+        StepId step = current();
+        if (step == StepId.REVIEW) {
+            return new Transition(false, step, review);
+        }
+        List<Finding> findings = check(step);
+        shown = findings;
+        boolean blocked = Finding.anyError(findings)
+                || (!acceptWarnings && findings.stream().anyMatch(f -> f.severity() == Severity.WARNING));
+        if (blocked) {
+            return new Transition(false, step, findings);
+        }
+        index++;
+        shown = List.of();
+        if (current() == StepId.REVIEW) {
+            enterReview();
+        }
+        return new Transition(true, current(), findings);
+    }
+
+    @Override
+    public Transition back() {
+        if (index == 0) {
+            return new Transition(false, current(), shown);
+        }
+        index--;
+        job = Optional.empty();
+        cycle = Optional.empty();
+        review = List.of();
+        shown = check(current());
+        return new Transition(true, current(), shown);
+    }
+
+    @Override
+    public Optional<HobJob> job() {
+        return job;
+    }
+
+    @Override
+    public Optional<HobCycle> cycle() {
+        return cycle;
+    }
+
+    /** Every finding of a step: its fields again, then the reader's and the checks' on the whole job. */
+    private List<Finding> check(StepId step) {
+        List<Finding> out = new ArrayList<>();
+        for (Field f : Fields.of(step)) {
+            FieldCheck.check(f, answers.get(f.key()), choices(f)).ifPresent(out::add);
+        }
+        StepServices.JobRead read = services.read(answers.toTree());
+        List<Finding> all = new ArrayList<>(read.findings());
+        read.job().ifPresent(j -> all.addAll(services.check(j)));
+        all.stream().filter(f -> Fields.stepOf(f) == step).forEach(out::add);
+        return List.copyOf(new LinkedHashSet<>(out));
+    }
+
+    private void enterReview() {
+        StepServices.JobRead read = services.read(answers.toTree());
+        job = read.job();
+        LinkedHashSet<Finding> all = new LinkedHashSet<>(read.findings());
+        if (job.isPresent()) {
+            HobCycle planned = services.plan(job.get());
+            cycle = Optional.of(planned);
+            all.addAll(planned.findings());
+        }
+        List<Finding> sorted = new ArrayList<>(all);
+        sorted.sort((a, b) -> a.severity().compareTo(b.severity()));
+        review = List.copyOf(sorted);
+    }
+
+    private FieldSpec spec(Field f) {
+        return new FieldSpec(f.key(), f.label(), f.unit().symbol(units()), f.type(), answers.get(f.key()),
+                choices(f), f.min(), f.max(), f.required(), f.help());
+    }
+
+    /** The choices of a field now: fixed ones, or the library's machines and templates. */
+    private List<String> choices(Field f) {
+        if (f.key().equals(Fields.MACHINE)) {
+            List<String> names = new ArrayList<>(services.machines());
+            answers.inlineMachineName().filter(n -> !names.contains(n)).ifPresent(names::add);
+            return names;
+        }
+        if (f.key().equals(Fields.TEMPLATE)) {
+            return services.templates(answers.get(Fields.MACHINE));
+        }
+        return f.choices();
+    }
+
+    private Units units() {
+        return "in".equals(answers.get(Fields.UNITS)) ? Units.IN : Units.MM;
+    }
+}

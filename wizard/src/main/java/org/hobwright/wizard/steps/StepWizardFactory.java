@@ -1,0 +1,61 @@
+package org.hobwright.wizard.steps;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.Optional;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.spi.Spi;
+import org.hobwright.api.wizard.Wizard;
+import org.hobwright.api.wizard.WizardFactory;
+import org.hobwright.wizard.store.JobWriter;
+import org.hobwright.wizard.store.Library;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * The wizard module's {@link WizardFactory}, found with {@link java.util.ServiceLoader}. Sessions
+ * start from the built-in sample job (an invented metering-pump gear) or from a given job.
+ */
+public final class StepWizardFactory implements WizardFactory {
+    /** Resource of the built-in sample job whose values are the defaults. */
+    public static final String SAMPLE = "org/hobwright/builtin/jobs/metering-pump-gear.json";
+
+    @Override
+    public int spiVersion() {
+        return Spi.VERSION;
+    }
+
+    @Override
+    public Wizard start(Map<String, String> options) {
+        return new StepSession(services(options), sampleAnswers());
+    }
+
+    /** {@inheritDoc} A machine the library does not hold is kept inline. */
+    @Override
+    public Wizard start(HobJob job, Map<String, String> options) {
+        StepServices services = services(options);
+        boolean known = services.machines().contains(job.machine().name());
+        return new StepSession(services, Answers.fromTree(JobWriter.jobTree(job, job.units(), known)));
+    }
+
+    /** The answers of the built-in sample job. */
+    public static Answers sampleAnswers() {
+        try (InputStream in = StepWizardFactory.class.getClassLoader().getResourceAsStream(SAMPLE)) {
+            if (in == null) {
+                throw new IllegalStateException("the built-in sample job " + SAMPLE + " is missing");
+            }
+            JsonNode tree = JsonMapper.shared().readTree(in);
+            return Answers.fromTree(tree);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    private static StepServices services(Map<String, String> options) {
+        Library library = Library.open(Optional.ofNullable(options.get("home")).map(Path::of));
+        return new LibraryServices(library, StepWizardFactory.class.getClassLoader());
+    }
+}

@@ -1,0 +1,79 @@
+package org.hobwright.wizard.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class LibraryCommandsTest {
+    @TempDir
+    Path home;
+
+    private Path machineFile(String name) throws IOException {
+        String text = Store.builtinText("machines/varrow-sl16.json").replace("\"varrow-sl16\"", "\"" + name + "\"");
+        return Files.writeString(home.resolve(name + "-file.json"), text);
+    }
+
+    @Test
+    void builtInMachinesAreListedAndShown() {
+        Cli.Run list = Cli.run(home, "machines", "list");
+        assertEquals(ExitCodes.OK, list.code(), list::toString);
+        assertTrue(list.out().contains("varrow-sl16  (built-in)"), list::toString);
+        assertTrue(list.out().contains("ottmere-tl40  (built-in)"), list::toString);
+        Cli.Run show = Cli.run(home, "machines", "show", "varrow-sl16");
+        assertEquals(ExitCodes.OK, show.code(), show::toString);
+        assertTrue(show.out().contains("\"hobwright-machine\""), show::toString);
+    }
+
+    @Test
+    void aMachineIsSavedReplacedOnlyWithForceAndRemoved() throws IOException {
+        Path file = machineFile("shop-lathe-2");
+        Cli.Run saved = Cli.run(home, "machines", "save", file.toString());
+        assertEquals(ExitCodes.OK, saved.code(), saved::toString);
+        assertTrue(Files.exists(home.resolve("machines/shop-lathe-2.json")));
+        Cli.Run again = Cli.run(home, "machines", "save", file.toString());
+        assertEquals(ExitCodes.USAGE, again.code(), again::toString);
+        assertTrue(again.err().contains("shop-lathe-2"), again::toString);
+        assertEquals(ExitCodes.OK, Cli.run(home, "machines", "save", file.toString(), "--force").code());
+        assertTrue(Cli.run(home, "machines", "list").out().contains("shop-lathe-2  (saved)"));
+        assertEquals(ExitCodes.OK, Cli.run(home, "machines", "remove", "shop-lathe-2").code());
+        assertTrue(Files.notExists(home.resolve("machines/shop-lathe-2.json")));
+    }
+
+    @Test
+    void theHomeOptionWinsOverTheEnvironment() throws IOException {
+        Path other = Files.createDirectory(home.resolve("other"));
+        Path file = machineFile("shop-lathe-3");
+        assertEquals(ExitCodes.OK, Cli.run(home, "--home", other.toString(), "machines", "save", file.toString())
+                .code());
+        assertTrue(Files.exists(other.resolve("machines/shop-lathe-3.json")));
+        assertEquals(ExitCodes.OK, Cli.run(home, "machines", "save", "--home", other.toString(), file.toString(),
+                "--force").code());
+    }
+
+    @Test
+    void builtInMachinesCannotBeRemovedAndBadNamesAreRefused() {
+        Cli.Run r = Cli.run(home, "machines", "remove", "varrow-sl16");
+        assertEquals(ExitCodes.USAGE, r.code(), r::toString);
+        Cli.Run bad = Cli.run(home, "machines", "show", "../x");
+        assertEquals(ExitCodes.USAGE, bad.code(), bad::toString);
+        assertEquals(1, bad.err().lines().count(), bad::toString);
+    }
+
+    @Test
+    void templatesNeedTheirMachine() {
+        Cli.Run r = Cli.run(home, "templates", "show", "brass-fine");
+        assertEquals(ExitCodes.USAGE, r.code(), r::toString);
+        assertTrue(r.err().contains("--machine"), r::toString);
+        assertEquals(ExitCodes.OK, Cli.run(home, "templates", "list").code());
+    }
+
+    @Test
+    void machinesWithoutAnActionIsAUsageError() {
+        assertEquals(ExitCodes.USAGE, Cli.run(home, "machines").code());
+    }
+}

@@ -1,0 +1,131 @@
+package org.hobwright.wizard.cli;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.net.URL;
+import java.net.URLClassLoader;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+import org.hobwright.api.wizard.StepId;
+import org.hobwright.wizard.steps.Field;
+import org.hobwright.wizard.steps.Fields;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The terminal wizard driven by piped answers (wrong answers, '?', 'back' included) writes the same
+ * files as {@code plan} on the job file those answers describe.
+ */
+class WizardEndToEndTest {
+    @TempDir
+    Path dir;
+
+    private ClassLoader loader;
+
+    /** Providers of the class path plus {@link EchoWriter}, registered in a folder of its own. */
+    @BeforeEach
+    void addEchoWriter() throws IOException {
+        Path services = Files.createDirectories(dir.resolve("extra/META-INF/services"));
+        Files.writeString(services.resolve("org.hobwright.api.spi.CycleWriter"), EchoWriter.class.getName() + "\n");
+        loader = new URLClassLoader(new URL[] {dir.resolve("extra").toUri().toURL()}, getClass().getClassLoader());
+    }
+
+    /** Enter for every field of a step, except the answers given. */
+    private static List<String> step(StepId id, java.util.Map<String, List<String>> answers) {
+        List<String> lines = new ArrayList<>();
+        for (Field f : Fields.of(id)) {
+            lines.addAll(answers.getOrDefault(f.key(), List.of("")));
+        }
+        return lines;
+    }
+
+    @Test
+    void pipedAnswersWriteWhatPlanWritesForTheSameJob() throws IOException {
+        List<String> in = new ArrayList<>();
+        in.addAll(step(StepId.GEAR, java.util.Map.of(
+                "gear.partName", List.of("MP-204 drive gear, wizard"),
+                "gear.teeth", List.of("twenty-four", "?", "24"),
+                "gear.pressureAngle", List.of("20°0'0\""),
+                "gear.faceWidth", List.of("0", "10"))));
+        in.add("back");                                       // first question of CUTTER: back to GEAR
+        in.addAll(step(StepId.GEAR, java.util.Map.of()));     // every GEAR answer was kept
+        in.addAll(step(StepId.CUTTER, java.util.Map.of("hob.gashes", List.of("back", "", "12"))));
+        in.addAll(step(StepId.MACHINE, java.util.Map.of()));
+        in.addAll(step(StepId.CYCLE, java.util.Map.of("cycle.coolant", List.of("perhaps", "yes"))));
+        in.add("yes");                                        // write the outputs
+        in.add("");                                           // no template
+        Path wizardOut = dir.resolve("wizard-out");
+        Cli.Run wizard = Cli.run(dir.resolve("home"), String.join("\n", in) + "\n", loader,
+                "wizard", "--out", wizardOut.toString(), "--date", "2026-12-01");
+        assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
+        assertTrue(wizard.out().contains("is not a whole number"), "a wrong answer is asked again with the reason");
+        assertTrue(wizard.out().contains("Tooth count z from the drawing."), "'?' prints the help");
+        assertTrue(wizard.out().contains("must be greater than 0"), wizard::toString);
+
+        String job = Store.builtinText("jobs/metering-pump-gear.json")
+                .replace("MP-204 metering pump drive gear", "MP-204 drive gear, wizard")
+                .replace("\"faceWidth\": 8", "\"faceWidth\": 10");
+        Path jobFile = Files.writeString(dir.resolve("metering-pump-gear.json"), job);
+        Path planOut = dir.resolve("plan-out");
+        Cli.Run plan = Cli.run(dir.resolve("home"), "", loader, "plan", jobFile.toString(), "--out",
+                planOut.toString(), "--date", "2026-12-01");
+        assertEquals(ExitCodes.OK, plan.code(), plan::toString);
+
+        List<String> names = names(planOut);
+        assertFalse(names.isEmpty());
+        assertEquals(names, names(wizardOut));
+        for (String name : names) {
+            assertArrayEquals(Files.readAllBytes(planOut.resolve(name)), Files.readAllBytes(wizardOut.resolve(name)),
+                    name);
+        }
+    }
+
+    @Test
+    void theCycleAnswersAreSavedAsATemplateThatPlanCanApply() throws IOException {
+        List<String> in = new ArrayList<>();
+        in.addAll(step(StepId.GEAR, java.util.Map.of()));
+        in.addAll(step(StepId.CUTTER, java.util.Map.of()));
+        in.addAll(step(StepId.MACHINE, java.util.Map.of()));
+        in.addAll(step(StepId.CYCLE, java.util.Map.of("cycle.finishFeed", List.of("0.4"))));
+        in.add("no");                                         // no outputs this time
+        in.add("../x");                                       // a name that would leave the folder
+        in.add("fine-finish");
+        Path home = dir.resolve("home");
+        Cli.Run wizard = Cli.run(home, String.join("\n", in) + "\n", loader, "wizard", "--out",
+                dir.resolve("out").toString());
+        assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
+        assertFalse(Files.exists(dir.resolve("out")));
+        assertTrue(wizard.out().contains("Saved template fine-finish"), wizard::toString);
+        Path saved = home.resolve("templates/varrow-sl16/fine-finish.json");
+        assertTrue(Files.readString(saved).contains("\"finishFeed\""), Files.readString(saved));
+
+        Path job = Files.writeString(dir.resolve("job.json"), Store.builtinText("jobs/metering-pump-gear.json"));
+        Cli.Run plan = Cli.run(home, "", loader, "plan", job.toString(), "--template", "fine-finish", "--json");
+        assertEquals(ExitCodes.OK, plan.code(), plan::toString);
+        var report = tools.jackson.databind.json.JsonMapper.shared().readTree(plan.out());
+        assertEquals(0.4, report.at("/cycle/axialFeed").doubleValue(), 1e-12, plan::toString);
+    }
+
+    @Test
+    void inputEndingEarlyIsAUsageErrorAndWritesNothing() {
+        Path out = dir.resolve("out");
+        Cli.Run r = Cli.run(dir.resolve("home"), "\n\n", loader, "wizard", "--out", out.toString());
+        assertEquals(ExitCodes.USAGE, r.code(), r::toString);
+        assertTrue(r.err().contains("input ended"), r::toString);
+        assertFalse(Files.exists(out));
+    }
+
+    private static List<String> names(Path folder) throws IOException {
+        try (Stream<Path> s = Files.list(folder)) {
+            return s.map(p -> p.getFileName().toString()).sorted().toList();
+        }
+    }
+}
