@@ -42,16 +42,16 @@ import org.hobwright.api.spi.WriteContext;
  * gear, an inch spur gear and a metric helical gear. Post must not depend on the wizard, so the
  * numbers are written out here, each with its source:
  * <ul>
- *   <li>spur metric: m 2, z 20, 20°, hob Ø70 — DOMAIN.md §1.5 (spur example), §3.1 (W₃ = 2 × 7.66044,
+ *   <li>spur metric: m 2, z 20, 20°, hob Ø70 — FORMULAS.md §1.5 (spur example), §3.1 (W₃ = 2 × 7.66044,
  *       table value S8), §3.2 (M = 44.9293 over 3.5 mm pins), §4.1 (γ = 1.76323°), §5.1 (n₀ = 272.837),
  *       §6.1 (feed marks at f 1.5: 2.74838 / 8.03571 µm), §7.1 (E = 17.1683);</li>
- *   <li>spur inch: 32 T, 32 DP, 20° fine pitch — DOMAIN.md §1.5 (fine-pitch dedendum 0.0395 in, S4),
+ *   <li>spur inch: 32 T, 32 DP, 20° fine pitch — FORMULAS.md §1.5 (fine-pitch dedendum 0.0395 in, S4),
  *       §3.2 (over wires 34.4130 in for 1 DP scaled to 32 DP, S6);</li>
- *   <li>helical metric: m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A — DOMAIN.md §1.5 table, §2.2, §3.1–3.2,
+ *   <li>helical metric: m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A — FORMULAS.md §1.5 table, §2.2, §3.1–3.2,
  *       §4.2 (η = 13.2368° = 13° 14′ 12.4″), §5.1–5.2 (n₂ = 9.09457, 0.494308°/mm), §6.1–6.2, §7.1–7.3
  *       (E 18.1330, U 2.83098, t_h = 3.29603 min), §8.1 (h_max 0.127288), §9.1 (class 6 tolerances).</li>
  * </ul>
- * Values not printed in DOMAIN.md were computed with its formulas (noted "computed, §x").
+ * Values not printed in FORMULAS.md were computed with its formulas (noted "computed, §x").
  * Step times are distance over rate: rapids at the machine's rapid rate, feeds at f · n₂.
  * The machines mirror the invented sample profiles in samples/scenario/machines.
  */
@@ -137,7 +137,7 @@ public final class Fixtures {
                 new HobSpec(new Pitch.Module(2), 20, 1, Hand.RIGHT, 70, OptionalDouble.empty(), OptionalDouble.empty(),
                         14, 80, OptionalDouble.of(2000), "hss-coated"),
                 ottmere(), settings(60, 1.5, 2, QualityTargets.DEFAULTS));
-        // d 40, d_b 37.5877, d_a 44, d_f 35 (DOMAIN §1.5 spur); s_n = π m / 2; s_a 1.38976 (computed, §2.2)
+        // d 40, d_b 37.5877, d_a 44, d_f 35 (FORMULAS.md §1.5 spur); s_n = π m / 2; s_a 1.38976 (computed, §2.2)
         GearData gd = new GearData(2, 20, 40, 37.58770483143634, 44, 35, 2, 2.5, 4.5, 0, OptionalDouble.empty(),
                 Math.PI, 1.3897599691424858, 20);
         // W₃ 15.32088 (S8 ×2), contact Ø computed §3.1, pins 3.5 → 44.9293 (§3.2), chordal computed §3.3
@@ -175,7 +175,7 @@ public final class Fixtures {
                 varrow(), settings(80, 0.02 * in, 0.04 * in, new QualityTargets(OptionalDouble.of(2.0),
                 OptionalDouble.empty(), OptionalDouble.empty())));
         double m = in / 32;
-        // D 1.000 in, OD 1.0625 in, root 0.921 in, whole depth 0.07075 in (DOMAIN §1.5, S4); d_b computed
+        // D 1.000 in, OD 1.0625 in, root 0.921 in, whole depth 0.07075 in (FORMULAS.md §1.5, S4); d_b computed
         GearData gd = new GearData(m, 20, 1.0 * in, 23.868192567962073, 1.0625 * in, 0.921 * in, m, 0.0395 * in,
                 0.07075 * in, 0, OptionalDouble.empty(), Math.PI * m / 2, 0.5898139405107246, 32);
         // k 4, W₄ computed (§3.1); wire 1.728/P and 34.4130/32 in over wires (S6, §3.2)
@@ -204,7 +204,7 @@ public final class Fixtures {
                         "check the setting with a protractor; the error is small for a spur gear", "test fixture"))));
     }
 
-    /** Helical, DOMAIN §1.5 gear, on the Ottmere, with a simulation. */
+    /** Helical, FORMULAS.md §1.5 gear, on the Ottmere, with a simulation. */
     public static Fixture helicalMetric() {
         HobJob job = new HobJob("helical-metric", Units.MM,
                 gear("HX-30 pump drive gear", 30, new Pitch.Module(2), 15, 0.2, 20, "iso53-a", OptionalInt.of(6)),
@@ -217,7 +217,7 @@ public final class Fixtures {
         // k 5, W₅ 27.7705, contact Ø 64.0650, ball 3.5 → 67.7794 (§3.1, §3.2); chordal computed §3.3
         InspectionData insp = new InspectionData(5, 27.7705, 64.0650, 3.5, 67.7794, true, 3.4312479963138887,
                 2.4442397834340137);
-        // ISO 1328-1:2013 class 6 (DOMAIN §9.1 worked example, rounded values)
+        // ISO 1328-1:2013 class 6 (FORMULAS.md §9.1 worked example, rounded values)
         ToleranceData tol = new ToleranceData(6, 8.5, 25, 7.0, 8.5, 11, 8.5, 9.5, 13);
         SetupValues setup = new SetupValues(66.9166, 66.9166, 57.9166, 1.76323, 13.2368, -13.237, "-13.237°",
                 "13° 14′ 12.4″", "turn the hob head clockwise seen from the operator side by 13.237°", 60, 272.837,
@@ -236,7 +236,7 @@ public final class Fixtures {
         return new Fixture("helical-metric", job, new HobCycle(Optional.of(gd), Optional.of(insp), Optional.of(tol),
                 Optional.of(setup), plan.steps, Optional.of(sum), Optional.of(simulation(gd, 30)), List.of(
                 Finding.warning("CYCLE_SPAN_TIE", "gear.teeth", "k = 4.50088 is close to a tie; k = 5 was chosen, "
-                        + "k = 4 (W = 21.8662 mm) is also measurable", null, "DOMAIN.md §3.1"))));
+                        + "k = 4 (W = 21.8662 mm) is also measurable", null, "FORMULAS.md §3.1"))));
     }
 
     /**

@@ -3,6 +3,7 @@ package org.hobwright.api.cycle;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.Validate;
+import org.hobwright.api.job.QualityTargets;
 
 /**
  * Time and predicted quality of the planned cycle.
@@ -17,6 +18,9 @@ import org.hobwright.api.Validate;
  * @param envelopingDepthUm     predicted enveloping-cut (generating flat) depth, µm
  * @param maxChipThicknessMm    predicted maximum chip thickness of the heaviest pass, mm
  * @param fastest               the optimiser's proposal, when asked for
+ * @param targets               the quality limits the prediction was checked against, as resolved by
+ *                              the planner (the job's own, or defaults from the tolerance class or the
+ *                              cutting-data table); empty where no limit applies
  */
 public record CycleSummary(
         double cycleTimeS,
@@ -28,7 +32,8 @@ public record CycleSummary(
         double feedMarkRootUm,
         double envelopingDepthUm,
         double maxChipThicknessMm,
-        Optional<FastestProposal> fastest) {
+        Optional<FastestProposal> fastest,
+        QualityTargets targets) {
 
     public CycleSummary {
         Validate.nonNegative("cycleTimeS", cycleTimeS);
@@ -41,5 +46,15 @@ public record CycleSummary(
         Validate.nonNegative("envelopingDepthUm", envelopingDepthUm);
         Validate.nonNegative("maxChipThicknessMm", maxChipThicknessMm);
         Validate.present("fastest", fastest);
+        Validate.present("targets", targets);
+    }
+
+    /** A summary without resolved targets (a planner that does not resolve them). */
+    public CycleSummary(double cycleTimeS, List<PassSummary> passes, double finishFeedMmPerRev,
+                        double approachLengthMm, double overrunLengthMm, double feedMarkFlankUm,
+                        double feedMarkRootUm, double envelopingDepthUm, double maxChipThicknessMm,
+                        Optional<FastestProposal> fastest) {
+        this(cycleTimeS, passes, finishFeedMmPerRev, approachLengthMm, overrunLengthMm, feedMarkFlankUm,
+                feedMarkRootUm, envelopingDepthUm, maxChipThicknessMm, fastest, QualityTargets.DEFAULTS);
     }
 }

@@ -25,7 +25,7 @@ final class SafetyCheck {
     /** Slack for comparing diameters that went through arithmetic, mm. */
     private static final double EPS_MM = 1e-9;
 
-    private static final String SOURCE = "Hobwright NC safety invariants (ARCHITECTURE.md, NC output)";
+    private static final String SOURCE = "Hobwright NC safety invariants (post/README.md, safety)";
 
     private SafetyCheck() {
     }

@@ -15,6 +15,7 @@ import org.hobwright.api.cycle.SimulationData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.JobUnits;
 import tools.jackson.databind.node.ArrayNode;
@@ -25,7 +26,7 @@ import tools.jackson.databind.node.ObjectNode;
  * Builds the JSON report tree. Lengths in the job's units, angles in degrees, times in seconds,
  * speeds in rpm, cutting speed in m/min or ft/min, quality values (feed marks, enveloping cuts,
  * tolerances) in micrometres; numbers unrounded. Parts of the cycle that could not be computed are
- * left out. The pointers listed in ARCHITECTURE.md ("The JSON report") are a contract.
+ * left out. The pointers listed in post/README.md ("The JSON report") are a contract.
  */
 final class ReportBuilder {
 
@@ -179,6 +180,12 @@ final class ReportBuilder {
             pn.put("time", p.seconds());
         }
         s.fastest().ifPresent(f -> n.set("fastest", fastest(f)));
+        if (!s.targets().equals(QualityTargets.DEFAULTS)) {
+            ObjectNode targets = n.putObject("targets");
+            s.targets().feedMarkDepthUm().ifPresent(v -> targets.put("feedMarkDepth", v));
+            s.targets().envelopingDepthUm().ifPresent(v -> targets.put("envelopingDepth", v));
+            s.targets().maxChipThicknessMm().ifPresent(v -> targets.put("maxChipThickness", u.length(v)));
+        }
         return n;
     }
 

@@ -15,7 +15,7 @@ import tools.jackson.databind.ObjectWriter;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * Writes the JSON report ({@code JOB.report.json}) with the pointers of ARCHITECTURE.md. Like every
+ * Writes the JSON report ({@code JOB.report.json}) with the pointers listed in post/README.md. Like every
  * writer it writes nothing for a cycle with errors, unless the context's resource
  * {@value #WITH_ERRORS} is {@code true}: then it writes the report with the error findings and
  * without the parts that could not be computed (what {@code plan --json} prints).

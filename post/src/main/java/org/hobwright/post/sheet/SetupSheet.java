@@ -5,6 +5,7 @@ import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
 import org.hobwright.post.Decimal;
@@ -85,7 +86,8 @@ final class SetupSheet {
         t.setup(s, sum, job.cycle().coolant());
         t.gear(g);
         cycle.inspection().ifPresent(t::inspection);
-        t.quality(sum, job.cycle().targets(), cycle.tolerances(), cycle.simulation());
+        t.quality(sum, sum.targets().equals(QualityTargets.DEFAULTS) ? job.cycle().targets() : sum.targets(),
+                cycle.tolerances(), cycle.simulation());
         t.findings(cycle.findings());
         m.close("body").close("html");
         return m.toString();

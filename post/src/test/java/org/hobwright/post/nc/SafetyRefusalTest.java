@@ -15,7 +15,7 @@ import org.hobwright.post.Fixtures.Fixture;
 import org.junit.jupiter.api.Test;
 
 /**
- * The writer re-checks the safety invariants of ARCHITECTURE.md ("NC output") on its program model
+ * The writer re-checks the safety invariants listed in post/README.md on its program model
  * and writes nothing when one is broken, whatever the planner said. Each test breaks one invariant
  * in an otherwise clean cycle.
  */
@@ -58,7 +58,7 @@ class SafetyRefusalTest {
 
     @Test
     void cutBelowTheFinalRootDiameterIsRefused() {
-        // final infeed diameter 35 mm (DOMAIN §1.5 spur d_f); 34.99 mm is below it
+        // final infeed diameter 35 mm (FORMULAS.md §1.5 spur d_f); 34.99 mm is below it
         refused("NC_SAFETY_BELOW_ROOT", steps -> {
             int i = indexOf(steps, CycleStep.Feed.class);
             CycleStep.Feed f = (CycleStep.Feed) steps.get(i);

@@ -20,10 +20,10 @@ import org.junit.jupiter.params.provider.MethodSource;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
-/** The JSON report: the contract pointers of ARCHITECTURE.md, job units, unrounded numbers. */
+/** The JSON report: the contract pointers listed in post/README.md, job units, unrounded numbers. */
 class ReportWriterTest {
 
-    /** The pointers ARCHITECTURE.md ("The JSON report") fixes as a contract. */
+    /** The pointers post/README.md ("The JSON report") lists as a contract. */
     static final List<String> CONTRACT = List.of("/gear/referenceDiameter", "/gear/baseDiameter",
             "/gear/tipDiameter", "/gear/rootDiameter", "/gear/wholeDepth", "/gear/toothThickness",
             "/inspection/spanTeeth", "/inspection/spanWidth", "/inspection/pinDiameter", "/inspection/overPins",
@@ -67,12 +67,12 @@ class ReportWriterTest {
     @Test
     void helicalValuesAreTheWorkedExampleUnrounded() {
         JsonNode n = report(Fixtures.helicalMetric());
-        // DOMAIN.md §1.5 (ISO 21771), §4.2, §5.1, check cases 3, 27, 30
+        // FORMULAS.md §1.5 (ISO 21771), §4.2, §5.1, check cases 3, 27, 30
         assertEquals(62.1166, n.at("/gear/referenceDiameter").asDouble());
         assertEquals(13.2368, n.at("/setup/swivelAngle").asDouble());
         assertEquals("13° 14′ 12.4″", n.at("/setup/swivelAngleDms").asString());
         assertEquals(9.09457, n.at("/cycle/workRpm").asDouble());
-        // DOMAIN.md §7.3, check case 36: t_h = 3.29603 min for L 44.964 mm, f_a 1.5, n₀ 272.837, z₂ 30
+        // FORMULAS.md §7.3, check case 36: t_h = 3.29603 min for L 44.964 mm, f_a 1.5, n₀ 272.837, z₂ 30
         assertEquals(3.29603 * 60, n.at("/cycle/cuttingTime").asDouble(), 0.01);
         assertEquals(1, n.at("/cycle/passes").asInt());
         assertEquals(18.1330, n.at("/cycle/approachLength").asDouble());
@@ -88,7 +88,7 @@ class ReportWriterTest {
     void inchJobReportsInches() {
         JsonNode n = report(Fixtures.spurInch());
         assertEquals("in", n.at("/units/length").asString());
-        // DOMAIN.md §1.5: P 32, N 40 fine pitch scaled to N 32: D = 1.000 in, root Ø D − 2 × 0.0395 in
+        // FORMULAS.md §1.5: P 32, N 40 fine pitch scaled to N 32: D = 1.000 in, root Ø D − 2 × 0.0395 in
         assertEquals(1.0, n.at("/gear/referenceDiameter").asDouble(), 1e-12);
         assertEquals(0.921, n.at("/gear/rootDiameter").asDouble(), 1e-12);
         // S6: 34.4130 in over 1.728 in wires for 32 T, 1 DP, so 34.4130 / 32 in at 32 DP

@@ -104,7 +104,7 @@ class SetupSheetTest {
 
     @Test
     void targetsAreComparedWithThePrediction() throws Exception {
-        // helical fixture: predicted feed-mark depth 2.94570 µm (DOMAIN §6.1) against a 3.0 µm target
+        // helical fixture: predicted feed-mark depth 2.94570 µm (FORMULAS.md §6.1) against a 3.0 µm target
         String text = parse(sheet(Fixtures.helicalMetric())).getDocumentElement().getTextContent();
         assertTrue(text.contains("Feed-mark depth on the flank2.95 µm3.00 µmwithin"), text);
     }

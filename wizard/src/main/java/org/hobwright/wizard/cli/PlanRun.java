@@ -11,6 +11,8 @@ import java.util.concurrent.CompletionException;
 import java.util.stream.Stream;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.Providers;
+import org.hobwright.wizard.plan.CuttingDataTable;
+import org.hobwright.wizard.plan.DefaultCyclePlanner;
 import org.hobwright.wizard.store.JobReader;
 
 /**
@@ -41,8 +43,8 @@ final class PlanRun {
     int run(PlanRequest request) {
         String generatedOn = GeneratedOn.resolve(request.date().orElse(null), env);
         // the planner and the writers are looked up beside the reading of the jobs
-        CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> Providers.planner(env.loader()));
         Store store = Store.open(request.home(), env);
+        CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> planner(store));
         Outputs outputs = new Outputs(store, env.loader(), generatedOn);
         Timing.mark("library opened");
         JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
@@ -60,6 +62,24 @@ final class PlanRun {
                 .map(in -> in.job().map(j -> in.planned(join(planner).plan(j))).orElse(in)).toList();
         Timing.mark("jobs planned");
         return finish(jobs, request, store, outputs);
+    }
+
+    /**
+     * The planner: the one found through the SPI, or, when the library holds the shop's own
+     * cutting-data table ({@code cutting-data.json}), Hobwright's planner with that table.
+     *
+     * @throws CliFailure (exit 2) when the shop's table cannot be read
+     */
+    private CyclePlanner planner(Store store) {
+        Path table = store.library().home().resolve(CuttingDataTable.FILE_NAME);
+        if (!Files.isRegularFile(table)) {
+            return Providers.planner(env.loader());
+        }
+        try {
+            return new DefaultCyclePlanner(CuttingDataTable.forLibrary(store.library().home()));
+        } catch (IllegalArgumentException | java.io.UncheckedIOException e) {
+            throw CliFailure.usage("the shop's cutting-data table " + table + " cannot be used: " + e.getMessage());
+        }
     }
 
     /** The looked-up planner; a missing one is reported as the exception the look-up threw. */

@@ -4,7 +4,7 @@ import org.hobwright.api.job.GearSpec;
 
 /**
  * An external involute spur or helical gear cut by a standard hob of its tooth system, with the
- * relations of ISO 21771:2007 (equation numbers as cited in DOMAIN.md §1.2, secondary source: the
+ * relations of ISO 21771:2007 (equation numbers as cited in FORMULAS.md §1.2, secondary source: the
  * public notebooks drivetrainhub/notebooks-gears, helical_gears.py). Lengths mm, angles rad.
  *
  * <p>The helix angle is the magnitude |β|; its hand does not change any size.
@@ -81,7 +81,7 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
 
     /**
      * Dedendum as cut by the hob, h_f = h_aP0 − x_E m_n with h_aP0 = h_fP (standard hob), mm.
-     * ISO 21771 eq. (37); DOMAIN.md §1.2 note on hobbed gears. The hob makes the thickness allowance
+     * ISO 21771 eq. (37); FORMULAS.md §1.2 note on hobbed gears. The hob makes the thickness allowance
      * by cutting deeper: it sits at x_E ({@link #effectiveProfileShift()}), so a negative allowance
      * deepens the root by |E_sn| / (2 tan α_n) (derived from s_n = m_n (π/2 + 2 x tan α_n)).
      */
@@ -110,7 +110,7 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
     /**
      * Lead of the helix p_z = π d / tan β = π z m_n / sin β, mm; infinite for a spur gear.
      * Sources: drivetrainhub notebooks-gears (helical_gears.py); zhygear article on differential
-     * change gears (DOMAIN.md S3, S11).
+     * change gears (FORMULAS.md S3, S11).
      */
     public double leadMm() {
         return isSpur() ? Double.POSITIVE_INFINITY : Math.PI * referenceDiameterMm() / Math.tan(helixAngleRad);
@@ -138,7 +138,7 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
 
     /**
      * The profile shift that gives the thinned tooth with no allowance:
-     * x_E = x + E_sn / (2 m_n tan α_n). Every inspection value is computed for x_E (DOMAIN.md §2.1).
+     * x_E = x + E_sn / (2 m_n tan α_n). Every inspection value is computed for x_E (FORMULAS.md §2.1).
      */
     public double effectiveProfileShift() {
         return profileShift + thicknessAllowanceMm / (2 * normalModuleMm * Math.tan(normalPressureAngleRad));
@@ -155,7 +155,7 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
 
     /**
      * Normal tooth thickness at a diameter d_y, s_yn ≈ s_yt cos β_y with tan β_y = tan β · d_y / d, mm.
-     * The usual approximation (derived; DOMAIN.md §2.2).
+     * The usual approximation (derived; FORMULAS.md §2.2).
      */
     public double normalThicknessAtMm(double dy) {
         double betaY = Math.atan(Math.tan(helixAngleRad) * dy / referenceDiameterMm());

@@ -10,7 +10,7 @@ package org.hobwright.wizard.geometry;
  * h* is the height of the hob's straight flank above its datum line divided by m_n
  * ({@link ToothSystem#straightFlankHeightMm}); for spur gears β = 0 and α_t = α_n. Sources: the public
  * notebooks drivetrainhub/notebooks-gears (helical_gears.py) for both forms; easyengcalc gear-undercut
- * page for z_min 17 at 20° and 32 at 14.5° (DOMAIN.md §2.3, S3, S9).
+ * page for z_min 17 at 20° and 32 at 14.5° (FORMULAS.md §2.3, S3, S9).
  *
  * <p>Practical limit: a slight undercut below the working flank is usually accepted down to 14 teeth at
  * 20° and 26 at 14.5° (S9). A profile-shift shortfall of at most h* ÷ 5 ({@link #SLIGHT_SHORTFALL}) gives

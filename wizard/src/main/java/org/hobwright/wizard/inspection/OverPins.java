@@ -15,9 +15,9 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * </pre>
  * x is the shift of the thinned tooth x_E (this is the same as adding E_sn/(z m_n)). Sources: the
  * standard measurement-over-wires relation; the US wire-table example 32 T, 4 DP, 20°, wire 1.728/P →
- * 8.6032 in (ashokagears gear-size page quoting Machinery's Handbook, DOMAIN.md S6) is reproduced in
+ * 8.6032 in (ashokagears gear-size page quoting Machinery's Handbook, FORMULAS.md S6) is reproduced in
  * the tests. For helical gears z m_n cos α_n = d_b cos β_b makes the ball relation the same
- * (DOMAIN.md §1.2 identity).
+ * (FORMULAS.md §1.2 identity).
  *
  * @param pinDiameterMm     D_M, mm
  * @param overPinsMm        M_d, mm
@@ -31,7 +31,7 @@ import org.hobwright.wizard.geometry.InvoluteGear;
 public record OverPins(double pinDiameterMm, double overPinsMm, double centreDiameterMm, double contactDiameterMm,
                        boolean balls, boolean touchesInvolute) {
 
-    /** The rule factor of the US wire tables: D_M = 1.728 / P, i.e. 1.728 m_n (DOMAIN.md S6). */
+    /** The rule factor of the US wire tables: D_M = 1.728 / P, i.e. 1.728 m_n (FORMULAS.md S6). */
     public static final double RULE_FACTOR = 1.728;
 
     /**
@@ -63,7 +63,7 @@ public record OverPins(double pinDiameterMm, double overPinsMm, double centreDia
      * α_Mt = tan α_c + π/(2z) − inv α_t − 2 x tan α_n / z
      * D_M = d_b cos β_b (tan α_Mt − tan α_c)
      * </pre>
-     * Derived from the relation above (for x = 0 it is DOMAIN.md §3.2's form, e.g. m 1, z 20, 20° →
+     * Derived from the relation above (for x = 0 it is FORMULAS.md §3.2's form, e.g. m 1, z 20, 20° →
      * 1.72445 mm). When d + 2 x m_n is below the base circle the contact is put on the base circle.
      */
     public static double idealPinMm(InvoluteGear g) {

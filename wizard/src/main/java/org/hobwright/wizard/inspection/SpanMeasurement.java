@@ -12,7 +12,7 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * k     = round(k_calc), ties (|k_calc − n − 0.5| &lt; 1e-9) to the lower n, 1 ≤ k ≤ z − 1
  * d_c   = sqrt(d_b² + (W_k cos β_b)²)              diameter where the anvils touch
  * </pre>
- * x is the shift of the thinned tooth x_E = x + E_sn / (2 m_n tan α_n) (DOMAIN.md §2.1), so the value
+ * x is the shift of the thinned tooth x_E = x + E_sn / (2 m_n tan α_n) (FORMULAS.md §2.1), so the value
  * includes the thickness allowance. Sources: machinecalcs span calculator (spur form and the
  * m = 2, z = 20 example), the helical form as in ISO 21771 / DIN 3960 (clause from memory); the
  * k rule puts the anvil contact on the circle d + 2 x m_n (derived; reduces to the classic

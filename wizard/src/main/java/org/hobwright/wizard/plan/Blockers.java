@@ -50,7 +50,7 @@ final class Blockers {
         } else if (depth >= hob.outsideDiameterMm() / 2) {
             error(PlanCodes.HOB_TOO_SMALL, "hob.outsideDiameter", String.format(Locale.ROOT, "the hob radius %.3f mm is"
                     + " not larger than the %.3f mm depth to cut", hob.outsideDiameterMm() / 2, depth),
-                    "use a larger hob", "cut geometry, DOMAIN §7.1");
+                    "use a larger hob", "cut geometry, FORMULAS.md §7.1");
         }
         if (Math.abs(swivel.machineAngleDeg()) > machine.swivel().maxAngleDeg()) {
             error(PlanCodes.SWIVEL_BEYOND_HOLDER, "machine.swivel.maxAngle", "the swivel setting " + swivel.text()

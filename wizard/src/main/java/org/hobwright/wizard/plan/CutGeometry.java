@@ -4,13 +4,13 @@ package org.hobwright.wizard.plan;
  * Approach (run-in) and overrun (run-out) lengths of an axial hobbing pass, mm.
  *
  * <pre>
- * spur approach     E = √(h (d_a0 − h))                                   (DOMAIN §7.1, widely published form,
+ * spur approach     E = √(h (d_a0 − h))                                   (FORMULAS.md §7.1, widely published form,
  *                                                                          and the exact disk-model result)
- * helical approach  exact construction of DOMAIN §7.1 option 2 (derived): hob envelope a cylinder of
+ * helical approach  exact construction of FORMULAS.md §7.1 option 2 (derived): hob envelope a cylinder of
  *                   radius r_a0 whose axis u = (0, cos η, sin η) passes through (a, 0, E), a = r_a0 + r_a − h;
  *                   blank face edge P(φ) = (r_a cos φ, r_a sin φ, 0); E is the largest height with
  *                   min over φ of dist²(P(φ), axis) = r_a0²
- * overrun           U = (h / tan α_n) · sin|η|                               (DOMAIN §7.2, derived, low confidence)
+ * overrun           U = (h / tan α_n) · sin|η|                               (FORMULAS.md §7.2, derived, low confidence)
  * </pre>
  * h radial depth of the pass below the blank (touch-off) diameter, d_a0 hob outside diameter,
  * r_a blank radius, η swivel angle, α_n normal pressure angle. Clearances are added by the caller.
@@ -32,7 +32,7 @@ public final class CutGeometry {
     }
 
     /**
-     * Exact helical approach (DOMAIN §7.1 option 2, derived). Reduces to the spur formula for η = 0.
+     * Exact helical approach (FORMULAS.md §7.1 option 2, derived). Reduces to the spur formula for η = 0.
      *
      * @param depthMm            radial depth h below the blank tip, 0 &lt; h &lt; d_a0/2, mm
      * @param hobOutsideDiameter d_a0, mm
@@ -87,7 +87,7 @@ public final class CutGeometry {
 
     /**
      * Overrun U = (h / tan α_n) sin|η|, mm: half the generating zone along the hob axis projected onto
-     * the work axis (DOMAIN §7.2, derived; for a spur gear |η| = γ and U is small).
+     * the work axis (FORMULAS.md §7.2, derived; for a spur gear |η| = γ and U is small).
      *
      * @param depthMm          radial depth h, mm
      * @param pressureAngleDeg normal pressure angle α_n, degrees

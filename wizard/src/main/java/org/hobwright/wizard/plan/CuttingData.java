@@ -3,7 +3,7 @@ package org.hobwright.wizard.plan;
 /**
  * One row of the cutting-data table: typical values for a work material cut with a hob material.
  * Every built-in value is typical, to be confirmed with the hob supplier (orders of magnitude from
- * hob-maker tables, from memory, DOMAIN §8.2). Canonical units.
+ * hob-maker tables, from memory, FORMULAS.md §8.2). Canonical units.
  *
  * @param workMaterial       work material key, e.g. {@code steel-case-hardening}
  * @param hobMaterial        hob material key: {@code hss}, {@code hss-coated}, {@code carbide}

@@ -5,7 +5,7 @@ import java.util.List;
 import org.hobwright.api.cycle.CycleStep;
 
 /**
- * The safety invariants every planned cycle must keep before it leaves the planner (ARCHITECTURE.md,
+ * The safety invariants every planned cycle must keep before it leaves the planner (post/README.md,
  * NC output). The post checks its program again, independently.
  * <ol>
  * <li>Exactly one sync on; it comes before the first move; a settle dwell of at least the machine's

@@ -9,8 +9,8 @@ import org.hobwright.api.check.Finding;
 /**
  * Picks the feeds of the user's plan. A feed the job gives is kept (a finding says when it lies
  * outside the cutting-data range). An open feed starts at the middle of the table's range and is
- * lowered, when needed, to meet the chip-thickness limit (Hoffmeister, DOMAIN §8.1) and, for the
- * finishing pass, the feed-mark target (DOMAIN §6.1). Both are then held within the machine's
+ * lowered, when needed, to meet the chip-thickness limit (Hoffmeister, FORMULAS.md §8.1) and, for the
+ * finishing pass, the feed-mark target (FORMULAS.md §6.1). Both are then held within the machine's
  * maximum feed rate. A single pass runs at the finishing feed; its roughing feed is reported equal to it.
  *
  * @param roughMmPerRev  roughing feed, mm per work revolution

@@ -6,17 +6,17 @@ import org.hobwright.wizard.simulate.EnvelopingDepth;
  * Predicted finish and chip load of hobbing.
  *
  * <pre>
- * feed mark, flank   δ_x = f_a² · sin α_n / (4 d_a0 cos² β)        (DOMAIN §6.1: spur form as commonly published,
+ * feed mark, flank   δ_x = f_a² · sin α_n / (4 d_a0 cos² β)        (FORMULAS.md §6.1: spur form as commonly published,
  *                                                                   from memory; the 1/cos² β factor derived)
- * feed mark, root    δ_root = f_a² / (4 d_a0 cos² β)               (DOMAIN §6.1: sagitta geometry, derived)
- * enveloping depth   δ_y = π² z₀² m_n sin α_n / (4 z₂ i² cos β)    (DOMAIN §6.2, derived; spur form matches the
+ * feed mark, root    δ_root = f_a² / (4 d_a0 cos² β)               (FORMULAS.md §6.1: sagitta geometry, derived)
+ * enveloping depth   δ_y = π² z₀² m_n sin α_n / (4 z₂ i² cos β)    (FORMULAS.md §6.2, derived; spur form matches the
  *                                                                   hob-maker handbook form from memory; the
  *                                                                   1/cos β factor settled by the generating
  *                                                                   simulation, see EnvelopingDepth)
  * Hoffmeister        h_max = 4.9 m_n z₂^(9.25·10⁻³ β^1.25 − 0.542) e^(−0.015 β) e^(−0.015 x)
  *                          (r_a0/m_n)^(−8.25·10⁻³ β − 0.225) i^(−0.877) (f_a/m_n)^0.511 (T/m_n)^0.319
  *                    B. Hoffmeister, Über den Verschleiß am Wälzfräser, dissertation, RWTH Aachen, 1970
- *                    (DOMAIN §8.1; exponents from memory, not confirmed in print)
+ *                    (FORMULAS.md §8.1; exponents from memory, not confirmed in print)
  * </pre>
  * f_a axial feed mm per work revolution; d_a0 hob outside diameter mm; r_a0 = d_a0/2; α_n normal
  * pressure angle; β helix angle (magnitude, degrees in the Hoffmeister formula); z₀ starts;
@@ -76,7 +76,7 @@ public final class FinishFormulas {
 
     /**
      * Largest feed keeping Hoffmeister's chip thickness within a limit: f_a = m_n (h_allow / K)^(1/0.511),
-     * K the formula evaluated at f_a / m_n = 1 (DOMAIN §8.1), mm.
+     * K the formula evaluated at f_a / m_n = 1 (FORMULAS.md §8.1), mm.
      */
     public static double feedForChipThickness(double limitMm, double moduleMm, int teeth, double helixAngleDeg,
                                               double profileShift, double hobTipRadiusMm, double gashesPerStart,

@@ -12,7 +12,7 @@ import org.hobwright.api.job.MachineProfile;
  * Hob shifting between parts, so that wear spreads along the hob.
  *
  * <pre>
- * working width  w = 2 h / tan α_n + π m_n        generating zone along the hob axis (DOMAIN §7.2, derived)
+ * working width  w = 2 h / tan α_n + π m_n        generating zone along the hob axis (FORMULAS.md §7.2, derived)
  *                                                  plus one axial pitch (common practice, no source)
  * usable range   R = min(shift-axis travel, hob length − w)
  * position for part k (k = 0, 1, …):  (⌊k / n⌋ mod P) · s,  P = ⌊R / s⌋ + 1 positions,

@@ -25,7 +25,7 @@ import org.hobwright.wizard.simulate.GeneratingSimulation;
  * optimiser when asked. Reads the machine only through {@link MachineProfile}'s accessors.
  *
  * <p>Default roughing depth when the job leaves it open: the whole depth in one pass for modules
- * up to 2.5 mm, otherwise 1.25 m_n per pass (DOMAIN §7.5, common practice, no source).
+ * up to 2.5 mm, otherwise 1.25 m_n per pass (FORMULAS.md §7.5, common practice, no source).
  */
 final class JobPlanning {
     private static final double ONE_PASS_MODULE_MM = 2.5;
@@ -81,7 +81,7 @@ final class JobPlanning {
         Optional<HobShiftPlan> shift = HobShiftPlan.of(machine, hob, cycle, depth, gear.pressureAngleDeg(), findings);
         String swivelDms = Angles.dms(hs.swivelAngleDeg());
         Toolpath path = ToolpathBuilder.build(geometry, drive, settings,
-                HeaderSteps.of(job, hs.swivelAngleDeg(), swivelDms, swivel, drive, settings, shift), cycle.coolant());
+                HeaderSteps.of(job, swivel, drive, settings, shift), cycle.coolant());
         Prediction prediction = Prediction.of(model, settings);
         prediction.check(targets, model, findings);
         findings.addAll(TravelCheck.check(path.steps(), machine));
@@ -98,7 +98,7 @@ final class JobPlanning {
         PassSummary last = path.passes().get(path.passes().size() - 1);
         CycleSummary summary = new CycleSummary(path.cycleTimeS(), path.passes(), settings.finishFeedMmPerRev(),
                 last.approachMm(), last.overrunMm(), prediction.feedMarkFlankUm(), prediction.feedMarkRootUm(),
-                prediction.envelopingUm(), prediction.maxChipMm(), fastest);
+                prediction.envelopingUm(), prediction.maxChipMm(), fastest, targets.applied());
         boolean errors = Finding.anyError(findings);
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.of(setup),
                 errors ? List.of() : path.steps(), Optional.of(summary),

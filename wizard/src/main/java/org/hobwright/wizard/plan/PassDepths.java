@@ -8,7 +8,7 @@ import java.util.Arrays;
  * <p>The roughing region (total depth minus finishing stock) is split into equal passes no deeper
  * than the roughing depth; a finishing pass at full depth follows when there is finishing stock.
  * Without stock the last roughing pass reaches full depth. The last pass always runs at the
- * finishing feed (DOMAIN §7.5: a roughing pass leaving a radial stock, then a finishing pass at full
+ * finishing feed (FORMULAS.md §7.5: a roughing pass leaving a radial stock, then a finishing pass at full
  * depth; common practice, no source for the equal split).
  *
  * @param depthsMm cumulative depth of each pass, increasing, the last equal to the total depth

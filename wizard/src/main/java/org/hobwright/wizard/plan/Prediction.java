@@ -30,13 +30,13 @@ public record Prediction(double feedMarkFlankUm, double feedMarkRootUm, double e
                     t.feedMarkUm(), t.feedMarkSource()), String.format(Locale.ROOT,
                     "finish at %.3f mm per work revolution or less",
                     Math.floor(model.feedForFeedMark(t.feedMarkUm()) * 1000) / 1000),
-                    "feed-mark depth, DOMAIN §6.1 (derived for helical gears)"));
+                    "feed-mark depth, FORMULAS.md §6.1 (derived for helical gears)"));
         }
         if (envelopingUm > t.envelopingUm() * (1 + 1e-9)) {
             findings.add(Finding.warning(PlanCodes.ENVELOPING_OVER_TARGET, "hob.gashes", String.format(Locale.ROOT,
                     "predicted enveloping flats %.2f µm exceed the %.2f µm target (%s)", envelopingUm,
                     t.envelopingUm(), t.envelopingSource()),
-                    "use a hob with more gashes or fewer starts", "enveloping depth, DOMAIN §6.2 (derived)"));
+                    "use a hob with more gashes or fewer starts", "enveloping depth, FORMULAS.md §6.2 (derived)"));
         }
         if (t.hasChipLimit() && maxChipMm > t.chipMm() * (1 + 1e-9)) {
             findings.add(Finding.warning(PlanCodes.CHIP_OVER_LIMIT, "cycle.roughFeed", String.format(Locale.ROOT,

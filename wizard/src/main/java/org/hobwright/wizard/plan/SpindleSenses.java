@@ -16,14 +16,14 @@ import org.hobwright.api.job.HobbingMethod;
  * <ul>
  * <li><b>Hob.</b> A hob tooth at the contact point moves along +Z when the hob turns clockwise seen
  *     from its drive end. Climb hobbing means the teeth move against the feed at contact (R. P.
- *     Phillips, "Design and Selection of Hobs", Gear Technology, DOMAIN S13), so climb = clockwise,
+ *     Phillips, "Design and Selection of Hobs", Gear Technology, FORMULAS.md S13), so climb = clockwise,
  *     conventional = counter-clockwise.</li>
  * <li><b>Work.</b> Like a worm and wheel: a right-hand thread turned clockwise (seen from its drive
  *     end) carries its tooth pattern toward −Y, which drags the gear teeth at the contact point
  *     clockwise seen from the entry face. Rule: the work turns in the same sense as the hob for a
  *     right-hand hob and in the opposite sense for a left-hand hob.</li>
  * <li><b>Differential.</b> A right-hand helix advances counter-clockwise (seen from +Z) as z grows
- *     (DOMAIN §5.2); feeding along −Z the work must turn an extra 360°·Δz/p_z counter-clockwise for a
+ *     (FORMULAS.md §5.2); feeding along −Z the work must turn an extra 360°·Δz/p_z counter-clockwise for a
  *     right-hand gear, clockwise for a left-hand gear. The sign is given relative to the work's own
  *     sense: +1 when the extra rotation adds to it, −1 when it opposes it.</li>
  * </ul>

@@ -1,6 +1,7 @@
 package org.hobwright.wizard.plan;
 
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.QualityTargets;
 
@@ -69,6 +70,12 @@ public record Targets(double feedMarkUm, String feedMarkSource, double envelopin
             chipSource = PlanCodes.TABLE;
         }
         return new Targets(mark, markSource, env, envSource, chip, chipSource);
+    }
+
+    /** The limits as the api reports them (the chip limit empty when unknown). */
+    public QualityTargets applied() {
+        return new QualityTargets(OptionalDouble.of(feedMarkUm), OptionalDouble.of(envelopingUm),
+                hasChipLimit() ? OptionalDouble.of(chipMm) : OptionalDouble.empty());
     }
 
     /** True when a chip-thickness limit is known. */

@@ -7,7 +7,7 @@ package org.hobwright.wizard.simulate;
  * δ = π² z₀² m_n sin α_n / (4 z i² cos β)        normal to the flank
  * </pre>
  * z₀ hob starts, i gashes, z teeth, m_n normal module (mm), α_n normal pressure angle, β helix
- * angle. For spur gears (β = 0) this is the hob-maker handbook form recorded in DOMAIN.md §6.2
+ * angle. For spur gears (β = 0) this is the hob-maker handbook form recorded in FORMULAS.md §6.2
  * (cusp ρ Δφ²/8 between tangents of the involute, ρ = (d/2) sin α_n, Δφ = 2π z₀/(i z); derived
  * there, remembered from handbooks). The helical factor 1/cos β was settled by this project's
  * generating simulation (DEVELOPERS.md, "Generating simulation"): the transverse cusp is

@@ -7,7 +7,7 @@ import org.hobwright.api.cycle.Point;
 /**
  * Feed marks at the root along the face: each work revolution the hob tip circle (radius r_a0)
  * sweeps the root once, the sweeps spaced by the feed along the tooth trace, f_a / cos β for a
- * helical gear (the hob is set square to the tooth trace; DOMAIN.md §6.1). The axial section of
+ * helical gear (the hob is set square to the tooth trace; FORMULAS.md §6.1). The axial section of
  * the root is the upper envelope of those arcs; its scallop depth is the sagitta
  * r_a0 − √(r_a0² − (s/2)²) ≈ s² / (8 r_a0), s = f_a / cos β (turning rule R_z = f²/(8r)).
  *

@@ -187,7 +187,7 @@ final class FlankCut {
     /**
      * Height of the cusp at roll length L, mm: the cusps on either side interpolated as h/L (a
      * cusp between two tangents is ρ Δφ²/8 and the involute's radius of curvature ρ equals the roll
-     * length; DOMAIN.md §6.2), then multiplied back by L. NaN without cusps.
+     * length; FORMULAS.md §6.2), then multiplied back by L. NaN without cusps.
      */
     double cuspHeightAt(double roll) {
         if (cusps.isEmpty()) {

@@ -9,7 +9,7 @@ import org.hobwright.wizard.geometry.Involute;
  * (eq. 14), r = z m_t / 2 (eq. 1), r_b = r cos α_t (eq. 13), sin β_b = sin β cos α_n. The rack
  * datum line lies x·m_n outside the reference circle (profile shift); the rack rolls without
  * slipping on the reference circle. Per gash passage the work turns Δφ = 2π z₀ / (i z)
- * (generating ratio: one tooth per start and hob turn, i gashes per hob turn; DOMAIN.md §6.2).
+ * (generating ratio: one tooth per start and hob turn, i gashes per hob turn; FORMULAS.md §6.2).
  *
  * @param teeth              number of teeth z
  * @param normalModuleMm     m_n, mm
@@ -102,7 +102,7 @@ public record GeneratingSetup(int teeth, double normalModuleMm, double pressureA
     /**
      * Polar angle, from the tooth-space centre line, at which the right flank's involute leaves
      * the base circle: π/z − s_t/d − inv α_t, with s_t = m_t (π/2 + 2 x tan α_n) (ISO 21771 tooth
-     * thickness; DOMAIN.md §2.1).
+     * thickness; FORMULAS.md §2.1).
      */
     public double flankBaseAngleRad() {
         double mt = transverseModuleMm();

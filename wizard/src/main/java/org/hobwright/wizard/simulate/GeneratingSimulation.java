@@ -70,7 +70,7 @@ public final class GeneratingSimulation {
     /**
      * The simulation inputs of a job: the gear's tooth system gives the hob addendum h_aP0 = h_fP and
      * tip radius ρ_aP0 = ρ_fP; the thickness allowance E_sn enters as extra shift E_sn / (2 m_n tan α_n)
-     * (DOMAIN.md §2.1); the cuts are phased to put one on the centre of the space. Points 1 µm apart,
+     * (FORMULAS.md §2.1); the cuts are phased to put one on the centre of the space. Points 1 µm apart,
      * or wider when a side would need more than {@value #MAX_POINTS_PER_SIDE}.
      */
     public static GeneratingSetup setupOf(HobJob job, GearData gear) {

@@ -36,7 +36,7 @@ class JobAnalyserTest {
         return a.findings().stream().map(Finding::line).collect(Collectors.joining("\n"));
     }
 
-    // The helical worked example (DOMAIN section 1.5): d_a 66.9166, span over 5 teeth 27.7705 (case 17),
+    // The helical worked example (FORMULAS.md section 1.5): d_a 66.9166, span over 5 teeth 27.7705 (case 17),
     // η 13.2368° (case 27); class 7 f_pT = (0.001·62.1166 + 0.4·2 + 5)·2 = 11.72 → 12 µm (ISO 1328-1:2013 eq. (5),
     // by hand).
     @Test
@@ -241,7 +241,7 @@ class JobAnalyserTest {
         assertTrue(has(a, "HOB_OPPOSITE_HAND"));
     }
 
-    // Tip thickness (DOMAIN section 2.2): z 12, x 0.5, m 1 → 0.2851 mm: passes 0.25 m, fails 0.4 m for a
+    // Tip thickness (FORMULAS.md section 2.2): z 12, x 0.5, m 1 → 0.2851 mm: passes 0.25 m, fails 0.4 m for a
     // case-hardened gear; z 8, x 1.2 comes to a point.
     @Test
     void thinAndPointedTips() {
@@ -324,7 +324,7 @@ class JobAnalyserTest {
         assertEquals(Severity.INFO, only(JobAnalyser.analyse(b.build()), "INSPECTION_PIN_COMPUTED").severity());
     }
 
-    // Helical span anvils need b > W_k sin β_b + 2 mm (DOMAIN section 3.1).
+    // Helical span anvils need b > W_k sin β_b + 2 mm (FORMULAS.md section 3.1).
     @Test
     void narrowHelicalGearCannotTakeTheSpan() {
         JobBuilder b = new JobBuilder();

@@ -40,8 +40,8 @@ class GearGeometryReferenceTest {
         assertRelative(expected, actual, 5e-6, id + " " + quantity + " (" + source + ")");
     }
 
-    // Module from diametral pitch: m = 25.4 / P (drivetrainhub notebooks-gears, DOMAIN case 8) and back
-    // (m 2.5 → P 10.16, DOMAIN section 1.4).
+    // Module from diametral pitch: m = 25.4 / P (drivetrainhub notebooks-gears, FORMULAS.md case 8) and back
+    // (m 2.5 → P 10.16, FORMULAS.md section 1.4).
     @ParameterizedTest
     @CsvSource({"12, 2.11667", "10, 2.54", "32, 0.79375"})
     void diametralPitchGivesModule(double p, double module) {
@@ -49,7 +49,7 @@ class GearGeometryReferenceTest {
         assertRelative(p, new org.hobwright.api.job.Pitch.Module(module).diametralPitch(), 5e-6, "m " + module);
     }
 
-    // With an allowance the hob sits at x_E = x + E_sn/(2 m_n tan α_n) (DOMAIN section 2.1): the tooth thins by
+    // With an allowance the hob sits at x_E = x + E_sn/(2 m_n tan α_n) (FORMULAS.md section 2.1): the tooth thins by
     // exactly |E_sn| and the root deepens by |E_sn| / tan α_n on the diameter (independent arithmetic here).
     @Test
     void thicknessAllowanceThinsTheToothAndDeepensTheRoot() {

@@ -7,7 +7,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 class ToothSystemTest {
 
-    // Basic rack factors: ISO 53:1998 A-D as implemented in gfsReboucas/Drivetrain-python racks.py (DOMAIN S2);
+    // Basic rack factors: ISO 53:1998 A-D as implemented in gfsReboucas/Drivetrain-python racks.py (FORMULAS.md S2);
     // AGMA coarse/fine from Mott, Machine Elements, 4th ed., Table 8-4 (S4); 14.5° full depth from memory.
     @ParameterizedTest
     @CsvSource({
@@ -47,7 +47,7 @@ class ToothSystemTest {
         assertEquals(0.419930, s.maxRootRadiusMm(1, Math.toRadians(20)), 1e-6);
     }
 
-    // Straight-flank height h* = h_aP0 − ρ_aP0 (1 − sin α) (DOMAIN section 2.3, derived): ISO 53 A → 0.999968,
+    // Straight-flank height h* = h_aP0 − ρ_aP0 (1 − sin α) (FORMULAS.md section 2.3, derived): ISO 53 A → 0.999968,
     // 14.5° full depth → 1.00033: both ≈ 1, the classic undercut rule's h*.
     @ParameterizedTest
     @CsvSource({"iso53-a, 20, 0.999968", "full-depth-14.5, 14.5, 1.000330", "iso53-c, 20, 1.085505"})

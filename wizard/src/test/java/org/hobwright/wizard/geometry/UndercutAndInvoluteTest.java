@@ -12,7 +12,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 class UndercutAndInvoluteTest {
 
-    // Undercut limits with h* = 1 (DOMAIN cases 13, 14 and section 2.3; drivetrainhub notebooks-gears functions,
+    // Undercut limits with h* = 1 (FORMULAS.md cases 13, 14 and section 2.3; drivetrainhub notebooks-gears functions,
     // easyengcalc gear-undercut page: z_min 17 at 20°, 32 at 14.5°).
     @ParameterizedTest
     @CsvSource({
@@ -45,7 +45,7 @@ class UndercutAndInvoluteTest {
         assertTrue(g.withProfileShift(xMin + 0.1).rootFormDiameterMm() > limit.baseDiameterMm());
     }
 
-    // Newton's iteration for q = 0.05 gives 0.5120398143 rad = 29.3377° (DOMAIN case 22, section 3.2).
+    // Newton's iteration for q = 0.05 gives 0.5120398143 rad = 29.3377° (FORMULAS.md case 22, section 3.2).
     @Test
     void inverseInvoluteOfWorkedExample() {
         assertEquals(0.5120398143, Involute.inverse(0.05), 1e-10);

@@ -34,7 +34,7 @@ class InspectionReferenceTest {
         assertRelative(expected, actual, 5e-6, id + " " + quantity + " (" + source + ")");
     }
 
-    // k rule: spur x = 0 reduces to k = z·α/180° + 0.5 (classic rule, DOMAIN section 3.1); ties (z a multiple of 9
+    // k rule: spur x = 0 reduces to k = z·α/180° + 0.5 (classic rule, FORMULAS.md section 3.1); ties (z a multiple of 9
     // at 20°) take the lower neighbour like printed span tables (z 10-18 → 2, from memory).
     @ParameterizedTest
     @CsvSource({"10, 2", "18, 2", "20, 3", "24, 3", "27, 3", "36, 4", "45, 5", "100, 12"})
@@ -44,7 +44,7 @@ class InspectionReferenceTest {
         assertEquals(k, SpanMeasurement.of(g).teeth());
     }
 
-    // Same helical gear of DOMAIN case 17: k_calc 4.50088 → 5 teeth, contact on 64.0650 mm.
+    // Same helical gear of FORMULAS.md case 17: k_calc 4.50088 → 5 teeth, contact on 64.0650 mm.
     @Test
     void helicalSpanChoosesFiveTeeth() {
         SpanMeasurement s = SpanMeasurement.of(TestGears.gear(30, 2, 20, 15, 0.2));
@@ -52,7 +52,7 @@ class InspectionReferenceTest {
         assertRelative(64.0650, s.contactDiameterMm(), 5e-6, "contact diameter");
     }
 
-    // The thickness allowance enters as x_E = x + E/(2 m tan α) (DOMAIN section 2.1): the span shrinks by
+    // The thickness allowance enters as x_E = x + E/(2 m tan α) (FORMULAS.md section 2.1): the span shrinks by
     // |E| cos α_n (2 Δx m sin α = E cos α), the chordal thickness by about |E|.
     @Test
     void allowanceReducesSpanByItsNormalProjection() {

@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The exact helical approach against an independent computation of the same construction
- * (DOMAIN §7.1 option 2): commons-math3's 3-D line distance, a brute-force scan of the blank edge
+ * (FORMULAS.md §7.1 option 2): commons-math3's 3-D line distance, a brute-force scan of the blank edge
  * refined by Brent's minimiser, and Brent's root finder for the height.
  */
 class ApproachCrossCheckTest {
@@ -55,7 +55,7 @@ class ApproachCrossCheckTest {
 
     @Test
     void matchesTheWorkedExample() {
-        // DOMAIN §10 row 35: 18.1330 mm
+        // FORMULAS.md §10 row 35: 18.1330 mm
         assertEquals(18.1330, independent(4.5, 70, 66.9166, 13.2368), 5e-4);
     }
 

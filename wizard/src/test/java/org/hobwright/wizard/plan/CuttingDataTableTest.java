@@ -31,14 +31,14 @@ class CuttingDataTableTest {
 
     @Test
     void builtInRowsMatchTheRangesOfTheDesignNotes() {
-        // DOMAIN §8.2 (from memory, typical values): case-hardening steel, uncoated HSS 25–40 m/min,
+        // FORMULAS.md §8.2 (from memory, typical values): case-hardening steel, uncoated HSS 25–40 m/min,
         // roughing 1.0–3.0, finishing 0.5–1.5 mm per work revolution; HSS chip limit ≈ 0.20 mm (§8.1)
         CuttingData r = CuttingDataTable.builtIn().find("steel-case-hardening", "hss").orElseThrow();
         assertEquals(new ValueRange(25, 40), r.cuttingSpeed());
         assertEquals(new ValueRange(1.0, 3.0), r.roughFeed());
         assertEquals(new ValueRange(0.5, 1.5), r.finishFeed());
         assertEquals(0.20, r.maxChipThicknessMm());
-        // fine modules (m < 1): 0.1–0.5 mm per work revolution (DOMAIN §8.2)
+        // fine modules (m < 1): 0.1–0.5 mm per work revolution (FORMULAS.md §8.2)
         CuttingData fine = CuttingDataTable.builtIn().find("steel-case-hardening", "hss", 0.5).orElseThrow();
         assertEquals(new ValueRange(0.1, 0.5), fine.roughFeed());
     }

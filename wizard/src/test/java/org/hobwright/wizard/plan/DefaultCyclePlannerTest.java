@@ -42,7 +42,7 @@ class DefaultCyclePlannerTest {
         HobCycle c = planner.plan(SampleJobs.spurMetric());
         assertFalse(c.hasErrors(), c.findings().toString());
         SetupValues s = c.setup().orElseThrow();
-        close(272.837, s.hobRpm(), "n0, DOMAIN §10 row 29 (S12)");
+        close(272.837, s.hobRpm(), "n0, FORMULAS.md §10 row 29 (S12)");
         close(272.837 / 20, s.workRpm(), "n2 = n0 z0 / z2");
         assertEquals(20, s.syncHobTurns());
         assertEquals(1, s.syncWorkTurns());
@@ -55,23 +55,23 @@ class DefaultCyclePlannerTest {
         HobCycle c = planner.plan(SampleJobs.helicalMetric());
         assertFalse(c.hasErrors(), c.findings().toString());
         SetupValues s = c.setup().orElseThrow();
-        close(9.09457, s.workRpm(), "DOMAIN §10 row 30");
+        close(9.09457, s.workRpm(), "FORMULAS.md §10 row 30");
         assertEquals(30, s.syncHobTurns());
         // RH hob, climb: hob and work clockwise; the RH gear's extra rotation is counter-clockwise, so it
-        // opposes the work's sense (derived rule, SpindleSenses); magnitude DOMAIN §10 row 31 (S11)
+        // opposes the work's sense (derived rule, SpindleSenses); magnitude FORMULAS.md §10 row 31 (S11)
         close(-0.494308, s.differentialDegPerMm(), "differential");
         CycleStep.SyncOn on = steps(c, CycleStep.SyncOn.class).get(0);
         assertEquals(Rotation.CLOCKWISE, on.hobRotation());
         assertEquals(Rotation.CLOCKWISE, on.workRotation());
         CycleSummary sum = c.summary().orElseThrow();
-        // DOMAIN §10 rows 35 and §7.2: exact helical approach and overrun of the full-depth pass
+        // FORMULAS.md §10 rows 35 and §7.2: exact helical approach and overrun of the full-depth pass
         close(18.1330, sum.approachLengthMm(), "approach");
         close(2.83098, sum.overrunLengthMm(), "overrun");
-        // DOMAIN §10 row 36: L = 44.964 mm (2 + 2 mm clearances) at f_a 1.5 → 3.29603 min
+        // FORMULAS.md §10 row 36: L = 44.964 mm (2 + 2 mm clearances) at f_a 1.5 → 3.29603 min
         CycleStep.Feed cut = steps(c, CycleStep.Feed.class).stream().filter(CycleStep.Feed::cutting).findFirst()
                 .orElseThrow();
         assertEquals(3.29603 * 60, cut.seconds(), 3.29603 * 60 * 2e-5, "cutting time");
-        // DOMAIN §4.2: η = 13.2368° = 13° 14′ 12.4″
+        // FORMULAS.md §4.2: η = 13.2368° = 13° 14′ 12.4″
         assertEquals("13° 14′ 12.4″", s.swivelAngleDms());
         assertEquals(13.237, s.swivelSettingDeg(), 1e-9, "rounded to the holder's 0.001°");
         assertEquals("13.237°", s.swivelSettingText());
@@ -84,7 +84,8 @@ class DefaultCyclePlannerTest {
         assertEquals(List.of("swivel", "hob-shift", "sync-on", "dwell", "coolant", "rapid", "rapid", "feed", "feed",
                 "rapid", "rapid", "coolant", "sync-off", "spindles-stop"), kinds);
         assertInstanceOf(CycleStep.Comment.class, c.steps().get(0));
-        assertTrue(c.steps().stream().anyMatch(s -> s instanceof CycleStep.Comment m && m.text().startsWith("CAUTION")));
+        assertTrue(c.steps().stream().anyMatch(s -> s instanceof CycleStep.Comment m && m.text().startsWith("sync: hob 30 : work 1")),
+                "the sync comment names the ratio and the senses beside the moves");
         assertEquals(1.0, steps(c, CycleStep.Dwell.class).get(0).seconds(), "the machine's settle time");
         List<CycleStep.Feed> feeds = steps(c, CycleStep.Feed.class);
         assertFalse(feeds.get(0).cutting(), "radial infeed in air");
@@ -191,7 +192,7 @@ class DefaultCyclePlannerTest {
 
     @Test
     void defaultRoughingDepthByModule() {
-        // common practice, no source (DOMAIN §7.5): full depth in one pass up to module 2.5 mm, else
+        // common practice, no source (FORMULAS.md §7.5): full depth in one pass up to module 2.5 mm, else
         // 1.25 m_n per pass; m 3 on ISO 53 A cuts 2.25 · 3 = 6.75 mm in two passes
         HobJob m3 = new HobJob("m3", SampleJobs.spurMetric().units(), SampleJobs.gear(20, 3, 0,
                 org.hobwright.api.job.Hand.RIGHT, 0), new org.hobwright.api.job.HobSpec(
@@ -229,12 +230,12 @@ class DefaultCyclePlannerTest {
                 OptionalDouble.of(1.5), OptionalDouble.of(1.5), OptionalDouble.empty(), 0, tight, false));
         HobCycle c = planner.plan(job);
         CycleSummary s = c.summary().orElseThrow();
-        // DOMAIN §6.1/§6.2 values for d_a0 70, m 2, z 20, i 14: f 1.5 → 2.74838 µm flank, 8.03571 µm root
+        // FORMULAS.md §6.1/§6.2 values for d_a0 70, m 2, z 20, i 14: f 1.5 → 2.74838 µm flank, 8.03571 µm root
         close(2.74838, s.feedMarkFlankUm(), "flank");
         close(8.03571, s.feedMarkRootUm(), "root");
         close(FinishFormulas.envelopingDepthUm(2, 20, 1, 14, 20, 0), s.envelopingDepthUm(), "enveloping");
         assertTrue(finding(c, PlanCodes.FEED_MARK_OVER_TARGET).fix().orElseThrow().contains("0.904"),
-                "fix names the largest feed, √(4·70·0.001/sin 20°) = 0.90481 mm (DOMAIN §6.1), rounded down");
+                "fix names the largest feed, √(4·70·0.001/sin 20°) = 0.90481 mm (FORMULAS.md §6.1), rounded down");
         assertTrue(has(c, PlanCodes.ENVELOPING_OVER_TARGET));
         assertTrue(has(c, PlanCodes.CHIP_OVER_LIMIT));
         assertFalse(c.hasErrors(), "quality findings are warnings");
@@ -274,7 +275,7 @@ class DefaultCyclePlannerTest {
         HobCycle c = planner.plan(TestJobs.meteringPumpOnVarrow());
         assertFalse(c.hasErrors(), c.findings().toString());
         SetupValues s = c.setup().orElseThrow();
-        // γ = asin(1/29.5) = 1.94300° (DOMAIN §4.1), η = −γ for a spur gear, holder read in 5′ steps
+        // γ = asin(1/29.5) = 1.94300° (FORMULAS.md §4.1), η = −γ for a spur gear, holder read in 5′ steps
         assertEquals(-23.0 / 12, s.swivelSettingDeg(), 1e-12);
         assertEquals("-1° 55′", s.swivelSettingText());
         assertTrue(s.swivelDirection().contains("against"), s.swivelDirection());

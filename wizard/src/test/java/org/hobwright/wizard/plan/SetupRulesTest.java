@@ -28,7 +28,7 @@ class SetupRulesTest {
 
     @Test
     void swivelSettingInTheMachinesConvention() {
-        // η = 13.2368° (DOMAIN §4.2 example), holder read in 5′ steps
+        // η = 13.2368° (FORMULAS.md §4.2 example), holder read in 5′ steps
         SwivelSetting right = SwivelSetting.of(13.2368, holder(SwivelScale.DEGREES_MINUTES, 5.0 / 60, true));
         assertEquals(13.25, right.machineAngleDeg(), 1e-12);
         assertEquals("13° 15′", right.text());
@@ -39,7 +39,7 @@ class SetupRulesTest {
         assertTrue(flipped.direction().startsWith("turn 13° 15′ against"), flipped.direction());
         assertEquals("13.237°", SwivelSetting.of(13.2368, holder(SwivelScale.DECIMAL_DEGREES, 0.001, true)).text());
         assertEquals("13.2°", SwivelSetting.of(13.2368, holder(SwivelScale.DECIMAL_DEGREES, 0.1, true)).text());
-        // DOMAIN §4.3: 13.2368° → 13° 14′ 12.39″; a vernier read to 1″ shows 13° 14′ 12.0″
+        // FORMULAS.md §4.3: 13.2368° → 13° 14′ 12.39″; a vernier read to 1″ shows 13° 14′ 12.0″
         assertEquals("13° 14′ 12.0″", SwivelSetting.of(13.2368, holder(SwivelScale.DEGREES_MINUTES, 1.0 / 3600,
                 true)).text());
         SwivelSetting zero = SwivelSetting.of(0.01, holder(SwivelScale.DEGREES_MINUTES, 5.0 / 60, true));
@@ -60,7 +60,7 @@ class SetupRulesTest {
         SpindleSenses rhConv = SpindleSenses.of(Hand.RIGHT, HobbingMethod.CONVENTIONAL, Hand.RIGHT);
         assertEquals(Rotation.COUNTER_CLOCKWISE, rhConv.hob());
         assertEquals(Rotation.COUNTER_CLOCKWISE, rhConv.work());
-        // RH gear: extra rotation counter-clockwise seen from the entry face (DOMAIN §5.2)
+        // RH gear: extra rotation counter-clockwise seen from the entry face (FORMULAS.md §5.2)
         assertEquals(-1, rhClimb.differentialSign());
         assertEquals(1, rhConv.differentialSign());
         assertEquals(1, SpindleSenses.of(Hand.RIGHT, HobbingMethod.CLIMB, Hand.LEFT).differentialSign());
@@ -112,7 +112,7 @@ class SetupRulesTest {
     void targetsFromTheJobTheToleranceClassOrTheTable() {
         QualityDefaults d = CuttingDataTable.builtIn().qualityDefaults();
         CuttingData row = CuttingDataTable.builtIn().find("brass", "hss").orElseThrow();
-        // DOMAIN §9.1 worked example (m_n 2, d 62.1166, b 20, class 6): f_fαT 8.5, f_fβT 9.5 µm
+        // FORMULAS.md §9.1 worked example (m_n 2, d 62.1166, b 20, class 6): f_fαT 8.5, f_fβT 9.5 µm
         ToleranceData tol = new ToleranceData(6, 8.5, 25, 7.0, 8.5, 11, 8.5, 9.5, 13);
         Targets fromClass = Targets.of(QualityTargets.DEFAULTS, Optional.of(tol), d, Optional.of(row));
         assertEquals(d.toleranceShare() * 9.5, fromClass.feedMarkUm(), 1e-12);
@@ -134,7 +134,7 @@ class SetupRulesTest {
         var cycle = TestJobs.shiftAndFastest(job.cycle(), 0.5, 10, false);
         List<Finding> f = new ArrayList<>();
         HobShiftPlan p = HobShiftPlan.of(job.machine(), job.hob(), cycle, 4.5, 20, f).orElseThrow();
-        // working width 2·4.5/tan 20° (generating zone, DOMAIN §7.2, derived) + π·2 (one axial pitch,
+        // working width 2·4.5/tan 20° (generating zone, FORMULAS.md §7.2, derived) + π·2 (one axial pitch,
         // common practice, no source) = 31.0105 mm; hob 80 mm, axis 60 mm → usable 48.9895 mm
         assertEquals(80 - (9 / Math.tan(Math.toRadians(20)) + 2 * Math.PI), p.usableMm(), 1e-9);
         assertEquals(98, p.positions());

@@ -19,8 +19,8 @@ import org.junit.jupiter.params.provider.CsvSource;
 class HobSetupTest {
     private static final ToothSystem ISO_A = ToothSystem.builtIn("iso53-a").orElseThrow();
 
-    // Hob lead angle sin γ = z₀ m_n / d_m0 (hob computation page, DOMAIN S10, case 26): m 2, d_a0 70 →
-    // d_m0 = 70 − 2·2.5 = 65, γ = 1.76323° = 1° 45′ 47.6″; two starts 3.52812° = 3° 31′ 41.2″ (DOMAIN section 4.1).
+    // Hob lead angle sin γ = z₀ m_n / d_m0 (hob computation page, FORMULAS.md S10, case 26): m 2, d_a0 70 →
+    // d_m0 = 70 − 2·2.5 = 65, γ = 1.76323° = 1° 45′ 47.6″; two starts 3.52812° = 3° 31′ 41.2″ (FORMULAS.md section 4.1).
     @ParameterizedTest
     @CsvSource({"1, 1.76323, 1° 45′ 47.6″", "2, 3.52812, 3° 31′ 41.2″"})
     void leadAngleFromStartsModuleAndReferenceDiameter(int starts, double gamma, String dms) {
@@ -32,7 +32,7 @@ class HobSetupTest {
         assertEquals(dms, s.leadAngleDms());
     }
 
-    // Swivel η = β − γ (DOMAIN section 4.2, case 27): β +15°, RH hob → 13.2368° (13° 14′ 12.4″);
+    // Swivel η = β − γ (FORMULAS.md section 4.2, case 27): β +15°, RH hob → 13.2368° (13° 14′ 12.4″);
     // LH hob → 16.7632°; spur with RH hob → −1.76323°; LH gear with LH hob → −13.2368°.
     @ParameterizedTest
     @CsvSource({
@@ -43,7 +43,7 @@ class HobSetupTest {
         assertEquals(eta, s.swivelAngleDeg(), 5e-5);
     }
 
-    // DMS of the worked swivel: 13.23677° → 13° 14′ 12.4″ (DOMAIN section 4.3, 12.39″ rounded to 0.1″).
+    // DMS of the worked swivel: 13.23677° → 13° 14′ 12.4″ (FORMULAS.md section 4.3, 12.39″ rounded to 0.1″).
     @Test
     void swivelInDegreesMinutesSeconds() {
         HobSetup s = HobSetup.of(SampleJobs.gear(30, 2, 15, Hand.RIGHT, 0.2), SampleJobs.hob(2, Hand.RIGHT), ISO_A);

@@ -34,7 +34,7 @@ class ConvergenceTest {
             ToothSpaceSimulation sim = GeneratingSimulation.run(s);
             double worst = worst(s, sim.rightInvolute(), 400, ConvergenceTest::distanceToInvolute);
             // the envelope never cuts into the involute (checked in worst), and its distance falls about as 1/i²
-            // (cusp ρ Δφ²/8, DOMAIN.md §6.2): a fourfold gash count divides it by about 16
+            // (cusp ρ Δφ²/8, FORMULAS.md §6.2): a fourfold gash count divides it by about 16
             assertTrue(worst < previous / 10, gashes + " gashes: " + worst + " vs " + previous);
             // the reported maximum sits on exact cusps; the sampled brute force may only fall short of it
             double reported = sim.profileDeviationMaxMm();
@@ -62,7 +62,7 @@ class ConvergenceTest {
      * Distance from a point to the right flank's involute, mm. Involute of the base circle r_b
      * (textbook parametric form) r_b (cos θ + θ sin θ, sin θ − θ cos θ), turned so that it passes
      * through the reference circle at the half space width e_t/2 = (p_t − s_t)/2, s_t = m_t (π/2 + 2x tan α)
-     * (ISO 21771 / DOMAIN.md §2.1). Positive outside the tooth (in the space).
+     * (ISO 21771 / FORMULAS.md §2.1). Positive outside the tooth (in the space).
      */
     static double distanceToInvolute(GeneratingSetup s, Point p) {
         double r = s.referenceRadiusMm();

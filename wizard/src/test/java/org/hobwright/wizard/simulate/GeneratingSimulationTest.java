@@ -29,11 +29,11 @@ class GeneratingSimulationTest {
 
     @Test
     void helicalSampleJob() {
-        // m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A, 14-gash single-start hob (DOMAIN.md §1.5 gear)
+        // m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A, 14-gash single-start hob (FORMULAS.md §1.5 gear)
         HobJob job = SampleJobs.helicalMetric();
         GearData gear = geometry(job.gear());
         SimulationData data = GeneratingSimulation.simulate(job, gear);
-        // closed form: DOMAIN.md §6.2 spur value 0.287041 µm divided by cos 15° (the settled helical factor)
+        // closed form: FORMULAS.md §6.2 spur value 0.287041 µm divided by cos 15° (the settled helical factor)
         assertEquals(0.287041e-3 / Math.cos(Math.toRadians(15)), data.closedFormEnvelopingDepthMm(), 1e-9);
         assertEquals(data.closedFormEnvelopingDepthMm(), data.envelopingDepthMm(), 0.01 * data.envelopingDepthMm());
         assertFalse(data.undercut());
@@ -91,7 +91,7 @@ class GeneratingSimulationTest {
     @Test
     void activeInvoluteStartConvergesToTheFormCircle() {
         // form circle from the rack alone: the straight flank's end at depth h* m below the datum meets the
-        // involute at roll length L = r sin α − (h* − x) m / sin α (DOMAIN.md §2.3 geometry)
+        // involute at roll length L = r sin α − (h* − x) m / sin α (FORMULAS.md §2.3 geometry)
         double previous = Double.POSITIVE_INFINITY;
         for (int gashes : new int[] {12, 96, 768}) {
             ToothSpaceSimulation sim = GeneratingSimulation.run(Jobs.setup(24, 2, 0, 0.1, "iso53-a", 1, gashes));

@@ -12,14 +12,14 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * DOMAIN.md §6.2 leaves open whether the helical enveloping depth carries cos³ β (virtual spur
+ * FORMULAS.md §6.2 leaves open whether the helical enveloping depth carries cos³ β (virtual spur
  * gear) or 1/cos β (transverse-plane derivation). The simulation decides: its measured depth,
  * normal to the flank, follows the spur form / cos β within 1 %, and at 30° and 45° lies far from
  * the cos³ β form. These are the deciding cases quoted in DEVELOPERS.md ("Generating simulation").
  */
 class HelicalFactorTest {
 
-    /** The spur closed form δ = π² z₀² m_n sin α_n / (4 z i²), DOMAIN.md §6.2. */
+    /** The spur closed form δ = π² z₀² m_n sin α_n / (4 z i²), FORMULAS.md §6.2. */
     private static double spurForm(double m, int z, int starts, int gashes) {
         return Math.PI * Math.PI * starts * starts * m * Math.sin(Math.toRadians(20)) / (4.0 * z * gashes * gashes);
     }

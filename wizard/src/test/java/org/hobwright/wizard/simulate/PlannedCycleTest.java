@@ -18,7 +18,7 @@ class PlannedCycleTest {
             HobCycle cycle = new DefaultCyclePlanner().plan(job);
             SimulationData sim = cycle.simulation().orElseThrow();
             double plannerMm = cycle.summary().orElseThrow().envelopingDepthUm() / 1000;
-            // two independent methods: the planner's closed form (DOMAIN.md §6.2 with the settled 1/cos β)
+            // two independent methods: the planner's closed form (FORMULAS.md §6.2 with the settled 1/cos β)
             // and the depth measured on the simulated flank
             assertEquals(plannerMm, sim.envelopingDepthMm(), 0.10 * plannerMm, job.name());
             assertEquals(plannerMm, sim.closedFormEnvelopingDepthMm(), 1e-12, job.name());

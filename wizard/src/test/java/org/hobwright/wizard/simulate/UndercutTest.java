@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The simulation's undercut (some cut reaches inside the true involute) against the engineering
- * rule for rack generation, DOMAIN.md §2.3 (source S3, numbers S9), which the engineering core's
+ * rule for rack generation, FORMULAS.md §2.3 (source S3, numbers S9), which the engineering core's
  * undercut check ({@link Undercut}) also applies:
  * x_min = h* − z sin² α_t / (2 cos β), h* = h_aP0* − ρ_aP0* (1 − sin α_n) the height of the
  * tool's straight flank below the datum line.
@@ -33,7 +33,7 @@ class UndercutTest {
 
     @Test
     void ruleReproducesThePublishedLimits() {
-        // DOMAIN.md §2.3 / §10 cases 13, 14: x_min(z 12, 20°) = 0.298133 with h* = 1 (ISO 53 A gives 0.99997)
+        // FORMULAS.md §2.3 / §10 cases 13, 14: x_min(z 12, 20°) = 0.298133 with h* = 1 (ISO 53 A gives 0.99997)
         assertEquals(0.298133, minimumShift("iso53-a", 12, 0), 5e-5);
         assertEquals(0.227691, minimumShift("iso53-a", 12, 15), 5e-5);
     }

@@ -10,7 +10,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 class FlankTolerancesTest {
 
-    // ISO 1328-1:2013 eq. (5)-(12), worked examples of DOMAIN section 9.1 (case 38), computed with the formulas as
+    // ISO 1328-1:2013 eq. (5)-(12), worked examples of FORMULAS.md section 9.1 (case 38), computed with the formulas as
     // implemented in three public implementations (S14); f_HαT with the 0.001 d term (see FlankTolerances).
     // columns: class, d, m_n, b, then unrounded f_pT, F_pT, f_HαT, f_fαT, F_αT, f_HβT, f_fβT, F_βT
     @ParameterizedTest
@@ -27,7 +27,7 @@ class FlankTolerancesTest {
         }
     }
 
-    // Rounded by clause 5.2.3 (DOMAIN section 9.1 tables): class 6 → 8.5, 25, 7.0, 8.5, 11, 8.5, 9.5, 13;
+    // Rounded by clause 5.2.3 (FORMULAS.md section 9.1 tables): class 6 → 8.5, 25, 7.0, 8.5, 11, 8.5, 9.5, 13;
     // class 7 → 13, 41, 11, 13, 17, 13, 14, 19.
     @ParameterizedTest
     @CsvSource({
