@@ -4,23 +4,24 @@
 #   wizard/hobwright demo      → builds the tool on first use, writes hobwright-out/
 #   mvn -B verify              → runs every test
 #
-#   samples/src/test/sh/fresh-clone.sh [REPOSITORY [BRANCH]]
+#   samples/src/test/sh/fresh-clone.sh [REPOSITORY [REVISION]]
 #
-# Defaults: the repository this script is in, and the branch checked out here.
+# Defaults: the repository this script is in, and the commit checked out here.
 #
 # Set FRESH_MAVEN_REPO=1 to start from an empty local Maven repository as well (downloads about
 # 60 MB from Maven Central). Exits non-zero, saying which step failed, when anything is missing.
 set -euo pipefail
 here="$(cd "$(dirname "${BASH_SOURCE[0]}")" && pwd)"
 source_repo="${1:-$(git -C "$here" rev-parse --show-toplevel)}"
-branch="${2:-$(git -C "$here" rev-parse --abbrev-ref HEAD)}"
+revision="${2:-$(git -C "$here" rev-parse HEAD)}"
 work="$(mktemp -d)"
 trap 'rm -rf "$work"' EXIT
 
 fail() { echo "fresh-clone: FAILED: $*" >&2; exit 1; }
 
-git clone -q --branch "$branch" "$source_repo" "$work/hobwright"
+git clone -q "$source_repo" "$work/hobwright"
 cd "$work/hobwright"
+git checkout -q "$revision"
 echo "fresh-clone: cloned $(git log --oneline -1) into $work/hobwright"
 
 if [ "${FRESH_MAVEN_REPO:-0}" = 1 ]; then
