@@ -37,7 +37,7 @@ public final class HeaderSteps {
             out.add(comment("differential: " + Text.signed(drive.differentialDegPerMm(), 6)
                     + " deg of work rotation per mm of axial feed"));
         }
-        shift.ifPresent(p -> out.add(comment(p.describe())));
+        shift.ifPresent(p -> out.add(comment(p.describe(job.units()))));
         if (job.machine().swivel().programmable()) {
             out.add(new CycleStep.Swivel(swivel.machineAngleDeg(), 0));
         }

@@ -6,7 +6,9 @@ import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.HobSpec;
+
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.api.job.Units;
 
 /**
  * Hob shifting between parts, so that wear spreads along the hob.
@@ -66,12 +68,16 @@ public record HobShiftPlan(double positionMm, double usableMm, double stepMm, in
         return ((k / everyParts) % positions) * stepMm;
     }
 
-    /** One line for the program header. */
-    public String describe() {
+    /** One line for the program, lengths in the job's units. */
+    public String describe(Units units) {
+        String u = " " + units.symbol();
+        int decimals = units == Units.IN ? 4 : 3;
         if (stepMm <= 0) {
-            return "hob shift position " + Text.fixed(positionMm, 3) + " mm (no shifting between parts)";
+            return "hob shift position " + Text.fixed(units.fromMm(positionMm), decimals) + u
+                    + " (no shifting between parts)";
         }
-        return "hob shift " + Text.fixed(stepMm, 3) + " mm every " + everyParts + " part(s), from 0 to "
-                + Text.fixed((positions - 1) * stepMm, 3) + " mm, then back to 0";
+        return "hob shift " + Text.fixed(units.fromMm(stepMm), decimals) + u + " every " + everyParts
+                + (everyParts == 1 ? " part" : " parts") + ", from 0 to "
+                + Text.fixed(units.fromMm((positions - 1) * stepMm), decimals) + u + ", then back to 0";
     }
 }

@@ -35,10 +35,10 @@ public record SwivelSetting(double machineAngleDeg, String text, String directio
         if (rounded == 0) {
             direction = "no swivel: hob axis square to the work axis";
         } else if (rounded > 0) {
-            direction = "turn " + text + " in this machine's positive sense (" + holder.positiveSense() + ")";
+            direction = "swing " + text + " in the positive direction (on this machine: " + holder.positiveSense() + ")";
         } else {
-            direction = "turn " + text(-rounded, holder) + " against this machine's positive sense (opposite of: "
-                    + holder.positiveSense() + ")";
+            direction = "swing " + text(-rounded, holder) + " in the negative direction (on this machine positive is: "
+                    + holder.positiveSense() + "; go the other way)";
         }
         return new SwivelSetting(rounded, text, direction);
     }

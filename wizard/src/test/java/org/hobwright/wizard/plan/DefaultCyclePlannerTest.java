@@ -278,7 +278,7 @@ class DefaultCyclePlannerTest {
         // γ = asin(1/29.5) = 1.94300° (FORMULAS.md §4.1), η = −γ for a spur gear, holder read in 5′ steps
         assertEquals(-23.0 / 12, s.swivelSettingDeg(), 1e-12);
         assertEquals("-1° 55′", s.swivelSettingText());
-        assertTrue(s.swivelDirection().contains("against"), s.swivelDirection());
+        assertTrue(s.swivelDirection().contains("in the negative direction"), s.swivelDirection());
         assertTrue(has(c, PlanCodes.SWIVEL_ROUNDED));
         assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.Swivel), "manual holder");
         assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.HobShift), "no shift axis");
@@ -292,7 +292,7 @@ class DefaultCyclePlannerTest {
         HobCycle c = planner.plan(job);
         assertEquals(1, steps(c, CycleStep.HobShift.class).size());
         assertTrue(c.steps().stream().anyMatch(s -> s instanceof CycleStep.Comment m && m.text().startsWith(
-                "hob shift 0.500 mm every 10 part(s)")));
+                "hob shift 0.500 mm every 10 parts")));
         assertEquals(0.0, c.setup().orElseThrow().hobShiftMm());
     }
 

@@ -32,11 +32,11 @@ class SetupRulesTest {
         SwivelSetting right = SwivelSetting.of(13.2368, holder(SwivelScale.DEGREES_MINUTES, 5.0 / 60, true));
         assertEquals(13.25, right.machineAngleDeg(), 1e-12);
         assertEquals("13° 15′", right.text());
-        assertTrue(right.direction().contains("in this machine's positive sense (top of the hob toward the chuck)"));
+        assertTrue(right.direction().contains("in the positive direction (on this machine: top of the hob toward the chuck)"));
         SwivelSetting flipped = SwivelSetting.of(13.2368, holder(SwivelScale.DEGREES_MINUTES, 5.0 / 60, false));
         assertEquals(-13.25, flipped.machineAngleDeg(), 1e-12);
         assertEquals("-13° 15′", flipped.text());
-        assertTrue(flipped.direction().startsWith("turn 13° 15′ against"), flipped.direction());
+        assertTrue(flipped.direction().startsWith("swing 13° 15′ in the negative direction"), flipped.direction());
         assertEquals("13.237°", SwivelSetting.of(13.2368, holder(SwivelScale.DECIMAL_DEGREES, 0.001, true)).text());
         assertEquals("13.2°", SwivelSetting.of(13.2368, holder(SwivelScale.DECIMAL_DEGREES, 0.1, true)).text());
         // FORMULAS.md §4.3: 13.2368° → 13° 14′ 12.39″; a vernier read to 1″ shows 13° 14′ 12.0″
