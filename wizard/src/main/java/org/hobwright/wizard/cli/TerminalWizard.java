@@ -72,18 +72,37 @@ final class TerminalWizard {
 
     /**
      * Asks the fields; false when the user went back: to the whole step from a subset, else to the
-     * previous step.
+     * previous step. Fields that do not apply are passed over (see {@link #applies}); the drawing's
+     * printed values are asked only after a yes to one question.
      */
     private boolean askFields(List<FieldSpec> fields, boolean subset) {
+        Boolean drawing = subset ? Boolean.TRUE : null;
         int i = 0;
+        int step = 1;
         while (i < fields.size()) {
             FieldSpec f = fields.get(i);
+            if (isDrawing(f) && drawing == null) {
+                drawing = yes(read("  Compare with values printed on the drawing? [" + (anyDrawingValue(fields)
+                        ? "yes" : "no") + "] > "), anyDrawingValue(fields));
+            }
+            if (!applies(f, wizard) || isDrawing(f) && !drawing) {
+                i += step;
+                if (i < 0) {
+                    return !(subset || goBack());
+                }
+                continue;
+            }
+            step = 1;
             String line = read(prompt(f, wizard.value(f.key())));
             if (line.equals("?")) {
                 help(f);
             } else if (line.equalsIgnoreCase("back")) {
+                if (isDrawing(f) && (i == 0 || !isDrawing(fields.get(i - 1)))) {
+                    drawing = null;                      // the yes/no question is asked again
+                }
                 if (i > 0) {
                     i--;
+                    step = -1;
                 } else if (subset || goBack()) {
                     return false;
                 }
@@ -98,6 +117,20 @@ final class TerminalWizard {
             }
         }
         return true;
+    }
+
+    /** True when a question applies: the custom rack factors only for the custom tooth system. */
+    static boolean applies(FieldSpec f, Wizard wizard) {
+        return !f.key().startsWith("gear.custom.") || "custom".equals(wizard.value("gear.toothSystem"));
+    }
+
+    /** True for a value printed on the drawing. */
+    static boolean isDrawing(FieldSpec f) {
+        return f.key().startsWith("gear.drawing.");
+    }
+
+    private boolean anyDrawingValue(List<FieldSpec> fields) {
+        return fields.stream().filter(TerminalWizard::isDrawing).anyMatch(f -> !wizard.value(f.key()).isEmpty());
     }
 
     /**

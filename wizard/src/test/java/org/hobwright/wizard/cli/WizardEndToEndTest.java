@@ -38,10 +38,25 @@ class WizardEndToEndTest {
         loader = new URLClassLoader(new URL[] {dir.resolve("extra").toUri().toURL()}, getClass().getClassLoader());
     }
 
-    /** Enter for every field of a step, except the answers given. */
+    /**
+     * Enter for every question of a step, except the answers given. The custom rack factors are not
+     * asked (the sample's tooth system is not custom), and the drawing's values are declined with
+     * Enter at their yes/no question.
+     */
     private static List<String> step(StepId id, java.util.Map<String, List<String>> answers) {
         List<String> lines = new ArrayList<>();
+        boolean drawingAsked = false;
         for (Field f : Fields.of(id)) {
+            if (f.key().startsWith("gear.custom.")) {
+                continue;
+            }
+            if (f.key().startsWith("gear.drawing.")) {
+                if (!drawingAsked) {
+                    lines.add("");
+                    drawingAsked = true;
+                }
+                continue;
+            }
             lines.addAll(answers.getOrDefault(f.key(), List.of("")));
         }
         return lines;
@@ -86,6 +101,43 @@ class WizardEndToEndTest {
             assertArrayEquals(Files.readAllBytes(planOut.resolve(name)), Files.readAllBytes(wizardOut.resolve(name)),
                     name);
         }
+    }
+
+    @Test
+    void customFactorsAndDrawingValuesAreAskedOnlyWhenTheyApply() {
+        List<String> in = new ArrayList<>();
+        boolean drawingAsked = false;
+        for (Field f : Fields.of(StepId.GEAR)) {
+            switch (f.key()) {
+                case "gear.toothSystem" -> in.add("custom");
+                case "gear.custom.addendum" -> in.add("1");
+                case "gear.custom.dedendum" -> in.add("1.25");
+                case "gear.custom.rootRadius" -> in.add("0.3");
+                case "gear.drawing.outsideDiameter" -> in.add("27");   // the tip is 26 mm (24 teeth, module 1)
+                default -> {
+                    if (f.key().startsWith("gear.drawing.") && !drawingAsked) {
+                        in.add(in.size(), "yes");                      // compare with the drawing
+                        drawingAsked = true;
+                        in.add("");
+                    } else {
+                        in.add("");
+                    }
+                }
+            }
+        }
+        Cli.Run r = Cli.run(dir.resolve("home"), String.join("\n", in) + "\n", loader, "wizard");
+        assertTrue(r.out().contains("Custom addendum factor"), r::toString);
+        assertTrue(r.out().contains("Compare with values printed on the drawing?"), r::toString);
+        assertTrue(r.out().contains("DRAWING_OUTSIDE_DIAMETER"), r::toString);
+    }
+
+    @Test
+    void theSampleIsNotAskedForCustomFactorsNorDrawingValues() {
+        Cli.Run r = Cli.run(dir.resolve("home"), String.join("\n", step(StepId.GEAR, java.util.Map.of())) + "\n",
+                loader, "wizard");
+        assertFalse(r.out().contains("Custom addendum factor"), r::toString);
+        assertFalse(r.out().contains("Drawing: outside diameter"), r::toString);
+        assertTrue(r.out().contains("Step 2 of 5"), r::toString);
     }
 
     @Test
