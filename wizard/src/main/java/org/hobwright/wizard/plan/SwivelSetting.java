@@ -38,7 +38,7 @@ public record SwivelSetting(double machineAngleDeg, String text, String directio
             direction = "swing " + text + " in the positive direction (on this machine: " + holder.positiveSense() + ")";
         } else {
             direction = "swing " + text(-rounded, holder) + " in the negative direction (on this machine positive is: "
-                    + holder.positiveSense() + "; go the other way)";
+                    + holder.positiveSense() + ", so turn the other way)";
         }
         return new SwivelSetting(rounded, text, direction);
     }
