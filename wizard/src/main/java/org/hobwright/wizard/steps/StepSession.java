@@ -28,6 +28,14 @@ import org.hobwright.api.wizard.Wizard;
  */
 public final class StepSession implements Wizard {
     private static final StepId[] ORDER = StepId.values();
+    /**
+     * The hob's pitch and pressure angle follow the gear's while they are equal to it, so a gear
+     * answered with a new module gets a matching hob proposed (a hob must match the gear's normal
+     * module and pressure angle).
+     */
+    private static final java.util.Map<String, String> HOB_FOLLOWS = java.util.Map.of(
+            "gear.module", "hob.module", "gear.diametralPitch", "hob.diametralPitch",
+            "gear.pressureAngle", "hob.pressureAngle");
 
     private final StepServices services;
     private final Answers answers;
@@ -83,6 +91,10 @@ public final class StepSession implements Wizard {
         }
         if (field.get().type() == FieldType.BOOLEAN && !value.isEmpty()) {
             value = FieldCheck.yesNo(value).orElseThrow() ? "yes" : "no";
+        }
+        String hobKey = HOB_FOLLOWS.get(key);
+        if (hobKey != null && answers.get(hobKey).equals(answers.get(key))) {
+            answers.put(hobKey, value);
         }
         answers.put(key, value);
         if (key.equals(Fields.MACHINE) && !services.templates(value).contains(answers.get(Fields.TEMPLATE))) {

@@ -145,6 +145,24 @@ class StepSessionTest {
     }
 
     @Test
+    void theHobFollowsTheGearsPitchAndPressureAngleUntilAnsweredOtherwise() {
+        Wizard w = session();
+        assertTrue(w.answer("gear.module", "0.8").isEmpty());
+        assertEquals("0.8", w.value("hob.module"), "a hob must match the gear's normal module");
+        assertTrue(w.answer("gear.pressureAngle", "14.5").isEmpty());
+        assertEquals("14.5", w.value("hob.pressureAngle"));
+        assertTrue(w.answer("gear.pressureAngle", "20").isEmpty());
+        assertEquals("20", w.value("hob.pressureAngle"));
+        assertTrue(w.answer("gear.blankDiameter", "20.8").isEmpty());   // tip of 24 teeth, module 0.8
+        Transition t = w.next(true);
+        assertTrue(t.moved(), t::toString);
+        assertTrue(w.answer("hob.module", "1.0").isEmpty());   // a deliberate mismatch stays
+        assertTrue(w.back().moved());
+        assertTrue(w.answer("gear.module", "0.5").isEmpty());
+        assertEquals("1.0", w.value("hob.module"));
+    }
+
+    @Test
     void anErrorOfTheJobBlocksNext() {
         Wizard w = session();
         // module and diametral pitch both given: exactly one gives the pitch (job file format, version 1)
