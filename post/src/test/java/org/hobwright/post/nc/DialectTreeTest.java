@@ -1,0 +1,77 @@
+package org.hobwright.post.nc;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Optional;
+import org.hobwright.post.Fixtures;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import tools.jackson.databind.DeserializationFeature;
+import tools.jackson.databind.MapperFeature;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * The hand binding of a dialect tree against Jackson's record binding (configured as the loader
+ * configures it), the independent reference: where the hand binding answers, both give equal
+ * records; forms it leaves to Jackson give empty.
+ */
+class DialectTreeTest {
+
+    private static final JsonMapper JACKSON = JsonMapper.builder()
+            .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+            .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)
+            .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
+            .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
+            .build();
+
+    private static final String VARROW = Fixtures.dialectText("varrow-ctl");
+
+    private static Optional<DialectFile> hand(String json) {
+        return DialectTree.bind(JACKSON.readTree(json));
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"varrow-ctl", "ottmere-ctl"})
+    void shippedDialectsBindAsJacksonBindsThem(String name) {
+        String json = Fixtures.dialectText(name);
+        Optional<DialectFile> hand = hand(json);
+        assertTrue(hand.isPresent(), name);
+        assertEquals(JACKSON.readValue(json, DialectFile.class), hand.get());
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {
+        "\"prologue\": [\"%\"],|\"prologue\": \"%\",",
+        "\"prologue\": [\"%\"],|\"prologue\": [],",
+        "\"trailingZeros\": true,|",
+        "\"trailingZeros\": true,|\"trailingZeros\": false,",
+        "\"version\": 1,|\"version\": -0,"})
+    void plainVariantsBindAsJacksonBindsThem(String change) {
+        String[] c = change.split("\\|", -1);
+        assertTrue(VARROW.contains(c[0]), c[0]);
+        String json = VARROW.replace(c[0], c[1]);
+        Optional<DialectFile> hand = hand(json);
+        assertTrue(hand.isPresent(), change);
+        assertEquals(JACKSON.readValue(json, DialectFile.class), hand.get(), change);
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {
+        "\"trailingZeros\": true,|\"trailingZeroes\": true,",
+        "\"trailingZeros\": true,|\"trailingZeros\": null,",
+        "\"trailingZeros\": true,|\"trailingZeros\": \"true\",",
+        "\"mm\": 3,|\"mm\": 2.5,",
+        "\"mm\": 3,|\"mm\": 3.0,",
+        "\"mm\": 3,|\"mm\": \"three\",",
+        "\"mm\": 3,|\"mm\": 3000000000,",
+        "\"prologue\": [\"%\"],|\"prologue\": [1],",
+        "\"prologue\": [\"%\"],|\"prologue\": [null],",
+        "\"prologue\": [\"%\"],|\"prologue\": {},"})
+    void otherFormsAreLeftToJackson(String change) {
+        String[] c = change.split("\\|", -1);
+        assertTrue(VARROW.contains(c[0]), c[0]);
+        assertTrue(hand(VARROW.replace(c[0], c[1])).isEmpty(), change);
+    }
+}
