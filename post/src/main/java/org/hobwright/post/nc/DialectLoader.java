@@ -35,7 +35,8 @@ public final class DialectLoader {
 
     private static final String SOURCE = "Hobwright dialect format, post/README.md";
 
-    private static final JsonMapper MAPPER = JsonMapper.builder()
+    /** The mapper for dialect files; its binding is the reference for {@link DialectTree}. */
+    static final JsonMapper MAPPER = JsonMapper.builder()
             .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)

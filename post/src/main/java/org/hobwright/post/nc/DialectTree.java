@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.Function;
+import java.util.function.Predicate;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -151,25 +152,22 @@ final class DialectTree {
         }
 
         Integer integer(String key) {
-            JsonNode v = get(key);
-            if (v == null) {
-                return null;
-            }
-            if (!v.isInt()) {
-                throw new NotPlain();
-            }
-            return v.intValue();
+            return scalar(key, JsonNode::isInt, JsonNode::intValue);
         }
 
         Boolean bool(String key) {
+            return scalar(key, JsonNode::isBoolean, JsonNode::booleanValue);
+        }
+
+        private <T> T scalar(String key, Predicate<JsonNode> plain, Function<JsonNode, T> value) {
             JsonNode v = get(key);
             if (v == null) {
                 return null;
             }
-            if (!v.isBoolean()) {
+            if (!plain.test(v)) {
                 throw new NotPlain();
             }
-            return v.booleanValue();
+            return value.apply(v);
         }
 
         List<String> texts(String key) {

@@ -7,29 +7,28 @@ import java.util.Optional;
 import org.hobwright.post.Fixtures;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import tools.jackson.databind.DeserializationFeature;
-import tools.jackson.databind.MapperFeature;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
- * The hand binding of a dialect tree against Jackson's record binding (configured as the loader
- * configures it), the independent reference: where the hand binding answers, both give equal
+ * The hand binding of a dialect tree against Jackson's record binding with the loader's mapper,
+ * the independent reference: where the hand binding answers, both give equal
  * records; forms it leaves to Jackson give empty.
  */
 class DialectTreeTest {
 
-    private static final JsonMapper JACKSON = JsonMapper.builder()
-            .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-            .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)
-            .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
-            .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
-            .build();
+    private static final JsonMapper JACKSON = DialectLoader.MAPPER;
 
     private static final String VARROW = Fixtures.dialectText("varrow-ctl");
 
     private static Optional<DialectFile> hand(String json) {
         return DialectTree.bind(JACKSON.readTree(json));
+    }
+
+    /** The shipped Varrow dialect with one change, written {@code old|new}. */
+    private static String variant(String change) {
+        String[] c = change.split("\\|", -1);
+        assertTrue(VARROW.contains(c[0]), c[0]);
+        return VARROW.replace(c[0], c[1]);
     }
 
     @ParameterizedTest
@@ -49,9 +48,7 @@ class DialectTreeTest {
         "\"trailingZeros\": true,|\"trailingZeros\": false,",
         "\"version\": 1,|\"version\": -0,"})
     void plainVariantsBindAsJacksonBindsThem(String change) {
-        String[] c = change.split("\\|", -1);
-        assertTrue(VARROW.contains(c[0]), c[0]);
-        String json = VARROW.replace(c[0], c[1]);
+        String json = variant(change);
         Optional<DialectFile> hand = hand(json);
         assertTrue(hand.isPresent(), change);
         assertEquals(JACKSON.readValue(json, DialectFile.class), hand.get(), change);
@@ -70,8 +67,6 @@ class DialectTreeTest {
         "\"prologue\": [\"%\"],|\"prologue\": [null],",
         "\"prologue\": [\"%\"],|\"prologue\": {},"})
     void otherFormsAreLeftToJackson(String change) {
-        String[] c = change.split("\\|", -1);
-        assertTrue(VARROW.contains(c[0]), c[0]);
-        assertTrue(hand(VARROW.replace(c[0], c[1])).isEmpty(), change);
+        assertTrue(hand(variant(change)).isEmpty(), change);
     }
 }
