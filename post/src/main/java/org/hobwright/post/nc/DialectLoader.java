@@ -10,8 +10,11 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.post.nc.DialectFile.RotationWords;
 import tools.jackson.core.JacksonException;
+import tools.jackson.core.StreamReadFeature;
 import tools.jackson.databind.DeserializationFeature;
+import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.MapperFeature;
+import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
@@ -32,13 +35,16 @@ public final class DialectLoader {
 
     private static final String SOURCE = "Hobwright dialect format, post/README.md";
 
-    private static final JsonMapper MAPPER = JsonMapper.builder()
+    /** The mapper for dialect files; its binding is the reference for {@link DialectTree}. */
+    static final JsonMapper MAPPER = JsonMapper.builder()
             .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)
             .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
             .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
             .build();
+
+    private static final ObjectReader STRICT = MAPPER.reader().with(StreamReadFeature.STRICT_DUPLICATE_DETECTION);
 
     private DialectLoader() {
     }
@@ -64,9 +70,10 @@ public final class DialectLoader {
      */
     public static Loaded load(String fileName, String json) {
         JsonLines lines = JsonLines.of(MAPPER, json);
+        Optional<DialectFile> plain = plain(json);
         DialectFile file;
         try {
-            file = MAPPER.readValue(json, DialectFile.class);
+            file = plain.isPresent() ? plain.get() : MAPPER.readValue(json, DialectFile.class);
         } catch (JacksonException e) {
             String pointer = e.getPath().stream().map(r -> "/" + (r.getPropertyName() != null ? r.getPropertyName()
                     : String.valueOf(r.getIndex()))).reduce("", String::concat);
@@ -82,6 +89,19 @@ public final class DialectLoader {
                     fileName + " line 1: the file is empty", "write a dialect object", SOURCE)));
         }
         return new Check(fileName, lines).dialect(file);
+    }
+
+    /**
+     * The file bound by {@link DialectTree} when it is in the plain form, without duplicate keys;
+     * empty otherwise, and the caller binds with Jackson, which reports any problem.
+     */
+    private static Optional<DialectFile> plain(String json) {
+        try {
+            JsonNode root = STRICT.readTree(json);
+            return root == null || root.isMissingNode() ? Optional.empty() : DialectTree.bind(root);
+        } catch (JacksonException e) {
+            return Optional.empty();
+        }
     }
 
     private static String firstLine(String text) {

@@ -15,9 +15,9 @@ import org.hobwright.api.cycle.SimulationData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
-import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.JobUnits;
+import org.hobwright.post.Targets;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
@@ -180,7 +180,7 @@ final class ReportBuilder {
             pn.put("time", p.seconds());
         }
         s.fastest().ifPresent(f -> n.set("fastest", fastest(f)));
-        if (!s.targets().equals(QualityTargets.DEFAULTS)) {
+        if (!Targets.none(s.targets())) {
             ObjectNode targets = n.putObject("targets");
             s.targets().feedMarkDepthUm().ifPresent(v -> targets.put("feedMarkDepth", v));
             s.targets().envelopingDepthUm().ifPresent(v -> targets.put("envelopingDepth", v));

@@ -25,7 +25,7 @@ public final class ReportWriter implements CycleWriter {
     /** Resource key: {@code true} writes the report also for a cycle with errors. */
     public static final String WITH_ERRORS = "report.withErrors";
 
-    private static final ObjectWriter JSON = JsonMapper.builder().build().writer().with(
+    private static final ObjectWriter JSON = JsonMapper.shared().writer().with(
             new DefaultPrettyPrinter().withObjectIndenter(new DefaultIndenter("  ", "\n"))
                     .withArrayIndenter(new DefaultIndenter("  ", "\n")));
 

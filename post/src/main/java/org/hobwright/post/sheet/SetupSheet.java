@@ -5,11 +5,11 @@ import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.job.HobJob;
-import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
 import org.hobwright.post.Decimal;
 import org.hobwright.post.JobUnits;
+import org.hobwright.post.Targets;
 
 /**
  * The setup sheet: one self-contained XHTML page with inline SVG and CSS, laid out to print on A4
@@ -86,7 +86,7 @@ final class SetupSheet {
         t.setup(s, sum, job.cycle().coolant());
         t.gear(g);
         cycle.inspection().ifPresent(t::inspection);
-        t.quality(sum, sum.targets().equals(QualityTargets.DEFAULTS) ? job.cycle().targets() : sum.targets(),
+        t.quality(sum, Targets.none(sum.targets()) ? job.cycle().targets() : sum.targets(),
                 cycle.tolerances(), cycle.simulation());
         t.findings(cycle.findings());
         m.close("body").close("html");

@@ -1,6 +1,8 @@
 package org.hobwright.wizard.cli;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
@@ -27,9 +29,16 @@ record JobInput(String source, Optional<HobJob> job, List<Finding> findings, Opt
 
     /** Every finding: the reader's, then the planner's (without repeats). */
     List<Finding> allFindings() {
-        java.util.LinkedHashSet<Finding> all = new java.util.LinkedHashSet<>(findings);
-        cycle.ifPresent(c -> all.addAll(c.findings()));
-        return List.copyOf(all);
+        // keyed by the components (the same equality as the record's) so that no record
+        // equals/hashCode is bootstrapped on the start-up path
+        Map<List<Object>, Finding> all = new LinkedHashMap<>();
+        findings.forEach(f -> all.putIfAbsent(key(f), f));
+        cycle.ifPresent(c -> c.findings().forEach(f -> all.putIfAbsent(key(f), f)));
+        return List.copyOf(all.values());
+    }
+
+    private static List<Object> key(Finding f) {
+        return List.of(f.severity(), f.code(), f.field(), f.message(), f.fix(), f.source());
     }
 
     /** True when the job cannot be posted. */

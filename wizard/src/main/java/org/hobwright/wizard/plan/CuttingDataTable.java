@@ -32,7 +32,6 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
     /** Value of the {@code format} key. */
     public static final String FORMAT = "hobwright-cutting-data";
 
-    private static final JsonMapper MAPPER = JsonMapper.builder().build();
 
     public CuttingDataTable {
         rows = Map.copyOf(rows);
@@ -91,7 +90,7 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
     public static CuttingDataTable read(InputStream in, String source) {
         JsonNode root;
         try {
-            root = MAPPER.readTree(in);
+            root = JsonMapper.shared().readTree(in);
         } catch (JacksonException e) {
             throw new IllegalArgumentException(source + ": not valid JSON: " + e.getOriginalMessage(), e);
         }
@@ -111,7 +110,7 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
                 if (in == null) {
                     throw new IllegalStateException("built-in " + FILE_NAME + " is missing from the class path");
                 }
-                JsonNode root = MAPPER.readTree(in);
+                JsonNode root = JsonMapper.shared().readTree(in);
                 return new CuttingDataReader("built-in " + FILE_NAME, null).table(root);
             } catch (IOException e) {
                 throw new UncheckedIOException(e);

@@ -11,10 +11,12 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFilePermissions;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.ThreadLocalRandom;
 
 /**
  * Atomic file writes: content goes to a temporary file in the target's own folder, is forced to
@@ -103,7 +105,7 @@ public final class AtomicFiles {
     private static void writeNewFolder(Path folder, Map<String, Content> files) throws IOException {
         Path parent = folder.getParent();
         Files.createDirectories(parent);
-        Path staging = Files.createTempDirectory(parent, "." + folder.getFileName() + ".");
+        Path staging = createUnique(parent, "." + folder.getFileName() + ".", "", true);
         try {
             for (Map.Entry<String, Content> e : files.entrySet()) {
                 writeFully(staging.resolve(e.getKey()), e.getValue());
@@ -184,13 +186,37 @@ public final class AtomicFiles {
     }
 
     private static Path writeTemp(Path folder, String name, Content content) throws IOException {
-        Path temp = Files.createTempFile(folder, "." + name + ".", TEMP_SUFFIX);
+        Path temp = createUnique(folder, "." + name + ".", TEMP_SUFFIX, false);
         try {
             writeFully(temp, content);
             return temp;
         } catch (IOException | RuntimeException e) {
             Files.deleteIfExists(temp);
             throw e;
+        }
+    }
+
+    /**
+     * Creates a new empty file or folder named prefix, a random number and suffix, readable by the
+     * owner only where the file system has POSIX permissions: what {@link Files#createTempFile}
+     * and {@link Files#createTempDirectory} do, but with a plain random number, so that no secure
+     * random generator (with its security providers, a start-up cost) is set up for a name.
+     */
+    private static Path createUnique(Path folder, String prefix, String suffix, boolean directory)
+            throws IOException {
+        boolean posix = folder.getFileSystem().supportedFileAttributeViews().contains("posix");
+        while (true) {
+            Path path = folder.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong()) + suffix);
+            try {
+                if (directory) {
+                    return posix ? Files.createDirectory(path, PosixFilePermissions.asFileAttribute(
+                            PosixFilePermissions.fromString("rwx------"))) : Files.createDirectory(path);
+                }
+                return posix ? Files.createFile(path, PosixFilePermissions.asFileAttribute(
+                        PosixFilePermissions.fromString("rw-------"))) : Files.createFile(path);
+            } catch (FileAlreadyExistsException taken) {
+                // another name
+            }
         }
     }
 

@@ -17,6 +17,7 @@ import tools.jackson.core.util.DefaultPrettyPrinter;
 import tools.jackson.core.util.Separators;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.ObjectWriter;
+import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -28,7 +29,7 @@ import tools.jackson.databind.node.ObjectNode;
  */
 public final class JobWriter {
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
-    private static final ObjectWriter PRETTY = JsonDocument.MAPPER.writer().with(new DefaultPrettyPrinter(
+    private static final ObjectWriter PRETTY = JsonMapper.shared().writer().with(new DefaultPrettyPrinter(
             Separators.createDefaultInstance().withObjectNameValueSpacing(Separators.Spacing.AFTER)));
 
     private JobWriter() {

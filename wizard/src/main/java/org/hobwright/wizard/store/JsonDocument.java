@@ -13,9 +13,10 @@ import java.util.Objects;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
+import tools.jackson.core.ObjectReadContext;
 import tools.jackson.core.TokenStreamLocation;
+import tools.jackson.core.json.JsonFactory;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
@@ -32,7 +33,8 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
     /** Largest file read, in bytes (1 MB): job and library files are a few kilobytes. */
     public static final long MAX_BYTES = 1_000_000;
 
-    static final JsonMapper MAPPER = JsonMapper.builder().build();
+    /** Parsers only: reading builds the tree by hand, so no object mapper is needed (and built) here. */
+    private static final JsonFactory PARSERS = new JsonFactory();
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     public JsonDocument {
@@ -93,7 +95,7 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
                     source + ": more than the limit of " + MAX_BYTES + " characters", null));
         }
         Map<String, Integer> lines = new HashMap<>();
-        try (JsonParser p = MAPPER.createParser(json)) {
+        try (JsonParser p = PARSERS.createParser(ObjectReadContext.empty(), json)) {
             JsonToken first = p.nextToken();
             if (first != JsonToken.START_OBJECT) {
                 return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",

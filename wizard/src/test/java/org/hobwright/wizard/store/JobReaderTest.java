@@ -20,6 +20,7 @@ import org.hobwright.api.job.Units;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.ObjectNode;
 
 class JobReaderTest {
@@ -96,7 +97,7 @@ class JobReaderTest {
                 .replace("\"machine\": {", "\"machine\": \"varrow-sl16\", \"unused\": {")
                 .replace("\"cuttingSpeed\": 100,", "\"template\": \"brass-fine\",")
                 .replace("\"roughFeed\": 0.02,", "");
-        ObjectNode tree = (ObjectNode) JsonDocument.MAPPER.readTree(json);
+        ObjectNode tree = (ObjectNode) JsonMapper.shared().readTree(json);
         tree.remove("unused");
         HobJob job = reader.read(tree, "inch-job").get();
         assertEquals(80, job.cycle().cuttingSpeedMPerMin().getAsDouble(), 1e-9);
@@ -140,7 +141,7 @@ class JobReaderTest {
 
     @Test
     void anInMemoryTreeIsCheckedLikeAFile() throws Exception {
-        ObjectNode tree = (ObjectNode) JsonDocument.MAPPER.readTree(sampleJob());
+        ObjectNode tree = (ObjectNode) JsonMapper.shared().readTree(sampleJob());
         tree.remove("format");
         tree.remove("version");
         assertTrue(reader.read(tree, "wizard").ok(), "format and version may be left out of a tree");
