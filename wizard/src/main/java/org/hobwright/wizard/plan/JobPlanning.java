@@ -64,10 +64,9 @@ final class JobPlanning {
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
-        double machineSignedEta = machine.swivel().positiveIsRight() ? hs.swivelAngleDeg() : -hs.swivelAngleDeg();
-        if (Math.abs(swivel.machineAngleDeg() - machineSignedEta) > 1e-9) {
+        if (swivel.rounded()) {
             findings.add(Finding.info(PlanCodes.SWIVEL_ROUNDED, "machine.swivel.resolution",
-                    "the holder's resolution rounds the swivel setting from " + Angles.dms(machineSignedEta) + " to "
+                    "the holder's resolution rounds the swivel setting from " + Angles.dms(swivel.exactDeg()) + " to "
                     + swivel.text(), PlanCodes.MACHINE));
         }
         double depth = (touchOff - root) / 2;

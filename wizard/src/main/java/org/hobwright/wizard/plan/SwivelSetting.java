@@ -13,10 +13,11 @@ import org.hobwright.wizard.setup.Angles;
  * </pre>
  *
  * @param machineAngleDeg the setting in the machine's sign, rounded, degrees
+ * @param exactDeg        the same before rounding to the holder's resolution, degrees
  * @param text            the setting as the scale reads it (decimal degrees or degrees-minutes)
  * @param direction       the direction in words for this machine
  */
-public record SwivelSetting(double machineAngleDeg, String text, String direction) {
+public record SwivelSetting(double machineAngleDeg, double exactDeg, String text, String direction) {
 
     /**
      * The setting of a swivel angle on a holder.
@@ -40,7 +41,12 @@ public record SwivelSetting(double machineAngleDeg, String text, String directio
             direction = "swing " + text(-rounded, holder) + " in the negative direction (on this machine positive is: "
                     + holder.positiveSense() + ", so turn the other way)";
         }
-        return new SwivelSetting(rounded, text, direction);
+        return new SwivelSetting(rounded, signed, text, direction);
+    }
+
+    /** True when the holder's resolution moved the setting away from the exact angle. */
+    public boolean rounded() {
+        return Math.abs(machineAngleDeg - exactDeg) > 1e-9;
     }
 
     private static String text(double deg, SwivelHolder holder) {

@@ -31,10 +31,13 @@ class SetupRulesTest {
         // η = 13.2368° (FORMULAS.md §4.2 example), holder read in 5′ steps
         SwivelSetting right = SwivelSetting.of(13.2368, holder(SwivelScale.DEGREES_MINUTES, 5.0 / 60, true));
         assertEquals(13.25, right.machineAngleDeg(), 1e-12);
+        assertEquals(13.2368, right.exactDeg(), 0);
+        assertTrue(right.rounded());
         assertEquals("13° 15′", right.text());
         assertTrue(right.direction().contains("in the positive direction (on this machine: top of the hob toward the chuck)"));
         SwivelSetting flipped = SwivelSetting.of(13.2368, holder(SwivelScale.DEGREES_MINUTES, 5.0 / 60, false));
         assertEquals(-13.25, flipped.machineAngleDeg(), 1e-12);
+        assertEquals(-13.2368, flipped.exactDeg(), 0, "machine's positive is not a right-hand η: sign flipped");
         assertEquals("-13° 15′", flipped.text());
         assertTrue(flipped.direction().startsWith("swing 13° 15′ in the negative direction"), flipped.direction());
         assertEquals("13.237°", SwivelSetting.of(13.2368, holder(SwivelScale.DECIMAL_DEGREES, 0.001, true)).text());

@@ -1,7 +1,6 @@
 package org.hobwright.wizard.setup;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.OptionalDouble;
 import java.util.SplittableRandom;
@@ -9,7 +8,6 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.Pitch;
-import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.testkit.SampleJobs;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.junit.jupiter.api.Test;
@@ -83,26 +81,5 @@ class HobSetupTest {
                     : beta + s.leadAngleDeg();
             assertEquals(expected, Math.abs(s.swivelAngleDeg()), 1e-9, c);
         }
-    }
-
-    // Direction in words comes from the machine profile: positive sense as written there, flipped when the
-    // machine's positive is not a right-hand η.
-    @Test
-    void directionInWordsFollowsTheMachineProfile() {
-        HobSetup s = new HobSetup(65, 1.76323, 13.2368);
-        SwivelHolder right = new SwivelHolder(SwivelHolder.SwivelScale.DEGREES_MINUTES, 1.0 / 12, false, 30,
-                "top of the hob toward the main spindle", true);
-        SwivelHolder flipped = new SwivelHolder(SwivelHolder.SwivelScale.DECIMAL_DEGREES, 0.001, true, 45,
-                "head counter-clockwise seen from the operator", false);
-        assertEquals(13.2368, SwivelDirection.machineSettingDeg(s, right), 0);
-        assertEquals(-13.2368, SwivelDirection.machineSettingDeg(s, flipped), 0);
-        assertTrue(SwivelDirection.describe(s, right).contains("in the machine's positive sense: top of the hob"),
-                SwivelDirection.describe(s, right));
-        assertTrue(SwivelDirection.describe(s, flipped).startsWith("turn the hob 13° 14′ 12.5″ (13.2368°) against"),
-                SwivelDirection.describe(s, flipped));
-        assertEquals("same hand (right-hand gear, right-hand hob): |η| = |β| − γ",
-                SwivelDirection.rule(SampleJobs.gear(30, 2, 15, Hand.RIGHT, 0), SampleJobs.hob(2, Hand.RIGHT)));
-        assertEquals("opposite hands (left-hand gear, right-hand hob): |η| = |β| + γ",
-                SwivelDirection.rule(SampleJobs.gear(30, 2, 15, Hand.LEFT, 0), SampleJobs.hob(2, Hand.RIGHT)));
     }
 }
