@@ -63,11 +63,6 @@ public record LineTemplate(String source, List<Object> segments) {
         return Optional.of(new LineTemplate(text, segments));
     }
 
-    /** The placeholders used, in order. */
-    public List<Placeholder> placeholders() {
-        return segments.stream().filter(Placeholder.class::isInstance).map(Placeholder.class::cast).toList();
-    }
-
     /**
      * Fills the placeholders.
      *

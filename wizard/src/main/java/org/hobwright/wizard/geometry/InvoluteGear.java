@@ -38,12 +38,6 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
                 system);
     }
 
-    /** The same gear with another number of teeth. */
-    public InvoluteGear withTeeth(int z) {
-        return new InvoluteGear(z, normalModuleMm, normalPressureAngleRad, helixAngleRad, profileShift,
-                thicknessAllowanceMm, system);
-    }
-
     /** True for a spur gear. */
     public boolean isSpur() {
         return helixAngleRad == 0.0;

@@ -6,7 +6,6 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import tools.jackson.core.JacksonException;
@@ -31,7 +30,6 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
     public static final String FILE_NAME = "cutting-data.json";
     /** Value of the {@code format} key. */
     public static final String FORMAT = "hobwright-cutting-data";
-
 
     public CuttingDataTable {
         rows = Map.copyOf(rows);
@@ -116,11 +114,5 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
                 throw new UncheckedIOException(e);
             }
         }
-    }
-
-
-    /** Work materials in the table, sorted, for messages. */
-    public List<String> workMaterials() {
-        return rows.values().stream().map(CuttingData::workMaterial).distinct().sorted().toList();
     }
 }

@@ -78,7 +78,7 @@ final class JobPlanning {
                 gear.pressureAngleDeg(), hs.swivelAngleDeg(), !gear.isSpur(), cycle.axialClearanceMm(),
                 cycle.radialClearanceMm(), machine.radialMaxMm(), machine.rapidMmPerMin(), machine.syncSettleS());
         Optional<HobShiftPlan> shift = HobShiftPlan.of(machine, hob, cycle, depth, gear.pressureAngleDeg(), findings);
-        String swivelDms = Angles.dms(hs.swivelAngleDeg());
+        String swivelDms = hs.swivelAngleDms();
         Toolpath path = ToolpathBuilder.build(geometry, drive, settings,
                 HeaderSteps.of(job, swivel, drive, settings, shift), cycle.coolant());
         Prediction prediction = Prediction.of(model, settings);

@@ -137,11 +137,6 @@ public final class ToothSpaceSimulation {
         return pts;
     }
 
-    /** Cusps of the right flank: x = roll length, y = height (transverse), mm. */
-    public List<Point> cusps() {
-        return right.cusps.stream().map(c -> new Point(c[0], c[1])).toList();
-    }
-
     /** Cut right-flank points below the active involute (the fillet and root), gear frame, root first. */
     public List<Point> rightRoot() {
         List<Point> pts = new ArrayList<>();

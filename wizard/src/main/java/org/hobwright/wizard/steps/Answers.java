@@ -55,11 +55,6 @@ public final class Answers {
         }
     }
 
-    /** A copy of every answer. */
-    public Map<String, String> asMap() {
-        return Map.copyOf(values);
-    }
-
     /**
      * The job file's JSON tree of these answers: {@code format}, {@code version} and every
      * answered key, typed as the file format wants it.

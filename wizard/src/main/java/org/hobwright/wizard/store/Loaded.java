@@ -102,12 +102,4 @@ public record Loaded<T>(Optional<T> value, List<Finding> findings, boolean unrea
         all.addAll(r.findings());
         return new Loaded<>(r.value(), all, r.unreadable());
     }
-
-    /** The same result with extra findings in front (e.g. warnings from an earlier step). */
-    public Loaded<T> withFindingsBefore(List<Finding> earlier) {
-        List<Finding> all = new ArrayList<>(earlier);
-        all.addAll(findings);
-        boolean error = Finding.anyError(all);
-        return new Loaded<>(error ? Optional.empty() : value, all, unreadable);
-    }
 }
