@@ -4,14 +4,16 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
-import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.MachineProfile;
 
 /**
  * The problems that stop a cycle from being planned at all; each becomes an error finding naming
- * the field and a fix.
+ * the field and a fix. Problems of the job itself (a helix the machine cannot follow, a hob the
+ * holder cannot take, ...) are the engineering checks' and stop planning before it starts; these
+ * are the ones that need the plan's own numbers (ratio, rounded swivel setting, depth, speed window,
+ * cutting data).
  */
 final class Blockers {
     private final HobJob job;
@@ -24,23 +26,12 @@ final class Blockers {
 
     void check(SyncRatio ratio, SwivelSetting swivel, double touchOff, double root, SpeedWindow window,
                Optional<CuttingData> row) {
-        GearSpec gear = job.gear();
         HobSpec hob = job.hob();
         MachineProfile machine = job.machine();
-        if (!gear.isSpur() && !machine.followsHelix()) {
-            error(PlanCodes.HELIX_NOT_FOLLOWED, "machine.followsHelix", "a helical gear needs the control to add the"
-                    + " differential work rotation, and machine " + machine.name() + " cannot follow a helix",
-                    "use a machine whose profile has followsHelix true, or cut a spur gear", PlanCodes.MACHINE);
-        }
         if (ratio.hobTurnsPerWorkTurn() > machine.maxSyncRatio()) {
             error(PlanCodes.SYNC_RATIO_TOO_HIGH, "gear.teeth", String.format(Locale.ROOT, "the sync ratio %d:%d is more"
                     + " than the machine's largest ratio %.1f", ratio.hobTurns(), ratio.workTurns(),
                     machine.maxSyncRatio()), "use a hob with more starts", PlanCodes.MACHINE);
-        }
-        if (hob.outsideDiameterMm() > machine.maxHobDiameterMm()) {
-            error(PlanCodes.HOB_TOO_LARGE, "hob.outsideDiameter", String.format(Locale.ROOT, "the hob's %.3f mm outside"
-                    + " diameter is more than the holder's %.3f mm", hob.outsideDiameterMm(),
-                    machine.maxHobDiameterMm()), "use a smaller hob", PlanCodes.MACHINE);
         }
         double depth = (touchOff - root) / 2;
         if (!(root > 0) || !(depth > 0)) {

@@ -5,12 +5,8 @@ package org.hobwright.wizard.plan;
  * Codes are never reused for another meaning.
  */
 public final class PlanCodes {
-    /** Helical gear on a machine whose control cannot add the differential rotation (error). */
-    public static final String HELIX_NOT_FOLLOWED = "PLAN_HELIX_NOT_FOLLOWED";
     /** Sync ratio z₂/z₀ above the machine's largest ratio (error). */
     public static final String SYNC_RATIO_TOO_HIGH = "PLAN_SYNC_RATIO_TOO_HIGH";
-    /** Hob larger than the holder takes (error). */
-    public static final String HOB_TOO_LARGE = "PLAN_HOB_TOO_LARGE";
     /** Touch-off (blank) diameter not above the root diameter (error). */
     public static final String NO_DEPTH = "PLAN_NO_DEPTH";
     /** Hob radius not larger than the depth to cut (error). */

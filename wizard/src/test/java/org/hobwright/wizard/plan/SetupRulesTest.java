@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.check.EngineeringCode;
+import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.Hand;
@@ -154,11 +156,10 @@ class SetupRulesTest {
     @Test
     void helicalGearOnAMachineThatCannotFollowAHelixIsAnError() {
         var job = SampleJobs.helicalOnSpurMachine();
-        List<Finding> f = new ArrayList<>();
-        SpeedWindow w = SpeedWindow.of(job.machine(), job.hob(), SyncRatio.of(30, 1));
-        new Blockers(job, f).check(SyncRatio.of(30, 1), SwivelSetting.of(13.2, job.machine().swivel()), 66.9, 57.9, w,
-                CuttingDataTable.builtIn().find("steel-case-hardening", "hss"));
-        assertEquals(List.of(PlanCodes.HELIX_NOT_FOLLOWED), f.stream().map(Finding::code).toList());
-        assertEquals("machine.followsHelix", f.get(0).field());
+        HobCycle c = new DefaultCyclePlanner().plan(job);
+        // reported once, by the engineering check, before any planning
+        assertEquals(List.of(EngineeringCode.MACHINE_NO_HELIX.code()),
+                c.findings().stream().filter(Finding::isError).map(Finding::code).toList());
+        assertTrue(c.steps().isEmpty());
     }
 }
