@@ -1,10 +1,10 @@
 package org.hobwright.post.csv;
 
+import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -12,8 +12,12 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.post.Decimal;
+import tools.jackson.core.FormatSchema;
 import tools.jackson.core.JacksonException;
+import tools.jackson.core.JsonGenerator;
+import tools.jackson.core.ObjectWriteContext;
 import tools.jackson.databind.MappingIterator;
+import tools.jackson.dataformat.csv.CsvFactory;
 import tools.jackson.dataformat.csv.CsvMapper;
 import tools.jackson.dataformat.csv.CsvReadFeature;
 import tools.jackson.dataformat.csv.CsvSchema;
@@ -32,7 +36,8 @@ public final class CycleCsv {
 
     private static final String SOURCE = "Hobwright cycle CSV, post/README.md";
 
-    private static final CsvMapper MAPPER = CsvMapper.builder()
+    /** Writing takes the generator alone: an object mapper is only built to read. */
+    private static final CsvFactory GENERATORS = CsvFactory.builder()
             .enable(CsvWriteFeature.STRICT_CHECK_FOR_QUOTING)
             .build();
 
@@ -56,7 +61,7 @@ public final class CycleCsv {
      * @return the CSV text, header first, CRLF line ends
      */
     public static String write(List<CycleStep> steps) {
-        List<Map<String, String>> rows = new ArrayList<>();
+        List<Map<CsvColumn, String>> rows = new ArrayList<>();
         for (int i = 0; i < steps.size(); i++) {
             Map<CsvColumn, String> row = new EnumMap<>(CsvColumn.class);
             row.put(CsvColumn.FORMAT_VERSION, String.valueOf(VERSION));
@@ -64,16 +69,33 @@ public final class CycleCsv {
             row.put(CsvColumn.KIND, steps.get(i).kind());
             row.put(CsvColumn.TIME_S, Decimal.exact(steps.get(i).seconds()));
             fill(steps.get(i), row);
-            Map<String, String> named = new LinkedHashMap<>();
-            for (CsvColumn c : CsvColumn.values()) {
-                named.put(c.header(), row.getOrDefault(c, ""));
-            }
-            rows.add(named);
+            rows.add(row);
         }
         if (rows.isEmpty()) {
             return String.join(",", Arrays.stream(CsvColumn.values()).map(CsvColumn::header).toList()) + "\r\n";
         }
-        return MAPPER.writer(SCHEMA).writeValueAsString(rows);
+        StringWriter out = new StringWriter();
+        try (JsonGenerator g = GENERATORS.createGenerator(new WithSchema(), out)) {
+            g.writeStartArray();
+            for (Map<CsvColumn, String> row : rows) {
+                g.writeStartObject();
+                for (CsvColumn c : CsvColumn.values()) {
+                    g.writeName(c.header());
+                    g.writeString(row.getOrDefault(c, ""));
+                }
+                g.writeEndObject();
+            }
+            g.writeEndArray();
+        }
+        return out.toString();
+    }
+
+    /** The generator's settings: the factory's, with the column schema. */
+    private static final class WithSchema extends ObjectWriteContext.Base {
+        @Override
+        public FormatSchema getSchema() {
+            return SCHEMA;
+        }
     }
 
     private static void fill(CycleStep step, Map<CsvColumn, String> row) {
@@ -136,7 +158,7 @@ public final class CycleCsv {
      */
     public static Read read(String text) {
         List<String[]> rows = new ArrayList<>();
-        try (MappingIterator<String[]> it = MAPPER.readerFor(String[].class)
+        try (MappingIterator<String[]> it = Reading.MAPPER.readerFor(String[].class)
                 .with(CsvReadFeature.WRAP_AS_ARRAY).with(CsvReadFeature.SKIP_EMPTY_LINES).readValues(text)) {
             while (it.hasNextValue()) {
                 rows.add(it.nextValue());
@@ -172,6 +194,14 @@ public final class CycleCsv {
             }
         }
         return findings.isEmpty() ? new Read(steps, List.of()) : new Read(List.of(), findings);
+    }
+
+    /** The mapper that reads, built on first use. */
+    private static final class Reading {
+        static final CsvMapper MAPPER = CsvMapper.builder().build();
+
+        private Reading() {
+        }
     }
 
     private static Finding problem(String field, String message) {

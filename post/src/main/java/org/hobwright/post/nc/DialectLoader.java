@@ -8,13 +8,12 @@ import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
+import org.hobwright.post.json.JsonTrees;
 import org.hobwright.post.nc.DialectFile.RotationWords;
 import tools.jackson.core.JacksonException;
-import tools.jackson.core.StreamReadFeature;
 import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.MapperFeature;
-import tools.jackson.databind.ObjectReader;
 import tools.jackson.databind.json.JsonMapper;
 
 /**
@@ -35,16 +34,23 @@ public final class DialectLoader {
 
     private static final String SOURCE = "Hobwright dialect format, post/README.md";
 
-    /** The mapper for dialect files; its binding is the reference for {@link DialectTree}. */
-    static final JsonMapper MAPPER = JsonMapper.builder()
-            .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-            .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)
-            .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
-            .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
-            .build();
+    /**
+     * The object mapper for dialect files, built on first use: a dialect in the plain form is bound
+     * by {@link DialectTree} without one (building a mapper is a large share of a short run's
+     * start-up), any other form by this mapper, whose binding is the reference for {@code DialectTree}.
+     */
+    static final class Binding {
+        static final JsonMapper MAPPER = JsonMapper.builder()
+                .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+                .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+                .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)
+                .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
+                .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
+                .build();
 
-    private static final ObjectReader STRICT = MAPPER.reader().with(StreamReadFeature.STRICT_DUPLICATE_DETECTION);
+        private Binding() {
+        }
+    }
 
     private DialectLoader() {
     }
@@ -69,11 +75,11 @@ public final class DialectLoader {
      * @return the dialect or the findings that say why not
      */
     public static Loaded load(String fileName, String json) {
-        JsonLines lines = JsonLines.of(MAPPER, json);
+        JsonLines lines = JsonLines.of(json);
         Optional<DialectFile> plain = plain(json);
         DialectFile file;
         try {
-            file = plain.isPresent() ? plain.get() : MAPPER.readValue(json, DialectFile.class);
+            file = plain.isPresent() ? plain.get() : Binding.MAPPER.readValue(json, DialectFile.class);
         } catch (JacksonException e) {
             String pointer = e.getPath().stream().map(r -> "/" + (r.getPropertyName() != null ? r.getPropertyName()
                     : String.valueOf(r.getIndex()))).reduce("", String::concat);
@@ -97,9 +103,9 @@ public final class DialectLoader {
      */
     private static Optional<DialectFile> plain(String json) {
         try {
-            JsonNode root = STRICT.readTree(json);
-            return root == null || root.isMissingNode() ? Optional.empty() : DialectTree.bind(root);
-        } catch (JacksonException e) {
+            JsonNode root = JsonTrees.parse(json);
+            return root.isMissingNode() ? Optional.empty() : DialectTree.bind(root);
+        } catch (JacksonException | JsonTrees.DuplicateKey e) {
             return Optional.empty();
         }
     }

@@ -2,10 +2,10 @@ package org.hobwright.post.nc;
 
 import java.util.HashMap;
 import java.util.Map;
+import org.hobwright.post.json.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The line of every value in a JSON text, by JSON Pointer ({@code /templates/feed/0}), so that
@@ -22,9 +22,9 @@ final class JsonLines {
      * Indexes a JSON text. A text that does not parse gives the lines up to the problem; the
      * binding step reports the problem itself.
      */
-    static JsonLines of(JsonMapper mapper, String json) {
+    static JsonLines of(String json) {
         Map<String, Integer> lines = new HashMap<>();
-        try (JsonParser p = mapper.createParser(json)) {
+        try (JsonParser p = JsonTrees.parser(json)) {
             JsonToken t;
             while ((t = p.nextToken()) != null) {
                 if (t == JsonToken.PROPERTY_NAME) {

@@ -9,10 +9,9 @@ import org.hobwright.api.spi.Spi;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.api.spi.WriteResult;
 import org.hobwright.post.PostFindings;
+import org.hobwright.post.json.JsonTrees;
 import tools.jackson.core.util.DefaultIndenter;
 import tools.jackson.core.util.DefaultPrettyPrinter;
-import tools.jackson.databind.ObjectWriter;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * Writes the JSON report ({@code JOB.report.json}) with the pointers listed in post/README.md. Like every
@@ -25,9 +24,9 @@ public final class ReportWriter implements CycleWriter {
     /** Resource key: {@code true} writes the report also for a cycle with errors. */
     public static final String WITH_ERRORS = "report.withErrors";
 
-    private static final ObjectWriter JSON = JsonMapper.shared().writer().with(
-            new DefaultPrettyPrinter().withObjectIndenter(new DefaultIndenter("  ", "\n"))
-                    .withArrayIndenter(new DefaultIndenter("  ", "\n")));
+    private static final DefaultPrettyPrinter LAYOUT = new DefaultPrettyPrinter()
+            .withObjectIndenter(new DefaultIndenter("  ", "\n"))
+            .withArrayIndenter(new DefaultIndenter("  ", "\n"));
 
     @Override
     public String id() {
@@ -53,7 +52,7 @@ public final class ReportWriter implements CycleWriter {
                 return refusal.get();
             }
         }
-        String text = JSON.writeValueAsString(new ReportBuilder(context.job()).build(cycle, context)) + "\n";
+        String text = JsonTrees.write(new ReportBuilder(context.job()).build(cycle, context), LAYOUT) + "\n";
         return new WriteResult(List.of(new OutputFile(context.job().name() + ".report.json", text)), List.of());
     }
 }

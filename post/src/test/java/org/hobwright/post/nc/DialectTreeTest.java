@@ -16,7 +16,7 @@ import tools.jackson.databind.json.JsonMapper;
  */
 class DialectTreeTest {
 
-    private static final JsonMapper JACKSON = DialectLoader.MAPPER;
+    private static final JsonMapper JACKSON = DialectLoader.Binding.MAPPER;
 
     private static final String VARROW = Fixtures.dialectText("varrow-ctl");
 

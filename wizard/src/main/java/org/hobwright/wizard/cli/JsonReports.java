@@ -3,7 +3,8 @@ package org.hobwright.wizard.cli;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
-import tools.jackson.databind.json.JsonMapper;
+import org.hobwright.post.json.JsonTrees;
+import tools.jackson.core.util.DefaultPrettyPrinter;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
@@ -47,6 +48,6 @@ final class JsonReports {
             o.put("message", f.message());
             f.fix().ifPresent(x -> o.put("fix", x));
         }
-        return JsonMapper.shared().writerWithDefaultPrettyPrinter().writeValueAsString(root);
+        return JsonTrees.write(root, new DefaultPrettyPrinter());
     }
 }

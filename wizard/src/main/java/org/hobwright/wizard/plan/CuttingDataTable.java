@@ -3,14 +3,15 @@ package org.hobwright.wizard.plan;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
+import org.hobwright.post.json.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The editable cutting-data table (file format {@code hobwright-cutting-data}, version 1, described in
@@ -88,9 +89,12 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
     public static CuttingDataTable read(InputStream in, String source) {
         JsonNode root;
         try {
-            root = JsonMapper.shared().readTree(in);
-        } catch (JacksonException e) {
-            throw new IllegalArgumentException(source + ": not valid JSON: " + e.getOriginalMessage(), e);
+            root = JsonTrees.parse(new String(in.readAllBytes(), StandardCharsets.UTF_8));
+        } catch (JacksonException | JsonTrees.DuplicateKey e) {
+            String why = e instanceof JacksonException j ? j.getOriginalMessage() : e.getMessage();
+            throw new IllegalArgumentException(source + ": not valid JSON: " + why, e);
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot read " + source, e);
         }
         return new CuttingDataReader(source, builtIn()).table(root);
     }
@@ -108,7 +112,7 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
                 if (in == null) {
                     throw new IllegalStateException("built-in " + FILE_NAME + " is missing from the class path");
                 }
-                JsonNode root = JsonMapper.shared().readTree(in);
+                JsonNode root = JsonTrees.parse(new String(in.readAllBytes(), StandardCharsets.UTF_8));
                 return new CuttingDataReader("built-in " + FILE_NAME, null).table(root);
             } catch (IOException e) {
                 throw new UncheckedIOException(e);

@@ -13,11 +13,10 @@ import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
+import org.hobwright.post.json.JsonTrees;
 import tools.jackson.core.util.DefaultPrettyPrinter;
 import tools.jackson.core.util.Separators;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.ObjectWriter;
-import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -29,8 +28,8 @@ import tools.jackson.databind.node.ObjectNode;
  */
 public final class JobWriter {
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
-    private static final ObjectWriter PRETTY = JsonMapper.shared().writer().with(new DefaultPrettyPrinter(
-            Separators.createDefaultInstance().withObjectNameValueSpacing(Separators.Spacing.AFTER)));
+    private static final DefaultPrettyPrinter LAYOUT = new DefaultPrettyPrinter(
+            Separators.createDefaultInstance().withObjectNameValueSpacing(Separators.Spacing.AFTER));
 
     private JobWriter() {
     }
@@ -114,7 +113,7 @@ public final class JobWriter {
 
     /** Pretty JSON text with a final line break, as library and job files are written. */
     public static String text(JsonNode tree) {
-        return PRETTY.writeValueAsString(tree) + "\n";
+        return JsonTrees.write(tree, LAYOUT) + "\n";
     }
 
     private static ObjectNode header(FileFormat format) {

@@ -10,15 +10,11 @@ import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Objects;
+import org.hobwright.post.json.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
-import tools.jackson.core.ObjectReadContext;
 import tools.jackson.core.TokenStreamLocation;
-import tools.jackson.core.json.JsonFactory;
-import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.node.ArrayNode;
-import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
@@ -33,9 +29,6 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
     /** Largest file read, in bytes (1 MB): job and library files are a few kilobytes. */
     public static final long MAX_BYTES = 1_000_000;
 
-    /** Parsers only: reading builds the tree by hand, so no object mapper is needed (and built) here. */
-    private static final JsonFactory PARSERS = new JsonFactory();
-    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
 
     public JsonDocument {
         Objects.requireNonNull(source, "source");
@@ -95,14 +88,14 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
                     source + ": more than the limit of " + MAX_BYTES + " characters", null));
         }
         Map<String, Integer> lines = new HashMap<>();
-        try (JsonParser p = PARSERS.createParser(ObjectReadContext.empty(), json)) {
+        try (JsonParser p = JsonTrees.parser(json)) {
             JsonToken first = p.nextToken();
             if (first != JsonToken.START_OBJECT) {
                 return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
                         source + ":" + line(p.currentTokenLocation()) + ": the file must hold one JSON object { ... }",
                         null));
             }
-            ObjectNode root = readObject(p, "", lines, source);
+            ObjectNode root = JsonTrees.readObject(p, "", lines::put);
             JsonToken after = p.nextToken();
             if (after != null) {
                 return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
@@ -110,9 +103,9 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
                         "remove everything after the closing brace"));
             }
             return Loaded.of(new JsonDocument(source, root, lines));
-        } catch (DuplicateKey e) {
-            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding(e.path,
-                    source + ":" + e.line + ": key \"" + e.path + "\" appears twice", "keep one of them"));
+        } catch (JsonTrees.DuplicateKey e) {
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding(e.path(),
+                    source + ":" + e.line() + ": key \"" + e.path() + "\" appears twice", "keep one of them"));
         } catch (JacksonException e) {
             String msg = e.getOriginalMessage() == null ? e.getClass().getSimpleName() : e.getOriginalMessage();
             msg = msg.replaceAll("\\s+", " ").strip();
@@ -133,72 +126,5 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
 
     private static String line(TokenStreamLocation loc) {
         return loc == null || loc.getLineNr() < 0 ? "?" : Integer.toString(loc.getLineNr());
-    }
-
-    private static ObjectNode readObject(JsonParser p, String path, Map<String, Integer> lines, String source) {
-        ObjectNode node = NODES.objectNode();
-        JsonToken t;
-        while ((t = p.nextToken()) == JsonToken.PROPERTY_NAME) {
-            String key = p.currentName();
-            String child = path.isEmpty() ? key : path + "." + key;
-            int line = p.currentTokenLocation().getLineNr();
-            if (node.has(key)) {
-                throw new DuplicateKey(child, line);
-            }
-            lines.put(child, line);
-            p.nextToken();
-            node.set(key, readValue(p, child, lines, source));
-        }
-        if (t != JsonToken.END_OBJECT) {
-            throw new IllegalStateException("parser gave " + t + " inside an object");
-        }
-        return node;
-    }
-
-    private static JsonNode readValue(JsonParser p, String path, Map<String, Integer> lines, String source) {
-        JsonToken t = p.currentToken();
-        switch (t) {
-            case START_OBJECT:
-                return readObject(p, path, lines, source);
-            case START_ARRAY: {
-                ArrayNode a = NODES.arrayNode();
-                int i = 0;
-                while (p.nextToken() != JsonToken.END_ARRAY) {
-                    String child = path + "[" + i++ + "]";
-                    lines.put(child, p.currentTokenLocation().getLineNr());
-                    a.add(readValue(p, child, lines, source));
-                }
-                return a;
-            }
-            case VALUE_STRING:
-                return NODES.stringNode(p.getString());
-            case VALUE_NUMBER_INT:
-                return p.getNumberType() == JsonParser.NumberType.INT ? NODES.numberNode(p.getIntValue())
-                        : p.getNumberType() == JsonParser.NumberType.LONG ? NODES.numberNode(p.getLongValue())
-                        : NODES.numberNode(p.getDoubleValue());
-            case VALUE_NUMBER_FLOAT:
-                return NODES.numberNode(p.getDoubleValue());
-            case VALUE_TRUE:
-                return NODES.booleanNode(true);
-            case VALUE_FALSE:
-                return NODES.booleanNode(false);
-            case VALUE_NULL:
-                return NODES.nullNode();
-            default:
-                throw new IllegalStateException("unexpected token " + t + " at " + path);
-        }
-    }
-
-    /** A key that appears twice in one object. */
-    private static final class DuplicateKey extends RuntimeException {
-        private static final long serialVersionUID = 1L;
-        final String path;
-        final int line;
-
-        DuplicateKey(String path, int line) {
-            super(path, null, false, false);
-            this.path = path;
-            this.line = line;
-        }
     }
 }

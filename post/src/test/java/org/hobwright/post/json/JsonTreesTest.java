@@ -1,0 +1,84 @@
+package org.hobwright.post.json;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import tools.jackson.core.JacksonException;
+import tools.jackson.core.PrettyPrinter;
+import tools.jackson.core.util.DefaultIndenter;
+import tools.jackson.core.util.DefaultPrettyPrinter;
+import tools.jackson.core.util.Separators;
+import tools.jackson.databind.JsonNode;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * The mapper-free reader and writer against Jackson's own object mapper (jackson-databind from
+ * Maven Central): the same trees from the same texts, the same texts from the same trees, with
+ * each layout the project writes.
+ */
+class JsonTreesTest {
+    private static final JsonMapper MAPPER = JsonMapper.shared();
+
+    private static final String SAMPLE = """
+            {"format": "x", "version": 1, "empty": {}, "none": [], "list": [1, -2, 3.25, 1e-7, 123456789012,
+             "text with \\"quotes\\", a / slash and \\u00e9", true, false, null, {"a": [[]]}],
+             "nested": {"deep": {"deeper": [0.1, 2.5e300, -0.0]}}, "unicode": "Ø 25 µm"}
+            """;
+
+    @Test
+    void readsTheSameTreeAsTheMapper() {
+        assertEquals(MAPPER.readTree(SAMPLE), JsonTrees.parse(SAMPLE));
+        assertEquals(MAPPER.readTree("[1, 2]"), JsonTrees.parse("[1, 2]"));
+        assertEquals(MAPPER.readTree("\"x\""), JsonTrees.parse("\"x\""));
+    }
+
+    @Test
+    void writesTheSameTextAsTheMapperInEveryLayout() {
+        JsonNode tree = MAPPER.readTree(SAMPLE);
+        List<PrettyPrinter> layouts = List.of(
+                new DefaultPrettyPrinter(),
+                new DefaultPrettyPrinter().withObjectIndenter(new DefaultIndenter("  ", "\n"))
+                        .withArrayIndenter(new DefaultIndenter("  ", "\n")),
+                new DefaultPrettyPrinter(Separators.createDefaultInstance()
+                        .withObjectNameValueSpacing(Separators.Spacing.AFTER)));
+        for (PrettyPrinter layout : layouts) {
+            assertEquals(MAPPER.writer().with(layout).writeValueAsString(tree), JsonTrees.write(tree, layout));
+        }
+        assertEquals(MAPPER.writeValueAsString(tree), JsonTrees.write(tree, null));
+        assertEquals(MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(tree),
+                JsonTrees.write(tree, new DefaultPrettyPrinter()));
+    }
+
+    @Test
+    void aPrinterInstanceCanBeSharedBetweenWrites() {
+        DefaultPrettyPrinter shared = new DefaultPrettyPrinter();
+        JsonNode tree = JsonTrees.parse(SAMPLE);
+        assertEquals(JsonTrees.write(tree, shared), JsonTrees.write(tree, shared));
+    }
+
+    @Test
+    void tellsTheLineOfEveryKeyAndElement() {
+        List<String> seen = new ArrayList<>();
+        try (var p = JsonTrees.parser("{\n\"a\": 1,\n\"b\": [\n2,\n{\"c\": 3}]}")) {
+            p.nextToken();
+            JsonTrees.readObject(p, "", (path, line) -> seen.add(path + "@" + line));
+        }
+        assertEquals(List.of("a@2", "b@3", "b[0]@4", "b[1]@5", "b[1].c@5"), seen);
+    }
+
+    @Test
+    void rejectsRepeatedKeysTrailingTextAndMalformedText() {
+        JsonTrees.DuplicateKey twice = assertThrows(JsonTrees.DuplicateKey.class,
+                () -> JsonTrees.parse("{\"a\": {\"b\": 1,\n \"b\": 2}}"));
+        assertEquals("a.b", twice.path());
+        assertEquals(2, twice.line());
+        assertThrows(JacksonException.class, () -> JsonTrees.parse("{} {}"));
+        JacksonException bad = assertThrows(JacksonException.class, () -> JsonTrees.parse("{\n\"a\": 1,,}"));
+        assertEquals(2, bad.getLocation().getLineNr());
+        assertTrue(JsonTrees.parse("  ").isMissingNode());
+    }
+}
