@@ -27,11 +27,7 @@ public final class Decimal {
         if (!Double.isFinite(value)) {
             throw new IllegalArgumentException("value must be a finite number, was " + value);
         }
-        BigDecimal rounded = BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_UP);
-        if (rounded.signum() == 0) {
-            rounded = rounded.abs();
-        }
-        String text = rounded.toPlainString();
+        String text = plain(value, decimals);
         if (trailingZeros || decimals == 0) {
             return text;
         }
@@ -40,6 +36,57 @@ public final class Decimal {
             end--;
         }
         return text.substring(0, end);
+    }
+
+    /**
+     * Formats like {@link #fixed(double, int, boolean)} without trailing zeros, and without the point
+     * when nothing follows it ({@code 24.5}, {@code 24}): coordinates in drawings.
+     */
+    public static String trimmed(double value, int decimals) {
+        String text = fixed(value, decimals, false);
+        return text.endsWith(".") ? text.substring(0, text.length() - 1) : text;
+    }
+
+    /**
+     * {@code BigDecimal.valueOf(value).setScale(decimals, HALF_UP)} as plain text, without negative
+     * zero. The digits of {@link Double#toString(double)} are rounded directly (it is the text
+     * {@code BigDecimal.valueOf} reads), so no big-number arithmetic runs for the usual magnitudes;
+     * text in exponent form goes through {@link BigDecimal}. {@code DecimalTest} compares both ways.
+     */
+    private static String plain(double value, int decimals) {
+        String text = Double.toString(Math.abs(value));
+        int point = text.indexOf('.');
+        if (text.indexOf('E') >= 0 || point < 0) {
+            BigDecimal rounded = BigDecimal.valueOf(value).setScale(decimals, RoundingMode.HALF_UP);
+            return (rounded.signum() == 0 ? rounded.abs() : rounded).toPlainString();
+        }
+        int fraction = text.length() - point - 1;
+        char[] digits = new char[point + decimals];
+        text.getChars(0, point, digits, 0);
+        for (int i = 0; i < decimals; i++) {
+            digits[point + i] = i < fraction ? text.charAt(point + 1 + i) : '0';
+        }
+        boolean carry = fraction > decimals && text.charAt(point + 1 + decimals) >= '5';
+        for (int i = digits.length - 1; carry && i >= 0; i--) {
+            carry = digits[i] == '9';
+            digits[i] = carry ? '0' : (char) (digits[i] + 1);
+        }
+        boolean zero = !carry;
+        for (int i = 0; zero && i < digits.length; i++) {
+            zero = digits[i] == '0';
+        }
+        StringBuilder out = new StringBuilder(digits.length + 3);
+        if (value < 0 && !zero) {
+            out.append('-');
+        }
+        if (carry) {
+            out.append('1');
+        }
+        out.append(digits, 0, point);
+        if (decimals > 0) {
+            out.append('.').append(digits, point, decimals);
+        }
+        return out.toString();
     }
 
     /** Formats with trailing zeros kept, e.g. {@code fixed(2.5, 3)} gives {@code 2.500}. */

@@ -30,7 +30,9 @@ final class CommentText {
             String w = WORDS.get(c);
             sb.append(w != null ? w : String.valueOf(c));
         }
-        String plain = Normalizer.normalize(sb, Normalizer.Form.NFD).replaceAll("\\p{M}", "");
+        // accents dropped: decomposed, then the combining marks removed (plain ASCII has none)
+        String plain = isAscii(sb) ? sb.toString()
+                : Normalizer.normalize(sb, Normalizer.Form.NFD).replaceAll("\\p{M}", "");
         StringBuilder out = new StringBuilder();
         for (char c : plain.toCharArray()) {
             if (rules.forbidden().indexOf(c) >= 0 || Character.isWhitespace(c)) {
@@ -41,8 +43,37 @@ final class CommentText {
                 out.append(c);
             }
         }
-        String collapsed = out.toString().strip().replaceAll(" {2,}", " ").replaceAll(" ([,;:.])", "$1");
+        String collapsed = tidySpaces(out.toString().strip());
         return rules.upperCase() ? collapsed.toUpperCase(Locale.ROOT) : collapsed;
+    }
+
+    private static boolean isAscii(CharSequence text) {
+        for (int i = 0; i < text.length(); i++) {
+            if (text.charAt(i) > 0x7f) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    /** One space where there were several, and none before {@code , ; : .}. */
+    static String tidySpaces(String text) {
+        StringBuilder out = new StringBuilder(text.length());
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == ' ') {
+                int next = i + 1;
+                while (next < text.length() && text.charAt(next) == ' ') {
+                    next++;
+                }
+                i = next - 1;
+                if (next < text.length() && ",;:.".indexOf(text.charAt(next)) >= 0) {
+                    continue;
+                }
+            }
+            out.append(c);
+        }
+        return out.toString();
     }
 
     /** Splits a cleaned text into pieces of at most {@code width} characters, at spaces where possible. */

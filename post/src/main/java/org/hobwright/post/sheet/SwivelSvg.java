@@ -92,6 +92,6 @@ final class SwivelSvg {
     }
 
     private static String n(double v) {
-        return Decimal.fixed(v, 2, false).replaceAll("\\.$", "");
+        return Decimal.trimmed(v, 2);
     }
 }

@@ -102,6 +102,6 @@ final class ToothSpaceSvg {
     }
 
     private static String n(double v) {
-        return Decimal.fixed(v, 2, false).replaceAll("\\.$", "");
+        return Decimal.trimmed(v, 2);
     }
 }

@@ -17,6 +17,21 @@ class CommentTextTest {
     }
 
     @Test
+    void spacesAreTidiedAsTheRegularExpressionsWould() {
+        java.util.SplittableRandom random = new java.util.SplittableRandom(7);
+        String alphabet = "  ,;:.aB";
+        for (int n = 0; n < 20_000; n++) {
+            StringBuilder sb = new StringBuilder();
+            for (int i = random.nextInt(12); i > 0; i--) {
+                sb.append(alphabet.charAt(random.nextInt(alphabet.length())));
+            }
+            String text = sb.toString().strip();
+            String expected = text.replaceAll(" {2,}", " ").replaceAll(" ([,;:.])", "$1");
+            assertEquals(expected, CommentText.tidySpaces(text), "\"" + text + "\"");
+        }
+    }
+
+    @Test
     void wrapsAtSpacesWithinTheWidth() {
         List<String> pieces = CommentText.wrap("KEEP THE GUARDS CLOSED AND NEVER REACH IN", 16);
         assertEquals(List.of("KEEP THE GUARDS", "CLOSED AND NEVER", "REACH IN"), pieces);

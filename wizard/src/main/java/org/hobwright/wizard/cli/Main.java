@@ -21,7 +21,6 @@ public final class Main {
      */
     public static void main(String[] args) {
         Timing.mark("main entered");
-        Warmup.start();
         Optional<PlanRequest> quick = QuickArgs.parse(args);
         int code = quick.isPresent() ? quick(quick.get()) : HobwrightCommand.run(args);
         Timing.mark("done");
