@@ -15,7 +15,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The wizard finds the writers through the SPI and never calls the post module's internals: the
- * only package of {@code org.hobwright.post} its main sources may name is {@code post.json}
+ * only package of {@code org.hobwright.post} its main sources may name is {@code post.text}
  * (DEVELOPERS.md, "Layout").
  */
 class WizardLayeringTest {
@@ -32,7 +32,7 @@ class WizardLayeringTest {
                 files++;
                 Matcher m = POST_REFERENCE.matcher(Files.readString(f));
                 while (m.find()) {
-                    if (!m.group(1).equals("json")) {
+                    if (!m.group(1).equals("text")) {
                         offences.add(main.relativize(f) + ": " + m.group());
                     }
                 }

@@ -8,7 +8,7 @@ import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
-import org.hobwright.post.json.JsonTrees;
+import org.hobwright.post.text.JsonTrees;
 import org.hobwright.post.nc.DialectFile.RotationWords;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.DeserializationFeature;

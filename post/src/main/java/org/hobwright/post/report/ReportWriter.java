@@ -9,7 +9,7 @@ import org.hobwright.api.spi.Spi;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.api.spi.WriteResult;
 import org.hobwright.post.PostFindings;
-import org.hobwright.post.json.JsonTrees;
+import org.hobwright.post.text.JsonTrees;
 import tools.jackson.core.util.DefaultIndenter;
 import tools.jackson.core.util.DefaultPrettyPrinter;
 

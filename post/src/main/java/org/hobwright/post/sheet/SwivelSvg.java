@@ -1,7 +1,7 @@
 package org.hobwright.post.sheet;
 
 import org.hobwright.api.job.Hand;
-import org.hobwright.post.Decimal;
+import org.hobwright.post.text.Decimal;
 
 /**
  * Picture of the hob swivel, seen from the hob toward the work axis, work axis horizontal. The

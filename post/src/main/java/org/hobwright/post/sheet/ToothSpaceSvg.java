@@ -5,7 +5,7 @@ import java.util.Optional;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.Point;
 import org.hobwright.api.cycle.SimulationData;
-import org.hobwright.post.Decimal;
+import org.hobwright.post.text.Decimal;
 
 /**
  * Drawing of one tooth space in the transverse section: arcs of the tip, reference, base and root

@@ -1,6 +1,5 @@
 package org.hobwright.wizard.setup;
 
-import java.util.Locale;
 import java.util.Optional;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -64,14 +63,19 @@ public final class Angles {
         long m = (tenths % 36000) / 600;
         long s10 = tenths % 600;
         String sign = deg < 0 && tenths > 0 ? "-" : "";
-        return String.format(Locale.ROOT, "%s%d° %02d′ %04.1f″", sign, d, m, s10 / 10.0);
+        return sign + d + "° " + twoDigits(m) + "′ " + twoDigits(s10 / 10) + "." + s10 % 10 + "″";
     }
 
     /** Formats as degrees and whole minutes, e.g. {@code 13° 14′}. */
     public static String degreesMinutes(double deg) {
         long minutes = Math.round(Math.abs(deg) * 60.0);
         String sign = deg < 0 && minutes > 0 ? "-" : "";
-        return String.format(Locale.ROOT, "%s%d° %02d′", sign, minutes / 60, minutes % 60);
+        return sign + minutes / 60 + "° " + twoDigits(minutes % 60) + "′";
+    }
+
+    /** 0 to 99 as two digits (no formatter: its first use loads the JDK's locale data). */
+    private static String twoDigits(long v) {
+        return v < 10 ? "0" + v : Long.toString(v);
     }
 
     /** Rounds an angle to a step (e.g. 1/12 degree for a scale read in 5-minute steps). */

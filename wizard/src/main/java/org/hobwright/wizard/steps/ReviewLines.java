@@ -2,13 +2,13 @@ package org.hobwright.wizard.steps;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.hobwright.api.cycle.CycleSummary;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.Units;
+import org.hobwright.post.text.Decimal;
 
 /**
  * The lines of the REVIEW step and of the terminal's run summary: setup, inspection, cycle time
@@ -85,6 +85,6 @@ public final class ReviewLines {
     }
 
     private static String num(double v, int decimals) {
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return Decimal.fixed(v, decimals);
     }
 }

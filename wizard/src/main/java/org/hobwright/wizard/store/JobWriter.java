@@ -13,7 +13,7 @@ import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.json.JsonTrees;
+import org.hobwright.post.text.JsonTrees;
 import tools.jackson.core.util.DefaultPrettyPrinter;
 import tools.jackson.core.util.Separators;
 import tools.jackson.databind.JsonNode;

@@ -51,4 +51,20 @@ class AnglesTest {
                     Angles.degreesMinutes(a));
         }
     }
+
+    /** The texts are those of java.util.Formatter with the patterns they replace, over every tenth of a second. */
+    @org.junit.jupiter.api.Test
+    void textsMatchTheJdkFormatter() {
+        for (long tenths = -36000 * 3; tenths <= 36000 * 91; tenths += 7) {
+            double deg = tenths / 36000.0;
+            long t = Math.round(Math.abs(deg) * 36000.0);
+            String sign = deg < 0 && t > 0 ? "-" : "";
+            assertEquals(String.format(java.util.Locale.ROOT, "%s%d° %02d′ %04.1f″", sign, t / 36000,
+                    (t % 36000) / 600, (t % 600) / 10.0), Angles.dms(deg), "dms of " + deg);
+            long minutes = Math.round(Math.abs(deg) * 60.0);
+            String msign = deg < 0 && minutes > 0 ? "-" : "";
+            assertEquals(String.format(java.util.Locale.ROOT, "%s%d° %02d′", msign, minutes / 60, minutes % 60),
+                    Angles.degreesMinutes(deg), "degrees and minutes of " + deg);
+        }
+    }
 }

@@ -1,4 +1,4 @@
-package org.hobwright.post.json;
+package org.hobwright.post.text;
 
 import java.io.StringWriter;
 import java.util.Map;

@@ -1,4 +1,4 @@
-package org.hobwright.post.json;
+package org.hobwright.post.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

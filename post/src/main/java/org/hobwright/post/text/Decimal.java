@@ -1,4 +1,4 @@
-package org.hobwright.post;
+package org.hobwright.post.text;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;

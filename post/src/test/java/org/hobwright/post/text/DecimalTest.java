@@ -1,4 +1,4 @@
-package org.hobwright.post;
+package org.hobwright.post.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -59,6 +59,19 @@ class DecimalTest {
                 v = Math.round(v * 1000) / 1000.0 + (random.nextBoolean() ? 0.0005 : -0.0005);
             }
             same(v);
+        }
+    }
+
+    /** java.util.Formatter's {@code %.nf} rounds the same digits half up; it alone writes negative zero. */
+    @Test
+    void sameTextAsTheJdkFormatterExceptNegativeZero() {
+        SplittableRandom random = new SplittableRandom(17);
+        for (int i = 0; i < 50_000; i++) {
+            double v = (random.nextDouble() * 2 - 1) * Math.pow(10, random.nextInt(-6, 7));
+            int d = random.nextInt(0, 6);
+            String formatter = String.format(java.util.Locale.ROOT, "%." + d + "f", v);
+            String expected = formatter.matches("-0(\\.0*)?") ? formatter.substring(1) : formatter;
+            assertEquals(expected, Decimal.fixed(v, d), v + " to " + d + " decimals");
         }
     }
 
