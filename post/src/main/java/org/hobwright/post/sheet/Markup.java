@@ -21,6 +21,32 @@ final class Markup {
         return this;
     }
 
+    /**
+     * A drawing coordinate: at most two decimals, rounded half away from zero on the binary value,
+     * without trailing zeros, a lone point or negative zero ({@code 12.5}, {@code 240}, {@code -0.07}).
+     * Integer arithmetic only: a drawing has hundreds of coordinates, and decimal-exact rounding of
+     * a hundredth of a pixel is invisible.
+     */
+    static String coordinate(double v) {
+        if (!Double.isFinite(v) || Math.abs(v) > 1e12) {
+            throw new IllegalArgumentException("drawing coordinate out of range: " + v);
+        }
+        long hundredths = Math.round(Math.abs(v) * 100);
+        StringBuilder out = new StringBuilder(12);
+        if (v < 0 && hundredths != 0) {
+            out.append('-');
+        }
+        out.append(hundredths / 100);
+        long rest = hundredths % 100;
+        if (rest != 0) {
+            out.append('.').append(rest / 10);
+            if (rest % 10 != 0) {
+                out.append(rest % 10);
+            }
+        }
+        return out.toString();
+    }
+
     /** An element with text content. */
     Markup leaf(String tag, String text, String... attributes) {
         open(tag, attributes);

@@ -1,7 +1,6 @@
 package org.hobwright.post.sheet;
 
 import org.hobwright.api.job.Hand;
-import org.hobwright.post.text.Decimal;
 
 /**
  * Picture of the hob swivel, seen from the hob toward the work axis, work axis horizontal. The
@@ -92,6 +91,6 @@ final class SwivelSvg {
     }
 
     private static String n(double v) {
-        return Decimal.trimmed(v, 2);
+        return Markup.coordinate(v);
     }
 }

@@ -5,7 +5,6 @@ import java.util.Optional;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.Point;
 import org.hobwright.api.cycle.SimulationData;
-import org.hobwright.post.text.Decimal;
 
 /**
  * Drawing of one tooth space in the transverse section: arcs of the tip, reference, base and root
@@ -102,6 +101,6 @@ final class ToothSpaceSvg {
     }
 
     private static String n(double v) {
-        return Decimal.trimmed(v, 2);
+        return Markup.coordinate(v);
     }
 }

@@ -39,15 +39,6 @@ public final class Decimal {
     }
 
     /**
-     * Formats like {@link #fixed(double, int, boolean)} without trailing zeros, and without the point
-     * when nothing follows it ({@code 24.5}, {@code 24}): coordinates in drawings.
-     */
-    public static String trimmed(double value, int decimals) {
-        String text = fixed(value, decimals, false);
-        return text.endsWith(".") ? text.substring(0, text.length() - 1) : text;
-    }
-
-    /**
      * {@code BigDecimal.valueOf(value).setScale(decimals, HALF_UP)} as plain text, without negative
      * zero. The digits of {@link Double#toString(double)} are rounded directly (it is the text
      * {@code BigDecimal.valueOf} reads), so no big-number arithmetic runs for the usual magnitudes;

@@ -76,17 +76,8 @@ class DecimalTest {
     }
 
     @Test
-    void trimmedDropsTheLonePoint() {
-        assertEquals("24", Decimal.trimmed(24.0, 2));
-        assertEquals("24.5", Decimal.trimmed(24.5, 2));
-        assertEquals("-0.01", Decimal.trimmed(-0.006, 2));
-        assertEquals("0", Decimal.trimmed(-0.004, 2));
-        assertEquals("240", Decimal.trimmed(240, 0));
-    }
-
-    @Test
     void refusesWhatIsNotANumber() {
         assertThrows(IllegalArgumentException.class, () -> Decimal.fixed(Double.NaN, 2));
-        assertThrows(IllegalArgumentException.class, () -> Decimal.trimmed(Double.POSITIVE_INFINITY, 2));
+        assertThrows(IllegalArgumentException.class, () -> Decimal.fixed(Double.POSITIVE_INFINITY, 2, false));
     }
 }
