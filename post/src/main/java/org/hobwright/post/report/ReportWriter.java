@@ -10,8 +10,6 @@ import org.hobwright.api.spi.WriteContext;
 import org.hobwright.api.spi.WriteResult;
 import org.hobwright.post.PostFindings;
 import org.hobwright.post.text.JsonTrees;
-import tools.jackson.core.util.DefaultIndenter;
-import tools.jackson.core.util.DefaultPrettyPrinter;
 
 /**
  * Writes the JSON report ({@code JOB.report.json}) with the pointers listed in post/README.md. Like every
@@ -24,9 +22,7 @@ public final class ReportWriter implements CycleWriter {
     /** Resource key: {@code true} writes the report also for a cycle with errors. */
     public static final String WITH_ERRORS = "report.withErrors";
 
-    private static final DefaultPrettyPrinter LAYOUT = new DefaultPrettyPrinter()
-            .withObjectIndenter(new DefaultIndenter("  ", "\n"))
-            .withArrayIndenter(new DefaultIndenter("  ", "\n"));
+    private static final JsonTrees.Layout LAYOUT = new JsonTrees.Layout(true, true);
 
     @Override
     public String id() {

@@ -11,7 +11,6 @@ import tools.jackson.core.ObjectWriteContext;
 import tools.jackson.core.PrettyPrinter;
 import tools.jackson.core.exc.StreamReadException;
 import tools.jackson.core.json.JsonFactory;
-import tools.jackson.core.util.Instantiatable;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
@@ -136,14 +135,13 @@ public final class JsonTrees {
     /**
      * Writes a tree as text.
      *
-     * @param tree    the tree
-     * @param printer the layout (a fresh instance is taken of a printer that keeps state); null for
-     *                compact text
+     * @param tree   the tree
+     * @param layout how it is laid out; null for compact text
      */
-    public static String write(JsonNode tree, PrettyPrinter printer) {
-        PrettyPrinter pp = printer instanceof Instantiatable<?> i ? (PrettyPrinter) i.createInstance() : printer;
+    public static String write(JsonNode tree, Layout layout) {
         StringWriter out = new StringWriter();
-        try (JsonGenerator g = FACTORY.createGenerator(new Layout(pp), out)) {
+        try (JsonGenerator g = FACTORY.createGenerator(new Settings(layout == null ? null : new Printer(layout)),
+                out)) {
             write(g, tree);
         }
         return out.toString();
@@ -205,11 +203,122 @@ public final class JsonTrees {
         }
     }
 
+    /**
+     * A pretty layout: every object entry on its own line, indented two spaces a level; arrays on
+     * lines too or inline ({@code [ 1, 2 ]}); {@code "name" : value} or {@code "name": value}. The
+     * texts are those of Jackson's {@code DefaultPrettyPrinter} set up the same way ({@code JsonTreesTest}),
+     * written by an own printer: building a {@code DefaultPrettyPrinter} runs a string concatenation
+     * compiled to {@code invokedynamic}, whose first bootstrap is about 10 ms of a short run.
+     *
+     * @param arraysOnLines true to put every array element on its own line
+     * @param spaceBeforeColon true for {@code "name" : value}, false for {@code "name": value}
+     */
+    public record Layout(boolean arraysOnLines, boolean spaceBeforeColon) {
+        /** Jackson's default pretty layout: {@code "name" : value}, arrays inline. */
+        public static final Layout DEFAULT = new Layout(false, true);
+    }
+
+    /** Writes the whitespace of a {@link Layout}; one instance per text (it counts the nesting). */
+    private static final class Printer implements PrettyPrinter {
+        private static final String INDENT = "                                ";
+        private final Layout layout;
+        private int nesting;
+
+        Printer(Layout layout) {
+            this.layout = layout;
+        }
+
+        private void newLine(JsonGenerator g) {
+            g.writeRaw('\n');
+            for (int left = 2 * nesting; left > 0; left -= INDENT.length()) {
+                g.writeRaw(INDENT, 0, Math.min(left, INDENT.length()));
+            }
+        }
+
+        private void arrayGap(JsonGenerator g) {
+            if (layout.arraysOnLines()) {
+                newLine(g);
+            } else {
+                g.writeRaw(' ');
+            }
+        }
+
+        @Override
+        public void writeRootValueSeparator(JsonGenerator g) {
+            g.writeRaw(' ');
+        }
+
+        @Override
+        public void writeStartObject(JsonGenerator g) {
+            g.writeRaw('{');
+            nesting++;
+        }
+
+        @Override
+        public void beforeObjectEntries(JsonGenerator g) {
+            newLine(g);
+        }
+
+        @Override
+        public void writeObjectNameValueSeparator(JsonGenerator g) {
+            g.writeRaw(layout.spaceBeforeColon() ? " : " : ": ");
+        }
+
+        @Override
+        public void writeObjectEntrySeparator(JsonGenerator g) {
+            g.writeRaw(',');
+            newLine(g);
+        }
+
+        @Override
+        public void writeEndObject(JsonGenerator g, int entries) {
+            nesting--;
+            if (entries > 0) {
+                newLine(g);
+            } else {
+                g.writeRaw(' ');
+            }
+            g.writeRaw('}');
+        }
+
+        @Override
+        public void writeStartArray(JsonGenerator g) {
+            g.writeRaw('[');
+            if (layout.arraysOnLines()) {
+                nesting++;
+            }
+        }
+
+        @Override
+        public void beforeArrayValues(JsonGenerator g) {
+            arrayGap(g);
+        }
+
+        @Override
+        public void writeArrayValueSeparator(JsonGenerator g) {
+            g.writeRaw(',');
+            arrayGap(g);
+        }
+
+        @Override
+        public void writeEndArray(JsonGenerator g, int values) {
+            if (layout.arraysOnLines()) {
+                nesting--;
+            }
+            if (values > 0) {
+                arrayGap(g);
+            } else {
+                g.writeRaw(' ');
+            }
+            g.writeRaw(']');
+        }
+    }
+
     /** The generator's settings: the factory's defaults and the given printer. */
-    private static final class Layout extends ObjectWriteContext.Base {
+    private static final class Settings extends ObjectWriteContext.Base {
         private final PrettyPrinter printer;
 
-        Layout(PrettyPrinter printer) {
+        Settings(PrettyPrinter printer) {
             this.printer = printer;
         }
 

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.Test;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.PrettyPrinter;
@@ -39,25 +40,45 @@ class JsonTreesTest {
     @Test
     void writesTheSameTextAsTheMapperInEveryLayout() {
         JsonNode tree = MAPPER.readTree(SAMPLE);
-        List<PrettyPrinter> layouts = List.of(
-                new DefaultPrettyPrinter(),
-                new DefaultPrettyPrinter().withObjectIndenter(new DefaultIndenter("  ", "\n"))
+        Map<JsonTrees.Layout, PrettyPrinter> layouts = Map.of(
+                JsonTrees.Layout.DEFAULT, new DefaultPrettyPrinter(),
+                new JsonTrees.Layout(true, true), new DefaultPrettyPrinter()
+                        .withObjectIndenter(new DefaultIndenter("  ", "\n"))
                         .withArrayIndenter(new DefaultIndenter("  ", "\n")),
-                new DefaultPrettyPrinter(Separators.createDefaultInstance()
-                        .withObjectNameValueSpacing(Separators.Spacing.AFTER)));
-        for (PrettyPrinter layout : layouts) {
-            assertEquals(MAPPER.writer().with(layout).writeValueAsString(tree), JsonTrees.write(tree, layout));
+                new JsonTrees.Layout(false, false), new DefaultPrettyPrinter(Separators.createDefaultInstance()
+                        .withObjectNameValueSpacing(Separators.Spacing.AFTER)),
+                new JsonTrees.Layout(true, false), new DefaultPrettyPrinter(Separators.createDefaultInstance()
+                        .withObjectNameValueSpacing(Separators.Spacing.AFTER))
+                        .withArrayIndenter(new DefaultIndenter("  ", "\n")));
+        for (Map.Entry<JsonTrees.Layout, PrettyPrinter> e : layouts.entrySet()) {
+            for (JsonNode t : List.of(tree, MAPPER.readTree("{}"), MAPPER.readTree("[]"), MAPPER.readTree("[{}, [], 1]"),
+                    deep())) {
+                assertEquals(MAPPER.writer().with(e.getValue()).writeValueAsString(t), JsonTrees.write(t, e.getKey()),
+                        e.getKey() + " of " + t);
+            }
         }
         assertEquals(MAPPER.writeValueAsString(tree), JsonTrees.write(tree, null));
         assertEquals(MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(tree),
-                JsonTrees.write(tree, new DefaultPrettyPrinter()));
+                JsonTrees.write(tree, JsonTrees.Layout.DEFAULT));
+    }
+
+    /** Nested deeper than the printer's run of spaces, so the indentation is written in pieces. */
+    private static JsonNode deep() {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < 40; i++) {
+            sb.append("{\"k").append(i).append("\": [");
+        }
+        sb.append("1");
+        for (int i = 0; i < 40; i++) {
+            sb.append("]}");
+        }
+        return MAPPER.readTree(sb.toString());
     }
 
     @Test
-    void aPrinterInstanceCanBeSharedBetweenWrites() {
-        DefaultPrettyPrinter shared = new DefaultPrettyPrinter();
+    void aLayoutCanBeSharedBetweenWrites() {
         JsonNode tree = JsonTrees.parse(SAMPLE);
-        assertEquals(JsonTrees.write(tree, shared), JsonTrees.write(tree, shared));
+        assertEquals(JsonTrees.write(tree, JsonTrees.Layout.DEFAULT), JsonTrees.write(tree, JsonTrees.Layout.DEFAULT));
     }
 
     @Test

@@ -4,7 +4,6 @@ import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.post.text.JsonTrees;
-import tools.jackson.core.util.DefaultPrettyPrinter;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
@@ -48,6 +47,6 @@ final class JsonReports {
             o.put("message", f.message());
             f.fix().ifPresent(x -> o.put("fix", x));
         }
-        return JsonTrees.write(root, new DefaultPrettyPrinter());
+        return JsonTrees.write(root, JsonTrees.Layout.DEFAULT);
     }
 }

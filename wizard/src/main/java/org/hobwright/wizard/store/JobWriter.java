@@ -14,8 +14,6 @@ import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
 import org.hobwright.post.text.JsonTrees;
-import tools.jackson.core.util.DefaultPrettyPrinter;
-import tools.jackson.core.util.Separators;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
@@ -28,8 +26,7 @@ import tools.jackson.databind.node.ObjectNode;
  */
 public final class JobWriter {
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
-    private static final DefaultPrettyPrinter LAYOUT = new DefaultPrettyPrinter(
-            Separators.createDefaultInstance().withObjectNameValueSpacing(Separators.Spacing.AFTER));
+    private static final JsonTrees.Layout LAYOUT = new JsonTrees.Layout(false, false);
 
     private JobWriter() {
     }
