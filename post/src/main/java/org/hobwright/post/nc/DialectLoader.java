@@ -338,11 +338,25 @@ public final class DialectLoader {
 
         private String letters(String value, String pointer) {
             String v = text(value, pointer);
-            if (value != null && !value.matches("[A-Za-z]{1,3}")) {
+            if (value != null && !isAddressLetters(value)) {
                 error("NC_DIALECT_BAD_VALUE", pointer, "\"" + leaf(pointer) + "\" must be 1 to 3 letters, was "
                         + quoted(value), "write the address letter(s) the control uses");
             }
             return v;
+        }
+
+        /** 1 to 3 ASCII letters. */
+        private static boolean isAddressLetters(String value) {
+            if (value.isEmpty() || value.length() > 3) {
+                return false;
+            }
+            for (int i = 0; i < value.length(); i++) {
+                char c = value.charAt(i);
+                if (!(c >= 'A' && c <= 'Z' || c >= 'a' && c <= 'z')) {
+                    return false;
+                }
+            }
+            return true;
         }
 
         private int integer(Integer value, String pointer, int min, int max) {

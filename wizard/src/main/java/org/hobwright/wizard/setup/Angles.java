@@ -12,10 +12,16 @@ import java.util.regex.Pattern;
  * M = trunc((|a| − D)·60), S = (|a| − D − M/60)·3600, with carries when S or M round up to 60.
  */
 public final class Angles {
-    private static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)");
-    private static final Pattern DMS = Pattern.compile(
-            "([+-])?\\s*(\\d+)\\s*(?:°|d|\\s)\\s*(?:(\\d+(?:\\.\\d*)?)\\s*(?:'|′|m)?\\s*"
-                    + "(?:(\\d+(?:\\.\\d*)?)\\s*(?:\"|″|''|s)?)?)?\\s*");
+    /** The patterns, compiled when an angle is first read (formatting needs none). */
+    private static final class Grammar {
+        static final Pattern DECIMAL = Pattern.compile("[+-]?(\\d+(\\.\\d*)?|\\.\\d+)");
+        static final Pattern DMS = Pattern.compile(
+                "([+-])?\\s*(\\d+)\\s*(?:°|d|\\s)\\s*(?:(\\d+(?:\\.\\d*)?)\\s*(?:'|′|m)?\\s*"
+                        + "(?:(\\d+(?:\\.\\d*)?)\\s*(?:\"|″|''|s)?)?)?\\s*");
+
+        private Grammar() {
+        }
+    }
 
     private Angles() {
     }
@@ -35,14 +41,14 @@ public final class Angles {
         if (t.isEmpty()) {
             return Optional.empty();
         }
-        if (DECIMAL.matcher(t).matches()) {
+        if (Grammar.DECIMAL.matcher(t).matches()) {
             double v = Double.parseDouble(t);
             return Double.isFinite(v) ? Optional.of(v) : Optional.empty();
         }
-        if (t.endsWith("°") && DECIMAL.matcher(t.substring(0, t.length() - 1).strip()).matches()) {
+        if (t.endsWith("°") && Grammar.DECIMAL.matcher(t.substring(0, t.length() - 1).strip()).matches()) {
             return Optional.of(Double.parseDouble(t.substring(0, t.length() - 1).strip()));
         }
-        Matcher m = DMS.matcher(t);
+        Matcher m = Grammar.DMS.matcher(t);
         if (!m.matches()) {
             return Optional.empty();
         }

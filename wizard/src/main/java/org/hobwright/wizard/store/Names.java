@@ -1,7 +1,6 @@
 package org.hobwright.wizard.store;
 
 import java.util.Optional;
-import java.util.regex.Pattern;
 import org.hobwright.api.check.Finding;
 
 /**
@@ -12,14 +11,22 @@ public final class Names {
     /** Longest allowed name. */
     public static final int MAX_LENGTH = 64;
 
-    private static final Pattern NAME = Pattern.compile("[A-Za-z0-9_-][A-Za-z0-9._-]*");
-
     private Names() {
     }
 
     /** True when {@code name} is an allowed library name. */
     public static boolean valid(String name) {
-        return name != null && name.length() <= MAX_LENGTH && NAME.matcher(name).matches();
+        if (name == null || name.isEmpty() || name.length() > MAX_LENGTH || name.charAt(0) == '.') {
+            return false;
+        }
+        for (int i = 0; i < name.length(); i++) {
+            char c = name.charAt(i);
+            boolean letterOrDigit = c >= 'A' && c <= 'Z' || c >= 'a' && c <= 'z' || c >= '0' && c <= '9';
+            if (!letterOrDigit && c != '.' && c != '_' && c != '-') {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**
