@@ -33,8 +33,8 @@ for n in "${names[@]}"; do : > "$work/$n"; done
 : > "$work/phases"
 for i in $(seq "$runs"); do
   ms java -cp "$work/hw" Hello >> "$work/hello"
-  ms java -XX:TieredStopAtLevel=1 -XX:CICompilerCount=1 -XX:+UseSerialGC -cp "$jar" "$main" wizard --help >> "$work/picocli-help"
-  ms java -XX:TieredStopAtLevel=1 -XX:CICompilerCount=1 -XX:+UseSerialGC -cp "$jar" "$main" plan "$job" --out "$work/out" >> "$work/plan-no-cds"
+  ms java -XX:TieredStopAtLevel=1 -XX:CICompilerCount=1 -cp "$jar" "$main" wizard --help >> "$work/picocli-help"
+  ms java -XX:TieredStopAtLevel=1 -XX:CICompilerCount=1 -cp "$jar" "$main" plan "$job" --out "$work/out" >> "$work/plan-no-cds"
   ms "$launcher" plan "$job" --out "$work/out" >> "$work/plan-launcher"
   HOBWRIGHT_JAVA_OPTS=-Dhobwright.timing "$launcher" plan "$job" --out "$work/out" 2>&1 >/dev/null \
     | sed -n 's/^timing \([0-9]*\) ms \(.*\)$/\2\t\1/p' >> "$work/phases" || true

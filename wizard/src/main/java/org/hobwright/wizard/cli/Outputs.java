@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.Executor;
+import java.util.concurrent.ForkJoinPool;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
@@ -48,9 +50,14 @@ final class Outputs {
 
     /** Starts looking the writers up at once, beside whatever the caller does next. */
     Outputs(Store store, ClassLoader loader, String generatedOn) {
+        this(store, loader, generatedOn, ForkJoinPool.commonPool());
+    }
+
+    /** Looks the writers up on {@code background}, beside whatever the caller does next. */
+    Outputs(Store store, ClassLoader loader, String generatedOn, Executor background) {
         this.store = store;
         this.generatedOn = generatedOn;
-        this.lookup = CompletableFuture.supplyAsync(() -> Providers.writers(loader));
+        this.lookup = CompletableFuture.supplyAsync(() -> Providers.writers(loader), background);
     }
 
     /** Every writer's files for every job; a file name written twice is an error. */

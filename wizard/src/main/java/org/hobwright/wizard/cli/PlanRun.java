@@ -7,6 +7,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.Executor;
+import java.util.concurrent.Executors;
 import java.util.concurrent.CompletionException;
 import java.util.stream.Stream;
 import org.hobwright.api.spi.CyclePlanner;
@@ -44,8 +46,13 @@ final class PlanRun {
         String generatedOn = GeneratedOn.resolve(request.date().orElse(null), env);
         // the planner and the writers are looked up beside the reading of the jobs
         Store store = Store.open(request.home(), env);
-        CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> planner(store));
-        Outputs outputs = new Outputs(store, env.loader(), generatedOn);
+        Executor background = Executors.newSingleThreadExecutor(r -> {
+            Thread t = new Thread(r, "hobwright-lookup");
+            t.setDaemon(true);
+            return t;
+        });
+        CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> planner(store), background);
+        Outputs outputs = new Outputs(store, env.loader(), generatedOn, background);
         Timing.mark("library opened");
         JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
         List<JobInput> read = new ArrayList<>();
