@@ -11,7 +11,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
-import java.nio.file.attribute.PosixFilePermissions;
+import java.nio.file.attribute.PosixFileAttributeView;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -61,6 +61,7 @@ public final class AtomicFiles {
         Path temp = writeTemp(folder, target.getFileName().toString(), content);
         try {
             if (replace) {
+                keepPermissions(target, temp);
                 move(temp, target);
             } else {
                 createNew(temp, target);
@@ -152,6 +153,7 @@ public final class AtomicFiles {
                     Files.copy(target, backup, StandardCopyOption.REPLACE_EXISTING);
                 }
                 backups.add(backup);
+                keepPermissions(target, e.getValue());
                 move(e.getValue(), target);
                 moved.add(e.getKey());
             }
@@ -197,26 +199,32 @@ public final class AtomicFiles {
     }
 
     /**
-     * Creates a new empty file or folder named prefix, a random number and suffix, readable by the
-     * owner only where the file system has POSIX permissions: what {@link Files#createTempFile}
-     * and {@link Files#createTempDirectory} do, but with a plain random number, so that no secure
-     * random generator (with its security providers, a start-up cost) is set up for a name.
+     * Creates a new empty file or folder named prefix, a random number and suffix, with the
+     * permissions any new file gets there (the user's file-creation mask applies): the temporary
+     * file becomes the output, which other people and programs (a DNC server, a shared library
+     * folder) may need to read. Named with a plain random number, so that no secure random
+     * generator (with its security providers, a start-up cost) is set up for a name.
      */
     private static Path createUnique(Path folder, String prefix, String suffix, boolean directory)
             throws IOException {
-        boolean posix = folder.getFileSystem().supportedFileAttributeViews().contains("posix");
         while (true) {
             Path path = folder.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong()) + suffix);
             try {
-                if (directory) {
-                    return posix ? Files.createDirectory(path, PosixFilePermissions.asFileAttribute(
-                            PosixFilePermissions.fromString("rwx------"))) : Files.createDirectory(path);
-                }
-                return posix ? Files.createFile(path, PosixFilePermissions.asFileAttribute(
-                        PosixFilePermissions.fromString("rw-------"))) : Files.createFile(path);
+                return directory ? Files.createDirectory(path) : Files.createFile(path);
             } catch (FileAlreadyExistsException taken) {
                 // another name
             }
+        }
+    }
+
+    /** Gives a file about to replace {@code target} the target's POSIX permissions, where there are any. */
+    private static void keepPermissions(Path target, Path replacement) {
+        try {
+            if (Files.getFileAttributeView(target, PosixFileAttributeView.class) != null && Files.exists(target)) {
+                Files.setPosixFilePermissions(replacement, Files.getPosixFilePermissions(target));
+            }
+        } catch (IOException | UnsupportedOperationException e) {
+            // the replacement keeps the permissions of a new file
         }
     }
 

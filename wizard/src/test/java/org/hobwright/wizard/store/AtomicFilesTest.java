@@ -102,4 +102,32 @@ class AtomicFilesTest {
                 () -> AtomicFiles.writeAll(dir, Map.of("../x", AtomicFiles.text("x")), true));
         assertTrue(dir.toFile().list().length == 0);
     }
+
+    /**
+     * Outputs get the permissions of any new file in that folder (the operating system applies the
+     * user's file-creation mask to the reference file), and a replaced file keeps its own.
+     */
+    @Test
+    void outputsHaveTheUsualPermissionsAndReplacementsKeepTheirs() throws IOException {
+        org.junit.jupiter.api.Assumptions.assumeTrue(
+                dir.getFileSystem().supportedFileAttributeViews().contains("posix"), "POSIX file system");
+        Path reference = Files.createFile(dir.resolve("reference.txt"));
+        Path referenceDir = Files.createDirectory(dir.resolve("reference-dir"));
+
+        AtomicFiles.write(dir.resolve("one.nc"), AtomicFiles.text("x"), false);
+        assertEquals(Files.getPosixFilePermissions(reference), Files.getPosixFilePermissions(dir.resolve("one.nc")));
+
+        Path out = dir.resolve("out");
+        AtomicFiles.writeAll(out, Map.of("a.nc", AtomicFiles.text("a")), false);
+        assertEquals(Files.getPosixFilePermissions(referenceDir), Files.getPosixFilePermissions(out));
+        assertEquals(Files.getPosixFilePermissions(reference), Files.getPosixFilePermissions(out.resolve("a.nc")));
+
+        var shared = java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw-r--");
+        Files.setPosixFilePermissions(out.resolve("a.nc"), shared);
+        AtomicFiles.writeAll(out, Map.of("a.nc", AtomicFiles.text("b")), true);
+        assertEquals(shared, Files.getPosixFilePermissions(out.resolve("a.nc")));
+        Files.setPosixFilePermissions(dir.resolve("one.nc"), shared);
+        AtomicFiles.write(dir.resolve("one.nc"), AtomicFiles.text("y"), true);
+        assertEquals(shared, Files.getPosixFilePermissions(dir.resolve("one.nc")));
+    }
 }
