@@ -1,6 +1,8 @@
 package org.hobwright.api;
 
 import java.util.Objects;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
 
 /**
  * Argument checks used by the compact constructors of the api records.
@@ -46,6 +48,30 @@ public final class Validate {
         if (value < min || value > max) {
             throw new IllegalArgumentException(
                     field + " must be between " + min + " and " + max + ", was " + value);
+        }
+        return value;
+    }
+
+    /** Requires an absent value or a finite number greater than zero. */
+    public static OptionalDouble positive(String field, OptionalDouble value) {
+        if (present(field, value).isPresent()) {
+            positive(field, value.getAsDouble());
+        }
+        return value;
+    }
+
+    /** Requires an absent value or a finite number in the closed range [min, max]. */
+    public static OptionalDouble range(String field, OptionalDouble value, double min, double max) {
+        if (present(field, value).isPresent()) {
+            range(field, value.getAsDouble(), min, max);
+        }
+        return value;
+    }
+
+    /** Requires an absent value or a whole number in the closed range [min, max]. */
+    public static OptionalInt range(String field, OptionalInt value, int min, int max) {
+        if (present(field, value).isPresent()) {
+            range(field, value.getAsInt(), min, max);
         }
         return value;
     }

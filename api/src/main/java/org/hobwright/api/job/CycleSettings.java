@@ -42,13 +42,13 @@ public record CycleSettings(
     public CycleSettings {
         Validate.text("cycle.workMaterial", workMaterial);
         Objects.requireNonNull(cuttingSpeedMPerMin, "cuttingSpeedMPerMin");
-        cuttingSpeedMPerMin.ifPresent(v -> Validate.positive("cycle.cuttingSpeed", v));
+        Validate.positive("cycle.cuttingSpeed", cuttingSpeedMPerMin);
         Objects.requireNonNull(roughFeedMmPerRev, "roughFeedMmPerRev");
-        roughFeedMmPerRev.ifPresent(v -> Validate.positive("cycle.roughFeed", v));
+        Validate.positive("cycle.roughFeed", roughFeedMmPerRev);
         Objects.requireNonNull(finishFeedMmPerRev, "finishFeedMmPerRev");
-        finishFeedMmPerRev.ifPresent(v -> Validate.positive("cycle.finishFeed", v));
+        Validate.positive("cycle.finishFeed", finishFeedMmPerRev);
         Objects.requireNonNull(roughDepthMm, "roughDepthMm");
-        roughDepthMm.ifPresent(v -> Validate.positive("cycle.roughDepth", v));
+        Validate.positive("cycle.roughDepth", roughDepthMm);
         Validate.nonNegative("cycle.finishStock", finishStockMm);
         Validate.present("cycle.method", method);
         Validate.nonNegative("cycle.axialClearance", axialClearanceMm);

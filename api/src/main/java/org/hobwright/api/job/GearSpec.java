@@ -57,11 +57,11 @@ public record GearSpec(
         Validate.text("toothSystem", toothSystem);
         Objects.requireNonNull(customProportions, "customProportions");
         Objects.requireNonNull(blankDiameterMm, "blankDiameterMm");
-        blankDiameterMm.ifPresent(v -> Validate.positive("blankDiameter", v));
+        Validate.positive("blankDiameter", blankDiameterMm);
         Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
-        pinDiameterMm.ifPresent(v -> Validate.positive("pinDiameter", v));
+        Validate.positive("pinDiameter", pinDiameterMm);
         Objects.requireNonNull(flankToleranceClass, "flankToleranceClass");
-        flankToleranceClass.ifPresent(v -> Validate.range("flankToleranceClass", v, 1, 11));
+        Validate.range("flankToleranceClass", flankToleranceClass, 1, 11);
         Validate.present("drawing", drawing);
         if (toothSystem.equals("custom") != customProportions.isPresent()) {
             throw new IllegalArgumentException(

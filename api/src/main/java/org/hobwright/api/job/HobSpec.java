@@ -40,13 +40,13 @@ public record HobSpec(
         Validate.present("hob.hand", hand);
         Validate.positive("hob.outsideDiameter", outsideDiameterMm);
         Objects.requireNonNull(leadAngleDeg, "leadAngleDeg");
-        leadAngleDeg.ifPresent(v -> Validate.range("hob.leadAngle", v, 0, 45));
+        Validate.range("hob.leadAngle", leadAngleDeg, 0, 45);
         Objects.requireNonNull(referenceDiameterMm, "referenceDiameterMm");
-        referenceDiameterMm.ifPresent(v -> Validate.positive("hob.referenceDiameter", v));
+        Validate.positive("hob.referenceDiameter", referenceDiameterMm);
         Validate.atLeast("hob.gashes", gashes, 1);
         Validate.positive("hob.length", lengthMm);
         Objects.requireNonNull(maxRpm, "maxRpm");
-        maxRpm.ifPresent(v -> Validate.positive("hob.maxRpm", v));
+        Validate.positive("hob.maxRpm", maxRpm);
         Validate.text("hob.material", material);
     }
 

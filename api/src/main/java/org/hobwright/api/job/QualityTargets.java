@@ -24,8 +24,8 @@ public record QualityTargets(
         Objects.requireNonNull(feedMarkDepthUm, "feedMarkDepthUm");
         Objects.requireNonNull(envelopingDepthUm, "envelopingDepthUm");
         Objects.requireNonNull(maxChipThicknessMm, "maxChipThicknessMm");
-        feedMarkDepthUm.ifPresent(v -> org.hobwright.api.Validate.positive("targets.feedMarkDepth", v));
-        envelopingDepthUm.ifPresent(v -> org.hobwright.api.Validate.positive("targets.envelopingDepth", v));
-        maxChipThicknessMm.ifPresent(v -> org.hobwright.api.Validate.positive("targets.maxChipThickness", v));
+        org.hobwright.api.Validate.positive("targets.feedMarkDepth", feedMarkDepthUm);
+        org.hobwright.api.Validate.positive("targets.envelopingDepth", envelopingDepthUm);
+        org.hobwright.api.Validate.positive("targets.maxChipThickness", maxChipThicknessMm);
     }
 }

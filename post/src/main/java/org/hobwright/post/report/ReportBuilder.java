@@ -61,12 +61,25 @@ final class ReportBuilder {
         units.put("speed", "rpm");
         units.put("cuttingSpeed", u.speedSymbol());
         units.put("quality", "um");
-        cycle.gear().ifPresent(g -> root.set("gear", gear(g)));
-        cycle.inspection().ifPresent(i -> root.set("inspection", inspection(i)));
-        cycle.tolerances().ifPresent(t -> root.set("tolerances", tolerances(t)));
-        cycle.setup().ifPresent(s -> root.set("setup", setup(s)));
-        cycle.summary().ifPresent(s -> root.set("cycle", cycle(s, cycle.steps(), cycle.setup())));
-        cycle.simulation().ifPresent(s -> root.set("simulation", simulation(s)));
+        // plain conditions rather than lambdas: each lambda's first linkage is start-up time
+        if (cycle.gear().isPresent()) {
+            root.set("gear", gear(cycle.gear().get()));
+        }
+        if (cycle.inspection().isPresent()) {
+            root.set("inspection", inspection(cycle.inspection().get()));
+        }
+        if (cycle.tolerances().isPresent()) {
+            root.set("tolerances", tolerances(cycle.tolerances().get()));
+        }
+        if (cycle.setup().isPresent()) {
+            root.set("setup", setup(cycle.setup().get()));
+        }
+        if (cycle.summary().isPresent()) {
+            root.set("cycle", cycle(cycle.summary().get(), cycle.steps(), cycle.setup()));
+        }
+        if (cycle.simulation().isPresent()) {
+            root.set("simulation", simulation(cycle.simulation().get()));
+        }
         root.set("findings", findings(cycle.findings()));
         return root;
     }
@@ -94,7 +107,9 @@ final class ReportBuilder {
         n.put("transverseModule", g.transverseModuleMm());
         n.put("transversePressureAngle", g.transversePressureAngleDeg());
         n.put("baseHelixAngle", g.baseHelixAngleDeg());
-        g.leadMm().ifPresent(l -> n.put("lead", u.length(l)));
+        if (g.leadMm().isPresent()) {
+            n.put("lead", u.length(g.leadMm().getAsDouble()));
+        }
         n.put("virtualTeeth", g.virtualTeeth());
         return n;
     }
@@ -151,16 +166,19 @@ final class ReportBuilder {
 
     private ObjectNode cycle(CycleSummary s, List<CycleStep> steps, Optional<SetupValues> setup) {
         ObjectNode n = nodes.objectNode();
-        setup.ifPresent(v -> {
-            n.put("hobRpm", v.hobRpm());
-            n.put("workRpm", v.workRpm());
-        });
+        if (setup.isPresent()) {
+            n.put("hobRpm", setup.get().hobRpm());
+            n.put("workRpm", setup.get().workRpm());
+        }
         n.put("axialFeed", u.length(s.finishFeedMmPerRev()));
         n.put("passes", s.passes().size());
         n.put("approachLength", u.length(s.approachLengthMm()));
         n.put("overrunLength", u.length(s.overrunLengthMm()));
-        n.put("cuttingTime", steps.stream().filter(CycleStep.Feed.class::isInstance)
-                .mapToDouble(CycleStep::seconds).sum());
+        double cuttingTime = 0;
+        for (CycleStep step : steps) {
+            cuttingTime += step instanceof CycleStep.Feed ? step.seconds() : 0;
+        }
+        n.put("cuttingTime", cuttingTime);
         n.put("cycleTime", s.cycleTimeS());
         n.put("feedMarkDepth", s.feedMarkFlankUm());
         n.put("feedMarkRootDepth", s.feedMarkRootUm());
@@ -179,12 +197,20 @@ final class ReportBuilder {
             pn.put("axialTravel", u.length(p.axialTravelMm()));
             pn.put("time", p.seconds());
         }
-        s.fastest().ifPresent(f -> n.set("fastest", fastest(f)));
+        if (s.fastest().isPresent()) {
+            n.set("fastest", fastest(s.fastest().get()));
+        }
         if (!Targets.none(s.targets())) {
             ObjectNode targets = n.putObject("targets");
-            s.targets().feedMarkDepthUm().ifPresent(v -> targets.put("feedMarkDepth", v));
-            s.targets().envelopingDepthUm().ifPresent(v -> targets.put("envelopingDepth", v));
-            s.targets().maxChipThicknessMm().ifPresent(v -> targets.put("maxChipThickness", u.length(v)));
+            if (s.targets().feedMarkDepthUm().isPresent()) {
+                targets.put("feedMarkDepth", s.targets().feedMarkDepthUm().getAsDouble());
+            }
+            if (s.targets().envelopingDepthUm().isPresent()) {
+                targets.put("envelopingDepth", s.targets().envelopingDepthUm().getAsDouble());
+            }
+            if (s.targets().maxChipThicknessMm().isPresent()) {
+                targets.put("maxChipThickness", u.length(s.targets().maxChipThicknessMm().getAsDouble()));
+            }
         }
         return n;
     }
@@ -220,7 +246,9 @@ final class ReportBuilder {
             n.put("code", f.code());
             n.put("field", f.field());
             n.put("message", f.message());
-            f.fix().ifPresent(x -> n.put("fix", x));
+            if (f.fix().isPresent()) {
+                n.put("fix", f.fix().get());
+            }
             n.put("source", f.source());
         }
         return a;
