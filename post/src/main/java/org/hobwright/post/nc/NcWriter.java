@@ -3,8 +3,10 @@ package org.hobwright.post.nc;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.HobCycle;
@@ -21,6 +23,9 @@ import org.hobwright.post.PostFindings;
  * does not load or lacks a template the cycle needs, and refuses when a safety invariant is broken.
  */
 public final class NcWriter implements CycleWriter {
+    private static final int KEPT = 16;
+    private final Map<String, DialectLoader.Loaded> dialects = new ConcurrentHashMap<>();
+
 
     private static final String SOURCE = "Hobwright dialect format, post/README.md";
 
@@ -52,7 +57,7 @@ public final class NcWriter implements CycleWriter {
                     "No dialect text was given for \"" + dialectName + "\"; the NC program needs one",
                     "save the dialect file " + dialectName + ".json in the library's dialects folder", SOURCE)));
         }
-        DialectLoader.Loaded loaded = DialectLoader.load(dialectName, json.get());
+        DialectLoader.Loaded loaded = dialect(dialectName, json.get());
         if (loaded.dialect().isEmpty()) {
             return WriteResult.refused(loaded.findings());
         }
@@ -74,6 +79,22 @@ public final class NcWriter implements CycleWriter {
         }
         String text = String.join(dialect.lineEnding(), r.lines()) + dialect.lineEnding();
         return new WriteResult(List.of(new OutputFile(context.job().name() + ".nc", text)), loaded.findings());
+    }
+
+    /**
+     * The loaded dialect, kept by name and text: a run that writes many jobs for a few machines
+     * reads and checks each dialect once (a dialect is immutable; at most {@value #KEPT} are kept).
+     */
+    private DialectLoader.Loaded dialect(String name, String json) {
+        String key = name + '\n' + json;
+        DialectLoader.Loaded loaded = dialects.get(key);
+        if (loaded == null) {
+            loaded = DialectLoader.load(name, json);
+            if (dialects.size() < KEPT) {
+                dialects.putIfAbsent(key, loaded);
+            }
+        }
+        return loaded;
     }
 
     /** Templates the cycle needs beyond the required ones. */

@@ -10,10 +10,12 @@ import java.util.stream.Stream;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.job.Units;
+import org.hobwright.api.spi.WriteContext;
 import org.hobwright.api.spi.WriteResult;
 import org.hobwright.post.Fixtures;
 import org.hobwright.post.Fixtures.Fixture;
 import org.hobwright.post.GoldenFiles;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
@@ -193,5 +195,22 @@ class NcWriterTest {
             throw new AssertionError("no block with " + words);
         }
         return -1;
+    }
+
+    /** One writer keeps loaded dialects by name and text: the same text writes the same program, a changed text is read anew. */
+    @Test
+    void aKeptDialectIsUsedOnlyForTheSameText() {
+        Fixture f = Fixtures.all().get(0);
+        String dialect = Fixtures.dialects().stream()
+                .filter(d -> Fixtures.dialectText(d).contains("\"lineEnding\": \"lf\"")).findFirst().orElseThrow();
+        NcWriter writer = new NcWriter();
+        String first = writer.write(f.cycle(), f.context(dialect)).files().get(0).text();
+        assertEquals(first, writer.write(f.cycle(), f.context(dialect)).files().get(0).text());
+        String crlf = Fixtures.dialectText(dialect).replace("\"lineEnding\": \"lf\"", "\"lineEnding\": \"crlf\"");
+        WriteContext changed = new WriteContext(f.job(), "2026-12-01", "0.1.0-test",
+                java.util.Map.of(WriteContext.DIALECT, crlf, WriteContext.DIALECT_NAME, dialect));
+        String second = writer.write(f.cycle(), changed).files().get(0).text();
+        assertFalse(first.contains("\r"));
+        assertEquals(first.replace("\n", "\r\n"), second);
     }
 }
