@@ -108,11 +108,12 @@ final class TerminalWizard {
                 }
             } else {
                 String text = line.isEmpty() ? wizard.value(f.key()) : line.equals("-") ? "" : line;
-                List<Finding> problems = wizard.answer(f.key(), text);
-                if (problems.isEmpty()) {
-                    i++;
-                } else {
-                    problems.forEach(p -> prompter.say("  ! " + p.message() + p.fix().map(x -> "; " + x).orElse("")));
+                List<Finding> said = wizard.answer(f.key(), text);
+                for (Finding p : said) {
+                    prompter.say((p.isError() ? "  ! " : "  i ") + p.message() + p.fix().map(x -> "; " + x).orElse(""));
+                }
+                if (!Finding.anyError(said)) {
+                    i++;                                 // taken; remarks were shown
                 }
             }
         }

@@ -39,6 +39,7 @@ public final class StepSession implements Wizard {
 
     private final StepServices services;
     private final Answers answers;
+    private final UnitSwitch unitSwitch = new UnitSwitch();
     private int index;
     private List<Finding> shown = List.of();
     private Optional<HobJob> job = Optional.empty();
@@ -96,9 +97,14 @@ public final class StepSession implements Wizard {
         if (hobKey != null && answers.get(hobKey).equals(answers.get(key))) {
             answers.put(hobKey, value);
         }
+        Units before = units();
         answers.put(key, value);
+        unitSwitch.typed(field.get(), value, before);
         if (key.equals(Fields.MACHINE) && !services.templates(value).contains(answers.get(Fields.TEMPLATE))) {
             answers.put(Fields.TEMPLATE, "");
+        }
+        if (key.equals(Fields.UNITS)) {
+            return unitSwitch.switchUnits(answers, before, units()).map(List::of).orElse(List.of());
         }
         return List.of();
     }

@@ -252,4 +252,39 @@ class StepSessionTest {
         assertTrue(machine.choices().containsAll(List.of("varrow-sl16", "ottmere-tl40")), machine::toString);
         assertEquals("WIZARD_NOT_A_CHOICE", w.answer(Fields.MACHINE, "no-such-machine").get(0).code());
     }
+
+    /**
+     * Changing the unit keeps lengths, feeds and cutting speeds meaning the same (1 in = 25.4 mm and
+     * 1 ft = 0.3048 m exactly, by the international definition of 1959), and switching back restores
+     * the answers as typed.
+     */
+    @Test
+    void changingTheUnitConvertsLengthFeedAndSpeedAnswers() {
+        Answers start = StepWizardFactory.sampleAnswers();
+        start.put("cycle.cuttingSpeed", "30.48");                 // answers of later steps, from a job file
+        start.put("cycle.finishFeed", "0.5");
+        StepSession w = new StepSession(services, start);
+        assertEquals(List.of(), w.answer("units", "mm"));
+        assertEquals(List.of(), w.answer("gear.faceWidth", "25.4"));
+        assertEquals(List.of(), w.answer("gear.teeth", "24"));
+        String hobDiameter = w.value("hob.outsideDiameter");
+
+        List<Finding> said = w.answer("units", "in");
+        assertEquals(1, said.size());
+        assertEquals(UnitSwitch.CONVERTED, said.get(0).code());
+        assertFalse(said.get(0).isError(), "the answer is taken");
+        assertEquals("in", w.value("units"));
+        assertEquals("1", w.value("gear.faceWidth"));
+        assertEquals("100", w.value("cycle.cuttingSpeed"));
+        assertEquals("0.01968503937", w.value("cycle.finishFeed"));   // 0.5 / 25.4 to 10 significant digits
+        assertEquals("24", w.value("gear.teeth"), "counts keep their value");
+        assertEquals(Double.parseDouble(hobDiameter) / 25.4, Double.parseDouble(w.value("hob.outsideDiameter")), 1e-9);
+
+        w.answer("units", "mm");
+        assertEquals("25.4", w.value("gear.faceWidth"));
+        assertEquals("30.48", w.value("cycle.cuttingSpeed"));
+        assertEquals("0.5", w.value("cycle.finishFeed"));
+        assertEquals(hobDiameter, w.value("hob.outsideDiameter"));
+        assertEquals(List.of(), w.answer("units", "mm"), "no change, no remark");
+    }
 }
