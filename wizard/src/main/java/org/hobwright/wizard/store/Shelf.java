@@ -67,9 +67,24 @@ final class Shelf {
                     }
                 });
             }
-            return builtins.text(folder + "/" + name + ".json").map(Loaded::of)
+            return builtins.text(folder + "/" + name + ".json").map(t -> Loaded.of(withoutSchemaLine(t)))
                     .orElseGet(() -> Loaded.unreadable(notFound(folder, what, name)));
         });
+    }
+
+    /**
+     * A built-in file's text without its {@code "$schema"} line: that path is relative to the
+     * samples folder of the repository and means nothing where the text is shown or copied to
+     * (saved files carry no {@code $schema} either).
+     */
+    static String withoutSchemaLine(String text) {
+        StringBuilder out = new StringBuilder(text.length());
+        for (String line : text.split("\n", -1)) {
+            if (!line.strip().startsWith("\"$schema\"")) {
+                out.append(line).append('\n');
+            }
+        }
+        return out.substring(0, out.length() - 1);
     }
 
     /** Checks a name first: a bad name is unreadable input and nothing else is done. */

@@ -199,4 +199,32 @@ class LibraryTest {
         assertEquals("INPUT_FORMAT", lib.saveDialect(file, "wrong", false).findings().get(0).code());
         assertTrue(lib.removeDialect("test-ctl").ok());
     }
+
+    /** A built-in file is shown without its repository-relative $schema line, otherwise as bundled. */
+    @Test
+    void builtInTextsAreShownWithoutTheirSchemaLine() throws Exception {
+        int shown = 0;
+        for (LibraryEntry e : lib.machines()) {
+            same(lib.machineText(e.name()).get(), "machines/" + e.name() + ".json");
+            shown++;
+        }
+        for (LibraryEntry e : lib.templates()) {
+            same(lib.templateText(e.machine(), e.name()).get(), "templates/" + e.machine() + "/" + e.name() + ".json");
+            shown++;
+        }
+        for (LibraryEntry e : lib.dialects()) {
+            same(lib.dialectText(e.name()).get(), "dialects/" + e.name() + ".json");
+            shown++;
+        }
+        assertTrue(shown >= 8, "every built-in file was shown: " + shown);
+    }
+
+    private static void same(String shown, String bundled) throws Exception {
+        tools.jackson.databind.json.JsonMapper json = tools.jackson.databind.json.JsonMapper.shared();
+        tools.jackson.databind.node.ObjectNode expected = (tools.jackson.databind.node.ObjectNode) json.readTree(
+                SCENARIO.resolve(bundled).toFile());
+        assertTrue(expected.has("$schema"), bundled + " carries a $schema");
+        expected.remove("$schema");
+        assertEquals(expected, json.readTree(shown), bundled);
+    }
 }
