@@ -5,6 +5,7 @@ import java.io.OutputStream;
 import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.FileSystemException;
 import java.nio.file.Files;
@@ -12,6 +13,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.PosixFileAttributeView;
+import java.time.Duration;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -66,6 +68,7 @@ public final class AtomicFiles {
             } else {
                 createNew(temp, target);
             }
+            syncFolder(folder);
         } finally {
             Files.deleteIfExists(temp);
         }
@@ -113,6 +116,7 @@ public final class AtomicFiles {
             }
             try {
                 Files.move(staging, folder, StandardCopyOption.ATOMIC_MOVE);
+                syncFolder(parent);
             } catch (FileSystemException raced) {
                 if (!Files.isDirectory(folder)) {
                     throw raced;
@@ -157,6 +161,7 @@ public final class AtomicFiles {
                 move(e.getValue(), target);
                 moved.add(e.getKey());
             }
+            syncFolder(folder);
         } catch (IOException | RuntimeException failure) {
             rollBack(folder, moved, backups, failure);
             throw failure;
@@ -236,6 +241,41 @@ public final class AtomicFiles {
             out.flush();
             ch.force(true);
         }
+    }
+
+    /**
+     * Asks the file system to make the folder's entries durable (so a rename survives a power cut);
+     * best effort: where a folder cannot be opened for this (e.g. on Windows) nothing happens.
+     */
+    static void syncFolder(Path folder) {
+        try (FileChannel dir = FileChannel.open(folder, StandardOpenOption.READ)) {
+            dir.force(true);
+        } catch (IOException | RuntimeException e) {
+            // not supported here; the files themselves were forced to disk before the rename
+        }
+    }
+
+    /**
+     * Deletes the hidden temporary files of {@code name} in {@code folder} that are older than
+     * {@code age}: what a save killed half way leaves behind (a save running now has a younger one).
+     *
+     * @return how many were deleted
+     */
+    public static int removeStaleTemps(Path folder, String name, Duration age) {
+        int removed = 0;
+        String prefix = "." + name + ".";
+        long limit = System.currentTimeMillis() - age.toMillis();
+        try (DirectoryStream<Path> entries = Files.newDirectoryStream(folder, prefix + "*" + TEMP_SUFFIX)) {
+            for (Path p : entries) {
+                if (Files.isRegularFile(p) && Files.getLastModifiedTime(p).toMillis() < limit
+                        && Files.deleteIfExists(p)) {
+                    removed++;
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            // a folder that cannot be listed keeps its leftovers; they are hidden and harmless
+        }
+        return removed;
     }
 
     private static void move(Path from, Path to) throws IOException {

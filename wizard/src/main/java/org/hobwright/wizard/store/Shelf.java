@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.List;
 import java.util.Optional;
 import java.util.TreeMap;
@@ -17,6 +18,9 @@ import org.hobwright.api.check.Finding;
  * by folder and name. Every name is checked before it touches the file system.
  */
 final class Shelf {
+    /** Temporary files of a save older than this were left by a save that was killed. */
+    private static final Duration STALE = Duration.ofHours(1);
+
     private final Path home;
     private final Builtins builtins;
 
@@ -143,6 +147,7 @@ final class Shelf {
             Path target = file(folder, name);
             try {
                 AtomicFiles.writeText(target, text, force);
+                AtomicFiles.removeStaleTemps(target.getParent(), target.getFileName().toString(), STALE);
                 return Loaded.of(target);
             } catch (FileAlreadyExistsException e) {
                 return Loaded.unreadable(List.of(InputCode.LIBRARY_EXISTS.finding(what,

@@ -227,4 +227,27 @@ class LibraryTest {
         expected.remove("$schema");
         assertEquals(expected, json.readTree(shown), bundled);
     }
+
+    /** A save removes what a killed save of the same file left behind, but not another save's fresh temporary file. */
+    @Test
+    void aSaveClearsTheLeftoversOfAKilledSave() throws Exception {
+        MachineFile m = new MachineFile(new RandomJobs(5).machine(), Units.MM, "");
+        Path folder = Files.createDirectories(home.resolve("machines"));
+        String file = m.name() + ".json";
+        Path killed = Files.writeString(folder.resolve("." + file + ".123" + AtomicFiles.TEMP_SUFFIX), "{ half");
+        Path killedBackup = Files.writeString(folder.resolve("." + file + ".old" + AtomicFiles.TEMP_SUFFIX), "{}");
+        Path running = Files.writeString(folder.resolve("." + file + ".456" + AtomicFiles.TEMP_SUFFIX), "{ now");
+        Path other = Files.writeString(folder.resolve(".other.json.789" + AtomicFiles.TEMP_SUFFIX), "{}");
+        java.nio.file.attribute.FileTime twoHoursAgo = java.nio.file.attribute.FileTime.fromMillis(
+                System.currentTimeMillis() - 2 * 3600_000L);
+        for (Path p : List.of(killed, killedBackup, other)) {
+            Files.setLastModifiedTime(p, twoHoursAgo);
+        }
+        assertTrue(lib.saveMachine(m, false).ok());
+        assertFalse(Files.exists(killed));
+        assertFalse(Files.exists(killedBackup));
+        assertTrue(Files.exists(running), "a younger temporary file may belong to a save running now");
+        assertTrue(Files.exists(other), "only the saved file's leftovers go");
+        assertTrue(lib.machineFile(m.name()).ok());
+    }
 }
