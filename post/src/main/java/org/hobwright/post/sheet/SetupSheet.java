@@ -76,7 +76,9 @@ final class SetupSheet {
         m.open("div", "class", "figures").nl();
         m.open("figure").raw(ToothSpaceSvg.svg(g, job.gear().teeth(), cycle.simulation(), f))
                 .leaf("figcaption", "Tooth space in the transverse section, drawn to scale"
-                        + (cycle.simulation().isPresent() ? ", with the generating simulation" : "") + ".")
+                        + cycle.simulation().map(sim -> ", with the generating simulation: its flanks depart from the"
+                        + " true involute by at most " + f.um(sim.profileDeviationMaxMm() * 1000)
+                        + " (hobwright simulate draws the departure enlarged)").orElse("") + ".")
                 .close("figure");
         m.open("figure").raw(SwivelSvg.svg(s.swivelAngleDeg(), job.gear().signedHelixAngleDeg(), job.hob().hand(),
                         "η " + f.deg(s.swivelAngleDeg())))

@@ -109,6 +109,17 @@ class SetupSheetTest {
         assertTrue(text.contains("Feed-mark depth on the flank2.95 µm3.00 µmwithin"), text);
     }
 
+    /** The drawing's caption gives the simulated departure from the involute, the number the drawing cannot show. */
+    @Test
+    void theDrawingCaptionGivesTheSimulatedDeparture() throws Exception {
+        Fixture f = Fixtures.helicalMetric();
+        double um = f.cycle().simulation().orElseThrow().profileDeviationMaxMm() * 1000;
+        String text = parse(sheet(f)).getDocumentElement().getTextContent();
+        String expected = "depart from the true involute by at most "
+                + org.hobwright.post.text.Decimal.fixed(um, 2) + " µm";
+        assertTrue(text.contains(expected), () -> "caption with \"" + expected + "\"");
+    }
+
     private static void contains(String text, String pointer, String value) {
         assertTrue(text.contains(value), () -> pointer + " = \"" + value + "\" is on the sheet");
     }
