@@ -18,14 +18,7 @@ class DecimalTest {
     private static String reference(double v, int decimals, boolean trailingZeros) {
         BigDecimal r = BigDecimal.valueOf(v).setScale(decimals, RoundingMode.HALF_UP);
         String text = (r.signum() == 0 ? r.abs() : r).toPlainString();
-        if (trailingZeros || decimals == 0) {
-            return text;
-        }
-        int end = text.length();
-        while (text.charAt(end - 1) == '0') {
-            end--;
-        }
-        return text.substring(0, end);
+        return trailingZeros || decimals == 0 ? text : text.replaceFirst("0+$", "");
     }
 
     private static void same(double v) {
