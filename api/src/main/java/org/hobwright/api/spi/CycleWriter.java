@@ -23,6 +23,18 @@ public interface CycleWriter {
     }
 
     /**
+     * Called once the job is known, before its cycle is planned, possibly on another thread and
+     * while other jobs are written: a writer may load and check what it will need (a dialect) so
+     * that {@link #write} takes less time. It writes nothing and reports nothing ({@code write}
+     * reports every problem), and what it keeps must not change what {@code write} produces. The
+     * default does nothing.
+     *
+     * @param context the job and the resources the writer will be given
+     */
+    default void prepare(WriteContext context) {
+    }
+
+    /**
      * Formats the cycle. Must not throw for a cycle with errors: it returns a refusal instead.
      *
      * @param cycle   the planned cycle

@@ -53,4 +53,14 @@ public abstract class CycleWriterContract {
     void outputIsDeterministic() {
         assertEquals(writer().write(cleanCycle(), context()), writer().write(cleanCycle(), context()));
     }
+
+    /** Preparing changes nothing a write produces, also when done twice and by the same instance. */
+    @Test
+    void preparingChangesNothingWritten() {
+        WriteResult unprepared = writer().write(cleanCycle(), context());
+        CycleWriter prepared = writer();
+        prepared.prepare(context());
+        prepared.prepare(context());
+        assertEquals(unprepared, prepared.write(cleanCycle(), context()));
+    }
 }

@@ -50,7 +50,7 @@ public final class NcWriter implements CycleWriter {
         if (refusal.isPresent()) {
             return refusal.get();
         }
-        String dialectName = context.resource(WriteContext.DIALECT_NAME).orElse(context.job().machine().dialect());
+        String dialectName = dialectName(context);
         Optional<String> json = context.resource(WriteContext.DIALECT);
         if (json.isEmpty()) {
             return WriteResult.refused(List.of(Finding.error("NC_DIALECT_MISSING", "machine.dialect",
@@ -79,6 +79,19 @@ public final class NcWriter implements CycleWriter {
         }
         String text = String.join(dialect.lineEnding(), r.lines()) + dialect.lineEnding();
         return new WriteResult(List.of(new OutputFile(context.job().name() + ".nc", text)), loaded.findings());
+    }
+
+    /** Loads and checks the job's dialect ahead of {@link #write}, which then finds it kept. */
+    @Override
+    public void prepare(WriteContext context) {
+        Optional<String> json = context.resource(WriteContext.DIALECT);
+        if (json.isPresent()) {
+            dialect(dialectName(context), json.get());
+        }
+    }
+
+    private static String dialectName(WriteContext context) {
+        return context.resource(WriteContext.DIALECT_NAME).orElse(context.job().machine().dialect());
     }
 
     /**

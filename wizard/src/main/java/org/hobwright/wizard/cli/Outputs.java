@@ -34,6 +34,7 @@ final class Outputs {
 
     private final Store store;
     private final String generatedOn;
+    private final Executor background;
     private final CompletableFuture<Providers.Loaded<CycleWriter>> lookup;
 
     /**
@@ -57,7 +58,29 @@ final class Outputs {
     Outputs(Store store, ClassLoader loader, String generatedOn, Executor background) {
         this.store = store;
         this.generatedOn = generatedOn;
+        this.background = background;
         this.lookup = CompletableFuture.supplyAsync(() -> Providers.writers(loader), background);
+    }
+
+    /**
+     * Lets every writer prepare for these jobs on the background thread (a dialect is read and
+     * checked while the jobs are planned). A writer that fails here reports it when it writes.
+     */
+    void prepare(List<JobInput> jobs) {
+        lookup.thenAcceptAsync(found -> {
+            for (JobInput in : jobs) {
+                if (in.job().isPresent()) {
+                    WriteContext context = context(in.job().get());
+                    for (CycleWriter w : found.providers()) {
+                        try {
+                            w.prepare(context);
+                        } catch (RuntimeException e) {
+                            // the same problem comes back as a finding when this writer writes
+                        }
+                    }
+                }
+            }
+        }, background);
     }
 
     /** Every writer's files for every job; a file name written twice is an error. */

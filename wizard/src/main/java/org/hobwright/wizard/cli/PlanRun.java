@@ -65,6 +65,7 @@ final class PlanRun {
             }
         }
         Timing.mark("jobs read");
+        outputs.prepare(read);
         List<JobInput> jobs = read.stream()
                 .map(in -> in.job().map(j -> in.planned(join(planner).plan(j))).orElse(in)).toList();
         Timing.mark("jobs planned");
