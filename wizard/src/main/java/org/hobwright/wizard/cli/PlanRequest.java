@@ -28,8 +28,8 @@ record PlanRequest(List<Path> inputs, Optional<String> machine, Optional<String>
     /** A {@code plan} run: without {@code --out}, writes to the default folder unless {@code --json} is asked. */
     static PlanRequest plan(List<Path> inputs, String machine, String template, Path out, boolean json,
                             boolean fastest, String date, Path home) {
-        Optional<Path> folder = Optional.ofNullable(out).or(() -> json ? Optional.empty()
-                : Optional.of(Path.of(DEFAULT_OUT)));
+        Optional<Path> folder = out != null ? Optional.of(out)
+                : json ? Optional.empty() : Optional.of(Path.of(DEFAULT_OUT));
         return new PlanRequest(inputs, Optional.ofNullable(machine), Optional.ofNullable(template), folder, json,
                 fastest, Optional.ofNullable(date), Optional.ofNullable(home));
     }

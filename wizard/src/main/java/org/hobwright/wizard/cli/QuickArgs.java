@@ -64,8 +64,8 @@ final class QuickArgs {
                 return Optional.empty();
             }
         }
-        Path home = Optional.ofNullable(values.get("--home")).map(Path::of).orElse(null);
-        Path out = Optional.ofNullable(values.get("--out")).map(Path::of).orElse(null);
+        Path home = values.containsKey("--home") ? Path.of(values.get("--home")) : null;
+        Path out = values.containsKey("--out") ? Path.of(values.get("--out")) : null;
         if (!plan) {
             return Optional.of(PlanRequest.demo(out, values.get("--date"), home));
         }

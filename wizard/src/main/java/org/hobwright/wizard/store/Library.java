@@ -46,10 +46,9 @@ public final class Library {
 
     /** As {@link #open(Optional)} with the environment and the user's home given (for tests and hosts). */
     public static Library open(Optional<Path> home, Map<String, String> environment, Path userHome) {
-        Path chosen = home.orElseGet(() -> {
-            String env = environment.get(HOME_VARIABLE);
-            return env != null && !env.isBlank() ? Path.of(env) : userHome.resolve(DEFAULT_FOLDER);
-        });
+        String env = environment.get(HOME_VARIABLE);
+        Path chosen = home.isPresent() ? home.get()
+                : env != null && !env.isBlank() ? Path.of(env) : userHome.resolve(DEFAULT_FOLDER);
         return new Library(chosen, new Builtins(Library.class.getClassLoader()));
     }
 
