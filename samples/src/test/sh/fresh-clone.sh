@@ -39,6 +39,13 @@ echo "fresh-clone: demo wrote: $(cd hobwright-out && ls | tr '\n' ' ')"
 grep -qi caution hobwright-out/*.nc || fail "the program has no caution"
 grep -qi caution hobwright-out/*.html || fail "the setup sheet has no caution"
 
+echo "fresh-clone: the launcher through a link, from another folder whose name has a space"
+mkdir -p "$work/my bin" "$work/elsewhere"
+ln -s "$work/hobwright/wizard/hobwright" "$work/my bin/hobwright"
+( cd "$work/elsewhere" && "$work/my bin/hobwright" plan "$work/hobwright/samples/scenario/jobs/dosing-pinion-z12.json" \
+    --out "out dir" > "$work/link.out" 2>&1 ) || { cat "$work/link.out" >&2; fail "the launcher started through a link"; }
+[ -f "$work/elsewhere/out dir/dosing-pinion-z12.nc" ] || fail "the linked launcher wrote no program into the folder asked for"
+
 echo "fresh-clone: mvn -B verify"
 mvn -B verify > "$work/verify.out" 2>&1 || { tail -60 "$work/verify.out" >&2; fail "mvn -B verify"; }
 grep -E "Tests run: [0-9]+, Failures: 0, Errors: 0" "$work/verify.out" | grep -v " -- in "
