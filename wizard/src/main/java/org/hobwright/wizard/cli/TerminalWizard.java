@@ -1,7 +1,10 @@
 package org.hobwright.wizard.cli;
 
+import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
+import java.util.Set;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.check.Severity;
 import org.hobwright.api.wizard.FieldSpec;
@@ -11,6 +14,7 @@ import org.hobwright.api.wizard.StepView;
 import org.hobwright.api.wizard.Transition;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.wizard.steps.FieldCheck;
+import org.hobwright.wizard.steps.Fields;
 
 /**
  * Walks a {@link Wizard} field by field on a terminal or piped input. Enter takes the value shown
@@ -18,6 +22,7 @@ import org.hobwright.wizard.steps.FieldCheck;
  * returns to the previous field (or step); a bad answer is asked again with the reason.
  */
 final class TerminalWizard {
+
     /** What to do at REVIEW once the job is planned without errors. */
     interface Finish {
         /**
@@ -75,7 +80,8 @@ final class TerminalWizard {
      * previous step. Fields that do not apply are passed over (see {@link #applies}); the drawing's
      * printed values are asked only after a yes to one question.
      */
-    private boolean askFields(List<FieldSpec> fields, boolean subset) {
+    private boolean askFields(List<FieldSpec> asked, boolean subset) {
+        List<FieldSpec> fields = asked;
         Boolean drawing = subset ? Boolean.TRUE : null;
         int i = 0;
         int step = 1;
@@ -114,6 +120,9 @@ final class TerminalWizard {
                 }
                 if (!Finding.anyError(said)) {
                     i++;                                 // taken; remarks were shown
+                    if (f.key().equals(Fields.UNITS)) {
+                        fields = sameFieldsAnew(fields); // the other fields' units changed with it
+                    }
                 }
             }
         }
@@ -227,5 +236,20 @@ final class TerminalWizard {
     static boolean yes(String line, boolean dflt) {
         String l = line.strip().toLowerCase(java.util.Locale.ROOT);
         return l.isEmpty() ? dflt : l.startsWith("y");
+    }
+
+    /** The same fields as the step model describes them now (units and values after a change of unit). */
+    private List<FieldSpec> sameFieldsAnew(List<FieldSpec> fields) {
+        Set<String> keys = new HashSet<>();
+        for (FieldSpec f : fields) {
+            keys.add(f.key());
+        }
+        List<FieldSpec> now = new ArrayList<>();
+        for (FieldSpec f : wizard.view().fields()) {
+            if (keys.contains(f.key())) {
+                now.add(f);
+            }
+        }
+        return now;
     }
 }

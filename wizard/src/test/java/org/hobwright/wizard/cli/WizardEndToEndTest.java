@@ -140,6 +140,15 @@ class WizardEndToEndTest {
         assertTrue(r.out().contains("Step 2 of 5"), r::toString);
     }
 
+    /** A change of unit shows the remark and asks the later fields in the new unit, their values converted. */
+    @Test
+    void aChangeOfUnitIsShownOnTheFollowingQuestions() {
+        Cli.Run r = Cli.run(dir.resolve("home"), "\nin\n\n\n\n\n\n\n\n\n", loader, "wizard");
+        assertTrue(r.out().contains("converted to inch units"), r::toString);
+        // the sample's face width of 8 mm, over 25.4 mm to the inch, to 10 significant digits
+        assertTrue(r.out().contains("Face width (in) [0.3149606299]"), r::toString);
+    }
+
     @Test
     void theCycleAnswersAreSavedAsATemplateThatPlanCanApply() throws IOException {
         List<String> in = new ArrayList<>();
