@@ -7,7 +7,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.Executor;
+import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.CompletionException;
 import java.util.stream.Stream;
@@ -46,30 +46,34 @@ final class PlanRun {
         String generatedOn = GeneratedOn.resolve(request.date().orElse(null), env);
         // the planner and the writers are looked up beside the reading of the jobs
         Store store = Store.open(request.home(), env);
-        Executor background = Executors.newSingleThreadExecutor(r -> {
+        ExecutorService background = Executors.newSingleThreadExecutor(r -> {
             Thread t = new Thread(r, "hobwright-lookup");
             t.setDaemon(true);
             return t;
         });
-        CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> planner(store), background);
-        Outputs outputs = new Outputs(store, env.loader(), generatedOn, background);
-        Timing.mark("library opened");
-        JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
-        List<JobInput> read = new ArrayList<>();
-        if (request.inputs().isEmpty()) {
-            read.add(store.readBuiltinJob(SAMPLE_JOB, overrides, request.fastest()));
-        }
-        for (Path p : request.inputs()) {
-            for (Path file : files(p)) {
-                read.add(store.readJobFile(file, overrides, request.fastest()));
+        try {
+            CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> planner(store), background);
+            Outputs outputs = new Outputs(store, env.loader(), generatedOn, background);
+            Timing.mark("library opened");
+            JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
+            List<JobInput> read = new ArrayList<>();
+            if (request.inputs().isEmpty()) {
+                read.add(store.readBuiltinJob(SAMPLE_JOB, overrides, request.fastest()));
             }
+            for (Path p : request.inputs()) {
+                for (Path file : files(p)) {
+                    read.add(store.readJobFile(file, overrides, request.fastest()));
+                }
+            }
+            Timing.mark("jobs read");
+            outputs.prepare(read);
+            List<JobInput> jobs = read.stream()
+                    .map(in -> in.job().map(j -> in.planned(join(planner).plan(j))).orElse(in)).toList();
+            Timing.mark("jobs planned");
+            return finish(jobs, request, store, outputs);
+        } finally {
+            background.shutdown();      // what was asked of it finishes; the thread then ends
         }
-        Timing.mark("jobs read");
-        outputs.prepare(read);
-        List<JobInput> jobs = read.stream()
-                .map(in -> in.job().map(j -> in.planned(join(planner).plan(j))).orElse(in)).toList();
-        Timing.mark("jobs planned");
-        return finish(jobs, request, store, outputs);
     }
 
     /**
