@@ -87,7 +87,7 @@ public final class DialectLoader {
                     : lines.line(pointer);
             String path = "dialect" + pointer.replace('/', '.');
             return new Loaded(Optional.empty(), List.of(Finding.error("NC_DIALECT_UNREADABLE", path,
-                    fileName + " line " + line + ": " + firstLine(e.getOriginalMessage()),
+                    fileName + " line " + line + ": " + JsonTrees.message(e),
                     "correct the dialect file at that line (post/README.md describes every key)", SOURCE)));
         }
         if (file == null) {
@@ -108,11 +108,6 @@ public final class DialectLoader {
         } catch (JacksonException | JsonTrees.DuplicateKey e) {
             return Optional.empty();
         }
-    }
-
-    private static String firstLine(String text) {
-        int nl = text.indexOf('\n');
-        return nl < 0 ? text : text.substring(0, nl);
     }
 
     /** Checks one bound file and collects findings. */

@@ -71,6 +71,21 @@ public final class JsonTrees {
     }
 
     /**
+     * The first line of Jackson's description of a problem, without the {@code (... at [Source: ...])}
+     * parts that name no line (the exception's location has it).
+     */
+    public static String message(JacksonException e) {
+        String text = e.getOriginalMessage() == null ? e.getClass().getSimpleName() : e.getOriginalMessage();
+        int nl = text.indexOf('\n');
+        return (nl < 0 ? text : text.substring(0, nl)).replaceAll("\\s*\\([^()\\[]*\\[Source:[^\\]]*\\]\\)", "").replaceAll("\\s+", " ").strip();
+    }
+
+    /** The line a parser problem is on, or 0 when it is not known. */
+    public static int line(JacksonException e) {
+        return e.getLocation() == null || e.getLocation().getLineNr() < 1 ? 0 : e.getLocation().getLineNr();
+    }
+
+    /**
      * Reads the object whose start token the parser has just returned.
      *
      * @param p     a parser positioned on {@code START_OBJECT}

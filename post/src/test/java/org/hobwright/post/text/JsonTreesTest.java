@@ -102,4 +102,14 @@ class JsonTreesTest {
         assertEquals(2, bad.getLocation().getLineNr());
         assertTrue(JsonTrees.parse("  ").isMissingNode());
     }
+
+    /** A parser's message is one plain line without the source notes that name no line. */
+    @Test
+    void messagesAreOnePlainLine() {
+        JacksonException open = assertThrows(JacksonException.class, () -> JsonTrees.parse("{\n\"a\": [ }"));
+        assertEquals("Unexpected close marker '}': expected ']'", JsonTrees.message(open));
+        assertEquals(2, JsonTrees.line(open));
+        JacksonException end = assertThrows(JacksonException.class, () -> JsonTrees.parse("{\"a\": 1"));
+        assertEquals("Unexpected end-of-input: expected close marker for Object", JsonTrees.message(end));
+    }
 }

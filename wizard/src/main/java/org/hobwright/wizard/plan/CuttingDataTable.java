@@ -90,9 +90,11 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
         JsonNode root;
         try {
             root = JsonTrees.parse(new String(in.readAllBytes(), StandardCharsets.UTF_8));
-        } catch (JacksonException | JsonTrees.DuplicateKey e) {
-            String why = e instanceof JacksonException j ? j.getOriginalMessage() : e.getMessage();
-            throw new IllegalArgumentException(source + ": not valid JSON: " + why, e);
+        } catch (JacksonException e) {
+            throw new IllegalArgumentException(source + ":" + JsonTrees.line(e) + ": not valid JSON: "
+                    + JsonTrees.message(e), e);
+        } catch (JsonTrees.DuplicateKey e) {
+            throw new IllegalArgumentException(source + ":" + e.line() + ": not valid JSON: " + e.getMessage(), e);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + source, e);
         }

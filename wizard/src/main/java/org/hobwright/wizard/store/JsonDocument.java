@@ -107,10 +107,8 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
             return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding(e.path(),
                     source + ":" + e.line() + ": key \"" + e.path() + "\" appears twice", "keep one of them"));
         } catch (JacksonException e) {
-            String msg = e.getOriginalMessage() == null ? e.getClass().getSimpleName() : e.getOriginalMessage();
-            msg = msg.replaceAll("\\s+", " ").strip();
             return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
-                    source + ":" + line(e.getLocation()) + ": malformed JSON: " + msg,
+                    source + ":" + line(e.getLocation()) + ": malformed JSON: " + JsonTrees.message(e),
                     "check brackets, commas and quotes near that line"));
         }
     }
