@@ -14,7 +14,6 @@ import org.hobwright.api.wizard.StepView;
 import org.hobwright.api.wizard.Transition;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.wizard.steps.FieldCheck;
-import org.hobwright.wizard.steps.Fields;
 
 /**
  * Walks a {@link Wizard} field by field on a terminal or piped input. Enter takes the value shown
@@ -120,9 +119,7 @@ final class TerminalWizard {
                 }
                 if (!Finding.anyError(said)) {
                     i++;                                 // taken; remarks were shown
-                    if (f.key().equals(Fields.UNITS)) {
-                        fields = sameFieldsAnew(fields); // the other fields' units changed with it
-                    }
+                    fields = sameFieldsAnew(fields);     // an answer may change others (a unit, a default)
                 }
             }
         }
@@ -238,7 +235,7 @@ final class TerminalWizard {
         return l.isEmpty() ? dflt : l.startsWith("y");
     }
 
-    /** The same fields as the step model describes them now (units and values after a change of unit). */
+    /** The same fields as the step model describes them now (their units, values and choices). */
     private List<FieldSpec> sameFieldsAnew(List<FieldSpec> fields) {
         Set<String> keys = new HashSet<>();
         for (FieldSpec f : fields) {
