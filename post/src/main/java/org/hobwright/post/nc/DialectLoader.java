@@ -8,9 +8,10 @@ import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
-import org.hobwright.post.text.JsonTrees;
 import org.hobwright.post.nc.DialectFile.RotationWords;
+import org.hobwright.post.text.JsonTrees;
 import tools.jackson.core.JacksonException;
+import tools.jackson.core.StreamReadFeature;
 import tools.jackson.databind.DeserializationFeature;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.MapperFeature;
@@ -41,6 +42,7 @@ public final class DialectLoader {
      */
     static final class Binding {
         static final JsonMapper MAPPER = JsonMapper.builder()
+                .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
                 .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
                 .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
                 .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)
@@ -99,7 +101,8 @@ public final class DialectLoader {
 
     /**
      * The file bound by {@link DialectTree} when it is in the plain form, without duplicate keys;
-     * empty otherwise, and the caller binds with Jackson, which reports any problem.
+     * empty otherwise, and the caller binds with Jackson, which reports any problem (a repeated key
+     * too: its parser detects them).
      */
     private static Optional<DialectFile> plain(String json) {
         try {

@@ -39,6 +39,15 @@ class DialectLoaderTest {
         assertEquals("dialect.templates.feed.0", f.field());
     }
 
+    /** A key written twice is an error naming its line, as in every other Hobwright file (not "the last one wins"). */
+    @Test
+    void aKeyWrittenTwiceIsAnError() {
+        Finding f = single(replace("\"rapid\": \"G0 {radial} {axial}\"",
+                "\"rapid\": \"G0 {radial} {axial}\",\n    \"rapid\": \"G0 {axial}\""), "NC_DIALECT_UNREADABLE");
+        assertTrue(f.message().contains("line " + (lineOf("\"rapid\":") + 1)), f.message());
+        assertTrue(f.message().contains("rapid"), f.message());
+    }
+
     @Test
     void placeholderWithoutValueInThatTemplateIsAnError() {
         Finding f = single(replace("\"rapid\": \"G0 {radial} {axial}\"", "\"rapid\": \"G0 {radial} {axial} F{feed}\""),
