@@ -7,8 +7,9 @@ import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.ProviderMissingException;
-import org.hobwright.api.spi.Providers;
 import org.hobwright.wizard.analysis.JobAnalyser;
+import org.hobwright.wizard.plan.CuttingDataTable;
+import org.hobwright.wizard.run.LibraryPlanner;
 import org.hobwright.wizard.store.JobReader;
 import org.hobwright.wizard.store.Library;
 import org.hobwright.wizard.store.LibraryEntry;
@@ -17,7 +18,8 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * The step model's services on a real library: the store's job reader, the engineering checks
- * ({@link JobAnalyser}) and the planner found through the SPI (looked up once, when first needed).
+ * ({@link JobAnalyser}) and the library's planner ({@link LibraryPlanner}: the shop's cutting data
+ * when the folder has a table), looked up once, when first needed.
  */
 public final class LibraryServices implements StepServices {
     /** Name of the answers in the reader's messages. */
@@ -53,15 +55,21 @@ public final class LibraryServices implements StepServices {
     public HobCycle plan(HobJob job) {
         try {
             if (planner == null) {
-                planner = Providers.planner(loader);
+                planner = LibraryPlanner.of(library, loader);
             }
             return planner.plan(job);
         } catch (ProviderMissingException e) {
-            return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(),
-                    Optional.empty(), List.of(), Optional.empty(), Optional.empty(),
-                    List.of(Finding.error("WIZARD_NO_PLANNER", "job", e.getMessage(),
-                            "put hobwright-wizard on the class path", "Hobwright SPI")));
+            return unplanned(job, Finding.error("WIZARD_NO_PLANNER", "job", e.getMessage(),
+                    "put hobwright-wizard on the class path", "Hobwright SPI"));
+        } catch (IllegalArgumentException e) {
+            return unplanned(job, Finding.error("WIZARD_CUTTING_DATA", "cycle.workMaterial", e.getMessage(),
+                    "correct or remove the library's " + CuttingDataTable.FILE_NAME, "Hobwright cutting-data table"));
         }
+    }
+
+    private static HobCycle unplanned(HobJob job, Finding why) {
+        return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), List.of(),
+                Optional.empty(), Optional.empty(), List.of(why), Optional.of(job));
     }
 
     @Override
