@@ -61,12 +61,14 @@ public enum EngineeringCode {
     DRAWING_INCONSISTENT(Severity.ERROR, "the drawing's values fit different profile shifts: no gear has them all",
             Sources.DRAWING),
     INSPECTION_PIN_CONTACT(Severity.WARNING, "pin or ball does not touch the involute or does not stand above the tip",
-            "pin contact d_c = √(d_b² + (d_b tan α_Mt − D_M / cos β_b)²), derived; common practice, no source"),
+            "pin contact d_c = √(d_b² + (d_b tan α_Mt − D_M cos β_b)²), derived; common practice, no source"),
     INSPECTION_PIN_COMPUTED(Severity.INFO, "the 1.728 m_n pin does not fit; a computed pin is used",
             "US wire tables 1.728/P (ashokagears gear-size page); contact at d + 2 x m_n (derived)"),
     INSPECTION_SPAN_FACE_WIDTH(Severity.WARNING, "face width too narrow for the span anvils on a helical gear",
             "b > W_k sin β_b + 2 mm anvil margin (margin from memory)"),
     INSPECTION_SPAN_CONTACT(Severity.WARNING, "span anvils touch outside the involute", "anvil contact d_c = √(d_b² + (W_k cos β_b)²), derived"),
+    INSPECTION_CHORDAL_ABOVE_TIP(Severity.WARNING, "the reference circle lies at or above the tip: no chordal thickness there",
+            "chordal thickness at the reference circle, SDP/SI Elements of Metric Gear Technology, Section 10"),
     TOLERANCE_OUT_OF_SCOPE(Severity.WARNING, "gear outside the scope of ISO 1328-1:2013; no tolerances given",
             "ISO 1328-1:2013 clause 1 (scope)");
 
