@@ -42,7 +42,7 @@ class DefaultCyclePlannerTest {
         HobCycle c = planner.plan(SampleJobs.spurMetric());
         assertFalse(c.hasErrors(), c.findings().toString());
         SetupValues s = c.setup().orElseThrow();
-        close(272.837, s.hobRpm(), "n0, FORMULAS.md §10 row 29 (S12)");
+        close(272.837, s.hobRpm(), "n0, FORMULAS.md §10 row 29");
         close(272.837 / 20, s.workRpm(), "n2 = n0 z0 / z2");
         assertEquals(20, s.syncHobTurns());
         assertEquals(1, s.syncWorkTurns());
@@ -58,7 +58,7 @@ class DefaultCyclePlannerTest {
         close(9.09457, s.workRpm(), "FORMULAS.md §10 row 30");
         assertEquals(30, s.syncHobTurns());
         // RH hob, climb: hob and work clockwise; the RH gear's extra rotation is counter-clockwise, so it
-        // opposes the work's sense (derived rule, SpindleSenses); magnitude FORMULAS.md §10 row 31 (S11)
+        // opposes the work's sense (derived rule, SpindleSenses); magnitude FORMULAS.md §10 row 31
         close(-0.494308, s.differentialDegPerMm(), "differential");
         CycleStep.SyncOn on = steps(c, CycleStep.SyncOn.class).get(0);
         assertEquals(Rotation.CLOCKWISE, on.hobRotation());

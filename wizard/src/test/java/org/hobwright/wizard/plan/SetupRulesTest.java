@@ -82,7 +82,7 @@ class SetupRulesTest {
                 double omegaY = senses.hob() == Rotation.CLOCKWISE ? 1 : -1;
                 double toothVz = cross(new double[] {0, omegaY, 0}, new double[] {-1, 0, 0})[2];
                 boolean againstFeed = toothVz > 0; // feed is −Z
-                assertEquals(method == HobbingMethod.CLIMB, againstFeed, "climb means teeth against the feed (S13)");
+                assertEquals(method == HobbingMethod.CLIMB, againstFeed, "climb means teeth against the feed (Phillips, FORMULAS.md §7.4)");
                 // a thread of hand h turned by ω_y carries its pattern along −h·sign(ω_y)·Y (screw rule);
                 // the gear point at +X·r must move with it: v = ω_z Z × X r = ω_z r Y
                 double patternVy = -hobHand.sign() * omegaY;
