@@ -33,7 +33,7 @@ import org.junit.jupiter.api.Test;
  */
 class FindingCodesTest {
     private static final Path ROOT = Path.of("..");
-    private static final List<String> MODULES = List.of("api", "wizard", "post", "samples");
+    private static final List<String> MODULES = List.of("api", "post/text", "wizard", "post", "samples");
     private static final String BEGIN = "<!-- codes: ";
     private static final String END = "<!-- end of codes -->";
 
@@ -52,7 +52,7 @@ class FindingCodesTest {
         assertTrue(enums.size() >= 8, "found the code enums: " + enums);
         Set<String> tabled = new TreeSet<>();
         List<String> stale = new ArrayList<>();
-        for (String module : MODULES) {
+        for (String module : List.of("api", "wizard", "post", "samples")) {
             Path doc = ROOT.resolve(module).resolve("FINDINGS.md");
             String text = Files.readString(doc, StandardCharsets.UTF_8);
             StringBuilder fresh = new StringBuilder();

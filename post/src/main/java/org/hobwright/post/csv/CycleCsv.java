@@ -12,7 +12,7 @@ import java.util.Map;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.Rotation;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import tools.jackson.core.FormatSchema;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonGenerator;

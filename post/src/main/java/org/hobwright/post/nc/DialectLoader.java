@@ -10,7 +10,7 @@ import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.post.nc.DialectFile.RotationWords;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.StreamReadFeature;
 import tools.jackson.databind.DeserializationFeature;

@@ -8,7 +8,7 @@ import java.util.Map;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 
 /**
  * Turns the program model into blocks with the dialect's templates, words, decimals and line
