@@ -72,24 +72,24 @@ final class FieldReader {
 
     /** Adds an error finding about {@code key}. */
     void error(InputCode code, String key, String what, String fix) {
-        out.add(code.finding(path(key), doc.at(path(key)) + ": " + path(key) + " " + what, fix));
+        out.add(code.at(path(key), doc.at(path(key)) + ": " + path(key) + " " + what, fix));
     }
 
     /** Adds a finding about the object itself (e.g. a conflict between two keys). */
     void problem(InputCode code, String key, String message, String fix) {
-        out.add(code.finding(path(key), doc.at(path(key)) + ": " + message, fix));
+        out.add(code.at(path(key), doc.at(path(key)) + ": " + message, fix));
     }
 
     /** Reports a missing required key. */
     void missing(String key, String fix) {
         String where = path.isEmpty() ? doc.source() : doc.at(path);
-        out.add(InputCode.INPUT_MISSING.finding(path(key), where + ": " + path(key) + " is required", fix));
+        out.add(InputCode.INPUT_MISSING.at(path(key), where + ": " + path(key) + " is required", fix));
     }
 
     /** Checks that a text is a library name (it names a file); an error finding when not. */
     boolean checkName(String key, String name) {
         Optional<Finding> bad = Names.check(path(key), name);
-        bad.ifPresent(b -> out.add(InputCode.INPUT_VALUE.finding(path(key), doc.at(path(key)) + ": " + b.message(),
+        bad.ifPresent(b -> out.add(InputCode.INPUT_VALUE.at(path(key), doc.at(path(key)) + ": " + b.message(),
                 b.fix().orElse(null))));
         return bad.isEmpty();
     }
@@ -104,7 +104,7 @@ final class FieldReader {
             return Optional.of(Units.fromSymbol(v.stringValue()));
         }
         String where = v == null ? (path.isEmpty() ? doc.source() : doc.at(path)) : doc.at(path(key));
-        out.add(InputCode.INPUT_UNITS.finding(path(key), where + ": " + path(key)
+        out.add(InputCode.INPUT_UNITS.at(path(key), where + ": " + path(key)
                 + (v == null ? " is missing" : " is \"" + v.stringValue() + "\"") + "; it must be \"mm\" or \"in\"",
                 "add \"units\": \"mm\" or \"units\": \"in\""));
         return Optional.empty();

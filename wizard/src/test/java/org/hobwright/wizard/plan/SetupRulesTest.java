@@ -150,7 +150,7 @@ class SetupRulesTest {
         assertTrue(f.isEmpty());
         var tooFar = TestJobs.shiftAndFastest(job.cycle(), 70, 1, false);
         HobShiftPlan.of(job.machine(), job.hob(), tooFar, 4.5, 20, f);
-        assertEquals(PlanCodes.HOB_SHIFT_STEP_TOO_LARGE, f.get(0).code());
+        assertEquals(PlanCode.PLAN_HOB_SHIFT_STEP_TOO_LARGE.code(), f.get(0).code());
     }
 
     @Test
