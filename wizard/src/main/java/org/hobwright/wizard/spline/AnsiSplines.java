@@ -41,7 +41,7 @@ final class AnsiSplines {
         double p = s.diametralPitch();
         int g = group(p);
         if (g < 0) {
-            findings.add(SplineCode.SPLINE_PITCH.finding("spline.diametralPitch", "diametral pitch " + p
+            findings.add(SplineCode.SPLINE_PITCH.at("spline.diametralPitch", "diametral pitch " + p
                     + " is not one of ANSI B92.1's (2.5/5 … 128/256)", "use the pitch on the drawing, e.g. \"16/32\""));
             return Optional.empty();
         }

@@ -31,7 +31,7 @@ final class DinSplines {
         double dB = s.referenceDiameterMm();
         double x = shiftMm(s) / m;
         if (!Double.isFinite(dB) || x < -0.05 - 1e-9 || x > 0.45 + 1e-9) {
-            findings.add(SplineCode.SPLINE_REFERENCE_DIAMETER.finding("spline.referenceDiameter", Double.isFinite(dB)
+            findings.add(SplineCode.SPLINE_REFERENCE_DIAMETER.at("spline.referenceDiameter", Double.isFinite(dB)
                     ? "reference diameter " + dB + " mm gives x = " + x + " for " + s.teeth() + " teeth of module " + m
                     : "a DIN 5480 spline needs its reference diameter", "give d_B as on the drawing (the first number"
                     + " of W d_B × m × z)"));
@@ -45,7 +45,7 @@ final class DinSplines {
         double majorMax = dB - 0.2 * m;
         OptionalDouble it = IsoFits.tolerance(11, majorMax);
         if (it.isEmpty()) {
-            findings.add(SplineCode.SPLINE_SIZE.finding("spline.referenceDiameter", "reference diameter " + dB
+            findings.add(SplineCode.SPLINE_SIZE.at("spline.referenceDiameter", "reference diameter " + dB
                     + " mm is beyond the ISO 286 tables (up to 500 mm)", "check the reference diameter"));
             return Optional.empty();
         }

@@ -53,18 +53,18 @@ public record FormCheck(boolean formReached, double involuteStartDiameterMm, dou
                 middle);
         String field = "hob.addendum";
         if (!reached) {
-            findings.add(SplineCode.SPLINE_FORM_NOT_REACHED.finding("hob.tipRadius", "the involute begins at "
+            findings.add(SplineCode.SPLINE_FORM_NOT_REACHED.at("hob.tipRadius", "the involute begins at "
                     + start + " mm, above the form diameter D_Fe " + limits.formDiameterMm() + " mm: the fillet of the"
                     + " hob tip reaches too high", "use a hob with a smaller tip radius or a longer straight flank"));
         }
         if (check.rootDiameterMinMm < limits.minorDiameterMinMm() - 1e-6) {
-            findings.add(SplineCode.SPLINE_ROOT_BELOW_MINOR.finding(field, "at the smallest tooth thickness the hob cuts"
+            findings.add(SplineCode.SPLINE_ROOT_BELOW_MINOR.at(field, "at the smallest tooth thickness the hob cuts"
                     + " the root to " + check.rootDiameterMinMm + " mm, below D_ie min " + limits.minorDiameterMinMm()
                     + " mm", "use a hob with a shorter addendum (the standard's is " + limits.standardHobAddendumMm()
                     + " mm)"));
         }
         if (check.rootDiameterMaxMm > limits.minorDiameterMaxMm() + 1e-6) {
-            findings.add(SplineCode.SPLINE_ROOT_ABOVE_MINOR.finding(field, "at the largest tooth thickness the hob"
+            findings.add(SplineCode.SPLINE_ROOT_ABOVE_MINOR.at(field, "at the largest tooth thickness the hob"
                     + " leaves the root at " + check.rootDiameterMaxMm + " mm, above D_ie max "
                     + limits.minorDiameterMaxMm() + " mm", "use a hob with a longer addendum (the standard's is "
                     + limits.standardHobAddendumMm() + " mm)"));

@@ -34,7 +34,7 @@ final class IsoSplines {
         double majorMax = m * (z + majorFactor) + es.orElse(0) / tan;
         OptionalDouble it = IsoFits.tolerance(m <= 0.75 ? 10 : m < 2 ? 11 : 12, majorMax);
         if (es.isEmpty() || it.isEmpty() || d > 500) {
-            findings.add(SplineCode.SPLINE_SIZE.finding("spline.teeth", "pitch diameter " + d + " mm is beyond the"
+            findings.add(SplineCode.SPLINE_SIZE.at("spline.teeth", "pitch diameter " + d + " mm is beyond the"
                     + " ISO 286 tables (up to 500 mm)", "give spline.allowance, or check module and teeth"));
             return Optional.empty();
         }

@@ -1,13 +1,13 @@
 package org.hobwright.wizard.spline;
 
-import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.FindingCode;
 import org.hobwright.api.check.Severity;
 
 /**
- * The stable finding codes of the spline checks, each with its severity, meaning and source. Codes are
- * never reused for another meaning.
+ * The stable finding codes of the spline checks, each with its severity, meaning and source; listed in
+ * {@code wizard/FINDINGS.md}. Codes are never reused for another meaning.
  */
-public enum SplineCode {
+public enum SplineCode implements FindingCode {
     SPLINE_PRESSURE_ANGLE(Severity.ERROR, "pressure angle not one the standard defines",
             "ISO 4156-1:2005 clause 1, ANSI B92.1-1996 clause 1, DIN 5480-1:2006 clause 1 (from memory)"),
     SPLINE_ROOT_FORM(Severity.ERROR, "a flat root is defined for 30° only", "ISO 4156-1:2005, ANSI B92.1-1996 (from memory)"),
@@ -53,33 +53,23 @@ public enum SplineCode {
         this.source = source;
     }
 
-    /** Severity of every finding with this code. */
+    @Override
+    public String code() {
+        return name();
+    }
+
+    @Override
     public Severity severity() {
         return severity;
     }
 
-    /** What the code means, one line. */
+    @Override
     public String meaning() {
         return meaning;
     }
 
-    /** What the check rests on. */
+    @Override
     public String source() {
         return source;
-    }
-
-    /**
-     * A finding of this code.
-     *
-     * @param field   job-file path of the input to change
-     * @param message what is wrong, with the numbers
-     * @param fix     what would fix it
-     */
-    public Finding finding(String field, String message, String fix) {
-        return switch (severity) {
-            case ERROR -> Finding.error(name(), field, message, fix, source);
-            case WARNING -> Finding.warning(name(), field, message, fix, source);
-            case INFO -> Finding.info(name(), field, message + " " + fix, source);
-        };
     }
 }

@@ -49,7 +49,7 @@ public record SplineLimits(SplineSpec spec, double pitchDiameterMm, double baseD
             case DIN_5480 -> DinSplines.limits(spec, findings);
         };
         if (limits.isPresent() && !(limits.get().toothThicknessMinMm() > 0)) {
-            findings.add(SplineCode.SPLINE_TOOTH_TOO_THIN.finding("spline.toleranceClass", "the minimum actual tooth"
+            findings.add(SplineCode.SPLINE_TOOTH_TOO_THIN.at("spline.toleranceClass", "the minimum actual tooth"
                     + " thickness S_min would be " + limits.get().toothThicknessMinMm() + " mm",
                     "check the module, the fit class and the tolerances"));
             return Optional.empty();

@@ -121,7 +121,7 @@ public record SplinePins(double pinMm, String origin, OverPins atMax, OverPins a
                 }
             }
             if (Double.isFinite(best) && best != pin) {
-                findings.add(SplineCode.SPLINE_PIN_FROM_SHOP_SET.finding("spline.pinDiameter", "pin " + best
+                findings.add(SplineCode.SPLINE_PIN_FROM_SHOP_SET.at("spline.pinDiameter", "pin " + best
                         + " mm from the shop's pins instead of " + pin + " mm (" + origin + ").",
                         "Give spline.pinDiameter to use another pin."));
                 return checked(limits, best, "the shop's pin nearest to " + pin + " mm", findings);
@@ -138,7 +138,7 @@ public record SplinePins(double pinMm, String origin, OverPins atMax, OverPins a
 
     private static SplinePins checked(SplineLimits limits, double pin, String origin, List<Finding> findings) {
         if (!fits(limits, pin)) {
-            findings.add(SplineCode.SPLINE_PIN_CONTACT.finding("spline.pinDiameter", "a " + pin + " mm pin does not"
+            findings.add(SplineCode.SPLINE_PIN_CONTACT.at("spline.pinDiameter", "a " + pin + " mm pin does not"
                     + " touch the flank between the form diameter " + limits.formDiameterMm() + " mm and the major"
                     + " diameter " + limits.majorDiameterMaxMm() + " mm, or does not stand above the teeth",
                     "use a pin near " + limits.recommendedPinMm() + " mm"));
