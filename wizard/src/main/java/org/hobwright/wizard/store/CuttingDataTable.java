@@ -6,7 +6,7 @@ import java.util.Optional;
 
 /**
  * The editable cutting-data table (file format {@code hobwright-cutting-data}, version 1, described in
- * DEVELOPERS.md, read by {@link CuttingDataReader}). The built-in table ships as
+ * wizard/README.md, "Cutting-data file"; read by {@link CuttingDataReader}). The built-in table ships as
  * {@code cutting-data.json} beside this class; a user's table overrides it row by row
  * ({@link #overriddenBy}).
  *
