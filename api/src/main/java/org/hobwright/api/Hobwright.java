@@ -262,9 +262,9 @@ public final class Hobwright implements AutoCloseable {
             return Outcome.of(LocalDate.ofInstant(Instant.ofEpochSecond(Long.parseLong(epoch.strip())),
                     ZoneOffset.UTC), List.of());
         } catch (NumberFormatException | DateTimeException e) {
-            return Outcome.failed(List.of(Finding.error("OUTPUT_BAD_DATE", SOURCE_DATE_EPOCH, SOURCE_DATE_EPOCH
+            return Outcome.failed(List.of(FacadeCode.OUTPUT_BAD_DATE.at(SOURCE_DATE_EPOCH, SOURCE_DATE_EPOCH
                     + " must be whole seconds since 1970, was \"" + epoch + "\"", "set it to a number such as"
-                    + " 1795996800, or unset it", "reproducible-builds.org SOURCE_DATE_EPOCH specification")));
+                    + " 1795996800, or unset it")));
         }
     }
 

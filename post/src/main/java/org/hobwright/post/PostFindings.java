@@ -10,9 +10,6 @@ import org.hobwright.api.spi.WriteResult;
 /** Findings the writers share. */
 public final class PostFindings {
 
-    /** Source text of the post module's own findings. */
-    public static final String SOURCE = "Hobwright post";
-
     /** The build version of the writers (the Maven project version; a test keeps them equal). */
     public static final String BUILD_VERSION = "0.2.0";
 
@@ -34,17 +31,17 @@ public final class PostFindings {
             return other;
         }
         if (cycle.hasErrors()) {
-            return Optional.of(WriteResult.refused(List.of(Finding.error("POST_CYCLE_HAS_ERRORS", "job",
+            return Optional.of(WriteResult.refused(List.of(PostCode.POST_CYCLE_HAS_ERRORS.at("job",
                     "The cycle has " + cycle.findings().stream().filter(Finding::isError).count()
                             + " error finding(s); the " + writer + " writer writes nothing for it",
-                    "fix the errors listed for the job, then plan again", SOURCE))));
+                    "fix the errors listed for the job, then plan again"))));
         }
         if (cycle.steps().isEmpty() || cycle.setup().isEmpty() || cycle.summary().isEmpty()
                 || cycle.gear().isEmpty()) {
-            return Optional.of(WriteResult.refused(List.of(Finding.error("POST_CYCLE_INCOMPLETE", "job",
+            return Optional.of(WriteResult.refused(List.of(PostCode.POST_CYCLE_INCOMPLETE.at("job",
                     "The cycle has no steps, setup values, gear data or summary; the " + writer
                             + " writer needs all of them",
-                    "plan the job again; report a planner that returns such a cycle without an error", SOURCE))));
+                    "plan the job again; report a planner that returns such a cycle without an error"))));
         }
         return Optional.empty();
     }
@@ -62,10 +59,9 @@ public final class PostFindings {
         if (cycle.plannedFor().isEmpty() || cycle.plannedFor().get().equals(context.job())) {
             return Optional.empty();
         }
-        return Optional.of(WriteResult.refused(List.of(Finding.error("POST_CYCLE_OTHER_JOB", "job",
+        return Optional.of(WriteResult.refused(List.of(PostCode.POST_CYCLE_OTHER_JOB.at("job",
                 "The cycle was planned for job \"" + cycle.plannedFor().get().name() + "\", not for job \""
                         + context.job().name() + "\" as given (or for other values of it); the " + writer
-                        + " writer writes nothing", "plan the job that is to be written, then write that cycle",
-                SOURCE))));
+                        + " writer writes nothing", "plan the job that is to be written, then write that cycle"))));
     }
 }

@@ -25,9 +25,6 @@ import org.hobwright.api.wizard.WizardFactory;
 @ApiStatus(since = "1.0")
 public final class Providers {
 
-    /** Source text of the findings this class reports. */
-    private static final String SOURCE = "Hobwright SPI, api version rule (ApiVersion)";
-
     private Providers() {
     }
 
@@ -121,9 +118,11 @@ public final class Providers {
                 continue;
             }
             try {
-                if (version.applyAsInt(provider) != 1) {
-                    problems.add(broken(kind, provider.getClass().getName() + " was built for another SPI"
-                            + " generation; it was skipped"));
+                int declared = version.applyAsInt(provider);
+                if (declared != Spi.VERSION) {
+                    problems.add(SpiCode.SPI_VERSION_MISMATCH.at("spi." + kind, provider.getClass().getName()
+                            + " was built for SPI version " + declared + ", this api is version " + Spi.VERSION
+                            + "; it was skipped", "use a build of that provider for SPI version " + Spi.VERSION));
                     continue;
                 }
             } catch (RuntimeException | LinkageError e) {
@@ -237,21 +236,20 @@ public final class Providers {
     }
 
     private static Finding broken(String kind, String message) {
-        return Finding.warning("SPI_PROVIDER_BROKEN", "spi." + kind, message,
-                "remove or rebuild the jar that declares it", SOURCE);
+        return SpiCode.SPI_PROVIDER_BROKEN.at("spi." + kind, message, "remove or rebuild the jar that declares it");
     }
 
     private static Finding mismatch(String kind, String provider, ApiVersion built) {
         ApiVersion host = ApiVersion.CURRENT;
         if (built.major() == host.major()) {
-            return Finding.warning("SPI_API_TOO_OLD", "spi." + kind, provider + " was built against api "
+            return SpiCode.SPI_API_TOO_OLD.at("spi." + kind, provider + " was built against api "
                     + built + ", newer than this host's api " + host + "; it was skipped, because it may call"
                     + " what this api lacks", "give the host hobwright-api " + built + " or newer (same major"
-                    + " version), or use a build of the provider for api " + host, SOURCE);
+                    + " version), or use a build of the provider for api " + host);
         }
-        return Finding.warning("SPI_API_MAJOR_MISMATCH", "spi." + kind, provider + " was built against api "
+        return SpiCode.SPI_API_MAJOR_MISMATCH.at("spi." + kind, provider + " was built against api "
                 + built + ", this host's api is " + host + "; a different major version is not compatible, so it"
-                + " was skipped", "use a build of the provider for api " + host.major() + ".x", SOURCE);
+                + " was skipped", "use a build of the provider for api " + host.major() + ".x");
     }
 
     /** The message of a failure with every cause behind it, e.g. the class a missing dependency should have held. */

@@ -16,6 +16,7 @@ import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.wizard.run.LibraryPlanner;
 import org.hobwright.wizard.run.Outputs;
 import org.hobwright.wizard.store.JobReader;
+import org.hobwright.wizard.store.Loaded;
 
 /**
  * The batch form of the wizard, shared by {@code plan} and {@code demo}: read every job, plan it,
@@ -79,14 +80,15 @@ final class PlanRun {
     /**
      * The library's planner ({@link LibraryPlanner}).
      *
-     * @throws CliFailure (exit 2) when the shop's cutting-data table cannot be used
+     * @throws CliFailure (exit 2) when the shop's table cannot be used: every problem, each with its
+     *                    line, key and fix
      */
     private CyclePlanner planner(Store store) {
-        try {
-            return LibraryPlanner.of(store.library(), env.loader());
-        } catch (IllegalArgumentException e) {
-            throw CliFailure.usage(e.getMessage());
+        Loaded<CyclePlanner> planner = LibraryPlanner.of(store.library(), env.loader());
+        if (!planner.ok()) {
+            throw CliFailure.usage(LibraryPlanner.failure(planner.findings()));
         }
+        return planner.get();
     }
 
     /** The looked-up planner; a missing one is reported as the exception the look-up threw. */

@@ -23,6 +23,7 @@ import org.hobwright.api.spi.WriteResult;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.wizard.run.Build;
 import org.hobwright.wizard.run.Outputs;
+import org.hobwright.wizard.run.RunCode;
 import org.hobwright.wizard.steps.Answers;
 import org.hobwright.wizard.steps.LibraryServices;
 import org.hobwright.wizard.steps.StepSession;
@@ -39,8 +40,6 @@ import org.hobwright.wizard.store.Loaded;
  * Everything runs on the caller's thread: the session starts no thread and keeps no file open.
  */
 final class PluginSession implements HostSession {
-    private static final String SOURCE = "Hobwright host session";
-
     private final Library library;
     private final ClassLoader loader;
     private final JobReader reader;
@@ -114,8 +113,8 @@ final class PluginSession implements HostSession {
             AtomicFiles.writeAll(folder, contents, true);
         } catch (IOException | RuntimeException e) {
             List<Finding> findings = new ArrayList<>(produced.findings());
-            findings.add(Finding.error("OUTPUT_WRITE_FAILED", "out", "cannot write to " + folder + ": " + e.getMessage()
-                    + "; nothing was written", "choose a folder you can write to", SOURCE));
+            findings.add(RunCode.OUTPUT_WRITE_FAILED.at("out", "cannot write to " + folder + ": " + e.getMessage()
+                    + "; nothing was written", "choose a folder you can write to"));
             return new Written(folder, List.of(), findings);
         }
         List<Path> paths = produced.files().keySet().stream().map(folder::resolve).toList();
@@ -160,13 +159,13 @@ final class PluginSession implements HostSession {
     private static List<Finding> blocked(List<PlannedJob> jobs) {
         List<Finding> out = new ArrayList<>();
         if (jobs.isEmpty()) {
-            out.add(Finding.error("OUTPUT_NO_JOBS", "job", "no planned job was given", "plan a job first", SOURCE));
+            out.add(RunCode.OUTPUT_NO_JOBS.at("job", "no planned job was given", "plan a job first"));
         }
         for (PlannedJob p : jobs) {
             if (p.hasErrors()) {
-                out.add(Finding.error("OUTPUT_JOB_HAS_ERRORS", "job", "job " + p.job().name() + " has "
+                out.add(RunCode.OUTPUT_JOB_HAS_ERRORS.at("job", "job " + p.job().name() + " has "
                         + p.findings().stream().filter(Finding::isError).count() + " error finding(s); nothing was"
-                        + " written", "fix the errors listed for the job, then plan it again", SOURCE));
+                        + " written", "fix the errors listed for the job, then plan it again"));
                 p.findings().stream().filter(Finding::isError).forEach(out::add);
             }
         }

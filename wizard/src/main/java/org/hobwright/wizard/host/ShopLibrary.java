@@ -14,17 +14,18 @@ import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.MachineProfile;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.Spi;
-import org.hobwright.wizard.plan.CuttingData;
-import org.hobwright.wizard.plan.CuttingDataTable;
-import org.hobwright.wizard.plan.ValueRange;
 import org.hobwright.wizard.run.LibraryPlanner;
+import org.hobwright.wizard.run.RunCode;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataReader;
+import org.hobwright.wizard.store.CuttingDataTable;
+import org.hobwright.wizard.store.ValueRange;
 import org.hobwright.wizard.store.Library;
 import org.hobwright.wizard.store.LibraryEntry;
+import org.hobwright.wizard.store.Loaded;
 
 /** The library as a host sees it: read-only look-ups by name, problems as findings. */
 final class ShopLibrary implements HostLibrary {
-    private static final String TABLE_SOURCE = "Hobwright cutting-data table (DEVELOPERS.md)";
-
     private final Library library;
 
     ShopLibrary(Library library) {
@@ -84,56 +85,46 @@ final class ShopLibrary implements HostLibrary {
             return Outcome.failed(table.findings());
         }
         Optional<CuttingData> row = table.orElseThrow().find(workMaterial, hobMaterial);
-        return row.map(r -> Outcome.of(row(r), List.of())).orElseGet(() -> Outcome.failed(List.of(Finding.error(
-                "LIBRARY_NO_CUTTING_DATA", "cycle.workMaterial", "the cutting-data table has no row for "
+        return row.map(r -> Outcome.of(row(r), List.of())).orElseGet(() -> Outcome.failed(List.of(
+                RunCode.LIBRARY_NO_CUTTING_DATA.at("cycle.workMaterial", "the cutting-data table has no row for "
                         + workMaterial + " with a " + hobMaterial + " hob", "add a row to the library's "
-                        + CuttingDataTable.FILE_NAME + ", or choose a work and hob material it has", TABLE_SOURCE))));
+                        + CuttingDataReader.FILE_NAME + ", or choose a work and hob material it has"))));
     }
 
     /** The library's planner; a shop table that cannot be used gives a planner that says so in every cycle. */
     CyclePlanner planner(ClassLoader loader) {
-        try {
-            return LibraryPlanner.of(library, loader);
-        } catch (IllegalArgumentException e) {
-            Finding why = tableProblem(e);
-            return new CyclePlanner() {
-                @Override
-                public String id() {
-                    return "hobwright";
-                }
-
-                @Override
-                public int spiVersion() {
-                    return Spi.VERSION;
-                }
-
-                @Override
-                public String apiVersion() {
-                    return Spi.API_VERSION;
-                }
-
-                @Override
-                public HobCycle plan(HobJob job) {
-                    java.util.Objects.requireNonNull(job, "job is required, was null");
-                    return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(),
-                            List.of(), Optional.empty(), Optional.empty(), List.of(why), Optional.of(job));
-                }
-            };
+        Loaded<CyclePlanner> found = LibraryPlanner.of(library, loader);
+        if (found.ok()) {
+            return found.get();
         }
+        List<Finding> why = found.findings();
+        return new CyclePlanner() {
+            @Override
+            public String id() {
+                return "hobwright";
+            }
+
+            @Override
+            public int spiVersion() {
+                return Spi.VERSION;
+            }
+
+            @Override
+            public String apiVersion() {
+                return Spi.API_VERSION;
+            }
+
+            @Override
+            public HobCycle plan(HobJob job) {
+                java.util.Objects.requireNonNull(job, "job is required, was null");
+                return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(),
+                        List.of(), Optional.empty(), Optional.empty(), why, Optional.of(job));
+            }
+        };
     }
 
     private Outcome<CuttingDataTable> table() {
-        try {
-            return Outcome.of(LibraryPlanner.table(library), List.of());
-        } catch (IllegalArgumentException e) {
-            return Outcome.failed(List.of(tableProblem(e)));
-        }
-    }
-
-    private static Finding tableProblem(IllegalArgumentException e) {
-        return Finding.error("LIBRARY_CUTTING_DATA", "cycle.workMaterial", e.getMessage(),
-                "correct the library's " + CuttingDataTable.FILE_NAME + " or remove it to use the built-in table",
-                TABLE_SOURCE);
+        return PluginSession.of(LibraryPlanner.table(library));
     }
 
     private static CuttingRow row(CuttingData d) {

@@ -7,7 +7,7 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * Which pin or ball diameter the inspection values use, and why.
  *
  * <p>Rule, in order: the diameter given in the job; else the US wire-table size D_M = 1.728 m_n
- * (= 1.728/P, ashokagears gear-size page quoting Machinery's Handbook, FORMULAS.md S6); if that pin does
+ * (= 1.728/P, Machinery's Handbook wire tables, from memory; FORMULAS.md §3.2); if that pin does
  * not touch the involute between root form and tip or does not stand above the tip (large profile
  * shifts, few teeth), the pin touching at d + 2 x m_n ({@link OverPins#idealPinMm}), rounded to the
  * nearest shop step (0.01 mm in millimetre jobs, 0.0005 in in inch jobs: common practice, no source).
@@ -36,14 +36,24 @@ public record PinChoice(double diameterMm, Origin origin) {
      * @param shopStepMm    rounding step for a computed pin, mm
      */
     public static PinChoice choose(InvoluteGear g, OptionalDouble jobPinMm, double tipDiameterMm, double shopStepMm) {
+        return choose(g, jobPinMm, g.rootFormDiameterMm(), tipDiameterMm, shopStepMm);
+    }
+
+    /**
+     * Chooses the pin, with the root form diameter already known.
+     *
+     * @param formDiameterMm root form diameter d_Ff, where the usable involute begins, mm
+     */
+    public static PinChoice choose(InvoluteGear g, OptionalDouble jobPinMm, double formDiameterMm, double tipDiameterMm,
+                                   double shopStepMm) {
         if (jobPinMm.isPresent()) {
             return new PinChoice(jobPinMm.getAsDouble(), Origin.JOB);
         }
         double rule = ruleDiameter(g);
-        if (OverPins.of(g, rule).fits(g.rootFormDiameterMm(), tipDiameterMm)) {
+        if (OverPins.of(g, rule).fits(formDiameterMm, tipDiameterMm)) {
             return new PinChoice(rule, Origin.WIRE_TABLE_RULE);
         }
-        double raw = OverPins.idealPinMm(g);
+        double raw = OverPins.idealPinMm(g, formDiameterMm);
         if (!(raw > 0) || !Double.isFinite(raw)) {
             return new PinChoice(rule, Origin.WIRE_TABLE_RULE);
         }

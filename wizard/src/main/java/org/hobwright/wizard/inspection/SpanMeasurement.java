@@ -13,8 +13,8 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * d_c   = sqrt(d_b² + (W_k cos β_b)²)              diameter where the anvils touch
  * </pre>
  * x is the shift of the thinned tooth x_E = x + E_sn / (2 m_n tan α_n) (FORMULAS.md §2.1), so the value
- * includes the thickness allowance. Sources: machinecalcs span calculator (spur form and the
- * m = 2, z = 20 example), the helical form as in ISO 21771 / DIN 3960 (clause from memory); the
+ * includes the thickness allowance. Sources: the base tangent length of ISO 21771 / DIN 3960 (clause
+ * from memory; FORMULAS.md §3.1), checked against two planes touching sampled flanks in the tests; the
  * k rule puts the anvil contact on the circle d + 2 x m_n (derived; reduces to the classic
  * k = z α/180° + 0.5 for spur gears without shift). The lower-neighbour tie rule follows printed span
  * tables (from memory).
@@ -30,6 +30,38 @@ public record SpanMeasurement(int teeth, double teethCalculated, double widthMm,
     public static SpanMeasurement of(InvoluteGear g) {
         double kCalc = teethCalculated(g);
         return over(g, teethFor(kCalc, g.teeth()), kCalc);
+    }
+
+    /**
+     * The span over the number of teeth chosen by the rule, or, when its anvils would touch outside the
+     * usable involute (below the root form diameter, e.g. in an undercut, or above the tip), over the
+     * neighbouring number of teeth nearer k_calc whose anvils touch on it (common practice, no source).
+     * When neither neighbour does, the rule's k is kept and the inspection check reports it.
+     *
+     * @param formDiameterMm root form diameter d_Ff, where the usable involute begins, mm
+     * @param tipDiameterMm  actual tip diameter, mm
+     */
+    public static SpanMeasurement of(InvoluteGear g, double formDiameterMm, double tipDiameterMm) {
+        SpanMeasurement rule = of(g);
+        if (rule.touchesBetween(formDiameterMm, tipDiameterMm)) {
+            return rule;
+        }
+        int k = rule.teeth();
+        int first = rule.teethCalculated() >= k ? k + 1 : k - 1;
+        for (int candidate : new int[] {first, 2 * k - first}) {
+            if (candidate >= 1 && candidate <= Math.max(1, g.teeth() - 1)) {
+                SpanMeasurement other = over(g, candidate, rule.teethCalculated());
+                if (other.touchesBetween(formDiameterMm, tipDiameterMm)) {
+                    return other;
+                }
+            }
+        }
+        return rule;
+    }
+
+    /** True when the anvils touch between the two diameters (inclusive). */
+    public boolean touchesBetween(double lowestMm, double highestMm) {
+        return contactDiameterMm >= lowestMm && contactDiameterMm <= highestMm;
     }
 
     /** The span over a given number of teeth. */

@@ -12,6 +12,7 @@ import org.hobwright.api.spi.Spi;
 import org.hobwright.wizard.analysis.JobAnalyser;
 import org.hobwright.wizard.analysis.JobAnalysis;
 import org.hobwright.wizard.run.Build;
+import org.hobwright.wizard.store.CuttingDataTable;
 
 /**
  * Hobwright's planner: analyses the job (geometry, inspection, tolerances, hob setup, checks), then
@@ -32,7 +33,8 @@ public final class DefaultCyclePlanner implements CyclePlanner {
     }
 
     /**
-     * A planner with a cutting-data table, e.g. {@code CuttingDataTable.forLibrary(home)}.
+     * A planner with a cutting-data table, e.g. the one of a library folder
+     * ({@link org.hobwright.wizard.store.CuttingDataReader#forLibrary}).
      *
      * @param table the table
      */
@@ -70,9 +72,8 @@ public final class DefaultCyclePlanner implements CyclePlanner {
         JobAnalysis analysis = JobAnalyser.analyse(job);
         List<Finding> findings = new ArrayList<>(analysis.findings());
         if (!analysis.hasErrors() && (analysis.gear().isEmpty() || analysis.hobSetup().isEmpty())) {
-            findings.add(Finding.error(PlanCodes.INVARIANT_BROKEN, "job", "the analysis gave no gear geometry or hob"
-                    + " setup and no error", "do not post; report this job to the Hobwright developers",
-                    "Hobwright safety invariants"));
+            findings.add(PlanCode.PLAN_INVARIANT_BROKEN.at("job", "the analysis gave no gear geometry or hob"
+                    + " setup and no error", "do not post; report this job to the Hobwright developers"));
         }
         if (Finding.anyError(findings)) {
             return unplanned(analysis, findings);

@@ -1,13 +1,15 @@
 package org.hobwright.wizard.run;
 
-import java.io.UncheckedIOException;
 import java.nio.file.Files;
-import java.nio.file.Path;
+import java.util.List;
+import org.hobwright.api.check.Finding;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.Providers;
-import org.hobwright.wizard.plan.CuttingDataTable;
 import org.hobwright.wizard.plan.DefaultCyclePlanner;
+import org.hobwright.wizard.store.CuttingDataReader;
+import org.hobwright.wizard.store.CuttingDataTable;
 import org.hobwright.wizard.store.Library;
+import org.hobwright.wizard.store.Loaded;
 
 /**
  * The planner for a library folder, the same for the terminal tool, the wizard and a host: the one
@@ -23,34 +25,42 @@ public final class LibraryPlanner {
      *
      * @param library the library
      * @param loader  the class loader the planner is found with when the library has no table
-     * @return the planner
-     * @throws IllegalArgumentException naming the file and the problem when the shop's table cannot be used
+     * @return the planner, or the findings of a shop table that cannot be used
+     * @throws org.hobwright.api.spi.ProviderMissingException when no planner is found
      */
-    public static CyclePlanner of(Library library, ClassLoader loader) {
-        Path table = library.home().resolve(CuttingDataTable.FILE_NAME);
-        if (!Files.isRegularFile(table)) {
-            return Providers.planner(loader);
+    public static Loaded<CyclePlanner> of(Library library, ClassLoader loader) {
+        if (!Files.exists(library.home().resolve(CuttingDataReader.FILE_NAME))) {
+            return Loaded.of(Providers.planner(loader));
         }
-        return new DefaultCyclePlanner(table(library));
+        return table(library).map(DefaultCyclePlanner::new);
     }
 
     /**
      * The cutting-data table the planner of a library uses.
      *
      * @param library the library
-     * @return the built-in table, overridden by the shop's own when the folder has one
-     * @throws IllegalArgumentException naming the file and the problem when the shop's table cannot be used
+     * @return the built-in table, overridden by the shop's own when the folder has one, or the
+     *         findings of a shop table that cannot be used
      */
-    public static CuttingDataTable table(Library library) {
-        Path table = library.home().resolve(CuttingDataTable.FILE_NAME);
-        try {
-            return CuttingDataTable.forLibrary(library.home());
-        } catch (UncheckedIOException e) {
-            throw new IllegalArgumentException("the shop's cutting-data table " + table + " cannot be read: "
-                    + e.getCause().getMessage(), e);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("the shop's cutting-data table " + table + " cannot be used: "
-                    + e.getMessage(), e);
+    public static Loaded<CuttingDataTable> table(Library library) {
+        return CuttingDataReader.forLibrary(library.home());
+    }
+
+    /**
+     * One text for a shop table that cannot be used: every error, each with its line, key and fix.
+     *
+     * @param findings the reader's findings
+     * @return the text
+     */
+    public static String failure(List<Finding> findings) {
+        StringBuilder problems = new StringBuilder("the shop's cutting-data table cannot be used: ");
+        String sep = "";
+        for (Finding f : findings) {
+            if (f.isError()) {
+                problems.append(sep).append(f.message()).append(f.fix().map(x -> " (" + x + ")").orElse(""));
+                sep = "\n  ";
+            }
         }
+        return problems.toString();
     }
 }

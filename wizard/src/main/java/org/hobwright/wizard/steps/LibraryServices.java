@@ -8,7 +8,6 @@ import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.ProviderMissingException;
 import org.hobwright.wizard.analysis.JobAnalyser;
-import org.hobwright.wizard.plan.CuttingDataTable;
 import org.hobwright.wizard.run.LibraryPlanner;
 import org.hobwright.wizard.store.JobReader;
 import org.hobwright.wizard.store.Library;
@@ -55,21 +54,22 @@ public final class LibraryServices implements StepServices {
     public HobCycle plan(HobJob job) {
         try {
             if (planner == null) {
-                planner = LibraryPlanner.of(library, loader);
+                Loaded<CyclePlanner> found = LibraryPlanner.of(library, loader);
+                if (!found.ok()) {
+                    return unplanned(job, found.findings());
+                }
+                planner = found.get();
             }
             return planner.plan(job);
         } catch (ProviderMissingException e) {
-            return unplanned(job, Finding.error("WIZARD_NO_PLANNER", "job", e.getMessage(),
-                    "put hobwright-wizard on the class path", "Hobwright SPI"));
-        } catch (IllegalArgumentException e) {
-            return unplanned(job, Finding.error("WIZARD_CUTTING_DATA", "cycle.workMaterial", e.getMessage(),
-                    "correct or remove the library's " + CuttingDataTable.FILE_NAME, "Hobwright cutting-data table"));
+            return unplanned(job, List.of(WizardCode.WIZARD_NO_PLANNER.at("job", e.getMessage(),
+                    "put hobwright-wizard on the class path")));
         }
     }
 
-    private static HobCycle unplanned(HobJob job, Finding why) {
+    private static HobCycle unplanned(HobJob job, List<Finding> why) {
         return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), List.of(),
-                Optional.empty(), Optional.empty(), List.of(why), Optional.of(job));
+                Optional.empty(), Optional.empty(), why, Optional.of(job));
     }
 
     @Override
