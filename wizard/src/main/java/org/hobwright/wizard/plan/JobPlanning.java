@@ -64,6 +64,7 @@ final class JobPlanning {
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
+        Clearances.check(cycle, job.units(), findings);
         if (swivel.rounded()) {
             findings.add(Finding.info(PlanCodes.SWIVEL_ROUNDED, "machine.swivel.resolution",
                     "the holder's resolution rounds the swivel setting from " + Angles.dms(swivel.exactDeg()) + " to "

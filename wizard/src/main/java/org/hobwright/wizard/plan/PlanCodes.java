@@ -51,6 +51,8 @@ public final class PlanCodes {
     public static final String TRAVEL_AXIAL = "PLAN_TRAVEL_AXIAL";
     /** A safety invariant failed inside the planner; nothing may be posted (error). */
     public static final String INVARIANT_BROKEN = "PLAN_INVARIANT_BROKEN";
+    /** A radial or axial clearance below the sensible minimum (warning). */
+    public static final String CLEARANCE_SMALL = "PLAN_CLEARANCE_SMALL";
     /** The fastest cycle, with its time, bound and binding limit (info). */
     public static final String FASTEST = "PLAN_FASTEST";
     /** No fastest cycle could be proposed (warning). */
