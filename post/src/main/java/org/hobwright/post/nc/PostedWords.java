@@ -6,7 +6,7 @@ import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 
 /**
  * Rounds every number of the program to the dialect's decimals, in the direction that keeps the

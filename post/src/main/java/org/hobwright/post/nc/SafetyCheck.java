@@ -7,7 +7,8 @@ import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.post.PostCode;
+import org.hobwright.text.Decimal;
 
 /**
  * Checks the safety invariants on the numbers exactly as the program writes them (after the
@@ -33,8 +34,6 @@ import org.hobwright.post.text.Decimal;
 final class SafetyCheck {
 
     private static final double REL = PostLimits.REL;
-
-    private static final String SOURCE = "Hobwright NC safety invariants (post/README.md, safety)";
 
     private final Dialect d;
     private final WordUnits w;
@@ -81,11 +80,11 @@ final class SafetyCheck {
             } else if (op instanceof NcOp.Fixed f && f.key() == TemplateKey.SYNC_OFF) {
                 synced = false;
             } else if (op instanceof NcOp.Fixed f && f.key() == TemplateKey.SPINDLES_STOP && synced) {
-                error("NC_SAFETY_STOP_WHILE_SYNCED", "cycle.steps", "operation " + index
+                error(PostCode.NC_SAFETY_STOP_WHILE_SYNCED, "cycle.steps", "operation " + index
                         + " stops the spindles while they are still synchronised",
                         "switch the synchronisation off before the spindles stop");
             } else if (op instanceof NcOp.Fixed f && f.key() == TemplateKey.PROGRAM_END && synced) {
-                error("NC_SAFETY_SYNC_LEFT_ON", "cycle.steps", "the program ends with the spindles still synchronised",
+                error(PostCode.NC_SAFETY_SYNC_LEFT_ON, "cycle.steps", "the program ends with the spindles still synchronised",
                         "switch the synchronisation off and stop the spindles before the end");
             } else if (op instanceof NcOp.Wait && synced && !fed) {
                 settle += p.number(Placeholder.SECONDS).doubleValue();
@@ -94,11 +93,11 @@ final class SafetyCheck {
                 double ax = w.axialMm(p.number(Placeholder.AXIAL));
                 if (!mv.rapid()) {
                     if (!synced) {
-                        error("NC_SAFETY_CUT_WITHOUT_SYNC", "cycle.steps", "feed move " + index
+                        error(PostCode.NC_SAFETY_CUT_WITHOUT_SYNC, "cycle.steps", "feed move " + index
                                 + " comes before the synchronisation is on",
                                 "switch the synchronisation on before the first feed move");
                     } else if (!fed && settle < limits.syncSettleS() * (1 - REL)) {
-                        error("NC_SAFETY_SETTLE", "machine.syncSettle", String.format(Locale.ROOT,
+                        error(PostCode.NC_SAFETY_SETTLE, "machine.syncSettle", String.format(Locale.ROOT,
                                 "the first feed move %d follows the synchronisation after %.3f s of dwell, the machine"
                                         + " needs %.3f s", index, settle, limits.syncSettleS()),
                                 "dwell for the machine's settle time after the synchronisation");
@@ -125,7 +124,7 @@ final class SafetyCheck {
         double ratio = (double) s.hobTurns() / s.workTurns();
         String at = " at " + s.hobTurns() + ":" + s.workTurns();
         if (ratio > limits.maxSyncRatio() * (1 + REL)) {
-            error("NC_SAFETY_SYNC_RATIO", "machine.maxSyncRatio", String.format(Locale.ROOT,
+            error(PostCode.NC_SAFETY_SYNC_RATIO, "machine.maxSyncRatio", String.format(Locale.ROOT,
                     "operation %d asks for a ratio of %d:%d, above the machine's largest %.1f:1",
                     index, s.hobTurns(), s.workTurns(), limits.maxSyncRatio()), "use a multi-start hob or another machine");
         }
@@ -147,19 +146,19 @@ final class SafetyCheck {
                 + " rpm locked to the hob's " + hobWord + at;
         double hobLow = Math.min(hob.doubleValue(), hobFromWork);
         double hobHigh = Math.max(hob.doubleValue(), hobFromWork);
-        limit("NC_SAFETY_HOB_SPEED", "machine.hobSpindle", index, hobText, hobLow, hobHigh, s.hobRpm(),
+        limit(PostCode.NC_SAFETY_HOB_SPEED, "machine.hobSpindle", index, hobText, hobLow, hobHigh, s.hobRpm(),
                 new PostLimits.Range(limits.hobMinRpm(), limits.hobMaxRpm()), "the machine's hob spindle",
                 Placeholder.HOB_RPM);
-        limit("NC_SAFETY_HOB_SPEED", "hob.maxRpm", index, hobText, hobLow, hobHigh, s.hobRpm(),
+        limit(PostCode.NC_SAFETY_HOB_SPEED, "hob.maxRpm", index, hobText, hobLow, hobHigh, s.hobRpm(),
                 new PostLimits.Range(0, limits.hobMakerMaxRpm()), "the hob maker's limit", Placeholder.HOB_RPM);
-        limit("NC_SAFETY_WORK_SPEED", "machine.workSpindle", index, workText, Math.min(work.doubleValue(), workFromHob),
+        limit(PostCode.NC_SAFETY_WORK_SPEED, "machine.workSpindle", index, workText, Math.min(work.doubleValue(), workFromHob),
                 Math.max(work.doubleValue(), workFromHob), s.workRpm(),
                 new PostLimits.Range(limits.workMinRpm(), limits.workMaxRpm()), "the machine's work spindle",
                 Placeholder.WORK_RPM);
         return Math.max(work.doubleValue(), workFromHob);
     }
 
-    private void limit(String code, String field, int index, String text, double low, double high, double planned,
+    private void limit(PostCode code, String field, int index, String text, double low, double high, double planned,
                        PostLimits.Range range, String limit, Placeholder p) {
         String bounds = range.min() > 0 ? "outside " + limit + " of " + plain(range.min()) + " to " + plain(range.max())
                 + " rpm" : "above " + limit + " of " + plain(range.max()) + " rpm";
@@ -178,7 +177,7 @@ final class SafetyCheck {
         String unit = w.units().symbol() + " per work revolution";
         double plannedRate = mv.feedMmPerRev() * plannedWorkRpm;
         if (!(mv.feedMmPerRev() > 0) || plannedRate > limits.maxFeedMmPerMin() * (1 + REL)) {
-            error("NC_SAFETY_FEED_RATE", "machine.maxFeed", String.format(Locale.ROOT, "feed move %d asks for %s %s"
+            error(PostCode.NC_SAFETY_FEED_RATE, "machine.maxFeed", String.format(Locale.ROOT, "feed move %d asks for %s %s"
                     + " at %s rpm of the work, %s mm/min; a feed must be above zero and not above the machine's %s"
                     + " mm/min", index, plain(w.feed(mv.feedMmPerRev())), unit, plain(plannedWorkRpm),
                     plain(plannedRate), plain(limits.maxFeedMmPerMin())), "lower the feed or the speed");
@@ -197,7 +196,7 @@ final class SafetyCheck {
         String what = mv.rapid() ? "rapid move" : "feed move";
         String fix = "plan the cycle again; no move may go inside the final infeed diameter";
         if (mv.diameterMm() < limits.rootDiameterMm() * (1 - REL)) {
-            error("NC_SAFETY_BELOW_ROOT", "cycle.steps", String.format(Locale.ROOT,
+            error(PostCode.NC_SAFETY_BELOW_ROOT, "cycle.steps", String.format(Locale.ROOT,
                     "%s %d goes to diameter %s mm, inside the final root diameter %s mm", what, index,
                     plain(mv.diameterMm()), plain(limits.rootDiameterMm())), fix);
         } else if (dia < limits.rootDiameterMm() * (1 - REL)) {
@@ -235,7 +234,7 @@ final class SafetyCheck {
         if (gap >= reach * (1 - REL)) {
             return;
         }
-        error("NC_SAFETY_RAPID_IN_BLANK", "cycle.axialClearance", String.format(Locale.ROOT,
+        error(PostCode.NC_SAFETY_RAPID_IN_BLANK, "cycle.axialClearance", String.format(Locale.ROOT,
                 "rapid move %d to %s %s brings the hob %s mm into the blank: the hob tip at diameter %s mm needs %s mm"
                         + " of axial clear from the blank's faces (blank diameter %s mm, face 0 to %s mm), it has %s mm",
                 index, axisWord(d.radial(), p.number(Placeholder.RADIAL)), axisWord(d.axial(),
@@ -247,7 +246,7 @@ final class SafetyCheck {
     /** False, with a finding, when a speed word is not above zero. */
     private boolean positive(BigDecimal posted, double planned, Placeholder p, String word, String what, int index) {
         if (!(planned > 0)) {
-            error(p == Placeholder.HOB_RPM ? "NC_SAFETY_HOB_SPEED" : "NC_SAFETY_WORK_SPEED", "cycle.steps",
+            error(p == Placeholder.HOB_RPM ? PostCode.NC_SAFETY_HOB_SPEED : PostCode.NC_SAFETY_WORK_SPEED, "cycle.steps",
                     "operation " + index + " asks for a " + what + " of " + plain(planned) + " rpm; it must be above"
                             + " zero", "plan the cycle again");
             return false;
@@ -262,7 +261,7 @@ final class SafetyCheck {
 
     /** A word that breaks an invariant the planned value kept: the dialect's decimals are the cause. */
     private void precision(String text, Placeholder p, double planned, String unit, String fix) {
-        error("NC_SAFETY_PRECISION", "dialect." + w.decimalsKey(p), text + ": the planned " + plain(planned) + " "
+        error(PostCode.NC_SAFETY_PRECISION, "dialect." + w.decimalsKey(p), text + ": the planned " + plain(planned) + " "
                 + unit + " cannot be written safely with " + w.decimals(p) + " decimals (" + w.decimalsKey(p) + ")",
                 "give the dialect more decimals if the control accepts them, or change the job so the value can be"
                         + " written (" + fix + ")");
@@ -290,7 +289,7 @@ final class SafetyCheck {
         return v.stripTrailingZeros().toPlainString();
     }
 
-    private void error(String code, String field, String message, String fix) {
-        out.add(Finding.error(code, field, message + "; the program was not written", fix, SOURCE));
+    private void error(PostCode code, String field, String message, String fix) {
+        out.add(code.at(field, message + "; the program was not written", fix));
     }
 }

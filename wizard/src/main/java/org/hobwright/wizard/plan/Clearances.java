@@ -28,11 +28,11 @@ final class Clearances {
             return;
         }
         int decimals = units == Units.MM ? 3 : 4;
-        findings.add(Finding.warning(PlanCodes.CLEARANCE_SMALL, field, "the " + which + " clearance "
+        findings.add(PlanCode.PLAN_CLEARANCE_SMALL.at(field, "the " + which + " clearance "
                 + Text.fixed(units.fromMm(mm), decimals) + " " + units.symbol() + " is below "
                 + Text.fixed(units.fromMm(MIN_MM), decimals) + " " + units.symbol() + ": the hob rapids to within it of"
                 + " the blank as drawn, with nothing left for the blank's size, runout and position or the rapid's"
                 + " overshoot", "give a clearance of at least " + Text.fixed(units.fromMm(MIN_MM), decimals) + " "
-                + units.symbol(), PlanCodes.NO_SOURCE));
+                + units.symbol()));
     }
 }

@@ -9,13 +9,13 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
 
 /**
  * The editable cutting-data table (file format {@code hobwright-cutting-data}, version 1, described in
- * DEVELOPERS.md). The built-in table ships as {@code cutting-data.json} beside this class; a user's
+ * wizard/README.md, "Cutting-data file"). The built-in table ships as {@code cutting-data.json} beside this class; a user's
  * table overrides it row by row ({@link #overriddenBy}).
  *
  * @param rows             rows by work material and hob material

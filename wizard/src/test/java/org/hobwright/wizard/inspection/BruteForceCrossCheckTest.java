@@ -20,6 +20,8 @@ class BruteForceCrossCheckTest {
                 ToothSystem.builtIn("iso53-a").orElseThrow());
     }
 
+    // The rows with m 25.4 are FORMULAS.md case 18: 1 DP, wire 1.728 in; the over-wire value printed in the wire
+    // tables (34.4130 in for 32 teeth, from memory) is in reference/span-pins-chordal.csv.
     // The pin or ball centre is found by bisection on its radius R until its distance to the sampled flank is
     // D/2; the measurement is the distance between two such centres (opposite gaps: 2R; odd counts: the gap
     // nearest opposite, at π − π/z) plus D.
@@ -27,7 +29,8 @@ class BruteForceCrossCheckTest {
     @CsvSource({
         "20, 2, 20, 0, 0, 0, 3.5", "21, 2, 20, 0, 0, 0, 3.5", "12, 0.8, 20, 0, 0.3, 0, 1.4",
         "24, 1, 20, 0, 0, -0.03, 1.75", "32, 3.175, 14.5, 0, 0.1, 0, 5.5",
-        "30, 2, 20, 15, 0.2, 0, 3.5", "31, 2, 20, 15, 0.2, 0, 3.5", "17, 1.5, 20, 30, -0.2, -0.02, 2.6"})
+        "30, 2, 20, 15, 0.2, 0, 3.5", "31, 2, 20, 15, 0.2, 0, 3.5", "17, 1.5, 20, 30, -0.2, -0.02, 2.6",
+        "32, 25.4, 20, 0, 0, 0, 43.8912", "31, 25.4, 20, 0, 0, 0, 43.8912"})
     void overPinsAgreeWithACircleTangentToSampledFlanks(int z, double m, double alpha, double beta, double x,
                                                         double allowance, double pin) {
         InvoluteGear g = gear(z, m, alpha, beta, x, allowance);

@@ -9,7 +9,7 @@ import java.util.function.DoubleUnaryOperator;
  * reference circle (the definition of tooth thickness), and swept along the helix z = φ · p_z / 2π for a
  * helical gear. Distances and extremes are found by sampling and golden-section refinement.
  */
-final class SampledFlanks {
+public final class SampledFlanks {
     private static final double GOLDEN = (Math.sqrt(5) - 1) / 2;
 
     private final int z;
@@ -23,7 +23,7 @@ final class SampledFlanks {
      * Builds the flank model from first definitions: m_t = m_n / cos β, d = z m_t,
      * tan α_t = tan α_n / cos β, d_b = d cos α_t, s_t = m_t (π/2 + 2 x tan α_n) + E_sn / cos β, p_z = π d / tan β.
      */
-    SampledFlanks(int z, double mn, double alphaNDeg, double betaDeg, double x, double allowance, double tipDiameter) {
+    public SampledFlanks(int z, double mn, double alphaNDeg, double betaDeg, double x, double allowance, double tipDiameter) {
         double beta = Math.toRadians(betaDeg);
         double an = Math.toRadians(alphaNDeg);
         double mt = mn / Math.cos(beta);
@@ -75,7 +75,7 @@ final class SampledFlanks {
     }
 
     /** Shortest distance from a point to the lower flank of the tooth above the gap centred on +x (φ limited). */
-    double distanceToGapFlank(double[] c, double phiRange) {
+    public double distanceToGapFlank(double[] c, double phiRange) {
         double centre = Math.PI / z;
         DoubleUnaryOperator overPhi = phi -> minimise(t -> dist(point(centre, false, t, phi), c), 0, tipRoll() * 1.5);
         return leadPerRad == 0 ? overPhi.applyAsDouble(0) : minimise(overPhi, -phiRange, phiRange, 40);

@@ -23,7 +23,7 @@ class ClearanceTest {
     }
 
     private static List<String> warned(HobCycle c) {
-        return c.findings().stream().filter(f -> f.code().equals(PlanCodes.CLEARANCE_SMALL)).map(Finding::field)
+        return c.findings().stream().filter(f -> f.code().equals(PlanCode.PLAN_CLEARANCE_SMALL.code())).map(Finding::field)
                 .toList();
     }
 

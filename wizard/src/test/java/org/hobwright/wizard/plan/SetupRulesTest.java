@@ -82,7 +82,7 @@ class SetupRulesTest {
                 double omegaY = senses.hob() == Rotation.CLOCKWISE ? 1 : -1;
                 double toothVz = cross(new double[] {0, omegaY, 0}, new double[] {-1, 0, 0})[2];
                 boolean againstFeed = toothVz > 0; // feed is −Z
-                assertEquals(method == HobbingMethod.CLIMB, againstFeed, "climb means teeth against the feed (S13)");
+                assertEquals(method == HobbingMethod.CLIMB, againstFeed, "climb means teeth against the feed (Phillips, FORMULAS.md §7.4)");
                 // a thread of hand h turned by ω_y carries its pattern along −h·sign(ω_y)·Y (screw rule);
                 // the gear point at +X·r must move with it: v = ω_z Z × X r = ω_z r Y
                 double patternVy = -hobHand.sign() * omegaY;
@@ -119,14 +119,14 @@ class SetupRulesTest {
         CuttingData row = CuttingDataTable.builtIn().find("brass", "hss").orElseThrow();
         // FORMULAS.md §9.1 worked example (m_n 2, d 62.1166, b 20, class 6): f_fαT 8.5, f_fβT 9.5 µm
         ToleranceData tol = new ToleranceData(6, 8.5, 25, 7.0, 8.5, 11, 8.5, 9.5, 13);
-        Targets fromClass = Targets.of(QualityTargets.DEFAULTS, Optional.of(tol), d, Optional.of(row));
+        QualityLimits fromClass = QualityLimits.of(QualityTargets.DEFAULTS, Optional.of(tol), d, Optional.of(row));
         assertEquals(d.toleranceShare() * 9.5, fromClass.feedMarkUm(), 1e-12);
         assertEquals(d.toleranceShare() * 8.5, fromClass.envelopingUm(), 1e-12);
         assertEquals(row.maxChipThicknessMm(), fromClass.chipMm());
-        Targets fromTable = Targets.of(QualityTargets.DEFAULTS, Optional.empty(), d, Optional.empty());
+        QualityLimits fromTable = QualityLimits.of(QualityTargets.DEFAULTS, Optional.empty(), d, Optional.empty());
         assertEquals(d.feedMarkDepthUm(), fromTable.feedMarkUm());
         assertTrue(Double.isNaN(fromTable.chipMm()));
-        Targets given = Targets.of(new QualityTargets(OptionalDouble.of(2), OptionalDouble.of(1), OptionalDouble.of(0.1)),
+        QualityLimits given = QualityLimits.of(new QualityTargets(OptionalDouble.of(2), OptionalDouble.of(1), OptionalDouble.of(0.1)),
                 Optional.of(tol), d, Optional.of(row));
         assertEquals(2, given.feedMarkUm());
         assertEquals(1, given.envelopingUm());
@@ -150,7 +150,7 @@ class SetupRulesTest {
         assertTrue(f.isEmpty());
         var tooFar = TestJobs.shiftAndFastest(job.cycle(), 70, 1, false);
         HobShiftPlan.of(job.machine(), job.hob(), tooFar, 4.5, 20, f);
-        assertEquals(PlanCodes.HOB_SHIFT_STEP_TOO_LARGE, f.get(0).code());
+        assertEquals(PlanCode.PLAN_HOB_SHIFT_STEP_TOO_LARGE.code(), f.get(0).code());
     }
 
     @Test
