@@ -11,11 +11,14 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.CompletionException;
 import java.util.stream.Stream;
+import org.hobwright.api.check.Finding;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.Providers;
-import org.hobwright.wizard.plan.CuttingDataTable;
 import org.hobwright.wizard.plan.DefaultCyclePlanner;
+import org.hobwright.wizard.store.CuttingDataReader;
+import org.hobwright.wizard.store.CuttingDataTable;
 import org.hobwright.wizard.store.JobReader;
+import org.hobwright.wizard.store.Loaded;
 
 /**
  * The batch form of the wizard, shared by {@code plan} and {@code demo}: read every job, plan it,
@@ -80,18 +83,27 @@ final class PlanRun {
      * The planner: the one found through the SPI, or, when the library holds the shop's own
      * cutting-data table ({@code cutting-data.json}), Hobwright's planner with that table.
      *
-     * @throws CliFailure (exit 2) when the shop's table cannot be read
+     * @throws CliFailure (exit 2) when the shop's table cannot be used: every problem, each with its
+     *                    line, key and fix
      */
     private CyclePlanner planner(Store store) {
-        Path table = store.library().home().resolve(CuttingDataTable.FILE_NAME);
-        if (!Files.isRegularFile(table)) {
+        Path home = store.library().home();
+        if (!Files.exists(home.resolve(CuttingDataReader.FILE_NAME))) {
             return Providers.planner(env.loader());
         }
-        try {
-            return new DefaultCyclePlanner(CuttingDataTable.forLibrary(store.library().home()));
-        } catch (IllegalArgumentException | java.io.UncheckedIOException e) {
-            throw CliFailure.usage("the shop's cutting-data table " + table + " cannot be used: " + e.getMessage());
+        Loaded<CuttingDataTable> table = CuttingDataReader.forLibrary(home);
+        if (!table.ok()) {
+            StringBuilder problems = new StringBuilder("the shop's cutting-data table cannot be used: ");
+            String sep = "";
+            for (Finding f : table.findings()) {
+                if (f.isError()) {
+                    problems.append(sep).append(f.message()).append(f.fix().map(x -> " (" + x + ")").orElse(""));
+                    sep = "\n  ";
+                }
+            }
+            throw CliFailure.usage(problems.toString());
         }
+        return new DefaultCyclePlanner(table.get());
     }
 
     /** The looked-up planner; a missing one is reported as the exception the look-up threw. */

@@ -11,6 +11,7 @@ import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.Spi;
 import org.hobwright.wizard.analysis.JobAnalyser;
 import org.hobwright.wizard.analysis.JobAnalysis;
+import org.hobwright.wizard.store.CuttingDataTable;
 
 /**
  * Hobwright's planner: analyses the job (geometry, inspection, tolerances, hob setup, checks), then
@@ -31,7 +32,8 @@ public final class DefaultCyclePlanner implements CyclePlanner {
     }
 
     /**
-     * A planner with a cutting-data table, e.g. {@code CuttingDataTable.forLibrary(home)}.
+     * A planner with a cutting-data table, e.g. the one of a library folder
+     * ({@link org.hobwright.wizard.store.CuttingDataReader#forLibrary}).
      *
      * @param table the table
      */

@@ -19,6 +19,8 @@ import org.hobwright.wizard.analysis.JobAnalysis;
 import org.hobwright.wizard.setup.Angles;
 import org.hobwright.wizard.setup.HobSetup;
 import org.hobwright.wizard.simulate.GeneratingSimulation;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataTable;
 
 /**
  * Plans one analysed job: checks what would stop the cycle, resolves speeds, passes and feeds,

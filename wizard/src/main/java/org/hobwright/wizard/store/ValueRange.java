@@ -1,4 +1,4 @@
-package org.hobwright.wizard.plan;
+package org.hobwright.wizard.store;
 
 /**
  * A closed range of typical values, min ≤ max.

@@ -1,4 +1,4 @@
-package org.hobwright.wizard.plan;
+package org.hobwright.wizard.store;
 
 /**
  * One row of the cutting-data table: typical values for a work material cut with a hob material.

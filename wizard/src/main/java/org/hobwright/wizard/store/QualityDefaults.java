@@ -1,4 +1,4 @@
-package org.hobwright.wizard.plan;
+package org.hobwright.wizard.store;
 
 /**
  * Default quality targets used when a job gives none, from the cutting-data file.
