@@ -9,8 +9,8 @@ import org.hobwright.api.job.HobJob;
 
 /**
  * The steps before the synchronisation: comment lines the setter needs beside the moves (sync ratio
- * and spindle senses, helical addition, hob shift), the swivel move on machines with a programmable
- * swivel, and the hob-shift move on machines with a shift axis. Part, gear, hob, swivel and the
+ * and spindle senses, helical addition, hob shift), the swivel setting (a move on machines with a
+ * programmable swivel, the setter's setting on a manual holder), and the hob-shift move on machines with a shift axis. Part, gear, hob, swivel and the
  * cautions are not repeated here: every writer prints them in its own header.
  */
 public final class HeaderSteps {
@@ -38,9 +38,7 @@ public final class HeaderSteps {
                     + " deg of work rotation per mm of axial feed"));
         }
         shift.ifPresent(p -> out.add(comment(p.describe(job.units()))));
-        if (job.machine().swivel().programmable()) {
-            out.add(new CycleStep.Swivel(swivel.machineAngleDeg(), 0));
-        }
+        out.add(new CycleStep.Swivel(swivel.machineAngleDeg(), 0, job.machine().swivel().programmable()));
         shift.ifPresent(p -> out.add(new CycleStep.HobShift(p.positionMm(), 0)));
         return out;
     }
