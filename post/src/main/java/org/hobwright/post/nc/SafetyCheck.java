@@ -1,13 +1,13 @@
 package org.hobwright.post.nc;
 
-import org.hobwright.post.PostCode;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.post.PostCode;
+import org.hobwright.text.Decimal;
 
 /**
  * Re-checks the safety invariants on the program model, independently of the planner, before a
@@ -66,16 +66,16 @@ final class SafetyCheck {
                             "switch the synchronisation on before the first cutting move"));
                 }
                 if (mv.diameterMm() < finalDiameterMm - EPS_MM) {
-                    out.add(error(PostCode.NC_SAFETY_BELOW_ROOT, "cycle.steps", String.format(Locale.ROOT,
-                            "cutting move %d goes to diameter %.4f mm, below the final root diameter %.4f mm",
-                            index, mv.diameterMm(), finalDiameterMm),
+                    out.add(error(PostCode.NC_SAFETY_BELOW_ROOT, "cycle.steps", "cutting move " + index
+                            + " goes to diameter " + Decimal.fixed(mv.diameterMm(), 4)
+                            + " mm, below the final root diameter " + Decimal.fixed(finalDiameterMm, 4) + " mm",
                             "plan the cycle again; no cut may go below the final infeed diameter"));
                 }
                 double rate = mv.feedMmPerRev() * workRpm;
                 if (rate > m.maxFeedMmPerMin() + EPS_MM) {
-                    out.add(error(PostCode.NC_SAFETY_FEED_RATE, "machine.maxFeed", String.format(Locale.ROOT,
-                            "cutting move %d feeds at %.3f mm/min, above the machine's %.3f mm/min",
-                            index, rate, m.maxFeedMmPerMin()), "lower the feed or the speed"));
+                    out.add(error(PostCode.NC_SAFETY_FEED_RATE, "machine.maxFeed", "cutting move " + index
+                            + " feeds at " + Decimal.fixed(rate, 3) + " mm/min, above the machine's "
+                            + Decimal.fixed(m.maxFeedMmPerMin(), 3) + " mm/min", "lower the feed or the speed"));
                 }
             }
         }
@@ -90,16 +90,16 @@ final class SafetyCheck {
                 m.workMaxRpm(), index, out);
         job.hob().maxRpm().ifPresent(max -> {
             if (s.hobRpm() > max) {
-                out.add(error(PostCode.NC_SAFETY_HOB_SPEED, "hob.maxRpm", String.format(Locale.ROOT,
-                        "operation %d runs the hob at %.1f rpm, above the hob maker's limit %.1f rpm",
-                        index, s.hobRpm(), max), "lower the cutting speed"));
+                out.add(error(PostCode.NC_SAFETY_HOB_SPEED, "hob.maxRpm", "operation " + index + " runs the hob at "
+                        + Decimal.fixed(s.hobRpm(), 1) + " rpm, above the hob maker's limit " + Decimal.fixed(max, 1)
+                        + " rpm", "lower the cutting speed"));
             }
         });
         double ratio = (double) s.hobTurns() / s.workTurns();
         if (ratio > m.maxSyncRatio()) {
-            out.add(error(PostCode.NC_SAFETY_SYNC_RATIO, "machine.maxSyncRatio", String.format(Locale.ROOT,
-                    "operation %d asks for a ratio of %d:%d, above the machine's largest %.1f:1",
-                    index, s.hobTurns(), s.workTurns(), m.maxSyncRatio()),
+            out.add(error(PostCode.NC_SAFETY_SYNC_RATIO, "machine.maxSyncRatio", "operation " + index
+                    + " asks for a ratio of " + s.hobTurns() + ":" + s.workTurns() + ", above the machine's largest "
+                    + Decimal.fixed(m.maxSyncRatio(), 1) + ":1",
                     "use a multi-start hob or another machine"));
         }
     }
@@ -107,9 +107,9 @@ final class SafetyCheck {
     private static void within(PostCode code, String field, String spindle, double rpm, double min, double max,
                                int index, List<Finding> out) {
         if (rpm < min || rpm > max) {
-            out.add(error(code, field, String.format(Locale.ROOT,
-                    "operation %d runs the %s spindle at %.3f rpm, outside the machine's %.1f to %.1f rpm",
-                    index, spindle, rpm, min, max), "change the cutting speed or choose another machine"));
+            out.add(error(code, field, "operation " + index + " runs the " + spindle + " spindle at "
+                    + Decimal.fixed(rpm, 3) + " rpm, outside the machine's " + Decimal.fixed(min, 1) + " to "
+                    + Decimal.fixed(max, 1) + " rpm", "change the cutting speed or choose another machine"));
         }
     }
 
