@@ -1,5 +1,8 @@
 package org.hobwright.text;
 
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+
 /**
  * The one number formatter of every text Hobwright writes: NC words, the cycle CSV, the setup
  * sheet and its drawings, the terminal, finding messages and comments. Independent of the default
@@ -18,11 +21,13 @@ package org.hobwright.text;
  * value to a whole number ({@code Math.round(deg * 36000)} for tenths of a second) is the same rule:
  * a double whose shortest text is {@code k.5} is exactly k.5.
  *
- * <p><b>Directed rounding</b> ({@link Rounding#CEILING}, {@link Rounding#FLOOR}) is for words whose
- * safe side is one direction (a position that must stay outside a diameter, a speed at its upper
- * limit). It first takes the value to {@value #NOISE_DIGITS} significant digits (half to even), so
- * that the last bits of binary arithmetic ({@code 0.5000000000000001} from {@code 12.7 / 25.4}) do
- * not move a word by a whole unit, then rounds in its direction.
+ * <p><b>Directed rounding</b> ({@link Rounding#CEILING}, {@link Rounding#FLOOR}, {@link Rounding#UP},
+ * {@link Rounding#DOWN}) is for NC words whose safe side is one direction (a position that must
+ * stay outside a diameter, a speed at its upper limit). It first takes the value to
+ * {@value #NOISE_DIGITS} significant digits (half to even), so that the last bits of binary
+ * arithmetic ({@code 0.5000000000000001} from {@code 12.7 / 25.4}) do not move a word by a whole
+ * unit, then rounds in its direction. {@link #rounded} gives the same digits as an exact decimal,
+ * for checks that compare the posted words with limits.
  */
 public final class Decimal {
 
@@ -33,7 +38,23 @@ public final class Decimal {
         /** Toward positive infinity: the text is never below the value. */
         CEILING,
         /** Toward negative infinity: the text is never above the value. */
-        FLOOR
+        FLOOR,
+        /** Away from zero: the magnitude is never below the value's. */
+        UP,
+        /** Toward zero: the magnitude is never above the value's. */
+        DOWN;
+
+        /** The direction of a {@link RoundingMode}; HALF_UP, CEILING, FLOOR, UP and DOWN only. */
+        static Rounding of(RoundingMode mode) {
+            return switch (mode) {
+                case HALF_UP -> HALF_UP;
+                case CEILING -> CEILING;
+                case FLOOR -> FLOOR;
+                case UP -> UP;
+                case DOWN -> DOWN;
+                default -> throw new IllegalArgumentException("rounding " + mode + " is not one Hobwright writes");
+            };
+        }
     }
 
     /** Significant digits a directed rounding keeps before it rounds: well above binary noise, far below any word. */
@@ -76,14 +97,7 @@ public final class Decimal {
             throw new IllegalArgumentException("decimals must be 0 or more, was " + decimals);
         }
         String text = Digits.of(value).round(decimals, rounding).text(decimals);
-        if (trailingZeros || decimals == 0) {
-            return text;
-        }
-        int end = text.length();
-        while (text.charAt(end - 1) == '0') {
-            end--;
-        }
-        return text.substring(0, end);
+        return trailingZeros || decimals == 0 ? text : withoutTrailingZeros(text);
     }
 
     /**
@@ -139,15 +153,50 @@ public final class Decimal {
         return d.isZero() ? "0" : d.text(Math.max(0, d.length - d.point));
     }
 
-    private static String trim(String text) {
-        if (text.indexOf('.') < 0) {
-            return text;
-        }
+    /**
+     * A number rounded to a fixed count of decimals, as an exact decimal: the digits
+     * {@link #fixed(double, int, boolean, Rounding)} writes, for checks that compare a posted word
+     * with a limit. Never negative zero.
+     *
+     * @param value    the number (must be finite)
+     * @param decimals digits after the point, 0 or more; the result's scale
+     * @param mode     HALF_UP (the rule of every text) or a direction: CEILING, FLOOR, UP, DOWN
+     * @throws IllegalArgumentException naming the value when it is not finite, or for another mode
+     */
+    public static BigDecimal rounded(double value, int decimals, RoundingMode mode) {
+        return new BigDecimal(fixed(value, decimals, true, Rounding.of(mode)));
+    }
+
+    /**
+     * The text of a rounded number ({@link #rounded}): plain digits, a point, no exponent, never
+     * negative zero.
+     *
+     * @param value         the number, its scale the count of decimals to write
+     * @param trailingZeros false strips trailing zeros after the point but keeps the point, as
+     *                      {@link #fixed(double, int, boolean)} does
+     */
+    public static String text(BigDecimal value, boolean trailingZeros) {
+        BigDecimal v = value.signum() == 0 ? value.abs() : value;
+        String text = v.toPlainString();
+        return trailingZeros || v.scale() <= 0 ? text : withoutTrailingZeros(text);
+    }
+
+    /** A fixed-point text without the zeros after its last significant decimal; the point stays ({@code 24.}). */
+    private static String withoutTrailingZeros(String text) {
         int end = text.length();
         while (text.charAt(end - 1) == '0') {
             end--;
         }
-        return text.substring(0, text.charAt(end - 1) == '.' ? end - 1 : end);
+        return text.substring(0, end);
+    }
+
+    /** Without trailing zeros or a lone point: {@code 24.500} to {@code 24.5}, {@code 24.000} to {@code 24}. */
+    private static String trim(String text) {
+        if (text.indexOf('.') < 0) {
+            return text;
+        }
+        String t = withoutTrailingZeros(text);
+        return t.endsWith(".") ? t.substring(0, t.length() - 1) : t;
     }
 
     /**
@@ -203,6 +252,8 @@ public final class Decimal {
                 case HALF_UP -> keep >= 0 && d.digit[keep] >= '5';
                 case CEILING -> !d.negative;
                 case FLOOR -> d.negative;
+                case UP -> true;
+                case DOWN -> false;
             };
             return d.cut(Math.max(keep, 0), keep, up);
         }

@@ -68,6 +68,7 @@ final class JobPlanning {
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
+        Clearances.check(cycle, job.units(), findings);
         if (swivel.rounded()) {
             findings.add(PlanCode.PLAN_SWIVEL_ROUNDED.at("machine.swivel.resolution",
                     "the holder's resolution rounds the swivel setting from " + Angles.dms(swivel.exactDeg()) + " to "
