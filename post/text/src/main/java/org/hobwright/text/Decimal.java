@@ -1,7 +1,6 @@
 package org.hobwright.text;
 
 import java.math.BigDecimal;
-import java.math.MathContext;
 import java.math.RoundingMode;
 
 /**
@@ -88,55 +87,89 @@ public final class Decimal {
 
     // ---- directed rounding for NC words -------------------------------------------------------
 
+    /** Directions of {@link #scaled}. */
+    public enum Rounding {
+        /** Half away from zero: the rule of {@link #fixed}. */
+        HALF_UP,
+        /** Toward positive infinity. */
+        CEILING,
+        /** Toward negative infinity. */
+        FLOOR
+    }
+
     /** Digits a directed rounding keeps before it rounds: well above binary noise, far below any word. */
-    private static final MathContext SIGNIFICANT = new MathContext(12, RoundingMode.HALF_EVEN);
+    private static final int SIGNIFICANT = 12;
+
+    /** Most digits of a scaled number (it must fit a {@code long}). */
+    private static final int MAX_DIGITS = 17;
 
     /**
      * A number rounded to a fixed count of decimals in a chosen direction, as an NC word needs it:
-     * {@link RoundingMode#CEILING} or {@link RoundingMode#FLOOR} where only one direction is safe
-     * (a position that must stay outside the root, a speed at its upper limit),
-     * {@link RoundingMode#HALF_UP} (the rule of {@link #fixed}) elsewhere. Like {@link #fixed} it
-     * rounds the shortest decimal that identifies the double, so 0.1 rounded up to one decimal is
-     * 0.1, not 0.2. A directed mode (up, down, ceiling, floor) first takes the value to 12
-     * significant digits, so that the last bits of binary arithmetic (0.5000000000000001 from
-     * 12.7 / 25.4) do not move a word by a whole unit; the half-way modes round the digits as they
-     * are. The result has exactly {@code decimals} digits after the point and is never negative zero.
+     * {@link Rounding#CEILING} or {@link Rounding#FLOOR} where only one direction is safe (a
+     * position that must stay outside the root, a speed at its upper limit), {@link Rounding#HALF_UP}
+     * (the rule of {@link #fixed}, same digits) elsewhere. Like {@link #fixed} it rounds the shortest
+     * decimal that identifies the double, so 0.1 rounded up to one decimal is 0.1, not 0.2, and it
+     * works on those digits alone (no big-number arithmetic). A directed rounding first takes the
+     * value to 12 significant digits, or to three decimals more than it writes when that is finer
+     * (half up), so that the last bits of binary arithmetic (0.5000000000000001 from 12.7 / 25.4)
+     * do not move a word by a whole unit.
      *
-     * @param value    the number (must be finite)
-     * @param decimals digits after the point, 0 or more
-     * @param mode     the direction
+     * @param value    the number (must be finite, and below 10^17 in units of its last decimal)
+     * @param decimals digits after the point, 0 to 9
+     * @param rounding the direction
      * @return the rounded number
-     * @throws IllegalArgumentException naming the value when it is not finite
+     * @throws IllegalArgumentException naming the value when it is not finite or too large
      */
-    public static BigDecimal rounded(double value, int decimals, RoundingMode mode) {
+    public static Scaled scaled(double value, int decimals, Rounding rounding) {
         if (!Double.isFinite(value)) {
             throw new IllegalArgumentException("value must be a finite number, was " + value);
         }
-        BigDecimal v = BigDecimal.valueOf(value);
-        boolean directed = mode == RoundingMode.UP || mode == RoundingMode.DOWN || mode == RoundingMode.CEILING
-                || mode == RoundingMode.FLOOR;
-        BigDecimal r = (directed ? v.round(SIGNIFICANT) : v).setScale(decimals, mode);
-        return r.signum() == 0 ? r.abs() : r;
-    }
-
-    /**
-     * The text of a rounded number ({@link #rounded}): plain digits, a point, no exponent.
-     *
-     * @param value         the number, its scale the count of decimals to write
-     * @param trailingZeros false strips trailing zeros after the point but keeps the point, as
-     *                      {@link #fixed(double, int, boolean)} does
-     */
-    public static String text(BigDecimal value, boolean trailingZeros) {
-        BigDecimal v = value.signum() == 0 ? value.abs() : value;
-        String text = v.toPlainString();
-        if (trailingZeros || v.scale() <= 0) {
-            return text;
+        // |value| = 0.d₀d₁d₂… × 10^point, with d₀ ≠ 0 (or the single digit 0)
+        String text = Double.toString(Math.abs(value));
+        int e = text.indexOf('E');
+        String mantissa = e < 0 ? text : text.substring(0, e);
+        int dot = mantissa.indexOf('.');
+        StringBuilder digits = new StringBuilder(mantissa.length()).append(mantissa, 0, dot)
+                .append(mantissa, dot + 1, mantissa.length());
+        int point = dot + (e < 0 ? 0 : Integer.parseInt(text.substring(e + 1)));
+        while (digits.length() > 1 && digits.charAt(0) == '0') {
+            digits.deleteCharAt(0);
+            point--;
         }
-        int end = text.length();
-        while (text.charAt(end - 1) == '0') {
-            end--;
+        int significant = Math.max(SIGNIFICANT, point + decimals + 3);
+        if (rounding != Rounding.HALF_UP && digits.length() > significant) {
+            boolean up = digits.charAt(significant) >= '5';
+            digits.setLength(significant);
+            for (int i = significant - 1; up && i >= 0; i--) {
+                up = digits.charAt(i) == '9';
+                digits.setCharAt(i, up ? '0' : (char) (digits.charAt(i) + 1));
+            }
+            if (up) {
+                digits.insert(0, '1');
+                point++;
+            }
         }
-        return text.substring(0, end);
+        int keep = point + decimals;
+        if (keep > MAX_DIGITS) {
+            throw new IllegalArgumentException("value " + value + " is too large to write with " + decimals
+                    + " decimals");
+        }
+        long units = 0;
+        for (int i = 0; i < keep; i++) {
+            units = units * 10 + (i < digits.length() ? digits.charAt(i) - '0' : 0);
+        }
+        boolean rest = false;
+        for (int i = Math.max(keep, 0); i < digits.length() && !rest; i++) {
+            rest = digits.charAt(i) != '0';
+        }
+        boolean negative = value < 0;
+        boolean bump = switch (rounding) {
+            case HALF_UP -> keep >= 0 && keep < digits.length() && digits.charAt(keep) >= '5';
+            case CEILING -> rest && !negative;
+            case FLOOR -> rest && negative;
+        };
+        units += bump ? 1 : 0;
+        return new Scaled(negative ? -units : units, decimals);
     }
 
     /**

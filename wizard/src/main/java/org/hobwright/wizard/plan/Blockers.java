@@ -25,8 +25,8 @@ final class Blockers {
         this.findings = findings;
     }
 
-    void check(SyncRatio ratio, SwivelSetting swivel, double touchOff, double root, SpeedWindow window,
-               Optional<CuttingData> row) {
+    void check(SyncRatio ratio, SwivelSetting swivel, double touchOff, double root, double roughDepth,
+               SpeedWindow window, Optional<CuttingData> row) {
         HobSpec hob = job.hob();
         MachineProfile machine = job.machine();
         if (ratio.hobTurnsPerWorkTurn() > machine.maxSyncRatio()) {
@@ -43,6 +43,8 @@ final class Blockers {
             error(PlanCode.PLAN_HOB_TOO_SMALL, "hob.outsideDiameter", String.format(Locale.ROOT, "the hob radius %.3f mm is"
                     + " not larger than the %.3f mm depth to cut", hob.outsideDiameterMm() / 2, depth),
                     "use a larger hob");
+        } else {
+            passes(depth, roughDepth);
         }
         if (Math.abs(swivel.machineAngleDeg()) > machine.swivel().maxAngleDeg()) {
             error(PlanCode.PLAN_SWIVEL_BEYOND_HOLDER, "machine.swivel.maxAngle", "the swivel setting " + swivel.text()
@@ -61,6 +63,17 @@ final class Blockers {
                     + job.cycle().workMaterial() + " with a " + hob.material() + " hob, and the cycle leaves the"
                     + " cutting speed or a feed open", "give cycle.cuttingSpeed, roughFeed and finishFeed, or add a"
                     + " row to your cutting-data table");
+        }
+    }
+
+    private void passes(double depth, double roughDepth) {
+        double passes = PassDepths.count(depth, roughDepth, job.cycle().finishStockMm());
+        if (passes > PassDepths.MAX_PASSES) {
+            double least = (depth - Math.min(job.cycle().finishStockMm(), depth)) / (PassDepths.MAX_PASSES - 1);
+            error(PlanCode.PLAN_TOO_MANY_PASSES, "cycle.roughDepth", String.format(Locale.ROOT, "a roughing depth of %s mm"
+                    + " splits the %.4f mm depth into %.0f passes; a cycle may have at most %d",
+                    java.math.BigDecimal.valueOf(roughDepth).toPlainString(), depth, passes, PassDepths.MAX_PASSES), String.format(Locale.ROOT,
+                    "give a roughing depth of at least %.4f mm per pass (check the unit)", least));
         }
     }
 

@@ -52,6 +52,8 @@ public final class ToolpathBuilder {
         double retract = g.retractDiameterMm();
         double dia = g.safeDiameterMm();
         double ax = Double.NaN;
+        double t = 0;               // the seconds of steps[0, counted): each step is added once
+        int counted = 0;
         List<PassSummary> passes = new ArrayList<>(s.passes().count());
         for (int i = 0; i < s.passes().count(); i++) {
             int pass = i + 1;
@@ -65,7 +67,9 @@ public final class ToolpathBuilder {
             if (Double.isNaN(ax)) {
                 ax = start;
             }
-            double t0 = sum(steps);
+            double t0 = sum(steps, counted, t);
+            counted = steps.size();
+            t = t0;
             steps.add(rapid(g, pass, dia, ax, retract, start));
             steps.add(rapid(g, pass, retract, start, passDia + 2 * g.radialClearanceMm(), start));
             steps.add(new CycleStep.Feed(pass, passDia, start, feed, false,
@@ -76,14 +80,16 @@ public final class ToolpathBuilder {
             steps.add(rapid(g, pass, retract, end, retract, start));
             dia = retract;
             ax = start;
-            passes.add(new PassSummary(pass, passDia, depth, feed, approach, overrun, end - start, sum(steps) - t0));
+            t = sum(steps, counted, t);
+            counted = steps.size();
+            passes.add(new PassSummary(pass, passDia, depth, feed, approach, overrun, end - start, t - t0));
         }
         if (coolant) {
             steps.add(new CycleStep.Coolant(false));
         }
         steps.add(new CycleStep.SyncOff(0));
         steps.add(new CycleStep.SpindlesStop(0));
-        return new Toolpath(steps, passes, sum(steps));
+        return new Toolpath(steps, passes, sum(steps, counted, t));
     }
 
     private static CycleStep.Rapid rapid(CycleGeometry g, int pass, double fromDia, double fromAx, double toDia,
@@ -92,10 +98,11 @@ public final class ToolpathBuilder {
         return new CycleStep.Rapid(pass, toDia, toAx, 60.0 * move / g.rapidMmPerMin());
     }
 
-    private static double sum(List<CycleStep> steps) {
-        double t = 0;
-        for (CycleStep step : steps) {
-            t += step.seconds();
+    /** {@code before} plus the seconds of the steps from {@code from} on. */
+    private static double sum(List<CycleStep> steps, int from, double before) {
+        double t = before;
+        for (int i = from; i < steps.size(); i++) {
+            t += steps.get(i).seconds();
         }
         return t;
     }
