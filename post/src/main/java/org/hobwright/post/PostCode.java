@@ -10,6 +10,8 @@ import org.hobwright.api.check.Severity;
 public enum PostCode implements FindingCode {
     POST_CYCLE_HAS_ERRORS("the cycle has error findings; no writer writes it", Sources.POST),
     POST_CYCLE_INCOMPLETE("the cycle has no steps, setup values, gear data or summary", Sources.POST),
+    POST_CYCLE_OTHER_JOB("the cycle was planned for another job than the one it is to be written with",
+            Sources.POST),
     CSV_UNREADABLE("a cycle CSV that does not follow the cycle CSV contract", Sources.CSV),
     NC_DIALECT_MISSING("no dialect text for the machine's dialect", Sources.DIALECT),
     NC_DIALECT_UNREADABLE("a dialect file that is empty or not well-formed JSON", Sources.DIALECT),

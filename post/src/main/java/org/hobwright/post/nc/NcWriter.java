@@ -47,13 +47,23 @@ public final class NcWriter implements CycleWriter {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
+    public String buildVersion() {
+        return PostFindings.BUILD_VERSION;
+    }
+
+    @Override
     public String description() {
         return "NC program for the machine's control, from its dialect file";
     }
 
     @Override
     public WriteResult write(HobCycle cycle, WriteContext context) {
-        Optional<WriteResult> refusal = PostFindings.refusal(cycle, id());
+        Optional<WriteResult> refusal = PostFindings.refusal(cycle, context, id());
         if (refusal.isPresent()) {
             return refusal.get();
         }

@@ -1,12 +1,12 @@
 package org.hobwright.wizard.plan;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.store.CuttingData;
 
 /**
@@ -30,18 +30,20 @@ final class Blockers {
         HobSpec hob = job.hob();
         MachineProfile machine = job.machine();
         if (ratio.hobTurnsPerWorkTurn() > machine.maxSyncRatio()) {
-            error(PlanCode.PLAN_SYNC_RATIO_TOO_HIGH, "gear.teeth", String.format(Locale.ROOT, "the sync ratio %d:%d is more"
-                    + " than the machine's largest ratio %.1f", ratio.hobTurns(), ratio.workTurns(),
-                    machine.maxSyncRatio()), "use a hob with more starts");
+            error(PlanCode.PLAN_SYNC_RATIO_TOO_HIGH, "gear.teeth", "the sync ratio " + ratio.hobTurns() + ":"
+                    + ratio.workTurns() + " is more than the machine's largest ratio "
+                    + Decimal.fixed(machine.maxSyncRatio(), 1), "use a hob with more starts");
         }
         double depth = (touchOff - root) / 2;
         if (!(root > 0) || !(depth > 0)) {
-            error(PlanCode.PLAN_NO_DEPTH, "gear.blankDiameter", String.format(Locale.ROOT, "the blank diameter %.4f mm must"
-                    + " be larger than the root diameter %.4f mm, which must be above 0", touchOff, root),
+            error(PlanCode.PLAN_NO_DEPTH, "gear.blankDiameter", "the blank diameter " + Decimal.fixed(touchOff, 4)
+                    + " mm must be larger than the root diameter " + Decimal.fixed(root, 4)
+                    + " mm, which must be above 0",
                     "check the blank diameter, the tooth count and the tooth system");
         } else if (depth >= hob.outsideDiameterMm() / 2) {
-            error(PlanCode.PLAN_HOB_TOO_SMALL, "hob.outsideDiameter", String.format(Locale.ROOT, "the hob radius %.3f mm is"
-                    + " not larger than the %.3f mm depth to cut", hob.outsideDiameterMm() / 2, depth),
+            error(PlanCode.PLAN_HOB_TOO_SMALL, "hob.outsideDiameter", "the hob radius "
+                    + Decimal.fixed(hob.outsideDiameterMm() / 2, 3) + " mm is not larger than the "
+                    + Decimal.fixed(depth, 3) + " mm depth to cut",
                     "use a larger hob");
         } else {
             passes(depth, roughDepth);
@@ -52,9 +54,10 @@ final class Blockers {
                     "use a hob of the same hand as the gear (smaller swivel) or another holder");
         }
         if (!window.isOpen()) {
-            error(PlanCode.PLAN_SPEED_WINDOW_EMPTY, "machine", String.format(Locale.ROOT, "no hob speed satisfies both the"
-                    + " %s (%.1f rpm) and the %s (%.1f rpm)", window.minLimit(), window.minRpm(), window.maxLimit(),
-                    window.maxRpm()), "check the spindle limits of the machine profile and the hob");
+            error(PlanCode.PLAN_SPEED_WINDOW_EMPTY, "machine", "no hob speed satisfies both the " + window.minLimit()
+                    + " (" + Decimal.fixed(window.minRpm(), 1) + " rpm) and the " + window.maxLimit() + " ("
+                    + Decimal.fixed(window.maxRpm(), 1)
+                    + " rpm)", "check the spindle limits of the machine profile and the hob");
         }
         boolean open = job.cycle().cuttingSpeedMPerMin().isEmpty() || job.cycle().roughFeedMmPerRev().isEmpty()
                 || job.cycle().finishFeedMmPerRev().isEmpty();
@@ -67,13 +70,15 @@ final class Blockers {
     }
 
     private void passes(double depth, double roughDepth) {
-        double passes = PassDepths.count(depth, roughDepth, job.cycle().finishStockMm());
+        double stock = job.cycle().finishStockMm();
+        double passes = PassDepths.count(depth, roughDepth, stock);
         if (passes > PassDepths.MAX_PASSES) {
-            double least = (depth - Math.min(job.cycle().finishStockMm(), depth)) / (PassDepths.MAX_PASSES - 1);
-            error(PlanCode.PLAN_TOO_MANY_PASSES, "cycle.roughDepth", String.format(Locale.ROOT, "a roughing depth of %s mm"
-                    + " splits the %.4f mm depth into %.0f passes; a cycle may have at most %d",
-                    java.math.BigDecimal.valueOf(roughDepth).toPlainString(), depth, passes, PassDepths.MAX_PASSES), String.format(Locale.ROOT,
-                    "give a roughing depth of at least %.4f mm per pass (check the unit)", least));
+            int roughPasses = PassDepths.MAX_PASSES - (stock > 0 ? 1 : 0);
+            double least = (depth - stock) / roughPasses;
+            error(PlanCode.PLAN_TOO_MANY_PASSES, "cycle.roughDepth", "a roughing depth of " + Decimal.exact(roughDepth)
+                    + " mm splits the " + Decimal.fixed(depth, 4) + " mm depth into " + Decimal.plain(passes, 0)
+                    + " passes; a cycle may have at most " + PassDepths.MAX_PASSES, "give a roughing depth of at least "
+                    + Decimal.fixed(least, 4, true, Decimal.Rounding.CEILING) + " mm per pass (check the unit)");
         }
     }
 

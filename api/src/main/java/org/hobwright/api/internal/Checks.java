@@ -1,19 +1,20 @@
-package org.hobwright.api;
+package org.hobwright.api.internal;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 
 /**
- * Argument checks used by the compact constructors of the api records.
+ * Argument checks used by the compact constructors of the api records. <strong>Not part of the
+ * api:</strong> this package may change in any release; hosts and providers must not call it.
  *
  * <p>Every failure is an {@link IllegalArgumentException} whose message names the field and
  * the offending value, so a caller that breaks the contract learns exactly what to fix. The
  * wizard never lets user input reach these checks unvalidated: it turns bad input into
  * findings first.
  */
-public final class Validate {
-    private Validate() {
+public final class Checks {
+    private Checks() {
     }
 
     /** Requires a finite number. */

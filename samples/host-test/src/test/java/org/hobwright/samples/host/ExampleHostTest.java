@@ -6,22 +6,27 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.net.URL;
+import java.net.URLClassLoader;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import org.hobwright.api.Hobwright;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.HobCycle;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
- * The example host against the real Hobwright jars on the class path (found through
- * ServiceLoader, as a host finds them): the wizard is answered from the shipped example answers,
- * the files are written, and the operations imported from the CSV are the cycle's steps.
+ * The example host as it ships: the plugin jar on the host's own class loader, the api and the
+ * example host on this module's class path (with Jackson 2, as a host may carry it). The blank
+ * wizard is answered from the shipped example answers, the façade writes the files, the operations
+ * imported from the CSV are the cycle's steps, and the host closes the façade and its loader.
  */
 class ExampleHostTest {
 
-    private static final Path ANSWERS = Path.of("src/main/resources/example-host/dosing-pinion.properties");
+    private static final Path ANSWERS = Path.of(System.getProperty("hobwright.samples"))
+            .resolveSibling("src/main/resources/example-host/dosing-pinion.properties");
 
     @TempDir
     Path work;
@@ -32,9 +37,28 @@ class ExampleHostTest {
         Path answers = work.resolve("answers.properties");
         Files.writeString(answers, Files.readString(ANSWERS) + "\nhost.home = "
                 + work.resolve("home").toString().replace("\\", "/") + "\n");
-        HobwrightPlugin plugin = HobwrightPlugin.load(getClass().getClassLoader());
-        assertEquals(List.of(), plugin.problems());
-        return new HostSession(plugin, new PrintWriter(screen, true)).run(AnswerSheet.read(answers), work.resolve("out"));
+        try (URLClassLoader plugins = new URLClassLoader(new URL[] {pluginJar().toUri().toURL()},
+                getClass().getClassLoader());
+             Hobwright hw = Hobwright.open(plugins, work.resolve("home"))) {
+            assertEquals(List.of(), hw.problems());
+            return new HostSession(hw, new PrintWriter(screen, true)).run(AnswerSheet.read(answers),
+                    work.resolve("out"));
+        }
+    }
+
+    private static Path pluginJar() {
+        return Path.of(System.getProperty("hobwright.pluginJar"));
+    }
+
+    @Test
+    void theCommandLineHostExitsZeroAndWritesEveryFile() throws IOException {
+        Path answers = work.resolve("answers.properties");
+        Files.writeString(answers, Files.readString(ANSWERS) + "\nhost.home = "
+                + work.resolve("home").toString().replace("\\", "/") + "\n");
+        PrintWriter out = new PrintWriter(screen, true);
+        assertEquals(0, ExampleHost.run(new String[] {answers.toString(), work.resolve("cli").toString(),
+                pluginJar().toString()}, out), screen::toString);
+        assertTrue(Files.isRegularFile(work.resolve("cli/dosing-pinion-z12-shifted.nc")), screen::toString);
     }
 
     @Test
@@ -85,8 +109,9 @@ class ExampleHostTest {
     @Test
     void usageAndUnreadableAnswersExitWithTwo() {
         PrintWriter out = new PrintWriter(screen, true);
-        ClassLoader loader = getClass().getClassLoader();
-        assertEquals(2, ExampleHost.run(new String[0], out, loader));
-        assertEquals(2, ExampleHost.run(new String[] {work.resolve("missing.properties").toString(), "x"}, out, loader));
+        assertEquals(2, ExampleHost.run(new String[0], out));
+        assertEquals(2, ExampleHost.run(new String[] {work.resolve("missing.properties").toString(), "x"}, out));
+        assertEquals(2, ExampleHost.run(new String[] {ANSWERS.toString(), "x", work.resolve("none.jar").toString()},
+                out));
     }
 }
