@@ -22,6 +22,7 @@ import org.hobwright.api.Validate;
  * @param hobShiftPerPartMm   hob shift applied between parts, mm (0 = no shifting)
  * @param hobShiftEveryParts  shift after this many parts, at least 1
  * @param fastest             true to let the optimiser propose the shortest cycle beside the user's plan
+ * @param run                 batch size, program number, tool station, hob mounting and hob life
  */
 public record CycleSettings(
         String workMaterial,
@@ -37,7 +38,8 @@ public record CycleSettings(
         QualityTargets targets,
         double hobShiftPerPartMm,
         int hobShiftEveryParts,
-        boolean fastest) {
+        boolean fastest,
+        RunSettings run) {
 
     public CycleSettings {
         Validate.text("cycle.workMaterial", workMaterial);
@@ -56,5 +58,16 @@ public record CycleSettings(
         Validate.present("cycle.targets", targets);
         Validate.nonNegative("cycle.hobShiftPerPart", hobShiftPerPartMm);
         Validate.atLeast("cycle.hobShiftEveryParts", hobShiftEveryParts, 1);
+        Validate.present("cycle.run", run);
+    }
+
+    /** Settings for one part with the dialect's program number and tool station ({@link RunSettings#DEFAULTS}). */
+    public CycleSettings(String workMaterial, OptionalDouble cuttingSpeedMPerMin, OptionalDouble roughFeedMmPerRev,
+                         OptionalDouble finishFeedMmPerRev, OptionalDouble roughDepthMm, double finishStockMm,
+                         HobbingMethod method, double axialClearanceMm, double radialClearanceMm, boolean coolant,
+                         QualityTargets targets, double hobShiftPerPartMm, int hobShiftEveryParts, boolean fastest) {
+        this(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev, roughDepthMm, finishStockMm,
+                method, axialClearanceMm, radialClearanceMm, coolant, targets, hobShiftPerPartMm, hobShiftEveryParts,
+                fastest, RunSettings.DEFAULTS);
     }
 }

@@ -1,6 +1,7 @@
 package org.hobwright.api.job;
 
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.Validate;
 
@@ -19,6 +20,9 @@ import org.hobwright.api.Validate;
  * @param lengthMm            usable hob length, mm
  * @param maxRpm              the hob maker's speed limit, rpm, if given
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+ * @param cuttingSense        the sense the hob cuts in, seen from its drive end, if stated (the planner
+ *                            assumes clockwise otherwise and says so)
+ * @param identifier          the shop's identifier of the hob (tool number, serial), if given
  */
 public record HobSpec(
         Pitch pitch,
@@ -31,7 +35,9 @@ public record HobSpec(
         int gashes,
         double lengthMm,
         OptionalDouble maxRpm,
-        String material) {
+        String material,
+        Optional<CuttingSense> cuttingSense,
+        Optional<String> identifier) {
 
     public HobSpec {
         Validate.present("hob.pitch", pitch);
@@ -48,6 +54,17 @@ public record HobSpec(
         Objects.requireNonNull(maxRpm, "maxRpm");
         Validate.positive("hob.maxRpm", maxRpm);
         Validate.text("hob.material", material);
+        Objects.requireNonNull(cuttingSense, "cuttingSense");
+        Objects.requireNonNull(identifier, "identifier");
+        identifier.ifPresent(id -> Validate.text("hob.identifier", id));
+    }
+
+    /** A hob whose cutting sense and identifier are not stated. */
+    public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
+                   OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
+                   OptionalDouble maxRpm, String material) {
+        this(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg, referenceDiameterMm, gashes,
+                lengthMm, maxRpm, material, Optional.empty(), Optional.empty());
     }
 
     /** Normal module in mm. */

@@ -19,13 +19,19 @@ import org.hobwright.api.Validate;
  * @param swivel             the swivel holder or axis
  * @param radialMinMm        smallest reachable diameter of the hob axis path, as a work diameter, mm
  * @param radialMaxMm        largest reachable work diameter for the hob, mm
- * @param axialMinMm         axial travel limit toward the chuck (the far face side), mm from the entry face
- * @param axialMaxMm         axial travel limit away from the chuck, mm from the entry face
+ * @param axialMinMm         axial travel limit on the side away from the chuck, hob centre, mm from the gear's
+ *                           front face (positive toward the chuck)
+ * @param axialMaxMm         axial travel limit on the chuck side, hob centre, mm from the gear's front face
  * @param hobShiftTravelMm   travel of a hob-shift axis along the hob, mm, if the machine has one
  * @param rapidMmPerMin      rapid traverse rate used for time estimates, mm/min
  * @param maxFeedMmPerMin    highest programmable feed rate, mm/min
  * @param syncSettleS        dwell after switching synchronisation on, s
  * @param maxHobDiameterMm   largest hob the holder takes, mm
+ * @param clockwiseTeethTowardChuck how this machine's hob head is built: true when, with the hob spindle
+ *                           turning clockwise seen from its drive end, the hob teeth at the work move toward
+ *                           the chuck (the back face of the gear); false when they move away from it
+ * @param times              load, unload, swivel, hob-shift and hob-change times, as far as known
+ * @param phasedSync         true when the control can start the synchronisation at a set work-spindle angle
  */
 public record MachineProfile(
         String name,
@@ -45,7 +51,10 @@ public record MachineProfile(
         double rapidMmPerMin,
         double maxFeedMmPerMin,
         double syncSettleS,
-        double maxHobDiameterMm) {
+        double maxHobDiameterMm,
+        boolean clockwiseTeethTowardChuck,
+        MachineTimes times,
+        boolean phasedSync) {
 
     public MachineProfile {
         Validate.text("machine.name", name);
@@ -82,5 +91,20 @@ public record MachineProfile(
         Validate.positive("machine.maxFeed", maxFeedMmPerMin);
         Validate.nonNegative("machine.syncSettle", syncSettleS);
         Validate.positive("machine.maxHobDiameter", maxHobDiameterMm);
+        Validate.present("machine.times", times);
+    }
+
+    /**
+     * A machine whose clockwise-turning hob teeth move away from the chuck at the work, with no times
+     * known and no phased synchronisation.
+     */
+    public MachineProfile(String name, String dialect, double workMinRpm, double workMaxRpm, double hobMinRpm,
+                          double hobMaxRpm, double maxSyncRatio, boolean followsHelix, SwivelHolder swivel,
+                          double radialMinMm, double radialMaxMm, double axialMinMm, double axialMaxMm,
+                          OptionalDouble hobShiftTravelMm, double rapidMmPerMin, double maxFeedMmPerMin,
+                          double syncSettleS, double maxHobDiameterMm) {
+        this(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio, followsHelix, swivel,
+                radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm, rapidMmPerMin, maxFeedMmPerMin,
+                syncSettleS, maxHobDiameterMm, false, MachineTimes.UNKNOWN, false);
     }
 }

@@ -16,22 +16,25 @@ import tools.jackson.databind.json.JsonMapper;
  * dialect JSON only the axis letters and conventions and the literal words of each template, to
  * say which block is which.
  */
-final class NcReader {
+public final class NcReader {
 
     /** One word: address letter(s) and number text. */
-    record Word(String address, String number) {
-        double value() {
+    public record Word(String address, String number) {
+        /** The number. */
+        public double value() {
             return Double.parseDouble(number);
         }
     }
 
     /** One block: the line as written and its words. */
-    record Block(int line, String text, List<Word> words) {
-        Optional<Word> word(String address) {
+    public record Block(int line, String text, List<Word> words) {
+        /** The first word with this address. */
+        public Optional<Word> word(String address) {
             return words.stream().filter(w -> w.address().equals(address)).findFirst();
         }
 
-        boolean has(List<String> literalWords) {
+        /** True when the block holds every one of these literal words. */
+        public boolean has(List<String> literalWords) {
             List<String> mine = words.stream().map(w -> w.address() + w.number()).toList();
             return !literalWords.isEmpty() && mine.containsAll(literalWords);
         }
@@ -41,16 +44,18 @@ final class NcReader {
 
     private final JsonNode dialect;
 
-    NcReader(String dialectJson) {
+    /** A reader for programs of this dialect. */
+    public NcReader(String dialectJson) {
         this.dialect = JsonMapper.builder().build().readTree(dialectJson);
     }
 
-    JsonNode dialect() {
+    /** The raw dialect. */
+    public JsonNode dialect() {
         return dialect;
     }
 
     /** The program's blocks, prologue and epilogue lines ({@code %}) left out. */
-    List<Block> blocks(String program) {
+    public List<Block> blocks(String program) {
         String ending = dialect.get("lineEnding").asString().equals("crlf") ? "\r\n" : "\n";
         if (!program.endsWith(ending)) {
             throw new AssertionError("the program must end with the dialect's line ending");
@@ -87,7 +92,7 @@ final class NcReader {
     }
 
     /** The literal words (no placeholder) of a template's line. */
-    List<String> literalWords(String template, int line) {
+    public List<String> literalWords(String template, int line) {
         JsonNode t = dialect.get("templates").get(template);
         String text = t.isArray() ? t.get(line).asString() : t.asString();
         return Arrays.stream(text.split("\\s+")).filter(w -> !w.contains("{") && !w.contains("(")
@@ -95,24 +100,24 @@ final class NcReader {
     }
 
     /** Address letter of an axis. */
-    String letter(String axis) {
+    public String letter(String axis) {
         return dialect.get("axes").get(axis).get("letter").asString();
     }
 
     /** Sign of an axis (1 when not given). */
-    int sign(String axis) {
+    public int sign(String axis) {
         JsonNode s = dialect.get("axes").get(axis).get("sign");
         return s == null ? 1 : s.asInt();
     }
 
     /** True when the radial axis is a diameter. */
-    boolean radialIsDiameter() {
+    public boolean radialIsDiameter() {
         JsonNode d = dialect.get("axes").get("radial").get("diameter");
         return d != null && d.asBoolean();
     }
 
     /** Decimals of a kind. */
-    int decimals(String kind) {
+    public int decimals(String kind) {
         return dialect.get("decimals").get(kind).asInt();
     }
 }

@@ -56,6 +56,11 @@ public final class PlanCodes {
     /** No fastest cycle could be proposed (warning). */
     public static final String FASTEST_NONE = "PLAN_FASTEST_NONE";
 
+    /** The hob's cutting sense is not given and clockwise is assumed (info). */
+    public static final String HOB_SENSE_ASSUMED = "PLAN_HOB_SENSE_ASSUMED";
+    /** The hob is turned round on its arbor and the spindle runs against its marked sense (warning). */
+    public static final String HOB_TURNED_ROUND = "PLAN_HOB_TURNED_ROUND";
+
     /** Source text for rules of thumb. */
     public static final String NO_SOURCE = "common practice, no source";
     /** Source text for the machine profile limits. */

@@ -9,7 +9,7 @@ import org.hobwright.api.job.MachineProfile;
 
 /**
  * Checks every position of the steps against the machine's travels: radial positions as work
- * diameters within radialMin … radialMax, axial positions (hob centre from the entry face, the
+ * diameters within radialMin … radialMax, axial positions (hob centre from the front face, the
  * coordinate of the steps) within axialMin … axialMax. One error finding per axis names the worst
  * position and the travel.
  */
@@ -53,7 +53,7 @@ public final class TravelCheck {
         if (minAx < machine.axialMinMm() - tol || maxAx > machine.axialMaxMm() + tol) {
             out.add(Finding.error(PlanCodes.TRAVEL_AXIAL, minAx < machine.axialMinMm() - tol
                             ? "machine.travel.axialMin" : "machine.travel.axialMax",
-                    String.format(Locale.ROOT, "the cycle needs axial positions %.3f to %.3f mm from the entry face,"
+                    String.format(Locale.ROOT, "the cycle needs axial positions %.3f to %.3f mm from the front face,"
                             + " the machine reaches %.3f to %.3f mm", minAx, maxAx, machine.axialMinMm(),
                             machine.axialMaxMm()),
                     "reduce cycle.axialClearance, use a smaller hob (shorter approach) or move the part's zero",

@@ -46,7 +46,7 @@ class PlannerPropertiesTest {
             } catch (RuntimeException e) {
                 throw new AssertionError(id, e);
             }
-            assertTrue(c.findings().stream().noneMatch(f -> f.code().equals(PlanCodes.INVARIANT_BROKEN)), id);
+            assertTrue(c.findings().stream().noneMatch(f -> f.code().equals(PlanCodes.INVARIANT_BROKEN)), () -> id + c.findings());
             assertEquals(c.hasErrors(), c.steps().isEmpty(), id);
             c.summary().ifPresent(s -> finite(s, id));
             if (c.hasErrors()) {
