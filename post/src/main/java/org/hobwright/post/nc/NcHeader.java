@@ -13,7 +13,7 @@ import org.hobwright.api.job.Pitch;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
 import org.hobwright.post.Senses;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import org.hobwright.post.JobUnits;
 
 /**

@@ -48,7 +48,7 @@ public final class FastestCycle {
     }
 
     /** The limits of the search. */
-    public record Limits(SpeedWindow window, CuttingData row, Targets targets, double maxFeedRateMmPerMin,
+    public record Limits(SpeedWindow window, CuttingData row, QualityLimits targets, double maxFeedRateMmPerMin,
                          double finishStockMm) {
     }
 
@@ -64,7 +64,7 @@ public final class FastestCycle {
         double tableRpm = Kinematics.hobRpm(limits.row().cuttingSpeed().max(), g.hobOutsideDiameterMm());
         if (tableRpm < rpm) {
             rpm = tableRpm;
-            speedLimit = "cutting speed range of the " + PlanCodes.TABLE;
+            speedLimit = "cutting speed range of the " + PlanSources.TABLE;
         }
         if (!(rpm >= w.minRpm()) || !(rpm > 0)) {
             return Optional.empty();
@@ -156,7 +156,7 @@ public final class FastestCycle {
         final String feedMark;
         final String chip;
 
-        Words(Targets t) {
+        Words(QualityLimits t) {
             feedMark = "feed-mark depth target (" + t.feedMarkSource() + ")";
             chip = "chip thickness limit (" + t.chipSource() + ")";
         }

@@ -3,6 +3,7 @@ package org.hobwright.wizard.plan;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.Severity;
 import org.hobwright.api.cycle.CycleSummary;
 import org.hobwright.api.cycle.FastestProposal;
 import org.hobwright.api.cycle.GearData;
@@ -67,12 +68,12 @@ final class JobPlanning {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
         if (swivel.rounded()) {
-            findings.add(Finding.info(PlanCodes.SWIVEL_ROUNDED, "machine.swivel.resolution",
+            findings.add(PlanCode.PLAN_SWIVEL_ROUNDED.at("machine.swivel.resolution",
                     "the holder's resolution rounds the swivel setting from " + Angles.dms(swivel.exactDeg()) + " to "
-                    + swivel.text(), PlanCodes.MACHINE));
+                    + swivel.text(), null));
         }
         double depth = (touchOff - root) / 2;
-        Targets targets = Targets.of(cycle.targets(), analysis.tolerances(), table.qualityDefaults(), row);
+        QualityLimits targets = QualityLimits.of(cycle.targets(), analysis.tolerances(), table.qualityDefaults(), row);
         CutModel model = CutModel.of(gear, hob);
         Drive drive = drive(ratio);
         PlanSettings settings = settings(depth, window, row, targets, model, drive);
@@ -86,9 +87,9 @@ final class JobPlanning {
         Prediction prediction = Prediction.of(model, settings);
         prediction.check(targets, model, findings);
         findings.addAll(TravelCheck.check(path.steps(), machine));
-        invariants(root).violations(path.steps()).forEach(v -> findings.add(Finding.error(
-                PlanCodes.INVARIANT_BROKEN, "job", "planner safety check failed: " + v,
-                "do not post; report this job to the Hobwright developers", "Hobwright safety invariants")));
+        invariants(root).violations(path.steps()).forEach(v -> findings.add(
+                PlanCode.PLAN_INVARIANT_BROKEN.at("job", "planner safety check failed: " + v,
+                "do not post; report this job to the Hobwright developers")));
         Optional<FastestProposal> fastest = cycle.fastest()
                 ? fastest(geometry, drive, model, window, row, targets, path.cycleTimeS()) : Optional.empty();
         SetupValues setup = new SetupValues(touchOff, touchOff, root, hs.leadAngleDeg(), hs.swivelAngleDeg(),
@@ -108,18 +109,18 @@ final class JobPlanning {
 
     private Drive drive(SyncRatio ratio) {
         if (hob.cuttingSense().isEmpty()) {
-            findings.add(Finding.info(PlanCodes.HOB_SENSE_ASSUMED, "hob.cuttingSense", "the hob's cutting sense is "
+            findings.add(PlanCode.PLAN_HOB_SENSE_ASSUMED.at("hob.cuttingSense", "the hob's cutting sense is "
                     + "not given; the plan takes a hob that cuts turning clockwise seen from its drive end: check "
                     + "the hob (its cutting faces lead when it turns in its cutting sense) and give hob.cuttingSense",
-                    PlanCodes.NO_SOURCE));
+                    null));
         }
         Rotation spindle = SpindleSenses.hobSpindle(hob.cuttingSense().orElse(CuttingSense.CLOCKWISE),
                 cycle.run().hobTurnedRound());
         if (cycle.run().hobTurnedRound()) {
-            findings.add(Finding.warning(PlanCodes.HOB_TURNED_ROUND, "cycle.hobTurnedRound", "the hob is turned "
+            findings.add(PlanCode.PLAN_HOB_TURNED_ROUND.at("cycle.hobTurnedRound", "the hob is turned "
                     + "round on its arbor: the hob spindle runs " + spindle.word() + " seen from its drive "
                     + "end, against the sense marked on the hob", "mount the hob as the program says before the "
-                    + "first part; the program header and the setup sheet say so in capitals", PlanCodes.NO_SOURCE));
+                    + "first part; the program header and the setup sheet say so in capitals"));
         }
         SpindleSenses senses = SpindleSenses.of(spindle, machine.clockwiseTeethTowardChuck(), cycle.method(),
                 hob.hand(), gear.hand());
@@ -129,7 +130,7 @@ final class JobPlanning {
     }
 
     /** The user's speeds, passes and feeds: given values kept, open ones chosen, limits applied. */
-    private PlanSettings settings(double depth, SpeedWindow window, Optional<CuttingData> row, Targets targets,
+    private PlanSettings settings(double depth, SpeedWindow window, Optional<CuttingData> row, QualityLimits targets,
                                   CutModel model, Drive drive) {
         double rpm = SpeedChoice.hobRpm(boxed(cycle.cuttingSpeedMPerMin()), row, hob.outsideDiameterMm(), window,
                 findings).orElseThrow();
@@ -149,28 +150,27 @@ final class JobPlanning {
     }
 
     private Optional<FastestProposal> fastest(CycleGeometry geometry, Drive drive, CutModel model, SpeedWindow window,
-                                              Optional<CuttingData> row, Targets targets, double userTimeS) {
+                                              Optional<CuttingData> row, QualityLimits targets, double userTimeS) {
         if (row.isEmpty()) {
-            findings.add(Finding.warning(PlanCodes.FASTEST_NONE, "cycle.workMaterial",
+            findings.add(PlanCode.PLAN_FASTEST_NONE.at(Severity.WARNING, "cycle.workMaterial",
                     "the fastest cycle needs the cutting-data limits for " + cycle.workMaterial() + " with a "
-                            + hob.material() + " hob", "add a row to your cutting-data table", PlanCodes.TABLE));
+                            + hob.material() + " hob", "add a row to your cutting-data table", PlanSources.TABLE));
             return Optional.empty();
         }
         Optional<FastestCycle.Result> r = FastestCycle.find(geometry, drive, model, new FastestCycle.Limits(window,
                 row.get(), targets, machine.maxFeedMmPerMin(), cycle.finishStockMm()));
         if (r.isEmpty()) {
-            findings.add(Finding.warning(PlanCodes.FASTEST_NONE, "machine", "no speed and feed satisfy every limit"
+            findings.add(PlanCode.PLAN_FASTEST_NONE.at(Severity.WARNING, "machine", "no speed and feed satisfy every limit"
                     + " at once, so no fastest cycle can be proposed", "check the machine's speed limits",
-                    PlanCodes.MACHINE));
+                    PlanSources.MACHINE));
             return Optional.empty();
         }
         FastestProposal p = r.get().proposal();
-        findings.add(Finding.info(PlanCodes.FASTEST, "cycle.fastest", "fastest cycle " + Text.fixed(p.cycleTimeS(), 1)
+        findings.add(PlanCode.PLAN_FASTEST.at("cycle.fastest", "fastest cycle " + Text.fixed(p.cycleTimeS(), 1)
                 + " s (proved lower bound " + Text.fixed(p.lowerBoundS(), 1) + " s) against "
                 + Text.fixed(userTimeS, 1) + " s planned: " + Text.fixed(p.cuttingSpeedMPerMin(), 1) + " m/min, "
                 + p.passes() + " pass(es), roughing " + Text.fixed(p.roughFeedMmPerRev(), 3) + " mm, finishing "
-                + Text.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(),
-                "fastest-cycle search (derived)"));
+                + Text.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(), null));
         return Optional.of(p);
     }
 

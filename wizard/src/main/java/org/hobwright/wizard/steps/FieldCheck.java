@@ -12,9 +12,6 @@ import org.hobwright.wizard.setup.Angles;
  * fit together is left to the job checks.
  */
 public final class FieldCheck {
-    /** Source named by the findings of this check. */
-    static final String SOURCE = "Hobwright job file format, version 1";
-
     private FieldCheck() {
     }
 
@@ -29,24 +26,24 @@ public final class FieldCheck {
     public static Optional<Finding> check(Field field, String text, List<String> choices) {
         if (text.isEmpty()) {
             return field.required()
-                    ? error("WIZARD_VALUE_MISSING", field, "a value is needed", "enter a value")
+                    ? error(WizardCode.WIZARD_VALUE_MISSING, field, "a value is needed", "enter a value")
                     : Optional.empty();
         }
         return switch (field.type()) {
             case NUMBER -> number(text).map(v -> range(field, v))
-                    .orElseGet(() -> error("WIZARD_NOT_A_NUMBER", field, "\"" + text + "\" is not a number",
+                    .orElseGet(() -> error(WizardCode.WIZARD_NOT_A_NUMBER, field, "\"" + text + "\" is not a number",
                             "enter a number with a point as the decimal mark, e.g. 1.25"));
             case INTEGER -> integer(text).map(v -> range(field, v))
-                    .orElseGet(() -> error("WIZARD_NOT_A_WHOLE_NUMBER", field,
+                    .orElseGet(() -> error(WizardCode.WIZARD_NOT_A_WHOLE_NUMBER, field,
                             "\"" + text + "\" is not a whole number", "enter a whole number, e.g. 24"));
             case ANGLE -> Angles.parse(text).map(v -> range(field, v))
-                    .orElseGet(() -> error("WIZARD_NOT_AN_ANGLE", field, "\"" + text + "\" is not an angle",
+                    .orElseGet(() -> error(WizardCode.WIZARD_NOT_AN_ANGLE, field, "\"" + text + "\" is not an angle",
                             "enter decimal degrees (13.2368) or degrees, minutes, seconds (13°14'12\" or 13 14 12)"));
             case CHOICE -> choices.contains(text) ? Optional.empty()
-                    : error("WIZARD_NOT_A_CHOICE", field, "\"" + text + "\" is not one of the choices",
+                    : error(WizardCode.WIZARD_NOT_A_CHOICE, field, "\"" + text + "\" is not one of the choices",
                             "enter one of " + String.join(", ", choices));
             case BOOLEAN -> yesNo(text).isPresent() ? Optional.empty()
-                    : error("WIZARD_NOT_YES_OR_NO", field, "\"" + text + "\" is neither yes nor no",
+                    : error(WizardCode.WIZARD_NOT_YES_OR_NO, field, "\"" + text + "\" is neither yes nor no",
                             "enter yes or no");
             case TEXT -> Optional.empty();
         };
@@ -82,13 +79,13 @@ public final class FieldCheck {
 
     private static Optional<Finding> range(Field field, double v) {
         if (field.positive() && v <= 0) {
-            return error("WIZARD_OUT_OF_RANGE", field, "must be greater than 0, was " + plain(v),
+            return error(WizardCode.WIZARD_OUT_OF_RANGE, field, "must be greater than 0, was " + plain(v),
                     "enter a number greater than 0");
         }
         boolean low = field.min().isPresent() && v < field.min().getAsDouble();
         boolean high = field.max().isPresent() && v > field.max().getAsDouble();
         if (low || high) {
-            return error("WIZARD_OUT_OF_RANGE", field, "must be " + limits(field) + ", was " + plain(v),
+            return error(WizardCode.WIZARD_OUT_OF_RANGE, field, "must be " + limits(field) + ", was " + plain(v),
                     "enter a value " + limits(field));
         }
         return Optional.empty();
@@ -106,7 +103,7 @@ public final class FieldCheck {
         return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
-    private static Optional<Finding> error(String code, Field field, String message, String fix) {
-        return Optional.of(Finding.error(code, field.key(), field.label() + ": " + message, fix, SOURCE));
+    private static Optional<Finding> error(WizardCode code, Field field, String message, String fix) {
+        return Optional.of(code.at(field.key(), field.label() + ": " + message, fix));
     }
 }

@@ -8,7 +8,7 @@ import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 
 /**
  * The lines of the REVIEW step and of the terminal's run summary: setup, inspection, cycle time

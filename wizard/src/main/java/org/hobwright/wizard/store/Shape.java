@@ -99,7 +99,7 @@ final class Shape {
             String child = path.isEmpty() ? key : path + "." + key;
             Shape s = keys.get(key);
             if (s == null) {
-                out.add(InputCode.INPUT_UNKNOWN_KEY.finding(child,
+                out.add(InputCode.INPUT_UNKNOWN_KEY.at(child,
                         doc.at(child) + ": unknown key \"" + key + "\"" + (path.isEmpty() ? "" : " in " + path),
                         "allowed here: " + String.join(", ", keys.keySet())));
             } else {
@@ -120,7 +120,7 @@ final class Shape {
             case NAME_OR_OBJECT -> v.isString() || v.isObject();
         };
         if (!ok) {
-            out.add(InputCode.INPUT_WRONG_TYPE.finding(path,
+            out.add(InputCode.INPUT_WRONG_TYPE.at(path,
                     doc.at(path) + ": " + path + " must be " + type.words + ", was " + describe(v), null));
         } else if (v.isObject()) {
             checkObject(doc, v, path, out);

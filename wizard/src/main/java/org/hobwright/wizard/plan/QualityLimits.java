@@ -21,7 +21,7 @@ import org.hobwright.api.job.QualityTargets;
  * @param chipMm              chip-thickness limit, mm, NaN when unknown
  * @param chipSource          where it came from
  */
-public record Targets(double feedMarkUm, String feedMarkSource, double envelopingUm, String envelopingSource,
+public record QualityLimits(double feedMarkUm, String feedMarkSource, double envelopingUm, String envelopingSource,
                       double chipMm, String chipSource) {
 
     /**
@@ -32,7 +32,7 @@ public record Targets(double feedMarkUm, String feedMarkSource, double envelopin
      * @param defaults   the cutting-data file's defaults
      * @param row        the cutting-data row, when known
      */
-    public static Targets of(QualityTargets given, Optional<ToleranceData> tolerances, QualityDefaults defaults,
+    public static QualityLimits of(QualityTargets given, Optional<ToleranceData> tolerances, QualityDefaults defaults,
                              Optional<CuttingData> row) {
         double mark;
         String markSource;
@@ -42,13 +42,13 @@ public record Targets(double feedMarkUm, String feedMarkSource, double envelopin
             ToleranceData t = tolerances.get();
             mark = defaults.toleranceShare() * t.helixFormUm();
             markSource = "share " + defaults.toleranceShare() + " of helix form tolerance f_fβT of flank class "
-                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanCodes.NO_SOURCE + ")";
+                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanSources.NO_SOURCE + ")";
             env = defaults.toleranceShare() * t.profileFormUm();
             envSource = "share " + defaults.toleranceShare() + " of profile form tolerance f_fαT of flank class "
-                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanCodes.NO_SOURCE + ")";
+                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanSources.NO_SOURCE + ")";
         } else {
             mark = defaults.feedMarkDepthUm();
-            markSource = "default of the " + PlanCodes.TABLE;
+            markSource = "default of the " + PlanSources.TABLE;
             env = defaults.envelopingDepthUm();
             envSource = markSource;
         }
@@ -67,9 +67,9 @@ public record Targets(double feedMarkUm, String feedMarkSource, double envelopin
             chipSource = "cycle.targets.maxChipThickness";
         } else if (row.isPresent()) {
             chip = row.get().maxChipThicknessMm();
-            chipSource = PlanCodes.TABLE;
+            chipSource = PlanSources.TABLE;
         }
-        return new Targets(mark, markSource, env, envSource, chip, chipSource);
+        return new QualityLimits(mark, markSource, env, envSource, chip, chipSource);
     }
 
     /** The limits as the api reports them (the chip limit empty when unknown). */

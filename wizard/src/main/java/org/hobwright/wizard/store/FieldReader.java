@@ -16,7 +16,7 @@ import tools.jackson.databind.node.ObjectNode;
  * turning every bad value into a finding (never an exception). Missing optional objects read as
  * empty, so their keys take their defaults.
  */
-final class Fields {
+final class FieldReader {
     /** Metres per foot: 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959). */
     static final double M_PER_FT = 0.3048;
 
@@ -26,7 +26,7 @@ final class Fields {
     private final List<Finding> out;
     private final Units units;
 
-    Fields(JsonDocument doc, JsonNode node, String path, List<Finding> out, Units units) {
+    FieldReader(JsonDocument doc, JsonNode node, String path, List<Finding> out, Units units) {
         this.doc = doc;
         this.node = node == null ? doc.root().objectNode() : node;
         this.path = path;
@@ -35,19 +35,19 @@ final class Fields {
     }
 
     /** The fields of the root object. */
-    static Fields root(JsonDocument doc, List<Finding> out, Units units) {
-        return new Fields(doc, doc.root(), "", out, units);
+    static FieldReader root(JsonDocument doc, List<Finding> out, Units units) {
+        return new FieldReader(doc, doc.root(), "", out, units);
     }
 
     /** The fields of a child object (empty when absent). */
-    Fields child(String key) {
+    FieldReader child(String key) {
         JsonNode c = node.get(key);
-        return new Fields(doc, c != null && c.isObject() ? c : null, path(key), out, units);
+        return new FieldReader(doc, c != null && c.isObject() ? c : null, path(key), out, units);
     }
 
     /** The same object read with another length unit. */
-    Fields withUnits(Units other) {
-        return new Fields(doc, node, path, out, other);
+    FieldReader withUnits(Units other) {
+        return new FieldReader(doc, node, path, out, other);
     }
 
     Units units() {
@@ -72,24 +72,24 @@ final class Fields {
 
     /** Adds an error finding about {@code key}. */
     void error(InputCode code, String key, String what, String fix) {
-        out.add(code.finding(path(key), doc.at(path(key)) + ": " + path(key) + " " + what, fix));
+        out.add(code.at(path(key), doc.at(path(key)) + ": " + path(key) + " " + what, fix));
     }
 
     /** Adds a finding about the object itself (e.g. a conflict between two keys). */
     void problem(InputCode code, String key, String message, String fix) {
-        out.add(code.finding(path(key), doc.at(path(key)) + ": " + message, fix));
+        out.add(code.at(path(key), doc.at(path(key)) + ": " + message, fix));
     }
 
     /** Reports a missing required key. */
     void missing(String key, String fix) {
         String where = path.isEmpty() ? doc.source() : doc.at(path);
-        out.add(InputCode.INPUT_MISSING.finding(path(key), where + ": " + path(key) + " is required", fix));
+        out.add(InputCode.INPUT_MISSING.at(path(key), where + ": " + path(key) + " is required", fix));
     }
 
     /** Checks that a text is a library name (it names a file); an error finding when not. */
     boolean checkName(String key, String name) {
         Optional<Finding> bad = Names.check(path(key), name);
-        bad.ifPresent(b -> out.add(InputCode.INPUT_VALUE.finding(path(key), doc.at(path(key)) + ": " + b.message(),
+        bad.ifPresent(b -> out.add(InputCode.INPUT_VALUE.at(path(key), doc.at(path(key)) + ": " + b.message(),
                 b.fix().orElse(null))));
         return bad.isEmpty();
     }
@@ -104,7 +104,7 @@ final class Fields {
             return Optional.of(Units.fromSymbol(v.stringValue()));
         }
         String where = v == null ? (path.isEmpty() ? doc.source() : doc.at(path)) : doc.at(path(key));
-        out.add(InputCode.INPUT_UNITS.finding(path(key), where + ": " + path(key)
+        out.add(InputCode.INPUT_UNITS.at(path(key), where + ": " + path(key)
                 + (v == null ? " is missing" : " is \"" + v.stringValue() + "\"") + "; it must be \"mm\" or \"in\"",
                 "add \"units\": \"mm\" or \"units\": \"in\""));
         return Optional.empty();
