@@ -2,7 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The times a machine takes for the steps around the cut, seconds, as the shop measured them.
@@ -14,6 +15,7 @@ import org.hobwright.api.Validate;
  * @param hobShiftS   one programmed hob-shift move
  * @param hobChangeS  taking a worn hob off and setting a sharp one
  */
+@ApiStatus(since = "1.1")
 public record MachineTimes(OptionalDouble loadS, OptionalDouble unloadS, OptionalDouble swivelS,
                            OptionalDouble hobShiftS, OptionalDouble hobChangeS) {
 
@@ -32,7 +34,7 @@ public record MachineTimes(OptionalDouble loadS, OptionalDouble unloadS, Optiona
     private static void check(String field, OptionalDouble v) {
         Objects.requireNonNull(v, field);
         if (v.isPresent()) {
-            Validate.nonNegative(field, v.getAsDouble());
+            Checks.nonNegative(field, v.getAsDouble());
         }
     }
 }

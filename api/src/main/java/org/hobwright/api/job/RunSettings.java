@@ -3,7 +3,8 @@ package org.hobwright.api.job;
 import java.util.Objects;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * How a job runs at the machine: how many parts, under which program number and tool station,
@@ -17,6 +18,7 @@ import org.hobwright.api.Validate;
  * @param hobLifePerToothM   wear criterion: length of gear tooth flank a hob tooth cuts before it must be
  *                           sharpened, m, when the job or its template gives one (else a typical value)
  */
+@ApiStatus(since = "1.1")
 public record RunSettings(int batchSize, OptionalInt programNumber, OptionalInt toolStation, boolean hobTurnedRound,
                           OptionalDouble hobLifePerToothM) {
 
@@ -25,12 +27,12 @@ public record RunSettings(int batchSize, OptionalInt programNumber, OptionalInt 
             OptionalDouble.empty());
 
     public RunSettings {
-        Validate.atLeast("cycle.batchSize", batchSize, 1);
+        Checks.atLeast("cycle.batchSize", batchSize, 1);
         Objects.requireNonNull(programNumber, "programNumber");
-        Validate.range("cycle.programNumber", programNumber, 0, 99_999_999);
+        Checks.range("cycle.programNumber", programNumber, 0, 99_999_999);
         Objects.requireNonNull(toolStation, "toolStation");
-        Validate.range("cycle.toolStation", toolStation, 0, 99_999);
+        Checks.range("cycle.toolStation", toolStation, 0, 99_999);
         Objects.requireNonNull(hobLifePerToothM, "hobLifePerToothM");
-        Validate.positive("cycle.hobLife.lengthPerTooth", hobLifePerToothM);
+        Checks.positive("cycle.hobLife.lengthPerTooth", hobLifePerToothM);
     }
 }

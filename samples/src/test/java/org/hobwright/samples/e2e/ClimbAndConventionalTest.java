@@ -21,8 +21,8 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * Every sample job that plans cleanly, planned once with climb and once with conventional hobbing
- * through the whole chain: both programs are written (so the writer's own safety re-check passed),
- * the post tests' independent program reader reads them, the hob spindle word is the same in both
+ * through the whole chain: both programs are written (so the writer's own safety re-check and the
+ * post tests' independent program reader, run on every posted program, found nothing wrong), the hob spindle word is the same in both
  * (a hob cuts in one sense only) and the cutting moves run the other way.
  */
 class ClimbAndConventionalTest {
@@ -63,34 +63,22 @@ class ClimbAndConventionalTest {
                 .resolve(machine.get("dialect").asString() + ".json"));
         NcReader reader = new NcReader(dialectText);
         List<NcReader.Block> blocks = reader.blocks(Files.readString(run.file(".nc")));
-        JsonNode hobWords = reader.dialect().at("/rotation/hob");
-        String clockwise = hobWords.get("clockwise").asString();
-        String counter = hobWords.get("counterClockwise").asString();
-        List<String> found = new ArrayList<>();
-        for (NcReader.Block b : blocks) {
-            for (NcReader.Word w : b.words()) {
-                String word = w.address() + w.number();
-                if (word.equals(clockwise) || word.equals(counter)) {
-                    found.add(word);
-                }
-            }
-        }
-        assertEquals(1, found.size(), "one hob spindle start: " + found);
-        return new Result(found.get(0), feedSign(reader, blocks));
+        List<String> found = blocks.stream().filter(b -> b.is("syncOn") || b.is("syncOnHelix"))
+                .map(b -> b.values().get("hobDir")).toList();
+        assertEquals(1, found.size(), "one synchronisation with the hob spindle's word: " + found);
+        return new Result(found.get(0), feedSign(blocks));
     }
 
     /** +1 when the cutting moves run toward larger axial words, −1 the other way. */
-    private static int feedSign(NcReader reader, List<NcReader.Block> blocks) {
-        String axial = reader.letter("axial");
-        List<String> feed = reader.literalWords("feed", 0);
+    private static int feedSign(List<NcReader.Block> blocks) {
         double last = Double.NaN;
         int sign = 0;
         for (NcReader.Block b : blocks) {
-            if (b.word(axial).isEmpty()) {
+            if (!b.is("rapid") && !b.is("feed")) {
                 continue;
             }
-            double z = b.word(axial).get().value();
-            if (b.has(feed) && b.word("F").isPresent() && !Double.isNaN(last) && z != last) {
+            double z = b.number("axial");
+            if (b.is("feed") && !Double.isNaN(last) && z != last) {
                 int s = z > last ? 1 : -1;
                 assertTrue(sign == 0 || sign == s, "every cutting move the same way");
                 sign = s;
