@@ -9,6 +9,7 @@ import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 
 /**
  * The steps before the synchronisation: comment lines the setter needs beside the moves (sync ratio
@@ -34,8 +35,8 @@ public final class HeaderSteps {
         List<CycleStep> out = new ArrayList<>(12);
         Units u = job.units();
         out.add(comment("sync: hob " + drive.ratio().hobTurns() + " : work " + drive.ratio().workTurns()
-                + " turns; hob " + Text.fixed(s.hobRpm(), 1) + " rpm " + drive.senses().hob().word()
-                + " seen from its drive end; work " + Text.fixed(drive.workRpm(s.hobRpm()), 4) + " rpm "
+                + " turns; hob " + Decimal.fixed(s.hobRpm(), 1) + " rpm " + drive.senses().hob().word()
+                + " seen from its drive end; work " + Decimal.fixed(drive.workRpm(s.hobRpm()), 4) + " rpm "
                 + drive.senses().work().word() + " seen from the front face"));
         out.add(comment(feedWords(drive.senses().feedSign(), job.cycle().method())));
         if (job.cycle().run().hobTurnedRound()) {
@@ -43,7 +44,7 @@ public final class HeaderSteps {
                     + drive.senses().hob().word().toUpperCase(Locale.ROOT) + " SEEN FROM ITS DRIVE END"));
         }
         if (drive.differentialDegPerMm() != 0) {
-            out.add(comment("differential: " + Text.signed(drive.differentialDegPerMm() * u.toMm(1), 6)
+            out.add(comment("differential: " + Decimal.signed(drive.differentialDegPerMm() * u.toMm(1), 6)
                     + " deg of work rotation per " + u.symbol() + " of axial travel toward the back face"));
         }
         shift.ifPresent(p -> out.add(comment(p.describe(u))));
