@@ -16,7 +16,7 @@ public enum CsvColumn {
     PASS_NO("pass_no"),
     /** Work diameter the hob tip reaches at the end of the move (rapid, feed), mm. */
     DIAMETER_MM("diameter_mm"),
-    /** Hob centre along the work axis from the entry face (rapid, feed), mm. */
+    /** Hob centre along the work axis from the front face (rapid, feed), mm. */
     AXIAL_MM("axial_mm"),
     /** The hob's tip (outside) diameter d_a0 (rapid, feed), mm. */
     HOB_TIP_DIAMETER_MM("hob_tip_diameter_mm"),
