@@ -42,19 +42,19 @@ public record CycleSettings(
     public CycleSettings {
         Validate.text("cycle.workMaterial", workMaterial);
         Objects.requireNonNull(cuttingSpeedMPerMin, "cuttingSpeedMPerMin");
-        Validate.positive("cycle.cuttingSpeed", cuttingSpeedMPerMin);
+        Validate.field(JobFields.CYCLE_CUTTING_SPEED, cuttingSpeedMPerMin);
         Objects.requireNonNull(roughFeedMmPerRev, "roughFeedMmPerRev");
-        Validate.positive("cycle.roughFeed", roughFeedMmPerRev);
+        Validate.field(JobFields.CYCLE_ROUGH_FEED, roughFeedMmPerRev);
         Objects.requireNonNull(finishFeedMmPerRev, "finishFeedMmPerRev");
-        Validate.positive("cycle.finishFeed", finishFeedMmPerRev);
+        Validate.field(JobFields.CYCLE_FINISH_FEED, finishFeedMmPerRev);
         Objects.requireNonNull(roughDepthMm, "roughDepthMm");
-        Validate.positive("cycle.roughDepth", roughDepthMm);
-        Validate.nonNegative("cycle.finishStock", finishStockMm);
+        Validate.field(JobFields.CYCLE_ROUGH_DEPTH, roughDepthMm);
+        Validate.field(JobFields.CYCLE_FINISH_STOCK, finishStockMm);
         Validate.present("cycle.method", method);
-        Validate.nonNegative("cycle.axialClearance", axialClearanceMm);
-        Validate.nonNegative("cycle.radialClearance", radialClearanceMm);
+        Validate.field(JobFields.CYCLE_AXIAL_CLEARANCE, axialClearanceMm);
+        Validate.field(JobFields.CYCLE_RADIAL_CLEARANCE, radialClearanceMm);
         Validate.present("cycle.targets", targets);
-        Validate.nonNegative("cycle.hobShiftPerPart", hobShiftPerPartMm);
-        Validate.atLeast("cycle.hobShiftEveryParts", hobShiftEveryParts, 1);
+        Validate.field(JobFields.HOB_SHIFT_PER_PART, hobShiftPerPartMm);
+        Validate.field(JobFields.HOB_SHIFT_EVERY_PARTS, hobShiftEveryParts);
     }
 }

@@ -5,17 +5,17 @@ import java.util.OptionalDouble;
 import org.hobwright.api.Validate;
 
 /**
- * The hob, in canonical units.
+ * The hob, in canonical units. Every number must lie in the range of its field in {@link JobFields}.
  *
  * @param pitch               normal pitch of the hob (must match the gear's)
- * @param pressureAngleDeg    normal pressure angle of the hob profile, degrees, 1 to 45
- * @param starts              number of starts (threads) z₀, 1 to 12
+ * @param pressureAngleDeg    normal pressure angle of the hob profile, degrees
+ * @param starts              number of starts (threads) z₀
  * @param hand                thread hand
  * @param outsideDiameterMm   outside (tip) diameter d_a0, mm
  * @param leadAngleDeg        lead angle γ as marked on the hob, degrees (magnitude), if marked
  * @param referenceDiameterMm reference (pitch) diameter d_m0, mm, if known; otherwise derived from
  *                            the outside diameter and the tooth system's hob addendum
- * @param gashes              number of gashes (flutes), at least 1
+ * @param gashes              number of gashes (flutes)
  * @param lengthMm            usable hob length, mm
  * @param maxRpm              the hob maker's speed limit, rpm, if given
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
@@ -35,18 +35,18 @@ public record HobSpec(
 
     public HobSpec {
         Validate.present("hob.pitch", pitch);
-        Validate.range("hob.pressureAngle", pressureAngleDeg, 1, 45);
-        Validate.range("hob.starts", starts, 1, 12);
+        Validate.field(JobFields.HOB_PRESSURE_ANGLE, pressureAngleDeg);
+        Validate.field(JobFields.HOB_STARTS, starts);
         Validate.present("hob.hand", hand);
-        Validate.positive("hob.outsideDiameter", outsideDiameterMm);
+        Validate.field(JobFields.HOB_OUTSIDE_DIAMETER, outsideDiameterMm);
         Objects.requireNonNull(leadAngleDeg, "leadAngleDeg");
-        Validate.range("hob.leadAngle", leadAngleDeg, 0, 45);
+        Validate.field(JobFields.HOB_LEAD_ANGLE, leadAngleDeg);
         Objects.requireNonNull(referenceDiameterMm, "referenceDiameterMm");
-        Validate.positive("hob.referenceDiameter", referenceDiameterMm);
-        Validate.atLeast("hob.gashes", gashes, 1);
-        Validate.positive("hob.length", lengthMm);
+        Validate.field(JobFields.HOB_REFERENCE_DIAMETER, referenceDiameterMm);
+        Validate.field(JobFields.HOB_GASHES, gashes);
+        Validate.field(JobFields.HOB_LENGTH, lengthMm);
         Objects.requireNonNull(maxRpm, "maxRpm");
-        Validate.positive("hob.maxRpm", maxRpm);
+        Validate.field(JobFields.HOB_MAX_RPM, maxRpm);
         Validate.text("hob.material", material);
     }
 

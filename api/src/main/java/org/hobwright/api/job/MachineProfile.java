@@ -50,10 +50,10 @@ public record MachineProfile(
     public MachineProfile {
         Validate.text("machine.name", name);
         Validate.text("machine.dialect", dialect);
-        Validate.nonNegative("machine.workMinRpm", workMinRpm);
-        Validate.positive("machine.workMaxRpm", workMaxRpm);
-        Validate.nonNegative("machine.hobMinRpm", hobMinRpm);
-        Validate.positive("machine.hobMaxRpm", hobMaxRpm);
+        Validate.field(MachineFields.WORK_MIN_RPM, workMinRpm);
+        Validate.field(MachineFields.WORK_MAX_RPM, workMaxRpm);
+        Validate.field(MachineFields.HOB_MIN_RPM, hobMinRpm);
+        Validate.field(MachineFields.HOB_MAX_RPM, hobMaxRpm);
         if (workMinRpm > workMaxRpm) {
             throw new IllegalArgumentException("machine.workMinRpm (" + workMinRpm
                     + ") must not exceed machine.workMaxRpm (" + workMaxRpm + ")");
@@ -62,25 +62,25 @@ public record MachineProfile(
             throw new IllegalArgumentException("machine.hobMinRpm (" + hobMinRpm
                     + ") must not exceed machine.hobMaxRpm (" + hobMaxRpm + ")");
         }
-        Validate.positive("machine.maxSyncRatio", maxSyncRatio);
+        Validate.field(MachineFields.MAX_SYNC_RATIO, maxSyncRatio);
         Validate.present("machine.swivel", swivel);
-        Validate.nonNegative("machine.radialMin", radialMinMm);
-        Validate.positive("machine.radialMax", radialMaxMm);
+        Validate.field(MachineFields.RADIAL_MIN, radialMinMm);
+        Validate.field(MachineFields.RADIAL_MAX, radialMaxMm);
         if (radialMinMm >= radialMaxMm) {
             throw new IllegalArgumentException("machine.radialMin (" + radialMinMm
                     + ") must be less than machine.radialMax (" + radialMaxMm + ")");
         }
-        Validate.finite("machine.axialMin", axialMinMm);
-        Validate.finite("machine.axialMax", axialMaxMm);
+        Validate.field(MachineFields.AXIAL_MIN, axialMinMm);
+        Validate.field(MachineFields.AXIAL_MAX, axialMaxMm);
         if (axialMinMm >= axialMaxMm) {
             throw new IllegalArgumentException("machine.axialMin (" + axialMinMm
                     + ") must be less than machine.axialMax (" + axialMaxMm + ")");
         }
         Objects.requireNonNull(hobShiftTravelMm, "hobShiftTravelMm");
         hobShiftTravelMm.ifPresent(v -> Validate.positive("machine.hobShiftTravel", v));
-        Validate.positive("machine.rapid", rapidMmPerMin);
-        Validate.positive("machine.maxFeed", maxFeedMmPerMin);
-        Validate.nonNegative("machine.syncSettle", syncSettleS);
-        Validate.positive("machine.maxHobDiameter", maxHobDiameterMm);
+        Validate.field(MachineFields.RAPID, rapidMmPerMin);
+        Validate.field(MachineFields.MAX_FEED, maxFeedMmPerMin);
+        Validate.field(MachineFields.SYNC_SETTLE, syncSettleS);
+        Validate.field(MachineFields.MAX_HOB_DIAMETER, maxHobDiameterMm);
     }
 }

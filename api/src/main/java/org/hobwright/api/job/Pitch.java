@@ -16,17 +16,17 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
 
     /** Normal diametral pitch in 1/in. */
     default double diametralPitch() {
-        return 25.4 / moduleMm();
+        return Units.IN.toMm(1.0) / moduleMm();
     }
 
     /**
      * A pitch given as a module.
      *
-     * @param mm normal module, mm, greater than 0
+     * @param mm normal module, mm, in the range of {@link JobFields#GEAR_MODULE}
      */
     record Module(double mm) implements Pitch {
         public Module {
-            Validate.positive("module", mm);
+            Validate.range("module", mm, JobFields.GEAR_MODULE.range().min(), JobFields.GEAR_MODULE.range().max());
         }
 
         @Override
@@ -38,16 +38,17 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
     /**
      * A pitch given as a diametral pitch.
      *
-     * @param perInch normal diametral pitch, 1/in, greater than 0
+     * @param perInch normal diametral pitch, 1/in, in the range of {@link JobFields#GEAR_DIAMETRAL_PITCH}
      */
     record Diametral(double perInch) implements Pitch {
         public Diametral {
-            Validate.positive("diametralPitch", perInch);
+            Validate.range("diametralPitch", perInch, JobFields.GEAR_DIAMETRAL_PITCH.range().min(),
+                    JobFields.GEAR_DIAMETRAL_PITCH.range().max());
         }
 
         @Override
         public double moduleMm() {
-            return 25.4 / perInch;
+            return Units.IN.toMm(1.0) / perInch;
         }
 
         @Override

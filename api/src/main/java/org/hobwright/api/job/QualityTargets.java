@@ -24,8 +24,8 @@ public record QualityTargets(
         Objects.requireNonNull(feedMarkDepthUm, "feedMarkDepthUm");
         Objects.requireNonNull(envelopingDepthUm, "envelopingDepthUm");
         Objects.requireNonNull(maxChipThicknessMm, "maxChipThicknessMm");
-        org.hobwright.api.Validate.positive("targets.feedMarkDepth", feedMarkDepthUm);
-        org.hobwright.api.Validate.positive("targets.envelopingDepth", envelopingDepthUm);
-        org.hobwright.api.Validate.positive("targets.maxChipThickness", maxChipThicknessMm);
+        org.hobwright.api.Validate.field(JobFields.TARGET_FEED_MARK_DEPTH, feedMarkDepthUm);
+        org.hobwright.api.Validate.field(JobFields.TARGET_ENVELOPING_DEPTH, envelopingDepthUm);
+        org.hobwright.api.Validate.field(JobFields.TARGET_MAX_CHIP_THICKNESS, maxChipThicknessMm);
     }
 }

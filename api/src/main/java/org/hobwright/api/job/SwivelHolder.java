@@ -24,8 +24,8 @@ public record SwivelHolder(
 
     public SwivelHolder {
         Validate.present("swivel.scale", scale);
-        Validate.range("swivel.resolution", resolutionDeg, 1e-6, 1);
-        Validate.range("swivel.maxAngle", maxAngleDeg, 0, 90);
+        Validate.field(MachineFields.SWIVEL_RESOLUTION, resolutionDeg);
+        Validate.field(MachineFields.SWIVEL_MAX_ANGLE, maxAngleDeg);
         Validate.text("swivel.positiveSense", positiveSense);
     }
 
