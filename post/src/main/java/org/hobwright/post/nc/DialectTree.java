@@ -41,7 +41,7 @@ final class DialectTree {
     }
 
     private static DialectFile file(JsonNode n) {
-        Fields f = new Fields(n, "$schema", "format", "version", "name", "description", "lineEnding", "maxLineLength",
+        PlainObject f = new PlainObject(n, "$schema", "format", "version", "name", "description", "lineEnding", "maxLineLength",
                 "lineNumbers", "programNumber", "decimals", "trailingZeros", "comments", "axes", "rotation",
                 "prologue", "epilogue", "templates");
         return new DialectFile(f.text("$schema"), f.text("format"), f.integer("version"), f.text("name"),
@@ -54,39 +54,39 @@ final class DialectTree {
     }
 
     private static DialectFile.LineNumbers lineNumbers(JsonNode n) {
-        Fields f = new Fields(n, "word", "start", "step");
+        PlainObject f = new PlainObject(n, "word", "start", "step");
         return new DialectFile.LineNumbers(f.text("word"), f.integer("start"), f.integer("step"));
     }
 
     private static DialectFile.Decimals decimals(JsonNode n) {
-        Fields f = new Fields(n, "mm", "in", "mmPerRev", "inPerRev", "deg", "differential", "s", "rpm");
+        PlainObject f = new PlainObject(n, "mm", "in", "mmPerRev", "inPerRev", "deg", "differential", "s", "rpm");
         return new DialectFile.Decimals(f.integer("mm"), f.integer("in"), f.integer("mmPerRev"), f.integer("inPerRev"),
                 f.integer("deg"), f.integer("differential"), f.integer("s"), f.integer("rpm"));
     }
 
     private static DialectFile.Comments comments(JsonNode n) {
-        Fields f = new Fields(n, "upperCase", "forbidden");
+        PlainObject f = new PlainObject(n, "upperCase", "forbidden");
         return new DialectFile.Comments(f.bool("upperCase"), f.text("forbidden"));
     }
 
     private static DialectFile.Axes axes(JsonNode n) {
-        Fields f = new Fields(n, "radial", "axial", "swivel", "shift");
+        PlainObject f = new PlainObject(n, "radial", "axial", "swivel", "shift");
         return new DialectFile.Axes(f.object("radial", DialectTree::axis), f.object("axial", DialectTree::axis),
                 f.object("swivel", DialectTree::axis), f.object("shift", DialectTree::axis));
     }
 
     private static DialectFile.Axis axis(JsonNode n) {
-        Fields f = new Fields(n, "letter", "sign", "diameter");
+        PlainObject f = new PlainObject(n, "letter", "sign", "diameter");
         return new DialectFile.Axis(f.text("letter"), f.integer("sign"), f.bool("diameter"));
     }
 
     private static DialectFile.Rotations rotations(JsonNode n) {
-        Fields f = new Fields(n, "work", "hob");
+        PlainObject f = new PlainObject(n, "work", "hob");
         return new DialectFile.Rotations(f.object("work", DialectTree::words), f.object("hob", DialectTree::words));
     }
 
     private static DialectFile.RotationWords words(JsonNode n) {
-        Fields f = new Fields(n, "clockwise", "counterClockwise");
+        PlainObject f = new PlainObject(n, "clockwise", "counterClockwise");
         return new DialectFile.RotationWords(f.text("clockwise"), f.text("counterClockwise"));
     }
 
@@ -122,10 +122,10 @@ final class DialectTree {
     }
 
     /** The members of one object, each known key present or absent (absent binds to null). */
-    private static final class Fields {
+    private static final class PlainObject {
         private final JsonNode node;
 
-        Fields(JsonNode node, String... known) {
+        PlainObject(JsonNode node, String... known) {
             if (!node.isObject()) {
                 throw new NotPlain();
             }

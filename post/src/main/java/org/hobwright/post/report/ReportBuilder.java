@@ -17,7 +17,7 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.JobUnits;
-import org.hobwright.post.Targets;
+import org.hobwright.post.TargetsGiven;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;
@@ -200,7 +200,7 @@ final class ReportBuilder {
         if (s.fastest().isPresent()) {
             n.set("fastest", fastest(s.fastest().get()));
         }
-        if (!Targets.none(s.targets())) {
+        if (!TargetsGiven.none(s.targets())) {
             ObjectNode targets = n.putObject("targets");
             if (s.targets().feedMarkDepthUm().isPresent()) {
                 targets.put("feedMarkDepth", s.targets().feedMarkDepthUm().getAsDouble());

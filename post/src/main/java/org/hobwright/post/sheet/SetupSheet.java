@@ -9,7 +9,7 @@ import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
 import org.hobwright.post.text.Decimal;
 import org.hobwright.post.JobUnits;
-import org.hobwright.post.Targets;
+import org.hobwright.post.TargetsGiven;
 
 /**
  * The setup sheet: one self-contained XHTML page with inline SVG and CSS, laid out to print on A4
@@ -74,7 +74,7 @@ final class SetupSheet {
         Cautions.LINES.forEach(c -> m.leaf("li", c));
         m.close("ul").close("div");
         m.open("div", "class", "figures").nl();
-        m.open("figure").raw(ToothSpaceSvg.svg(g, job.gear().teeth(), cycle.simulation(), f))
+        m.open("figure").raw(ToothSpaceFigure.svg(g, job.gear().teeth(), cycle.simulation(), f))
                 .leaf("figcaption", "Tooth space in the transverse section, drawn to scale"
                         + cycle.simulation().map(sim -> ", with the generating simulation: its flanks depart from the"
                         + " true involute by at most " + f.um(sim.profileDeviationMaxMm() * 1000)
@@ -88,7 +88,7 @@ final class SetupSheet {
         t.setup(s, sum, job.cycle().coolant());
         t.gear(g);
         cycle.inspection().ifPresent(t::inspection);
-        t.quality(sum, Targets.none(sum.targets()) ? job.cycle().targets() : sum.targets(),
+        t.quality(sum, TargetsGiven.none(sum.targets()) ? job.cycle().targets() : sum.targets(),
                 cycle.tolerances(), cycle.simulation());
         t.findings(cycle.findings());
         m.close("body").close("html");

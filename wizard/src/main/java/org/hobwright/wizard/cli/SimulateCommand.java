@@ -21,7 +21,7 @@ import org.hobwright.wizard.simulate.FeedMarks;
 import org.hobwright.wizard.simulate.GeneratingSimulation;
 import org.hobwright.wizard.simulate.SimulationInputException;
 import org.hobwright.wizard.simulate.ToothSpaceSimulation;
-import org.hobwright.wizard.simulate.ToothSpaceSvg;
+import org.hobwright.wizard.simulate.SimulationSvg;
 import org.hobwright.wizard.store.AtomicFiles;
 import org.hobwright.wizard.store.JobReader;
 import org.hobwright.wizard.store.Library;
@@ -96,7 +96,7 @@ public final class SimulateCommand implements Callable<Integer> {
                 GeneratingSimulation.RESOLUTION_MM));
         Path target = out.resolve(j.name() + "-simulation.svg");
         try {
-            AtomicFiles.writeText(target, ToothSpaceSvg.render(sim, marks, j.gear().partName()), true);
+            AtomicFiles.writeText(target, SimulationSvg.render(sim, marks, j.gear().partName()), true);
         } catch (IOException e) {
             err.println("hobwright: cannot write " + target + ": " + e.getMessage());
             return ExitCodes.USAGE;

@@ -7,7 +7,7 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.Wizard;
-import org.hobwright.wizard.steps.Fields;
+import org.hobwright.wizard.steps.StepFields;
 import org.hobwright.wizard.steps.StepSession;
 import org.hobwright.wizard.store.CycleTemplate;
 import org.hobwright.wizard.store.Loaded;
@@ -51,7 +51,7 @@ final class WizardFinish implements TerminalWizard.Finish {
     }
 
     private void saveTemplate(TerminalWizard asker, Prompter prompter) {
-        String machine = session.value(Fields.MACHINE);
+        String machine = session.value(StepFields.MACHINE);
         while (true) {
             String name = asker.read("Save the cycle answers as a template of " + machine
                     + "? Name, or Enter for none [] > ");
@@ -85,6 +85,6 @@ final class WizardFinish implements TerminalWizard.Finish {
     }
 
     private Units units() {
-        return "in".equals(session.value(Fields.UNITS)) ? Units.IN : Units.MM;
+        return "in".equals(session.value(StepFields.UNITS)) ? Units.IN : Units.MM;
     }
 }

@@ -48,7 +48,7 @@ public final class FastestCycle {
     }
 
     /** The limits of the search. */
-    public record Limits(SpeedWindow window, CuttingData row, Targets targets, double maxFeedRateMmPerMin,
+    public record Limits(SpeedWindow window, CuttingData row, QualityLimits targets, double maxFeedRateMmPerMin,
                          double finishStockMm) {
     }
 
@@ -156,7 +156,7 @@ public final class FastestCycle {
         final String feedMark;
         final String chip;
 
-        Words(Targets t) {
+        Words(QualityLimits t) {
             feedMark = "feed-mark depth target (" + t.feedMarkSource() + ")";
             chip = "chip thickness limit (" + t.chipSource() + ")";
         }

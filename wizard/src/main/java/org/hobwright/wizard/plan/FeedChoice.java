@@ -19,7 +19,7 @@ import org.hobwright.api.check.Finding;
 public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
 
     /** The inputs of the choice. */
-    public record Inputs(OptionalDouble rough, OptionalDouble finish, Optional<CuttingData> row, Targets targets,
+    public record Inputs(OptionalDouble rough, OptionalDouble finish, Optional<CuttingData> row, QualityLimits targets,
                          CutModel model, PassDepths depths, double workRpm, double maxFeedRateMmPerMin) {
     }
 

@@ -70,7 +70,7 @@ final class JobPlanning {
                     + swivel.text(), PlanCodes.MACHINE));
         }
         double depth = (touchOff - root) / 2;
-        Targets targets = Targets.of(cycle.targets(), analysis.tolerances(), table.qualityDefaults(), row);
+        QualityLimits targets = QualityLimits.of(cycle.targets(), analysis.tolerances(), table.qualityDefaults(), row);
         CutModel model = CutModel.of(gear, hob);
         Drive drive = drive(ratio);
         PlanSettings settings = settings(depth, window, row, targets, model, drive);
@@ -112,7 +112,7 @@ final class JobPlanning {
     }
 
     /** The user's speeds, passes and feeds: given values kept, open ones chosen, limits applied. */
-    private PlanSettings settings(double depth, SpeedWindow window, Optional<CuttingData> row, Targets targets,
+    private PlanSettings settings(double depth, SpeedWindow window, Optional<CuttingData> row, QualityLimits targets,
                                   CutModel model, Drive drive) {
         double rpm = SpeedChoice.hobRpm(boxed(cycle.cuttingSpeedMPerMin()), row, hob.outsideDiameterMm(), window,
                 findings).orElseThrow();
@@ -132,7 +132,7 @@ final class JobPlanning {
     }
 
     private Optional<FastestProposal> fastest(CycleGeometry geometry, Drive drive, CutModel model, SpeedWindow window,
-                                              Optional<CuttingData> row, Targets targets, double userTimeS) {
+                                              Optional<CuttingData> row, QualityLimits targets, double userTimeS) {
         if (row.isEmpty()) {
             findings.add(Finding.warning(PlanCodes.FASTEST_NONE, "cycle.workMaterial",
                     "the fastest cycle needs the cutting-data limits for " + cycle.workMaterial() + " with a "

@@ -23,7 +23,7 @@ public record Prediction(double feedMarkFlankUm, double feedMarkRootUm, double e
     }
 
     /** Adds a finding for every target this prediction exceeds. */
-    public void check(Targets t, CutModel model, List<Finding> findings) {
+    public void check(QualityLimits t, CutModel model, List<Finding> findings) {
         if (feedMarkFlankUm > t.feedMarkUm() * (1 + 1e-9)) {
             findings.add(Finding.warning(PlanCodes.FEED_MARK_OVER_TARGET, "cycle.finishFeed", String.format(Locale.ROOT,
                     "predicted flank feed marks %.2f µm exceed the %.2f µm target (%s)", feedMarkFlankUm,

@@ -22,12 +22,12 @@ public final class Answers {
     /** Answers taken from a job file's tree (keys without a field are ignored). */
     public static Answers fromTree(JsonNode job) {
         Answers a = new Answers();
-        for (Field f : Fields.all()) {
+        for (Field f : StepFields.all()) {
             JsonNode node = at(job, f.key());
             if (node == null || node.isNull() || node.isMissingNode()) {
                 continue;
             }
-            if (f.key().equals(Fields.MACHINE) && node.isObject()) {
+            if (f.key().equals(StepFields.MACHINE) && node.isObject()) {
                 a.inlineMachine = Optional.of((ObjectNode) node.deepCopy());
                 a.values.put(f.key(), node.path("name").asString(""));
             } else if (node.isBoolean()) {
@@ -63,14 +63,14 @@ public final class Answers {
         ObjectNode root = NODES.objectNode();
         root.put("format", "hobwright-job");
         root.put("version", 1);
-        for (Field f : Fields.all()) {
+        for (Field f : StepFields.all()) {
             String text = get(f.key());
             if (text.isEmpty()) {
                 continue;
             }
             ObjectNode parent = parentOf(root, f.key());
             String leaf = f.key().substring(f.key().lastIndexOf('.') + 1);
-            if (f.key().equals(Fields.MACHINE) && inlineMachine.filter(m -> text.equals(m.path("name")
+            if (f.key().equals(StepFields.MACHINE) && inlineMachine.filter(m -> text.equals(m.path("name")
                     .asString(""))).isPresent()) {
                 parent.set(leaf, inlineMachine.get().deepCopy());
             } else {

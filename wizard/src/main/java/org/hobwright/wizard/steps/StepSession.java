@@ -72,15 +72,15 @@ public final class StepSession implements Wizard {
         StepId id = current();
         if (id == StepId.REVIEW) {
             List<String> summary = cycle.map(c -> ReviewLines.of(c, units())).orElse(List.of());
-            return new StepView(id, Fields.title(id), List.of(), review, summary);
+            return new StepView(id, StepFields.title(id), List.of(), review, summary);
         }
-        List<FieldSpec> specs = Fields.of(id).stream().map(this::spec).toList();
-        return new StepView(id, Fields.title(id), specs, shown, List.of());
+        List<FieldSpec> specs = StepFields.of(id).stream().map(this::spec).toList();
+        return new StepView(id, StepFields.title(id), specs, shown, List.of());
     }
 
     @Override
     public List<Finding> answer(String key, String text) {
-        Optional<Field> field = Fields.of(current()).stream().filter(f -> f.key().equals(key)).findFirst();
+        Optional<Field> field = StepFields.of(current()).stream().filter(f -> f.key().equals(key)).findFirst();
         if (field.isEmpty()) {
             return List.of(Finding.error("WIZARD_UNKNOWN_FIELD", key, "step " + current() + " has no field \""
                     + key + "\"", "answer one of the fields of the current step", FieldCheck.SOURCE));
@@ -100,10 +100,10 @@ public final class StepSession implements Wizard {
         Units before = units();
         answers.put(key, value);
         unitSwitch.typed(field.get(), value, before);
-        if (key.equals(Fields.MACHINE) && !services.templates(value).contains(answers.get(Fields.TEMPLATE))) {
-            answers.put(Fields.TEMPLATE, "");
+        if (key.equals(StepFields.MACHINE) && !services.templates(value).contains(answers.get(StepFields.TEMPLATE))) {
+            answers.put(StepFields.TEMPLATE, "");
         }
-        if (key.equals(Fields.UNITS)) {
+        if (key.equals(StepFields.UNITS)) {
             return unitSwitch.switchUnits(answers, before, units()).map(List::of).orElse(List.of());
         }
         return List.of();
@@ -161,13 +161,13 @@ public final class StepSession implements Wizard {
     /** Every finding of a step: its fields again, then the reader's and the checks' on the whole job. */
     private List<Finding> check(StepId step) {
         List<Finding> out = new ArrayList<>();
-        for (Field f : Fields.of(step)) {
+        for (Field f : StepFields.of(step)) {
             FieldCheck.check(f, answers.get(f.key()), choices(f)).ifPresent(out::add);
         }
         StepServices.JobRead read = services.read(answers.toTree());
         List<Finding> all = new ArrayList<>(read.findings());
         read.job().ifPresent(j -> all.addAll(services.check(j)));
-        all.stream().filter(f -> Fields.stepOf(f) == step).forEach(out::add);
+        all.stream().filter(f -> StepFields.stepOf(f) == step).forEach(out::add);
         return List.copyOf(new LinkedHashSet<>(out));
     }
 
@@ -192,18 +192,18 @@ public final class StepSession implements Wizard {
 
     /** The choices of a field now: fixed ones, or the library's machines and templates. */
     private List<String> choices(Field f) {
-        if (f.key().equals(Fields.MACHINE)) {
+        if (f.key().equals(StepFields.MACHINE)) {
             List<String> names = new ArrayList<>(services.machines());
             answers.inlineMachineName().filter(n -> !names.contains(n)).ifPresent(names::add);
             return names;
         }
-        if (f.key().equals(Fields.TEMPLATE)) {
-            return services.templates(answers.get(Fields.MACHINE));
+        if (f.key().equals(StepFields.TEMPLATE)) {
+            return services.templates(answers.get(StepFields.MACHINE));
         }
         return f.choices();
     }
 
     private Units units() {
-        return "in".equals(answers.get(Fields.UNITS)) ? Units.IN : Units.MM;
+        return "in".equals(answers.get(StepFields.UNITS)) ? Units.IN : Units.MM;
     }
 }

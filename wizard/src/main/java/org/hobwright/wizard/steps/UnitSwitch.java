@@ -41,7 +41,7 @@ final class UnitSwitch {
             return Optional.empty();
         }
         int converted = 0;
-        for (Field f : Fields.all()) {
+        for (Field f : StepFields.all()) {
             String now = answers.get(f.key());
             if (!converts(f.unit()) || now.isEmpty()) {
                 continue;
@@ -58,7 +58,7 @@ final class UnitSwitch {
         if (converted == 0) {
             return Optional.empty();
         }
-        return Optional.of(Finding.info(CONVERTED, Fields.UNITS, converted + " length, feed and speed answer"
+        return Optional.of(Finding.info(CONVERTED, StepFields.UNITS, converted + " length, feed and speed answer"
                 + (converted == 1 ? " was" : "s were") + " converted to " + (to == Units.IN ? "inch" : "millimetre")
                 + " units; check them on their steps", FieldCheck.SOURCE));
     }

@@ -8,7 +8,7 @@ import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.Units;
-import org.hobwright.wizard.store.Fields.Kind;
+import org.hobwright.wizard.store.FieldReader.Kind;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -52,7 +52,7 @@ final class CycleReader {
     }
 
     /** Reads the cycle keys of {@code f}; when {@code needMaterial}, a missing work material is an error. */
-    static Values read(Fields f, boolean needMaterial) {
+    static Values read(FieldReader f, boolean needMaterial) {
         Optional<String> material = needMaterial
                 ? f.requiredText("workMaterial", "name the work material, e.g. steel-free-machining or brass, in the"
                         + " job's cycle or in its template")
@@ -68,11 +68,11 @@ final class CycleReader {
         double axial = f.number("axialClearance", Kind.LENGTH, Limit.NON_NEGATIVE, DEFAULT_CLEARANCE_MM);
         double radial = f.number("radialClearance", Kind.LENGTH, Limit.NON_NEGATIVE, DEFAULT_CLEARANCE_MM);
         boolean coolant = f.bool("coolant", true);
-        Fields t = f.child("targets");
+        FieldReader t = f.child("targets");
         OptionalDouble mark = t.number("feedMarkDepth", Kind.PLAIN, Limit.POSITIVE);
         OptionalDouble env = t.number("envelopingDepth", Kind.PLAIN, Limit.POSITIVE);
         OptionalDouble chip = t.number("maxChipThickness", Kind.LENGTH, Limit.POSITIVE);
-        Fields s = f.child("hobShift");
+        FieldReader s = f.child("hobShift");
         double perPart = s.number("perPart", Kind.LENGTH, Limit.NON_NEGATIVE, 0);
         int every = s.integer("everyParts", 1, Integer.MAX_VALUE, 1);
         boolean fastest = f.bool("fastest", false);
@@ -111,12 +111,12 @@ final class CycleReader {
 
     /** m/min from a cutting speed in a file's speed unit (ft/min in inch files; 1 ft = 0.3048 m). */
     static double speedToMPerMin(Units units, double v) {
-        return units == Units.IN ? v * Fields.M_PER_FT : v;
+        return units == Units.IN ? v * FieldReader.M_PER_FT : v;
     }
 
     /** A cutting speed in m/min, in a file's speed unit. */
     static double speedTo(Units units, double mPerMin) {
-        return units == Units.IN ? mPerMin / Fields.M_PER_FT : mPerMin;
+        return units == Units.IN ? mPerMin / FieldReader.M_PER_FT : mPerMin;
     }
 
     /** Fills the keys {@code job} leaves out with the values of {@code template} (one level of objects deep). */

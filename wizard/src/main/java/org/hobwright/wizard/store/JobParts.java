@@ -12,7 +12,7 @@ import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.ToothProportions;
 import org.hobwright.wizard.geometry.ToothSystem;
-import org.hobwright.wizard.store.Fields.Kind;
+import org.hobwright.wizard.store.FieldReader.Kind;
 
 /**
  * Reads the gear and the hob of a job. Each method records a finding for every bad value and
@@ -27,7 +27,7 @@ final class JobParts {
     }
 
     /** Reads the pitch: exactly one of {@code module} (mm) and {@code diametralPitch} (1/in), whatever the units. */
-    static Optional<Pitch> pitch(Fields f) {
+    static Optional<Pitch> pitch(FieldReader f) {
         boolean m = f.has("module");
         boolean dp = f.has("diametralPitch");
         if (m == dp) {
@@ -45,7 +45,7 @@ final class JobParts {
                 .map(Pitch.Diametral::new);
     }
 
-    static Optional<GearSpec> gear(Fields f, String jobName, List<Finding> out) {
+    static Optional<GearSpec> gear(FieldReader f, String jobName, List<Finding> out) {
         int before = errors(out);
         String part = f.text("partName").orElse(jobName);
         int teeth = f.requiredInt("teeth", 1, 100_000, "give the number of teeth");
@@ -74,7 +74,7 @@ final class JobParts {
                 custom, blank, pin, tolerance, drawing));
     }
 
-    private static Optional<ToothProportions> custom(Fields f, Optional<String> system) {
+    private static Optional<ToothProportions> custom(FieldReader f, Optional<String> system) {
         boolean isCustom = system.map(ToothSystem.CUSTOM::equals).orElse(false);
         if (!f.has("custom")) {
             if (isCustom) {
@@ -89,20 +89,20 @@ final class JobParts {
                     "remove custom or set toothSystem to custom");
             return Optional.empty();
         }
-        Fields c = f.child("custom");
+        FieldReader c = f.child("custom");
         double a = c.required("addendum", Kind.PLAIN, Limit.range(0.3, 2), "addendum factor, e.g. 1.0");
         double d = c.required("dedendum", Kind.PLAIN, Limit.range(0.3, 3), "dedendum factor, e.g. 1.25");
         double r = c.required("rootRadius", Kind.PLAIN, Limit.range(0, 1), "root radius factor, e.g. 0.25");
         if (Double.isFinite(a) && Double.isFinite(d) && d <= a) {
-            c.problem(InputCode.INPUT_CONFLICT, "dedendum", c.path("dedendum") + " (" + Fields.format(d)
-                    + ") must be greater than " + c.path("addendum") + " (" + Fields.format(a) + ")",
+            c.problem(InputCode.INPUT_CONFLICT, "dedendum", c.path("dedendum") + " (" + FieldReader.format(d)
+                    + ") must be greater than " + c.path("addendum") + " (" + FieldReader.format(a) + ")",
                     "the dedendum leaves room for the tip of the mating gear: about 1.25 × the addendum");
         }
         return Double.isFinite(a) && Double.isFinite(d) && Double.isFinite(r) && d > a
                 ? Optional.of(new ToothProportions(a, d, r)) : Optional.empty();
     }
 
-    private static DrawingValues drawing(Fields d) {
+    private static DrawingValues drawing(FieldReader d) {
         return new DrawingValues(d.number("pitchDiameter", Kind.LENGTH, Limit.POSITIVE),
                 d.number("outsideDiameter", Kind.LENGTH, Limit.POSITIVE),
                 d.number("rootDiameter", Kind.LENGTH, Limit.POSITIVE),
@@ -113,7 +113,7 @@ final class JobParts {
                 d.number("overPins", Kind.LENGTH, Limit.POSITIVE));
     }
 
-    static Optional<HobSpec> hob(Fields f, List<Finding> out) {
+    static Optional<HobSpec> hob(FieldReader f, List<Finding> out) {
         int before = errors(out);
         Optional<Pitch> pitch = pitch(f);
         double alpha = f.requiredAngle("pressureAngle", Limit.range(1, 45), "give the hob's pressure angle, e.g. 20");

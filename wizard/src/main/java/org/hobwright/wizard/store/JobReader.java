@@ -94,17 +94,17 @@ public final class JobReader {
     private Loaded<HobJob> read(JsonDocument raw, Overrides overrides) {
         return FileFormat.JOB.open(raw).then(doc -> {
             List<Finding> out = new ArrayList<>();
-            Optional<Units> units = Fields.root(doc, out, Units.MM).units("units");
+            Optional<Units> units = FieldReader.root(doc, out, Units.MM).units("units");
             if (units.isEmpty()) {
                 return Loaded.unreadable(out);
             }
-            Fields root = Fields.root(doc, out, units.get());
+            FieldReader root = FieldReader.root(doc, out, units.get());
             MachineChoice choice = machine(root, overrides, out);
             if (choice.unreadable()) {
                 return Loaded.unreadable(out);
             }
             Optional<MachineFile> machine = choice.machine();
-            Fields cycleFields = cycleWithTemplate(doc, root, machine, overrides, out);
+            FieldReader cycleFields = cycleWithTemplate(doc, root, machine, overrides, out);
             if (cycleFields == null) {
                 return Loaded.unreadable(out);
             }
@@ -141,7 +141,7 @@ public final class JobReader {
     }
 
     /** The machine: the override, the named profile, or the inline object. Findings go to {@code out}. */
-    private MachineChoice machine(Fields root, Overrides overrides, List<Finding> out) {
+    private MachineChoice machine(FieldReader root, Overrides overrides, List<Finding> out) {
         JsonNode m = root.raw("machine");
         if (overrides.machine().isPresent() || m != null && m.isString()) {
             Loaded<MachineFile> named = lookUpMachine(overrides.machine().orElseGet(m::stringValue),
@@ -153,7 +153,7 @@ public final class JobReader {
             root.missing("machine", "name a machine profile, e.g. \"machine\": \"varrow-sl16\", or describe it inline");
             return new MachineChoice(Optional.empty(), false);
         }
-        Optional<Fields> inline = inlineMachineFields(root);
+        Optional<FieldReader> inline = inlineMachineFields(root);
         return inline.isEmpty() ? new MachineChoice(Optional.empty(), true)
                 : new MachineChoice(MachineReader.body(inline.get(), out), false);
     }
@@ -180,8 +180,8 @@ public final class JobReader {
     }
 
     /** The fields of an inline machine, in its own units when it states them; empty when they are wrong. */
-    private static Optional<Fields> inlineMachineFields(Fields root) {
-        Fields inline = root.child("machine");
+    private static Optional<FieldReader> inlineMachineFields(FieldReader root) {
+        FieldReader inline = root.child("machine");
         if (!inline.has("units")) {
             return Optional.of(inline);
         }
@@ -192,9 +192,9 @@ public final class JobReader {
      * The cycle keys to read: the job's own, filled with the template's (converted to the job's
      * units). Returns null (with a finding) when the template cannot be read.
      */
-    private Fields cycleWithTemplate(JsonDocument doc, Fields root, Optional<MachineFile> machine,
+    private FieldReader cycleWithTemplate(JsonDocument doc, FieldReader root, Optional<MachineFile> machine,
                                      Overrides overrides, List<Finding> out) {
-        Fields cycle = root.child("cycle");
+        FieldReader cycle = root.child("cycle");
         Optional<String> templateName = overrides.template().or(() -> cycle.text("template"));
         if (templateName.isEmpty()) {
             return cycle;
@@ -213,6 +213,6 @@ public final class JobReader {
         ObjectNode merged = cycle.objectOrEmpty().deepCopy();
         merged.remove("template");
         CycleReader.fill(merged, t.get().cycleIn(root.units()));
-        return new Fields(doc, merged, "cycle", out, root.units());
+        return new FieldReader(doc, merged, "cycle", out, root.units());
     }
 }

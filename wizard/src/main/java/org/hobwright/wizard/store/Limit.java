@@ -32,9 +32,9 @@ record Limit(double min, boolean openMin, double max) {
             return Optional.empty();
         }
         if (max == Double.POSITIVE_INFINITY) {
-            return Optional.of(openMin ? "must be greater than " + Fields.format(min) + unit
-                    : "must be " + Fields.format(min) + unit + " or more");
+            return Optional.of(openMin ? "must be greater than " + FieldReader.format(min) + unit
+                    : "must be " + FieldReader.format(min) + unit + " or more");
         }
-        return Optional.of("must be between " + Fields.format(min) + " and " + Fields.format(max) + unit);
+        return Optional.of("must be between " + FieldReader.format(min) + " and " + FieldReader.format(max) + unit);
     }
 }

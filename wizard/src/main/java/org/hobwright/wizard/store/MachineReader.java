@@ -8,7 +8,7 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.MachineProfile;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
-import org.hobwright.wizard.store.Fields.Kind;
+import org.hobwright.wizard.store.FieldReader.Kind;
 
 /** Builds a {@link MachineFile} from the keys of a machine profile (a file or a job's inline machine). */
 final class MachineReader {
@@ -22,17 +22,17 @@ final class MachineReader {
     static Loaded<MachineFile> read(JsonDocument doc) {
         return FileFormat.MACHINE.open(doc).then(d -> {
             List<Finding> out = new ArrayList<>();
-            Optional<Units> units = Fields.root(d, out, Units.MM).units("units");
+            Optional<Units> units = FieldReader.root(d, out, Units.MM).units("units");
             if (units.isEmpty()) {
                 return Loaded.unreadable(out);
             }
-            Optional<MachineFile> m = body(Fields.root(d, out, units.get()), out);
+            Optional<MachineFile> m = body(FieldReader.root(d, out, units.get()), out);
             return m.isPresent() ? Loaded.of(m.get(), out) : Loaded.failed(out);
         });
     }
 
     /** Reads the machine keys of {@code f}; its units are used unless it states its own. */
-    static Optional<MachineFile> body(Fields f, List<Finding> out) {
+    static Optional<MachineFile> body(FieldReader f, List<Finding> out) {
         int errorsBefore = (int) out.stream().filter(Finding::isError).count();
         String name = f.requiredText("name", "give the machine a name").orElse("");
         if (!name.isEmpty()) {
@@ -40,8 +40,8 @@ final class MachineReader {
         }
         String description = f.text("description").orElse("");
         String dialect = f.requiredText("dialect", "name the NC dialect file of this machine's control").orElse("");
-        Fields work = f.child("workSpindle");
-        Fields hobSp = f.child("hobSpindle");
+        FieldReader work = f.child("workSpindle");
+        FieldReader hobSp = f.child("hobSpindle");
         double workMin = work.required("minRpm", Kind.PLAIN, Limit.NON_NEGATIVE, null);
         double workMax = work.required("maxRpm", Kind.PLAIN, Limit.POSITIVE, null);
         double hobMin = hobSp.required("minRpm", Kind.PLAIN, Limit.NON_NEGATIVE, null);
@@ -50,7 +50,7 @@ final class MachineReader {
         order(hobSp, "minRpm", hobMin, "maxRpm", hobMax, false);
         double sync = f.required("maxSyncRatio", Kind.PLAIN, Limit.POSITIVE, null);
         boolean followsHelix = f.bool("followsHelix", false);
-        Fields sw = f.child("swivel");
+        FieldReader sw = f.child("swivel");
         if (!f.has("swivel")) {
             f.missing("swivel", "describe the swivel holder: scale, resolution, maxAngle, positiveSense");
         }
@@ -65,7 +65,7 @@ final class MachineReader {
         String sense = f.has("swivel") ? sw.requiredText("positiveSense",
                 "say in words which way a positive setting turns the hob").orElse("") : "";
         boolean positiveIsRight = sw.bool("positiveIsRight", true);
-        Fields tr = f.child("travel");
+        FieldReader tr = f.child("travel");
         double radialMin = tr.number("radialMin", Kind.LENGTH, Limit.NON_NEGATIVE, 0);
         double radialMax = tr.required("radialMax", Kind.LENGTH, Limit.POSITIVE, null);
         double axialMin = tr.required("axialMin", Kind.LENGTH, Limit.ANY, null);
@@ -90,10 +90,10 @@ final class MachineReader {
         return Optional.of(new MachineFile(p, f.units(), description));
     }
 
-    private static void order(Fields f, String lowKey, double low, String highKey, double high, boolean strict) {
+    private static void order(FieldReader f, String lowKey, double low, String highKey, double high, boolean strict) {
         if (Double.isFinite(low) && Double.isFinite(high) && (strict ? low >= high : low > high)) {
-            f.problem(InputCode.INPUT_CONFLICT, lowKey, f.path(lowKey) + " (" + Fields.format(low) + ") must be "
-                    + (strict ? "less than " : "at most ") + f.path(highKey) + " (" + Fields.format(high) + ")",
+            f.problem(InputCode.INPUT_CONFLICT, lowKey, f.path(lowKey) + " (" + FieldReader.format(low) + ") must be "
+                    + (strict ? "less than " : "at most ") + f.path(highKey) + " (" + FieldReader.format(high) + ")",
                     "swap or correct the two values");
         }
     }

@@ -15,7 +15,7 @@ final class TemplateReader {
     static Loaded<CycleTemplate> read(JsonDocument doc) {
         return FileFormat.TEMPLATE.open(doc).then(d -> {
             List<Finding> out = new ArrayList<>();
-            Fields f = Fields.root(d, out, Units.MM);
+            FieldReader f = FieldReader.root(d, out, Units.MM);
             Optional<Units> units = f.units("units");
             if (units.isEmpty()) {
                 return Loaded.unreadable(out);

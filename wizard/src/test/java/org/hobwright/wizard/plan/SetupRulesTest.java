@@ -119,14 +119,14 @@ class SetupRulesTest {
         CuttingData row = CuttingDataTable.builtIn().find("brass", "hss").orElseThrow();
         // FORMULAS.md §9.1 worked example (m_n 2, d 62.1166, b 20, class 6): f_fαT 8.5, f_fβT 9.5 µm
         ToleranceData tol = new ToleranceData(6, 8.5, 25, 7.0, 8.5, 11, 8.5, 9.5, 13);
-        Targets fromClass = Targets.of(QualityTargets.DEFAULTS, Optional.of(tol), d, Optional.of(row));
+        QualityLimits fromClass = QualityLimits.of(QualityTargets.DEFAULTS, Optional.of(tol), d, Optional.of(row));
         assertEquals(d.toleranceShare() * 9.5, fromClass.feedMarkUm(), 1e-12);
         assertEquals(d.toleranceShare() * 8.5, fromClass.envelopingUm(), 1e-12);
         assertEquals(row.maxChipThicknessMm(), fromClass.chipMm());
-        Targets fromTable = Targets.of(QualityTargets.DEFAULTS, Optional.empty(), d, Optional.empty());
+        QualityLimits fromTable = QualityLimits.of(QualityTargets.DEFAULTS, Optional.empty(), d, Optional.empty());
         assertEquals(d.feedMarkDepthUm(), fromTable.feedMarkUm());
         assertTrue(Double.isNaN(fromTable.chipMm()));
-        Targets given = Targets.of(new QualityTargets(OptionalDouble.of(2), OptionalDouble.of(1), OptionalDouble.of(0.1)),
+        QualityLimits given = QualityLimits.of(new QualityTargets(OptionalDouble.of(2), OptionalDouble.of(1), OptionalDouble.of(0.1)),
                 Optional.of(tol), d, Optional.of(row));
         assertEquals(2, given.feedMarkUm());
         assertEquals(1, given.envelopingUm());

@@ -13,7 +13,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 class FieldCheckTest {
     private static Field field(String key) {
-        return Fields.find(key).orElseThrow();
+        return StepFields.find(key).orElseThrow();
     }
 
     private static Optional<String> code(String key, String text) {
@@ -55,7 +55,7 @@ class FieldCheckTest {
     @Test
     void everyFieldKeyBelongsToItsOwnStep() {
         for (StepId step : StepId.values()) {
-            Fields.of(step).forEach(f -> assertEquals(step, Fields.stepOf(f.key()), f.key()));
+            StepFields.of(step).forEach(f -> assertEquals(step, StepFields.stepOf(f.key()), f.key()));
         }
     }
 }

@@ -237,7 +237,7 @@ class StepSessionTest {
         Transition machine = w.next(true);
         assertFalse(machine.moved());
         assertTrue(machine.findings().stream().anyMatch(f -> f.code().equals("MACHINE_NO_HELIX")), machine::toString);
-        assertTrue(w.answer(Fields.MACHINE, "ottmere-tl40").isEmpty());
+        assertTrue(w.answer(StepFields.MACHINE, "ottmere-tl40").isEmpty());
         Transition other = w.next(true);
         assertTrue(other.moved(), other::toString);
     }
@@ -248,9 +248,9 @@ class StepSessionTest {
         w.next(true);
         w.next(true);
         var machine = w.view().fields().get(0);
-        assertEquals(Fields.MACHINE, machine.key());
+        assertEquals(StepFields.MACHINE, machine.key());
         assertTrue(machine.choices().containsAll(List.of("varrow-sl16", "ottmere-tl40")), machine::toString);
-        assertEquals("WIZARD_NOT_A_CHOICE", w.answer(Fields.MACHINE, "no-such-machine").get(0).code());
+        assertEquals("WIZARD_NOT_A_CHOICE", w.answer(StepFields.MACHINE, "no-such-machine").get(0).code());
     }
 
     /**

@@ -3,8 +3,8 @@ package org.hobwright.post;
 import org.hobwright.api.job.QualityTargets;
 
 /** Questions about a cycle's quality targets that the writers share. */
-public final class Targets {
-    private Targets() {
+public final class TargetsGiven {
+    private TargetsGiven() {
     }
 
     /**

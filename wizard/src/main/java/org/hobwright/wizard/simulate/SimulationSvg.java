@@ -11,12 +11,12 @@ import org.hobwright.api.cycle.Point;
  * and (when a feed is known) the feed marks in the axial section of the root. Deterministic output
  * (fixed number format, {@link Locale#ROOT}).
  */
-public final class ToothSpaceSvg {
+public final class SimulationSvg {
     private static final int MAX_POINTS = 2500;
     private static final double PANEL = 360;
     private static final double MARGIN = 40;
 
-    private ToothSpaceSvg() {
+    private SimulationSvg() {
     }
 
     /**

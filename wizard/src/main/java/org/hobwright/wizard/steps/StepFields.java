@@ -28,7 +28,7 @@ import org.hobwright.wizard.geometry.ToothSystem;
  * contributor guide). Ranges here are only what a value can be at all; whether the numbers fit
  * together is for the checks.
  */
-public final class Fields {
+public final class StepFields {
     /** Key of the machine choice. */
     public static final String MACHINE = "machine";
     /** Key of the cycle template choice. */
@@ -169,7 +169,7 @@ public final class Fields {
     private static final Map<StepId, List<Field>> BY_STEP = Map.of(StepId.GEAR, GEAR, StepId.CUTTER, CUTTER,
             StepId.MACHINE, MACHINE_FIELDS, StepId.CYCLE, CYCLE, StepId.REVIEW, List.of());
 
-    private Fields() {
+    private StepFields() {
     }
 
     /** The fields of a step, in the order they are asked. */

@@ -16,7 +16,7 @@ import tools.jackson.databind.node.ObjectNode;
  * turning every bad value into a finding (never an exception). Missing optional objects read as
  * empty, so their keys take their defaults.
  */
-final class Fields {
+final class FieldReader {
     /** Metres per foot: 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959). */
     static final double M_PER_FT = 0.3048;
 
@@ -26,7 +26,7 @@ final class Fields {
     private final List<Finding> out;
     private final Units units;
 
-    Fields(JsonDocument doc, JsonNode node, String path, List<Finding> out, Units units) {
+    FieldReader(JsonDocument doc, JsonNode node, String path, List<Finding> out, Units units) {
         this.doc = doc;
         this.node = node == null ? doc.root().objectNode() : node;
         this.path = path;
@@ -35,19 +35,19 @@ final class Fields {
     }
 
     /** The fields of the root object. */
-    static Fields root(JsonDocument doc, List<Finding> out, Units units) {
-        return new Fields(doc, doc.root(), "", out, units);
+    static FieldReader root(JsonDocument doc, List<Finding> out, Units units) {
+        return new FieldReader(doc, doc.root(), "", out, units);
     }
 
     /** The fields of a child object (empty when absent). */
-    Fields child(String key) {
+    FieldReader child(String key) {
         JsonNode c = node.get(key);
-        return new Fields(doc, c != null && c.isObject() ? c : null, path(key), out, units);
+        return new FieldReader(doc, c != null && c.isObject() ? c : null, path(key), out, units);
     }
 
     /** The same object read with another length unit. */
-    Fields withUnits(Units other) {
-        return new Fields(doc, node, path, out, other);
+    FieldReader withUnits(Units other) {
+        return new FieldReader(doc, node, path, out, other);
     }
 
     Units units() {

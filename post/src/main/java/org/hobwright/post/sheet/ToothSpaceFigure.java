@@ -12,7 +12,7 @@ import org.hobwright.api.cycle.SimulationData;
  * outline beside the true involute. Gear centre below the picture, tooth space centred on the
  * vertical, as in {@link SimulationData}. Drawing only: every value comes from the cycle.
  */
-final class ToothSpaceSvg {
+final class ToothSpaceFigure {
 
     private static final double W = 480;
     private static final double H = 250;
@@ -24,7 +24,7 @@ final class ToothSpaceSvg {
     private final double cy;
     private final double k;
 
-    private ToothSpaceSvg(double halfWidth, double yLow, double yHigh) {
+    private ToothSpaceFigure(double halfWidth, double yLow, double yHigh) {
         this.k = Math.min((W - 2 * PAD) / (2 * halfWidth), (H - 2 * PAD) / (yHigh - yLow));
         this.cx = 0;
         this.cy = (yLow + yHigh) / 2;
@@ -45,7 +45,7 @@ final class ToothSpaceSvg {
         double theta = 1.5 * Math.PI / teeth;
         double halfWidth = ra * Math.sin(Math.min(theta, Math.PI / 2));
         double margin = 0.08 * (ra - rf * Math.cos(theta));
-        ToothSpaceSvg d = new ToothSpaceSvg(halfWidth, rf * Math.cos(theta) - margin, ra + margin);
+        ToothSpaceFigure d = new ToothSpaceFigure(halfWidth, rf * Math.cos(theta) - margin, ra + margin);
         Markup m = new Markup();
         m.open("svg", "xmlns", "http://www.w3.org/2000/svg", "viewBox", "0 0 " + n(W) + " " + n(H + LEGEND),
                 "width", "100%", "role", "img", "aria-label", "tooth space with tip, reference, base and root circles");

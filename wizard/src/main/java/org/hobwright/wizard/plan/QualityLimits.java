@@ -21,7 +21,7 @@ import org.hobwright.api.job.QualityTargets;
  * @param chipMm              chip-thickness limit, mm, NaN when unknown
  * @param chipSource          where it came from
  */
-public record Targets(double feedMarkUm, String feedMarkSource, double envelopingUm, String envelopingSource,
+public record QualityLimits(double feedMarkUm, String feedMarkSource, double envelopingUm, String envelopingSource,
                       double chipMm, String chipSource) {
 
     /**
@@ -32,7 +32,7 @@ public record Targets(double feedMarkUm, String feedMarkSource, double envelopin
      * @param defaults   the cutting-data file's defaults
      * @param row        the cutting-data row, when known
      */
-    public static Targets of(QualityTargets given, Optional<ToleranceData> tolerances, QualityDefaults defaults,
+    public static QualityLimits of(QualityTargets given, Optional<ToleranceData> tolerances, QualityDefaults defaults,
                              Optional<CuttingData> row) {
         double mark;
         String markSource;
@@ -69,7 +69,7 @@ public record Targets(double feedMarkUm, String feedMarkSource, double envelopin
             chip = row.get().maxChipThicknessMm();
             chipSource = PlanCodes.TABLE;
         }
-        return new Targets(mark, markSource, env, envSource, chip, chipSource);
+        return new QualityLimits(mark, markSource, env, envSource, chip, chipSource);
     }
 
     /** The limits as the api reports them (the chip limit empty when unknown). */
