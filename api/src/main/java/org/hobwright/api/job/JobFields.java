@@ -92,19 +92,18 @@ public final class JobFields {
                     + " negative thins the tooth for backlash."));
     public static final FieldDef GEAR_TOOTH_SYSTEM = add(FieldDef.of("gear.toothSystem", CHOICE, NONE)
             .choices(TOOTH_SYSTEMS).required(FieldDefault.standard("", "by the pitch: iso53-a for a module"
-                    + " (ISO 53:1998 profile A), agma-coarse below 20 diametral pitch (ANSI/AGMA 201.02),"
-                    + " agma-fine from 20 (AGMA 207.04)"))
+                    + " (ISO 53:1998 profile A), agma-coarse below 20 diametral pitch, agma-fine from 20"
+                    + " (the coarse- and fine-pitch ranges of AGMA 201.02 and 207.04, from memory)"))
             .text("Tooth system", "Basic rack the gear is cut to; 'custom' asks for the factors below."));
     public static final FieldDef GEAR_CUSTOM_ADDENDUM = add(FieldDef.of("gear.custom.addendum", NUMBER, NONE)
-            .range(0.3, 2).optional(FieldDefault.standard("1", "ISO 53:1998 profile A, h_aP = 1.0 m"))
-            .text("Custom addendum factor", "Addendum h_aP / m_n, only for the custom tooth system (required there)."));
+            .range(0.3, 2).required(FieldDefault.standard("1", "ISO 53:1998 profile A, h_aP = 1.0 m"))
+            .text("Custom addendum factor", "Addendum h_aP / m_n, only for the custom tooth system."));
     public static final FieldDef GEAR_CUSTOM_DEDENDUM = add(FieldDef.of("gear.custom.dedendum", NUMBER, NONE)
-            .range(0.3, 3).optional(FieldDefault.standard("1.25", "ISO 53:1998 profile A, h_fP = 1.25 m"))
-            .text("Custom dedendum factor", "Dedendum h_fP / m_n, only for the custom tooth system (required there)."));
+            .range(0.3, 3).required(FieldDefault.standard("1.25", "ISO 53:1998 profile A, h_fP = 1.25 m"))
+            .text("Custom dedendum factor", "Dedendum h_fP / m_n, only for the custom tooth system."));
     public static final FieldDef GEAR_CUSTOM_ROOT_RADIUS = add(FieldDef.of("gear.custom.rootRadius", NUMBER, NONE)
-            .range(0, 1).optional(FieldDefault.standard("0.38", "ISO 53:1998 profile A, ρ_fP = 0.38 m"))
-            .text("Custom root radius factor", "Root fillet radius ρ_fP / m_n, only for the custom tooth system"
-                    + " (required there)."));
+            .range(0, 1).required(FieldDefault.standard("0.38", "ISO 53:1998 profile A, ρ_fP = 0.38 m"))
+            .text("Custom root radius factor", "Root fillet radius ρ_fP / m_n, only for the custom tooth system."));
     public static final FieldDef GEAR_BLANK_DIAMETER = add(FieldDef.of("gear.blankDiameter", NUMBER, LENGTH)
             .range(FieldRange.POSITIVE).optional(FieldDefault.computed("the tip diameter"))
             .text("Blank diameter", "Diameter the blank is turned to; empty takes the tip diameter."));
@@ -161,7 +160,7 @@ public final class JobFields {
                     + " addendum"))
             .text("Hob reference diameter", "Pitch diameter of the hob, if known; empty derives it from the outside"
                     + " diameter."));
-    public static final FieldDef HOB_GASHES = add(FieldDef.of("hob.gashes", INTEGER, NONE).range(1, 100).mustGive()
+    public static final FieldDef HOB_GASHES = add(FieldDef.of("hob.gashes", INTEGER, NONE).range(1, 1000).mustGive()
             .text("Number of gashes", "Flutes of the hob."));
     public static final FieldDef HOB_LENGTH = add(FieldDef.of("hob.length", NUMBER, LENGTH)
             .range(FieldRange.POSITIVE).mustGive().text("Hob length", "Usable length of the hob."));

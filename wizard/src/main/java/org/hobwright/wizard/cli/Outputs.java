@@ -85,6 +85,11 @@ final class Outputs {
 
     /** Every writer's files for every job; a file name written twice is an error. */
     Produced produce(List<JobInput> jobs) {
+        return produce(jobs, Map.of());
+    }
+
+    /** Every writer's files for every job, then {@code extra} files (name → text) of the caller's. */
+    Produced produce(List<JobInput> jobs, Map<String, String> extra) {
         Map<String, String> files = new LinkedHashMap<>();
         List<Finding> findings = new ArrayList<>(lookupProblems());
         if (writers().isEmpty()) {
@@ -110,6 +115,7 @@ final class Outputs {
                 }
             }
         }
+        files.putAll(extra);
         return new Produced(files, findings);
     }
 

@@ -34,7 +34,7 @@ record CuttingDataReader(String source, CuttingDataTable fallback) {
         }
         Units units = units(text(root, "units"));
         double mmPerUnit = units.toMm(1);
-        double speedFactor = units == Units.MM ? 1.0 : 0.3048; // ft/min to m/min
+        double speedFactor = units.cuttingSpeedToMPerMin(1); // ft/min to m/min in inch tables
         CuttingDataTable base = fallback != null ? fallback : NONE;
         QualityDefaults quality = root.has("qualityDefaults") ? quality(root.get("qualityDefaults"))
                 : base.qualityDefaults();

@@ -17,7 +17,8 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The wizard module's {@link WizardFactory}, found with {@link java.util.ServiceLoader}. Sessions
- * start from the built-in sample job (an invented metering-pump gear) or from a given job.
+ * start blank (only the defaults of a standard or the trade's convention filled in, see
+ * {@link Answers#blank()}) or from a given job.
  */
 public final class StepWizardFactory implements WizardFactory {
     /** Resource of the built-in sample job whose values are the defaults. */
@@ -30,7 +31,7 @@ public final class StepWizardFactory implements WizardFactory {
 
     @Override
     public Wizard start(Map<String, String> options) {
-        return new StepSession(services(options), sampleAnswers());
+        return new StepSession(services(options), Answers.blank());
     }
 
     /** {@inheritDoc} A machine the library does not hold is kept inline. */
@@ -41,7 +42,7 @@ public final class StepWizardFactory implements WizardFactory {
         return new StepSession(services, Answers.fromTree(JobWriter.jobTree(job, job.units(), known)));
     }
 
-    /** The answers of the built-in sample job. */
+    /** The answers of the built-in sample job (an invented metering-pump gear). */
     public static Answers sampleAnswers() {
         try (InputStream in = StepWizardFactory.class.getClassLoader().getResourceAsStream(SAMPLE)) {
             if (in == null) {

@@ -14,7 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 import org.hobwright.api.wizard.StepId;
-import org.hobwright.wizard.steps.Field;
+import org.hobwright.api.job.FieldDef;
 import org.hobwright.wizard.steps.StepFields;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -46,7 +46,7 @@ class WizardEndToEndTest {
     private static List<String> step(StepId id, java.util.Map<String, List<String>> answers) {
         List<String> lines = new ArrayList<>();
         boolean drawingAsked = false;
-        for (Field f : StepFields.of(id)) {
+        for (FieldDef f : StepFields.of(id)) {
             if (f.key().startsWith("gear.custom.")) {
                 continue;
             }
@@ -107,7 +107,7 @@ class WizardEndToEndTest {
     void customFactorsAndDrawingValuesAreAskedOnlyWhenTheyApply() {
         List<String> in = new ArrayList<>();
         boolean drawingAsked = false;
-        for (Field f : StepFields.of(StepId.GEAR)) {
+        for (FieldDef f : StepFields.of(StepId.GEAR)) {
             switch (f.key()) {
                 case "gear.toothSystem" -> in.add("custom");
                 case "gear.custom.addendum" -> in.add("1");
