@@ -9,9 +9,6 @@ import org.hobwright.api.spi.WriteResult;
 /** Findings the writers share. */
 public final class PostFindings {
 
-    /** Source text of the post module's own findings. */
-    public static final String SOURCE = "Hobwright post";
-
     private PostFindings() {
     }
 
@@ -25,17 +22,17 @@ public final class PostFindings {
      */
     public static Optional<WriteResult> refusal(HobCycle cycle, String writer) {
         if (cycle.hasErrors()) {
-            return Optional.of(WriteResult.refused(List.of(Finding.error("POST_CYCLE_HAS_ERRORS", "job",
+            return Optional.of(WriteResult.refused(List.of(PostCode.POST_CYCLE_HAS_ERRORS.at("job",
                     "The cycle has " + cycle.findings().stream().filter(Finding::isError).count()
                             + " error finding(s); the " + writer + " writer writes nothing for it",
-                    "fix the errors listed for the job, then plan again", SOURCE))));
+                    "fix the errors listed for the job, then plan again"))));
         }
         if (cycle.steps().isEmpty() || cycle.setup().isEmpty() || cycle.summary().isEmpty()
                 || cycle.gear().isEmpty()) {
-            return Optional.of(WriteResult.refused(List.of(Finding.error("POST_CYCLE_INCOMPLETE", "job",
+            return Optional.of(WriteResult.refused(List.of(PostCode.POST_CYCLE_INCOMPLETE.at("job",
                     "The cycle has no steps, setup values, gear data or summary; the " + writer
                             + " writer needs all of them",
-                    "plan the job again; report a planner that returns such a cycle without an error", SOURCE))));
+                    "plan the job again; report a planner that returns such a cycle without an error"))));
         }
         return Optional.empty();
     }

@@ -43,10 +43,10 @@ import org.hobwright.api.spi.WriteContext;
  * numbers are written out here, each with its source:
  * <ul>
  *   <li>spur metric: m 2, z 20, 20°, hob Ø70 — FORMULAS.md §1.5 (spur example), §3.1 (W₃ = 2 × 7.66044,
- *       table value S8), §3.2 (M = 44.9293 over 3.5 mm pins), §4.1 (γ = 1.76323°), §5.1 (n₀ = 272.837),
+ *       table value, from memory; brute-force check in the wizard's tests), §3.2 (M = 44.9293 over 3.5 mm pins), §4.1 (γ = 1.76323°), §5.1 (n₀ = 272.837),
  *       §6.1 (feed marks at f 1.5: 2.74838 / 8.03571 µm), §7.1 (E = 17.1683);</li>
- *   <li>spur inch: 32 T, 32 DP, 20° fine pitch — FORMULAS.md §1.5 (fine-pitch dedendum 0.0395 in, S4),
- *       §3.2 (over wires 34.4130 in for 1 DP scaled to 32 DP, S6);</li>
+ *   <li>spur inch: 32 T, 32 DP, 20° fine pitch — FORMULAS.md §1.5 (fine-pitch dedendum 0.0395 in, Mott Table 8-4),
+ *       §3.2 (over wires 34.4130 in for 1 DP scaled to 32 DP, Machinery's Handbook);</li>
  *   <li>helical metric: m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A — FORMULAS.md §1.5 table, §2.2, §3.1–3.2,
  *       §4.2 (η = 13.2368° = 13° 14′ 12.4″), §5.1–5.2 (n₂ = 9.09457, 0.494308°/mm), §6.1–6.2, §7.1–7.3
  *       (E 18.1330, U 2.83098, t_h = 3.29603 min), §8.1 (h_max 0.127288), §9.1 (class 6 tolerances).</li>
@@ -140,7 +140,7 @@ public final class Fixtures {
         // d 40, d_b 37.5877, d_a 44, d_f 35 (FORMULAS.md §1.5 spur); s_n = π m / 2; s_a 1.38976 (computed, §2.2)
         GearData gd = new GearData(2, 20, 40, 37.58770483143634, 44, 35, 2, 2.5, 4.5, 0, OptionalDouble.empty(),
                 Math.PI, 1.3897599691424858, 20);
-        // W₃ 15.32088 (S8 ×2), contact Ø computed §3.1, pins 3.5 → 44.9293 (§3.2), chordal computed §3.3
+        // W₃ 15.32088 (twice the m 1 table value), contact Ø computed §3.1, pins 3.5 → 44.9293 (§3.2), chordal computed §3.3
         InspectionData insp = new InspectionData(3, 15.32087875196761, 40.59020670343618, 3.5, 44.9293, false,
                 3.1383638291137976, 2.0616533253374407);
         // γ 1.76323°, spur RH hob η = −γ (§4.2); the Ottmere counts the other way (positiveIsRight false)
@@ -175,10 +175,10 @@ public final class Fixtures {
                 varrow(), settings(80, 0.02 * in, 0.04 * in, new QualityTargets(OptionalDouble.of(2.0),
                 OptionalDouble.empty(), OptionalDouble.empty())));
         double m = in / 32;
-        // D 1.000 in, OD 1.0625 in, root 0.921 in, whole depth 0.07075 in (FORMULAS.md §1.5, S4); d_b computed
+        // D 1.000 in, OD 1.0625 in, root 0.921 in, whole depth 0.07075 in (FORMULAS.md §1.5, Mott Table 8-4); d_b computed
         GearData gd = new GearData(m, 20, 1.0 * in, 23.868192567962073, 1.0625 * in, 0.921 * in, m, 0.0395 * in,
                 0.07075 * in, 0, OptionalDouble.empty(), Math.PI * m / 2, 0.5898139405107246, 32);
-        // k 4, W₄ computed (§3.1); wire 1.728/P and 34.4130/32 in over wires (S6, §3.2)
+        // k 4, W₄ computed (§3.1); wire 1.728/P and 34.4130/32 in over wires (Machinery's Handbook, FORMULAS.md §3.2)
         InspectionData insp = new InspectionData(4, 8.557130844593555, 25.355770640089293, 1.728 / 32 * in,
                 34.4130 / 32 * in, false, 1.2463189279164175, 0.8090477061943104);
         // γ = asin(m / d_m0), d_m0 = OD − 2 × 0.0395 in (§4.1, computed); η = −γ; holder reads 5′ steps

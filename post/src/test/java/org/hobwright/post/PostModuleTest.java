@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import org.hobwright.api.spi.CycleWriter;
 import org.hobwright.api.spi.Providers;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import org.junit.jupiter.api.Test;
 
 class PostModuleTest {

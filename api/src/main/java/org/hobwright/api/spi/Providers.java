@@ -20,9 +20,6 @@ import org.hobwright.api.check.Finding;
  */
 public final class Providers {
 
-    /** Source text of the findings this class reports. */
-    private static final String SOURCE = "Hobwright SPI";
-
     private Providers() {
     }
 
@@ -63,25 +60,25 @@ public final class Providers {
                 }
                 provider = it.next();
             } catch (ServiceConfigurationError e) {
-                problems.add(Finding.warning("SPI_PROVIDER_BROKEN", "spi." + type.getSimpleName(),
+                problems.add(SpiCode.SPI_PROVIDER_BROKEN.at("spi." + type.getSimpleName(),
                         "A " + type.getSimpleName() + " provider could not be loaded: " + e.getMessage(),
-                        "remove or rebuild the jar that declares it", SOURCE));
+                        "remove or rebuild the jar that declares it"));
                 continue;
             }
             int declared;
             try {
                 declared = version.applyAsInt(provider);
             } catch (RuntimeException e) {
-                problems.add(Finding.warning("SPI_PROVIDER_BROKEN", "spi." + type.getSimpleName(),
+                problems.add(SpiCode.SPI_PROVIDER_BROKEN.at("spi." + type.getSimpleName(),
                         provider.getClass().getName() + " failed when asked for its SPI version: " + e,
-                        "remove or rebuild the jar that declares it", SOURCE));
+                        "remove or rebuild the jar that declares it"));
                 continue;
             }
             if (declared != Spi.VERSION) {
-                problems.add(Finding.warning("SPI_VERSION_MISMATCH", "spi." + type.getSimpleName(),
+                problems.add(SpiCode.SPI_VERSION_MISMATCH.at("spi." + type.getSimpleName(),
                         provider.getClass().getName() + " was built for SPI version " + declared
                                 + ", this api is version " + Spi.VERSION + "; it was skipped",
-                        "use a build of that provider for SPI version " + Spi.VERSION, SOURCE));
+                        "use a build of that provider for SPI version " + Spi.VERSION));
                 continue;
             }
             found.add(provider);

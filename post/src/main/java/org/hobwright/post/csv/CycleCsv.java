@@ -1,5 +1,6 @@
 package org.hobwright.post.csv;
 
+import org.hobwright.post.PostCode;
 import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -11,7 +12,7 @@ import java.util.Map;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.Rotation;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import tools.jackson.core.FormatSchema;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonGenerator;
@@ -34,7 +35,6 @@ public final class CycleCsv {
     /** The column-set version written in every row. */
     public static final int VERSION = 1;
 
-    private static final String SOURCE = "Hobwright cycle CSV, post/README.md";
 
     /** Writing takes the generator alone: an object mapper is only built to read. */
     private static final CsvFactory GENERATORS = CsvFactory.builder()
@@ -205,7 +205,7 @@ public final class CycleCsv {
     }
 
     private static Finding problem(String field, String message) {
-        return Finding.error("CSV_UNREADABLE", field, "Cycle CSV " + message,
-                "write the file with Hobwright's cycle CSV writer, version " + VERSION, SOURCE);
+        return PostCode.CSV_UNREADABLE.at(field, "Cycle CSV " + message,
+                "write the file with Hobwright's cycle CSV writer, version " + VERSION);
     }
 }

@@ -1,5 +1,6 @@
 package org.hobwright.post.nc;
 
+import org.hobwright.post.PostCode;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
@@ -9,7 +10,7 @@ import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.post.nc.DialectFile.RotationWords;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.StreamReadFeature;
 import tools.jackson.databind.DeserializationFeature;
@@ -33,7 +34,6 @@ public final class DialectLoader {
     /** Largest count of decimals a dialect may ask for. */
     static final int MAX_DECIMALS = 6;
 
-    private static final String SOURCE = "Hobwright dialect format, post/README.md";
 
     /**
      * The object mapper for dialect files, built on first use: a dialect in the plain form is bound
@@ -88,13 +88,13 @@ public final class DialectLoader {
             int line = e.getLocation() != null && e.getLocation().getLineNr() > 0 ? e.getLocation().getLineNr()
                     : lines.line(pointer);
             String path = "dialect" + pointer.replace('/', '.');
-            return new Loaded(Optional.empty(), List.of(Finding.error("NC_DIALECT_UNREADABLE", path,
+            return new Loaded(Optional.empty(), List.of(PostCode.NC_DIALECT_UNREADABLE.at(path,
                     fileName + " line " + line + ": " + JsonTrees.message(e),
-                    "correct the dialect file at that line (post/README.md describes every key)", SOURCE)));
+                    "correct the dialect file at that line (post/README.md describes every key)")));
         }
         if (file == null) {
-            return new Loaded(Optional.empty(), List.of(Finding.error("NC_DIALECT_UNREADABLE", "dialect",
-                    fileName + " line 1: the file is empty", "write a dialect object", SOURCE)));
+            return new Loaded(Optional.empty(), List.of(PostCode.NC_DIALECT_UNREADABLE.at("dialect",
+                    fileName + " line 1: the file is empty", "write a dialect object")));
         }
         return new Check(fileName, lines).dialect(file);
     }
@@ -126,11 +126,11 @@ public final class DialectLoader {
 
         Loaded dialect(DialectFile f) {
             if (!FORMAT.equals(f.format())) {
-                error("NC_DIALECT_FORMAT", "/format", "\"format\" must be \"" + FORMAT + "\", was "
+                error(PostCode.NC_DIALECT_FORMAT, "/format", "\"format\" must be \"" + FORMAT + "\", was "
                         + quoted(f.format()), "put \"format\": \"" + FORMAT + "\" in the file");
             }
             if (f.version() == null || f.version() != VERSION) {
-                error("NC_DIALECT_VERSION", "/version", "\"version\" must be " + VERSION + ", was " + f.version(),
+                error(PostCode.NC_DIALECT_VERSION, "/version", "\"version\" must be " + VERSION + ", was " + f.version(),
                         "this build reads dialect version " + VERSION + "; update Hobwright or the file");
             }
             String name = text(f.name(), "/name");
@@ -171,7 +171,7 @@ public final class DialectLoader {
             if ("crlf".equals(value)) {
                 return "\r\n";
             }
-            error("NC_DIALECT_BAD_VALUE", "/lineEnding", "\"lineEnding\" must be \"lf\" or \"crlf\", was "
+            error(PostCode.NC_DIALECT_BAD_VALUE, "/lineEnding", "\"lineEnding\" must be \"lf\" or \"crlf\", was "
                     + quoted(value), "write \"lf\" or \"crlf\" as the control expects");
             return "\n";
         }
@@ -218,7 +218,7 @@ public final class DialectLoader {
             if (a.sign() != null || needsSign) {
                 Integer s = a.sign();
                 if (s == null || (s != 1 && s != -1)) {
-                    error("NC_DIALECT_BAD_VALUE", pointer + "/sign", "\"sign\" must be 1 or -1, was " + s,
+                    error(PostCode.NC_DIALECT_BAD_VALUE, pointer + "/sign", "\"sign\" must be 1 or -1, was " + s,
                             "write 1 when the axis counts like Hobwright's value, -1 when it counts the other way");
                 } else {
                     sign = s;
@@ -226,7 +226,7 @@ public final class DialectLoader {
             }
             boolean diameter = a.diameter() != null && a.diameter();
             if (diameter && !pointer.endsWith("radial")) {
-                error("NC_DIALECT_BAD_VALUE", pointer + "/diameter", "only the radial axis can be programmed as a "
+                error(PostCode.NC_DIALECT_BAD_VALUE, pointer + "/diameter", "only the radial axis can be programmed as a "
                         + "diameter", "remove \"diameter\" from this axis");
             }
             return new Dialect.Axis(letter, sign, diameter);
@@ -252,7 +252,7 @@ public final class DialectLoader {
                 String pointer = "/templates/" + e.getKey();
                 Optional<TemplateKey> key = TemplateKey.byKey(e.getKey());
                 if (key.isEmpty()) {
-                    error("NC_DIALECT_UNKNOWN_TEMPLATE", pointer, "unknown template \"" + e.getKey() + "\"",
+                    error(PostCode.NC_DIALECT_UNKNOWN_TEMPLATE, pointer, "unknown template \"" + e.getKey() + "\"",
                             "use one of the template names listed in post/README.md");
                     continue;
                 }
@@ -260,7 +260,7 @@ public final class DialectLoader {
             }
             for (TemplateKey k : TemplateKey.values()) {
                 if (k.required() && !raw.containsKey(k.key())) {
-                    error("NC_DIALECT_MISSING_TEMPLATE", "/templates", "required template \"" + k.key()
+                    error(PostCode.NC_DIALECT_MISSING_TEMPLATE, "/templates", "required template \"" + k.key()
                             + "\" is missing", "add \"" + k.key() + "\" to \"templates\"");
                 }
             }
@@ -272,7 +272,7 @@ public final class DialectLoader {
         private void needsAxis(Map<TemplateKey, List<LineTemplate>> templates, TemplateKey key, boolean axis,
                                String axisName) {
             if (templates.containsKey(key) && !axis) {
-                error("NC_DIALECT_BAD_VALUE", "/templates/" + key.key(), "template \"" + key.key()
+                error(PostCode.NC_DIALECT_BAD_VALUE, "/templates/" + key.key(), "template \"" + key.key()
                         + "\" needs \"axes\"." + axisName, "add \"" + axisName + "\": { \"letter\": ... } to \"axes\"");
             }
         }
@@ -280,7 +280,7 @@ public final class DialectLoader {
         private List<LineTemplate> templateLines(TemplateKey key, List<String> texts, String pointer) {
             List<LineTemplate> out = new ArrayList<>();
             if (texts == null) {
-                error("NC_DIALECT_BAD_VALUE", pointer, "template \"" + key.key() + "\" is null",
+                error(PostCode.NC_DIALECT_BAD_VALUE, pointer, "template \"" + key.key() + "\" is null",
                         "write a text, a list of texts, or [] for no block");
                 return out;
             }
@@ -288,7 +288,7 @@ public final class DialectLoader {
                 String p = pointer + "/" + i;
                 String t = texts.get(i);
                 if (t == null || t.isBlank()) {
-                    error("NC_DIALECT_BAD_VALUE", p, "template \"" + key.key() + "\" has a blank line",
+                    error(PostCode.NC_DIALECT_BAD_VALUE, p, "template \"" + key.key() + "\" has a blank line",
                             "remove the blank line (an empty list [] writes no block)");
                     continue;
                 }
@@ -297,8 +297,8 @@ public final class DialectLoader {
                 if (lt.isPresent()) {
                     out.add(lt.get());
                 } else {
-                    String code = problem.get(0).startsWith("unknown placeholder")
-                            ? "NC_DIALECT_UNKNOWN_PLACEHOLDER" : "NC_DIALECT_BAD_TEMPLATE";
+                    PostCode code = problem.get(0).startsWith("unknown placeholder")
+                            ? PostCode.NC_DIALECT_UNKNOWN_PLACEHOLDER : PostCode.NC_DIALECT_BAD_TEMPLATE;
                     error(code, p, "template \"" + key.key() + "\" (\"" + t + "\"): " + problem.get(0),
                             "use only " + allowedText(key) + " in \"" + key.key() + "\"");
                 }
@@ -320,7 +320,7 @@ public final class DialectLoader {
 
         private <T> T present(T value, String pointer) {
             if (value == null) {
-                error("NC_DIALECT_MISSING_KEY", pointer, "\"" + pointer.substring(pointer.lastIndexOf('/') + 1)
+                error(PostCode.NC_DIALECT_MISSING_KEY, pointer, "\"" + pointer.substring(pointer.lastIndexOf('/') + 1)
                         + "\" is missing", "add it (post/README.md describes every key)");
             }
             return value;
@@ -328,7 +328,7 @@ public final class DialectLoader {
 
         private String text(String value, String pointer) {
             if (present(value, pointer) != null && value.isBlank()) {
-                error("NC_DIALECT_BAD_VALUE", pointer, "\"" + leaf(pointer) + "\" must not be blank",
+                error(PostCode.NC_DIALECT_BAD_VALUE, pointer, "\"" + leaf(pointer) + "\" must not be blank",
                         "write the word the control expects");
             }
             return value == null ? "?" : value;
@@ -337,7 +337,7 @@ public final class DialectLoader {
         private String letters(String value, String pointer) {
             String v = text(value, pointer);
             if (value != null && !isAddressLetters(value)) {
-                error("NC_DIALECT_BAD_VALUE", pointer, "\"" + leaf(pointer) + "\" must be 1 to 3 letters, was "
+                error(PostCode.NC_DIALECT_BAD_VALUE, pointer, "\"" + leaf(pointer) + "\" must be 1 to 3 letters, was "
                         + quoted(value), "write the address letter(s) the control uses");
             }
             return v;
@@ -362,7 +362,7 @@ public final class DialectLoader {
                 return min;
             }
             if (value < min || value > max) {
-                error("NC_DIALECT_BAD_NUMBER", pointer, "\"" + leaf(pointer) + "\" must be a whole number from "
+                error(PostCode.NC_DIALECT_BAD_NUMBER, pointer, "\"" + leaf(pointer) + "\" must be a whole number from "
                         + min + " to " + max + ", was " + value, "write a value in that range");
             }
             return value;
@@ -372,9 +372,9 @@ public final class DialectLoader {
             return present(value, pointer) != null && value;
         }
 
-        private void error(String code, String pointer, String message, String fix) {
-            findings.add(Finding.error(code, "dialect" + pointer.replace('/', '.'),
-                    fileName + " line " + lines.line(pointer) + ": " + message, fix, SOURCE));
+        private void error(PostCode code, String pointer, String message, String fix) {
+            findings.add(code.at("dialect" + pointer.replace('/', '.'),
+                    fileName + " line " + lines.line(pointer) + ": " + message, fix));
         }
 
         private static String leaf(String pointer) {

@@ -2,7 +2,7 @@ package org.hobwright.post.nc;
 
 import java.util.HashMap;
 import java.util.Map;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;

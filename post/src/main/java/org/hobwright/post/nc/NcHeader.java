@@ -12,7 +12,7 @@ import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import org.hobwright.post.JobUnits;
 
 /**

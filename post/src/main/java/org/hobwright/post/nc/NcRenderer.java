@@ -1,5 +1,6 @@
 package org.hobwright.post.nc;
 
+import org.hobwright.post.PostCode;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
@@ -7,7 +8,7 @@ import java.util.Map;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 
 /**
  * Turns the program model into blocks with the dialect's templates, words, decimals and line
@@ -15,7 +16,6 @@ import org.hobwright.post.text.Decimal;
  */
 final class NcRenderer {
 
-    private static final String SOURCE = "Hobwright dialect format, post/README.md";
 
     private final Dialect d;
     private final HobJob job;
@@ -53,11 +53,11 @@ final class NcRenderer {
                 n += d.numbering().get().step();
             }
             if (line.length() > d.maxLineLength()) {
-                findings.add(Finding.error("NC_LINE_TOO_LONG", "dialect.templates." + b.from().key(),
+                findings.add(PostCode.NC_LINE_TOO_LONG.at("dialect.templates." + b.from().key(),
                         d.name() + " line " + d.lines().of(b.from()) + ": template \"" + b.from().key()
                                 + "\" gives a block of " + line.length() + " characters, the dialect allows "
                                 + d.maxLineLength() + ": " + line,
-                        "shorten the template or raise maxLineLength to what the control accepts", SOURCE));
+                        "shorten the template or raise maxLineLength to what the control accepts"));
             }
             out.add(line);
         }

@@ -1,5 +1,6 @@
 package org.hobwright.post.nc;
 
+import org.hobwright.post.PostCode;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
@@ -27,7 +28,6 @@ public final class NcWriter implements CycleWriter {
     private final Map<String, DialectLoader.Loaded> dialects = new ConcurrentHashMap<>();
 
 
-    private static final String SOURCE = "Hobwright dialect format, post/README.md";
 
     @Override
     public String id() {
@@ -53,9 +53,9 @@ public final class NcWriter implements CycleWriter {
         String dialectName = dialectName(context);
         Optional<String> json = context.resource(WriteContext.DIALECT);
         if (json.isEmpty()) {
-            return WriteResult.refused(List.of(Finding.error("NC_DIALECT_MISSING", "machine.dialect",
+            return WriteResult.refused(List.of(PostCode.NC_DIALECT_MISSING.at("machine.dialect",
                     "No dialect text was given for \"" + dialectName + "\"; the NC program needs one",
-                    "save the dialect file " + dialectName + ".json in the library's dialects folder", SOURCE)));
+                    "save the dialect file " + dialectName + ".json in the library's dialects folder")));
         }
         DialectLoader.Loaded loaded = dialect(dialectName, json.get());
         if (loaded.dialect().isEmpty()) {
@@ -125,11 +125,10 @@ public final class NcWriter implements CycleWriter {
         List<Finding> out = new ArrayList<>();
         for (TemplateKey k : needed) {
             if (dialect.template(k).isEmpty()) {
-                out.add(Finding.error("NC_DIALECT_MISSING_TEMPLATE", "dialect.templates", dialect.name() + " line "
+                out.add(PostCode.NC_DIALECT_MISSING_TEMPLATE.at("dialect.templates", dialect.name() + " line "
                         + dialect.lines().templates() + ": the cycle needs template \"" + k.key()
                         + "\", which the dialect does not have",
-                        "add \"" + k.key() + "\" to \"templates\" with the words from the control builder's manual",
-                        SOURCE));
+                        "add \"" + k.key() + "\" to \"templates\" with the words from the control builder's manual"));
             }
         }
         return out;

@@ -1,5 +1,6 @@
 package org.hobwright.post.nc;
 
+import org.hobwright.post.PostCode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -24,8 +25,6 @@ final class SafetyCheck {
 
     /** Slack for comparing diameters that went through arithmetic, mm. */
     private static final double EPS_MM = 1e-9;
-
-    private static final String SOURCE = "Hobwright NC safety invariants (post/README.md, safety)";
 
     private SafetyCheck() {
     }
@@ -53,28 +52,28 @@ final class SafetyCheck {
             } else if (op instanceof NcOp.Fixed f && f.key() == TemplateKey.SYNC_OFF) {
                 synced = false;
             } else if (op instanceof NcOp.Fixed f && f.key() == TemplateKey.SPINDLES_STOP && synced) {
-                out.add(error("NC_SAFETY_STOP_WHILE_SYNCED", "cycle.steps", "operation " + index
+                out.add(error(PostCode.NC_SAFETY_STOP_WHILE_SYNCED, "cycle.steps", "operation " + index
                         + " stops the spindles while they are still synchronised",
                         "switch the synchronisation off before the spindles stop"));
             } else if (op instanceof NcOp.Fixed f && f.key() == TemplateKey.PROGRAM_END && synced) {
-                out.add(error("NC_SAFETY_SYNC_LEFT_ON", "cycle.steps",
+                out.add(error(PostCode.NC_SAFETY_SYNC_LEFT_ON, "cycle.steps",
                         "the program ends with the spindles still synchronised",
                         "switch the synchronisation off and stop the spindles before the end"));
             } else if (op instanceof NcOp.Move mv && !mv.rapid() && mv.cutting()) {
                 if (!synced) {
-                    out.add(error("NC_SAFETY_CUT_WITHOUT_SYNC", "cycle.steps", "cutting move " + index
+                    out.add(error(PostCode.NC_SAFETY_CUT_WITHOUT_SYNC, "cycle.steps", "cutting move " + index
                             + " comes before the synchronisation is on",
                             "switch the synchronisation on before the first cutting move"));
                 }
                 if (mv.diameterMm() < finalDiameterMm - EPS_MM) {
-                    out.add(error("NC_SAFETY_BELOW_ROOT", "cycle.steps", String.format(Locale.ROOT,
+                    out.add(error(PostCode.NC_SAFETY_BELOW_ROOT, "cycle.steps", String.format(Locale.ROOT,
                             "cutting move %d goes to diameter %.4f mm, below the final root diameter %.4f mm",
                             index, mv.diameterMm(), finalDiameterMm),
                             "plan the cycle again; no cut may go below the final infeed diameter"));
                 }
                 double rate = mv.feedMmPerRev() * workRpm;
                 if (rate > m.maxFeedMmPerMin() + EPS_MM) {
-                    out.add(error("NC_SAFETY_FEED_RATE", "machine.maxFeed", String.format(Locale.ROOT,
+                    out.add(error(PostCode.NC_SAFETY_FEED_RATE, "machine.maxFeed", String.format(Locale.ROOT,
                             "cutting move %d feeds at %.3f mm/min, above the machine's %.3f mm/min",
                             index, rate, m.maxFeedMmPerMin()), "lower the feed or the speed"));
                 }
@@ -85,27 +84,27 @@ final class SafetyCheck {
 
     private static void speeds(CycleStep.SyncOn s, HobJob job, int index, List<Finding> out) {
         MachineProfile m = job.machine();
-        within("NC_SAFETY_HOB_SPEED", "machine.hobSpindle", "hob", s.hobRpm(), m.hobMinRpm(), m.hobMaxRpm(),
+        within(PostCode.NC_SAFETY_HOB_SPEED, "machine.hobSpindle", "hob", s.hobRpm(), m.hobMinRpm(), m.hobMaxRpm(),
                 index, out);
-        within("NC_SAFETY_WORK_SPEED", "machine.workSpindle", "work", s.workRpm(), m.workMinRpm(),
+        within(PostCode.NC_SAFETY_WORK_SPEED, "machine.workSpindle", "work", s.workRpm(), m.workMinRpm(),
                 m.workMaxRpm(), index, out);
         job.hob().maxRpm().ifPresent(max -> {
             if (s.hobRpm() > max) {
-                out.add(error("NC_SAFETY_HOB_SPEED", "hob.maxRpm", String.format(Locale.ROOT,
+                out.add(error(PostCode.NC_SAFETY_HOB_SPEED, "hob.maxRpm", String.format(Locale.ROOT,
                         "operation %d runs the hob at %.1f rpm, above the hob maker's limit %.1f rpm",
                         index, s.hobRpm(), max), "lower the cutting speed"));
             }
         });
         double ratio = (double) s.hobTurns() / s.workTurns();
         if (ratio > m.maxSyncRatio()) {
-            out.add(error("NC_SAFETY_SYNC_RATIO", "machine.maxSyncRatio", String.format(Locale.ROOT,
+            out.add(error(PostCode.NC_SAFETY_SYNC_RATIO, "machine.maxSyncRatio", String.format(Locale.ROOT,
                     "operation %d asks for a ratio of %d:%d, above the machine's largest %.1f:1",
                     index, s.hobTurns(), s.workTurns(), m.maxSyncRatio()),
                     "use a multi-start hob or another machine"));
         }
     }
 
-    private static void within(String code, String field, String spindle, double rpm, double min, double max,
+    private static void within(PostCode code, String field, String spindle, double rpm, double min, double max,
                                int index, List<Finding> out) {
         if (rpm < min || rpm > max) {
             out.add(error(code, field, String.format(Locale.ROOT,
@@ -114,7 +113,7 @@ final class SafetyCheck {
         }
     }
 
-    private static Finding error(String code, String field, String message, String fix) {
-        return Finding.error(code, field, message + "; the program was not written", fix, SOURCE);
+    private static Finding error(PostCode code, String field, String message, String fix) {
+        return code.at(field, message + "; the program was not written", fix);
     }
 }

@@ -9,7 +9,7 @@ import org.hobwright.api.spi.Spi;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.api.spi.WriteResult;
 import org.hobwright.post.PostFindings;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 
 /**
  * Writes the JSON report ({@code JOB.report.json}) with the pointers listed in post/README.md. Like every

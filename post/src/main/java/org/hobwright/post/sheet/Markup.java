@@ -1,5 +1,7 @@
 package org.hobwright.post.sheet;
 
+import static org.hobwright.text.Xml.escape;
+
 /**
  * A tiny writer of well-formed XML (XHTML with inline SVG): every element is closed, every text
  * and attribute value escaped. Attributes are given as name, value pairs.
@@ -88,22 +90,6 @@ final class Markup {
         for (int i = 0; i < attributes.length; i += 2) {
             sb.append(' ').append(attributes[i]).append("=\"").append(escape(attributes[i + 1])).append('"');
         }
-    }
-
-    /** Escapes the five XML special characters. */
-    static String escape(String s) {
-        StringBuilder out = new StringBuilder(s.length());
-        for (char c : s.toCharArray()) {
-            switch (c) {
-                case '&' -> out.append("&amp;");
-                case '<' -> out.append("&lt;");
-                case '>' -> out.append("&gt;");
-                case '"' -> out.append("&quot;");
-                case '\'' -> out.append("&#39;");
-                default -> out.append(c);
-            }
-        }
-        return out.toString();
     }
 
     @Override

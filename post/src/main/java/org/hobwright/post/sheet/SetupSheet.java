@@ -7,7 +7,7 @@ import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import org.hobwright.post.JobUnits;
 import org.hobwright.post.TargetsGiven;
 

@@ -1,7 +1,7 @@
 package org.hobwright.post.sheet;
 
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import org.hobwright.post.JobUnits;
 
 /**

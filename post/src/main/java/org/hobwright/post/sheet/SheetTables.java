@@ -15,7 +15,7 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 
 /** The tables of the setup sheet, each a {@code section} element. */
 final class SheetTables {

@@ -91,7 +91,7 @@ class ReportWriterTest {
         // FORMULAS.md §1.5: P 32, N 40 fine pitch scaled to N 32: D = 1.000 in, root Ø D − 2 × 0.0395 in
         assertEquals(1.0, n.at("/gear/referenceDiameter").asDouble(), 1e-12);
         assertEquals(0.921, n.at("/gear/rootDiameter").asDouble(), 1e-12);
-        // S6: 34.4130 in over 1.728 in wires for 32 T, 1 DP, so 34.4130 / 32 in at 32 DP
+        // Machinery's Handbook wire table (FORMULAS.md §3.2): 34.4130 in over 1.728 in wires for 32 T, 1 DP, so 34.4130 / 32 in at 32 DP
         assertEquals(34.4130 / 32, n.at("/inspection/overPins").asDouble(), 1e-12);
         assertEquals(0.02, n.at("/cycle/axialFeed").asDouble(), 1e-12);
         // unrounded: exactly the millimetre value divided by 25.4
@@ -106,7 +106,7 @@ class ReportWriterTest {
         Fixture f = Fixtures.spurMetric();
         HobCycle c = f.cycle();
         HobCycle bad = new HobCycle(c.gear(), c.inspection(), c.tolerances(), c.setup(), List.of(), c.summary(),
-                c.simulation(), List.of(Finding.error("GEAR_UNDERCUT", "gear.teeth", "undercut", "more teeth", "S9")));
+                c.simulation(), List.of(Finding.error("GEAR_UNDERCUT", "gear.teeth", "undercut", "more teeth", "FORMULAS.md §2.3")));
         assertTrue(new ReportWriter().write(bad, f.plainContext()).files().isEmpty());
         Map<String, String> res = new HashMap<>();
         res.put(ReportWriter.WITH_ERRORS, "true");

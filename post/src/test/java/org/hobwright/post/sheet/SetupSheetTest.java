@@ -116,7 +116,7 @@ class SetupSheetTest {
         double um = f.cycle().simulation().orElseThrow().profileDeviationMaxMm() * 1000;
         String text = parse(sheet(f)).getDocumentElement().getTextContent();
         String expected = "depart from the true involute by at most "
-                + org.hobwright.post.text.Decimal.fixed(um, 2) + " µm";
+                + org.hobwright.text.Decimal.fixed(um, 2) + " µm";
         assertTrue(text.contains(expected), () -> "caption with \"" + expected + "\"");
     }
 

@@ -46,15 +46,15 @@ public record HobwrightPlugin(WizardFactory wizards, List<CycleWriter> writers, 
                 if (candidate.spiVersion() == Spi.VERSION) {
                     factory = candidate;
                 } else {
-                    problems.add(Finding.warning("HOST_WIZARD_VERSION", "plugin",
+                    problems.add(HostCode.HOST_WIZARD_VERSION.at("plugin",
                             candidate.getClass().getName() + " speaks SPI version " + candidate.spiVersion()
                                     + ", this host speaks " + Spi.VERSION,
-                            "use matching Hobwright jars", "example host"));
+                            "use matching Hobwright jars"));
                 }
             } catch (ServiceConfigurationError e) {
-                problems.add(Finding.warning("HOST_WIZARD_BROKEN", "plugin",
+                problems.add(HostCode.HOST_WIZARD_BROKEN.at("plugin",
                         "a wizard provider could not be loaded: " + e.getMessage(),
-                        "rebuild or remove the jar that declares it", "example host"));
+                        "rebuild or remove the jar that declares it"));
             }
         }
         if (factory == null) {

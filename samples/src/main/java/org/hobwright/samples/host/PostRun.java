@@ -38,8 +38,8 @@ public record PostRun(List<OutputFile> files, List<Finding> findings) {
                 files.addAll(r.files());
                 findings.addAll(r.findings());
             } catch (RuntimeException e) {
-                findings.add(Finding.error("HOST_WRITER_FAILED", "writer." + writer.id(),
-                        "writer \"" + writer.id() + "\" failed: " + e, "report it with the job file", "example host"));
+                findings.add(HostCode.HOST_WRITER_FAILED.at("writer." + writer.id(),
+                        "writer \"" + writer.id() + "\" failed: " + e, "report it with the job file"));
             }
         }
         return new PostRun(Finding.anyError(findings) ? List.of() : files, findings);

@@ -10,8 +10,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The key numbers of each sample job, read from the JSON report (in the job's units), against
- * published values and worked examples. "DOMAIN §x / case n" refers to the domain reference of
- * the design notes, which names the published source of each case. Values marked "computed
+ * published values and worked examples. "FORMULAS.md §x / case n" refers to wizard/FORMULAS.md,
+ * which names the published source of each case. Values marked "computed
  * independently" come from {@code src/test/resources/e2e/reference_values.py}, a separate
  * implementation of the same textbook formulas.
  */
@@ -36,36 +36,36 @@ class SampleJobNumbersTest {
         close(24.0 * Math.cos(Math.toRadians(20)), r.number("/gear/baseDiameter"), 1e-9, "d_b");
         close(26.0, r.number("/gear/tipDiameter"), 1e-9, "d_a");
         // the hob makes the thickness allowance E_sn −0.03 mm by going deeper, as a shift of
-        // E_sn / (2 m tan α) (DOMAIN §2.1): d_f = d − 2 · 1.25 m + E_sn / tan α (ISO 21771 eq. (34))
+        // E_sn / (2 m tan α) (FORMULAS.md §2.1): d_f = d − 2 · 1.25 m + E_sn / tan α (ISO 21771 eq. (34))
         double rootDiameter = 24 - 2.5 - 0.03 / Math.tan(Math.toRadians(20));
         double depth = (26 - rootDiameter) / 2;
         close(rootDiameter, r.number("/gear/rootDiameter"), 1e-9, "d_f");
         close(depth, r.number("/gear/wholeDepth"), 1e-9, "h");
-        // s_n = m π/2 + E_sn (DOMAIN §2.1)
+        // s_n = m π/2 + E_sn (FORMULAS.md §2.1)
         close(Math.PI / 2 - 0.03, r.number("/gear/toothThickness"), 1e-9, "s_n");
-        // span: k = z α/180° + 0.5 = 3.17 → 3 (DOMAIN §3.1, S8); W_3 = 7.716462 for the nominal
+        // span: k = z α/180° + 0.5 = 3.17 → 3 (FORMULAS.md §3.1); W_3 = 7.716462 for the nominal
         // tooth (span tables list 7.7165 for m 1, z 24), minus |E_sn| cos α for the allowance
         assertEquals(3, r.number("/inspection/spanTeeth"));
         close(7.716462 - 0.03 * Math.cos(Math.toRadians(20)), r.number("/inspection/spanWidth"), 2e-6, "W_3");
-        // over two 1.75 mm pins with the allowance: 26.406392 (computed independently, DOMAIN §3.2)
+        // over two 1.75 mm pins with the allowance: 26.406392 (computed independently, FORMULAS.md §3.2)
         close(26.406392, r.number("/inspection/overPins"), 2e-6, "M_d");
-        // hob: d_m0 = 32 − 2 · 1.25 = 29.5 mm, sin γ = 1 / 29.5 (DOMAIN §4.1, S10); spur: η = −γ (§4.2)
+        // hob: d_m0 = 32 − 2 · 1.25 = 29.5 mm, sin γ = 1 / 29.5 (FORMULAS.md §4.1); spur: η = −γ (§4.2)
         double gamma = Math.toDegrees(Math.asin(1 / 29.5));
         close(gamma, r.number("/setup/leadAngle"), 1e-9, "γ");
         close(-gamma, r.number("/setup/swivelAngle"), 1e-9, "η");
         // the holder reads 5′ steps: −1° 56.56′ is set as −1° 55′ (nearest step)
         close(-(1 + 55 / 60.0), r.number("/setup/swivelSetting"), 1e-9, "setting");
-        // generating ratio: n_2 = n_0 z_0 / z_2 (DOMAIN §5.1), 24 hob turns to 1 work turn
+        // generating ratio: n_2 = n_0 z_0 / z_2 (FORMULAS.md §5.1), 24 hob turns to 1 work turn
         close(r.number("/cycle/hobRpm") / 24, r.number("/cycle/workRpm"), 1e-9, "n_2");
         assertEquals(24, r.number("/setup/syncHobTurns"));
         assertEquals(1, r.number("/setup/syncWorkTurns"));
-        // spur approach, full depth from the blank tip: E = √(h (d_a0 − h)) (DOMAIN §7.1, case 34 form)
+        // spur approach, full depth from the blank tip: E = √(h (d_a0 − h)) (FORMULAS.md §7.1, case 34 form)
         close(Math.sqrt(depth * (32 - depth)), r.number("/cycle/approachLength"), 1e-6, "E");
-        // feed marks for the feed chosen: root f²/(4 d_a0), flank f² sin α/(4 d_a0), µm (DOMAIN §6.1)
+        // feed marks for the feed chosen: root f²/(4 d_a0), flank f² sin α/(4 d_a0), µm (FORMULAS.md §6.1)
         double f = r.number("/cycle/axialFeed");
         close(f * f / (4 * 32) * 1000, r.number("/cycle/feedMarkRootDepth"), 1e-9, "δ_root");
         close(f * f * Math.sin(Math.toRadians(20)) / (4 * 32) * 1000, r.number("/cycle/feedMarkDepth"), 1e-9, "δ_x");
-        // enveloping flats π² z_0² m sin α / (4 z i²) with i = 12 gashes, µm (DOMAIN §6.2)
+        // enveloping flats π² z_0² m sin α / (4 z i²) with i = 12 gashes, µm (FORMULAS.md §6.2)
         close(Math.PI * Math.PI * Math.sin(Math.toRadians(20)) / (4 * 24 * 144) * 1000,
                 r.number("/cycle/envelopingDepth"), 1e-9, "δ_y");
     }
@@ -75,11 +75,11 @@ class SampleJobNumbersTest {
         PlanRun one = PlanRun.of("metering-pump-gear.json", work.resolve("one"));
         PlanRun two = PlanRun.of("metering-pump-gear-two-start.json", work.resolve("two"));
         assertEquals(0, two.exitCode(), two.describe());
-        // sin γ = z_0 m / d_m0 = 2 / 29.5 (DOMAIN §4.1, S10)
+        // sin γ = z_0 m / d_m0 = 2 / 29.5 (FORMULAS.md §4.1)
         close(Math.toDegrees(Math.asin(2 / 29.5)), two.number("/setup/leadAngle"), 1e-9, "γ two-start");
-        // n_2 = n_0 z_0 / z_2: 12 hob turns per work turn instead of 24 (DOMAIN §5.1)
+        // n_2 = n_0 z_0 / z_2: 12 hob turns per work turn instead of 24 (FORMULAS.md §5.1)
         close(two.number("/cycle/hobRpm") / 12, two.number("/cycle/workRpm"), 1e-9, "n_2 two-start");
-        // enveloping depth δ = π² z_0² m sin α / (4 z i²) grows with z_0² (DOMAIN §6.2)
+        // enveloping depth δ = π² z_0² m sin α / (4 z i²) grows with z_0² (FORMULAS.md §6.2)
         close(4 * one.number("/cycle/envelopingDepth"), two.number("/cycle/envelopingDepth"), 1e-9, "δ_y ratio");
         close(Math.PI * Math.PI * 4 * Math.sin(Math.toRadians(20)) / (4 * 24 * 144) * 1000,
                 two.number("/cycle/envelopingDepth"), 1e-9, "δ_y two-start, µm");
@@ -91,7 +91,7 @@ class SampleJobNumbersTest {
     void pinionWithTwelveTeethIsUndercutAndTheShiftIsProposed() {
         PlanRun r = PlanRun.of("dosing-pinion-z12.json", work);
         var undercut = r.finding("UNDERCUT").orElseThrow(() -> new AssertionError(r.describe()));
-        // x_min = h* − z sin² α / 2 = 1 − 12 sin² 20° / 2 = 0.298133 (DOMAIN §2.3, case 13; S3, S9)
+        // x_min = h* − z sin² α / 2 = 1 − 12 sin² 20° / 2 = 0.298133 (FORMULAS.md §2.3, case 13)
         String fix = undercut.at("/fix").asString() + " " + undercut.at("/message").asString();
         assertTrue(fix.contains("0.3") || fix.contains("0.29"), "proposes x ≈ 0.30: " + undercut);
         close(11.2, r.number("/gear/tipDiameter"), 1e-9, "d_a, x = 0");
@@ -107,7 +107,7 @@ class SampleJobNumbersTest {
         // d_a = d + 2 m (1 + x), d_f = d − 2 m (1.25 − x) (ISO 21771 eq. (33), (34)), x = 0.3
         close(9.6 + 2 * 0.8 * 1.3, r.number("/gear/tipDiameter"), 1e-9, "d_a");
         close(9.6 - 2 * 0.8 * 0.95, r.number("/gear/rootDiameter"), 1e-9, "d_f");
-        // tip thickness for m 1, z 12, x 0.3 is 0.435738 m (DOMAIN §2.2), well above 0.25 m
+        // tip thickness for m 1, z 12, x 0.3 is 0.435738 m (FORMULAS.md §2.2), well above 0.25 m
         close(0.435738 * 0.8, r.number("/gear/tipThickness"), PRINTED, "s_a");
         // span over k = 2: W_2 = 3.841181; over 1.4 mm pins: 11.881757 (computed independently)
         assertEquals(2, r.number("/inspection/spanTeeth"));
@@ -128,7 +128,7 @@ class SampleJobNumbersTest {
         assertEquals(0, moved.exitCode(), moved.describe());
         assertEquals(2, moved.number("/cycle/passes"), "finish stock 0.2 mm gives two passes");
         close(0.6, moved.number("/cycle/axialFeed"), 1e-9, "finishing feed from the template");
-        // n_0 = 1000 v_c / (π d_a0) with v_c 60 m/min from the template, d_a0 32 mm (DOMAIN §5.1, S12)
+        // n_0 = 1000 v_c / (π d_a0) with v_c 60 m/min from the template, d_a0 32 mm (FORMULAS.md §5.1)
         close(1000 * 60 / (Math.PI * 32), moved.number("/cycle/hobRpm"), 1e-9, "n_0");
     }
 
@@ -137,19 +137,19 @@ class SampleJobNumbersTest {
         PlanRun r = PlanRun.of("indicator-wheel-dp32.json", work);
         assertEquals(0, r.exitCode(), r.describe());
         // AGMA fine pitch, P 32, N 32: D = N/P = 1.000 in, a = 1/P, b = 1.200/P + 0.002 in
-        // (Mott, Machine Elements, 4th ed., Table 8-4; DOMAIN case 9: whole depth 0.07075 in)
+        // (Mott, Machine Elements, 4th ed., Table 8-4; FORMULAS.md case 9: whole depth 0.07075 in)
         close(1.0, r.number("/gear/referenceDiameter"), 1e-9, "D");
         close(1.0625, r.number("/gear/tipDiameter"), 1e-9, "OD");
         close(0.921, r.number("/gear/rootDiameter"), 1e-9, "root");
         close(0.07075, r.number("/gear/wholeDepth"), 1e-9, "whole depth");
         // over wires 1.728/P = 0.054 in: 34.4130 in at 1 DP, 32 teeth (Machinery's Handbook wire
-        // table quoted by S6, DOMAIN case 18) → 34.4130 / 32 = 1.07541 in
+        // table, FORMULAS.md case 18) → 34.4130 / 32 = 1.07541 in
         close(0.054, r.number("/inspection/pinDiameter"), 1e-9, "wire");
         close(34.4130 / 32, r.number("/inspection/overPins"), PRINTED, "over wires");
-        // hob: d_m0 = OD − 2 (1.200/P + 0.002) = 1.171 in; sin γ = (1/P) / d_m0 (DOMAIN §4.1)
+        // hob: d_m0 = OD − 2 (1.200/P + 0.002) = 1.171 in; sin γ = (1/P) / d_m0 (FORMULAS.md §4.1)
         double gamma = Math.toDegrees(Math.asin((1 / 32.0) / 1.171));
         close(gamma, r.number("/setup/leadAngle"), 1e-9, "γ");
-        // n_0 = 12 v_c / (π D_0) for ft/min and inches (DOMAIN §5.1, S12, in inch units)
+        // n_0 = 12 v_c / (π D_0) for ft/min and inches (FORMULAS.md §5.1, in inch units)
         close(12 * 200 / (Math.PI * 1.25), r.number("/cycle/hobRpm"), 1e-9, "n_0");
         close(r.number("/cycle/hobRpm") / 32, r.number("/cycle/workRpm"), 1e-9, "n_2");
         assertTrue(r.findings().stream().noneMatch(f -> f.at("/severity").asString().equals("warning")), r.describe());
@@ -159,7 +159,7 @@ class SampleJobNumbersTest {
     void helicalGearOnTheTurretLathe() {
         PlanRun r = PlanRun.of("pump-helical-gear-tl40.json", work);
         assertEquals(0, r.exitCode(), r.describe());
-        // DOMAIN §1.5 worked example (m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A) scaled to m_n 0.8:
+        // FORMULAS.md §1.5 worked example (m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A) scaled to m_n 0.8:
         // every length of these relations is proportional to m_n, every angle is unchanged.
         double s = 0.8 / 2;
         close(62.1166 * s, r.number("/gear/referenceDiameter"), PRINTED, "d (case 3)");
@@ -176,9 +176,9 @@ class SampleJobNumbersTest {
         // n_0 = 1000 v_c / (π d_a0) (case 29 with d_a0 28); n_2 = n_0 / 30 (case 30)
         close(272.837 * 70 / 28, r.number("/cycle/hobRpm"), PRINTED, "n_0");
         close(r.number("/cycle/hobRpm") / 30, r.number("/cycle/workRpm"), 1e-9, "n_2");
-        // exact helical approach for a cylindrical hob envelope (DOMAIN §7.1, case 35 scaled)
+        // exact helical approach for a cylindrical hob envelope (FORMULAS.md §7.1, case 35 scaled)
         close(18.1330 * s, r.number("/cycle/approachLength"), 2e-5, "E (case 35)");
-        // overrun U = (h / tan α_n) sin η (DOMAIN §7.2, derived there, not from print)
+        // overrun U = (h / tan α_n) sin η (FORMULAS.md §7.2, derived there, not from print)
         close(2.83098 * s, r.number("/cycle/overrunLength"), PRINTED, "U");
         // helical addition 360 sin β / (π z m_n) °/mm: case 31 (0.494308 °/mm at m_n 2) / 0.4
         close(0.494308 / s, Math.abs(r.number("/setup/differential")), PRINTED, "differential (case 31)");

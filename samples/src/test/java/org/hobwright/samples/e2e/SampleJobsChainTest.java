@@ -35,7 +35,7 @@ class SampleJobsChainTest {
 
     /**
      * The warnings and errors each sample is there to show, by finding code (codes are stable and
-     * never reused, DEVELOPERS.md "Finding codes"); every other sample plans without any.
+     * never reused, wizard/FINDINGS.md); every other sample plans without any.
      */
     private static final Map<String, Set<String>> SHOWS = Map.of(
             "dosing-pinion-z12.json", Set.of("GEAR_UNDERCUT"),

@@ -76,8 +76,8 @@ class ExampleHostTest {
         for (String suffix : List.of(".nc", ".csv", ".html", ".json")) {
             assertTrue(r.written().stream().anyMatch(p -> p.toString().endsWith(suffix)), suffix + " in " + r.written());
         }
-        // hob d_m0 = 24 − 2 · 1.25 · 0.8 = 22 mm, sin γ = m / d_m0 (DOMAIN.md §4.1, S10);
-        // spur gear with a right-hand hob: η = −γ (DOMAIN.md §4.2)
+        // hob d_m0 = 24 − 2 · 1.25 · 0.8 = 22 mm, sin γ = m / d_m0 (FORMULAS.md §4.1);
+        // spur gear with a right-hand hob: η = −γ (FORMULAS.md §4.2)
         double gamma = Math.toDegrees(Math.asin(0.8 / 22.0));
         assertEquals(-gamma, r.cycle().orElseThrow().setup().orElseThrow().swivelAngleDeg(), 1e-9);
     }

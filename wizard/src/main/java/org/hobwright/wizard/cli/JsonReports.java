@@ -3,7 +3,7 @@ package org.hobwright.wizard.cli;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;

@@ -93,8 +93,8 @@ final class Outputs {
         Map<String, String> files = new LinkedHashMap<>();
         List<Finding> findings = new ArrayList<>(lookupProblems());
         if (writers().isEmpty()) {
-            findings.add(Finding.error("OUTPUT_NO_WRITERS", "job", "no output writer was found",
-                    "put hobwright-post on the class path", "Hobwright SPI"));
+            findings.add(CliCode.OUTPUT_NO_WRITERS.at("job", "no output writer was found",
+                    "put hobwright-post on the class path"));
         }
         Map<String, String> owner = new HashMap<>();
         for (JobInput in : jobs) {
@@ -107,9 +107,8 @@ final class Outputs {
                 for (OutputFile f : r.files()) {
                     String before = owner.putIfAbsent(f.fileName(), in.source());
                     if (before != null) {
-                        findings.add(Finding.error("OUTPUT_NAME_TWICE", "name", "jobs " + before + " and "
-                                + in.source() + " both write " + f.fileName(), "give the jobs different names",
-                                "common practice, no source"));
+                        findings.add(CliCode.OUTPUT_NAME_TWICE.at("name", "jobs " + before + " and "
+                                + in.source() + " both write " + f.fileName(), "give the jobs different names"));
                     }
                     files.put(f.fileName(), f.text());
                 }

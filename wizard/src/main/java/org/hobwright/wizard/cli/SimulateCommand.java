@@ -10,7 +10,6 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import java.util.function.Function;
-import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
@@ -77,9 +76,9 @@ public final class SimulateCommand implements Callable<Integer> {
         HobJob j = loaded.get();
         Optional<ToothSystem> system = ToothSystem.of(j.gear());
         if (system.isEmpty()) {
-            err.println(Finding.error("SIMULATION_INPUT", "gear.toothSystem", "tooth system \""
-                    + j.gear().toothSystem() + "\" is not known", "use one of " + String.join(", ", ToothSystem.ids()),
-                    "Hobwright tooth-system table").line());
+            err.println(CliCode.SIMULATION_INPUT.at("gear.toothSystem", "tooth system \""
+                    + j.gear().toothSystem() + "\" is not known", "use one of " + String.join(", ", ToothSystem.ids()))
+                    .line());
             return ExitCodes.JOB_ERRORS;
         }
         GearData gear = GearGeometry.of(j.gear(), system.get());
@@ -87,8 +86,7 @@ public final class SimulateCommand implements Callable<Integer> {
         try {
             sim = GeneratingSimulation.run(GeneratingSimulation.setupOf(j, gear));
         } catch (SimulationInputException e) {
-            err.println(Finding.error("SIMULATION_INPUT", e.field(), e.getMessage(), e.fix(),
-                    "generating simulation").line());
+            err.println(CliCode.SIMULATION_INPUT.at(e.field(), e.getMessage(), e.fix()).line());
             return ExitCodes.JOB_ERRORS;
         }
         Optional<FeedMarks> marks = feed(j).stream().boxed().findFirst().map(f -> FeedMarks.of(
@@ -112,13 +110,13 @@ public final class SimulateCommand implements Callable<Integer> {
         }
         try (InputStream in = SimulateCommand.class.getClassLoader().getResourceAsStream(SAMPLE)) {
             if (in == null) {
-                return Loaded.unreadable(Finding.error("SAMPLE_MISSING", "job", "the built-in sample job is not"
-                        + " bundled in this build", "give a job file", "Hobwright build"));
+                return Loaded.unreadable(CliCode.SAMPLE_MISSING.at("job", "the built-in sample job is not"
+                        + " bundled in this build", "give a job file"));
             }
             return reader.read(new String(in.readAllBytes(), StandardCharsets.UTF_8), "built-in sample");
         } catch (IOException e) {
-            return Loaded.unreadable(Finding.error("SAMPLE_MISSING", "job", "the built-in sample job cannot be read: "
-                    + e.getMessage(), "give a job file", "Hobwright build"));
+            return Loaded.unreadable(CliCode.SAMPLE_MISSING.at("job", "the built-in sample job cannot be read: "
+                    + e.getMessage(), "give a job file"));
         }
     }
 

@@ -4,8 +4,8 @@ import org.hobwright.api.job.GearSpec;
 
 /**
  * An external involute spur or helical gear cut by a standard hob of its tooth system, with the
- * relations of ISO 21771:2007 (equation numbers as cited in FORMULAS.md §1.2, secondary source: the
- * public notebooks drivetrainhub/notebooks-gears, helical_gears.py). Lengths mm, angles rad.
+ * relations of ISO 21771:2007 (equation numbers as cited in FORMULAS.md §1.2, from memory; every
+ * relation is checked against brute-force geometry in the tests). Lengths mm, angles rad.
  *
  * <p>The helix angle is the magnitude |β|; its hand does not change any size.
  *
@@ -103,8 +103,7 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
 
     /**
      * Lead of the helix p_z = π d / tan β = π z m_n / sin β, mm; infinite for a spur gear.
-     * Sources: drivetrainhub notebooks-gears (helical_gears.py); zhygear article on differential
-     * change gears (FORMULAS.md S3, S11).
+     * Helix geometry: one turn of the helix on the reference cylinder advances p_z (FORMULAS.md §1.2).
      */
     public double leadMm() {
         return isSpur() ? Double.POSITIVE_INFINITY : Math.PI * referenceDiameterMm() / Math.tan(helixAngleRad);
@@ -140,7 +139,7 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
 
     /**
      * Transverse tooth thickness at a diameter d_y, s_yt = d_y (s_t/d + inv α_t − inv α_yt),
-     * cos α_yt = d_b / d_y, mm (d_y at least d_b). ISO 21771; drivetrainhub notebooks-gears.
+     * cos α_yt = d_b / d_y, mm (d_y at least d_b). ISO 21771 (FORMULAS.md §2.1).
      */
     public double transverseThicknessAtMm(double dy) {
         return GearGeometry.transverseThicknessAt(dy, referenceDiameterMm(), baseDiameterMm(), transverseThicknessMm(),

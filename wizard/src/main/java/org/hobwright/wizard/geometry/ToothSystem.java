@@ -44,7 +44,7 @@ public record ToothSystem(String id, double addendumFactor, double dedendumFacto
                             + " root radius 0.30/P from memory (AGMA 201.02)"),
             new ToothSystem("agma-fine", 1.0, 1.2, 0.30, 0.002 * 25.4, 20,
                     "AGMA/ANSI 20° fine pitch, b = 1.200/P + 0.002 in (Mott, Machine Elements, 4th ed., Table 8-4);"
-                            + " root radius 0.30/P assumed (fits the clearance by the ISO 53 §5.9 rule)"),
+                            + " root radius 0.30/P assumed (fits the clearance by the ISO 53 fillet rule)"),
             new ToothSystem("full-depth-14.5", 1.0, 1.157, 0.209, 0, 14.5,
                     "ASA 14½° full depth, b = 1.157/P, root radius 0.209/P (from memory)"));
 
@@ -127,9 +127,9 @@ public record ToothSystem(String id, double addendumFactor, double dedendumFacto
      * <pre>ρ_fPmax = min( c_P / (1 − sin α_P),  (π m/4 − h_fP tan α_P) / tan((90° − α_P)/2) )</pre>
      * The first term is the fillet tangent to the flank and the root line with its top at the
      * datum-plus-addendum level; the second the fillet whose two sides meet in the middle of the tooth
-     * space. ISO 53:1998 §5.9 gives the two forms for c_P ≤ 0.295 m and 0.295 m &lt; c_P ≤ 0.396 m
-     * (as implemented in the public repository gfsReboucas/Drivetrain-python, racks.py); taking the
-     * smaller of the two is the same rule for any clearance (derived).
+     * space. ISO 53:1998 gives the two forms for c_P ≤ 0.295 m and 0.295 m &lt; c_P ≤ 0.396 m (clause 5.9,
+     * from memory); both are re-derived in FORMULAS.md §1.3, and taking the smaller of the two is the same
+     * rule for any clearance (derived).
      *
      * @param moduleMm         normal module, mm
      * @param pressureAngleRad profile angle α_P, rad

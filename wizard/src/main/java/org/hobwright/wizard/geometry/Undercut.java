@@ -8,14 +8,15 @@ package org.hobwright.wizard.geometry;
  * x_min = h* − z sin² α_t / (2 cos β)              smallest profile shift without undercut
  * </pre>
  * h* is the height of the hob's straight flank above its datum line divided by m_n
- * ({@link ToothSystem#straightFlankHeightMm}); for spur gears β = 0 and α_t = α_n. Sources: the public
- * notebooks drivetrainhub/notebooks-gears (helical_gears.py) for both forms; easyengcalc gear-undercut
- * page for z_min 17 at 20° and 32 at 14.5° (FORMULAS.md §2.3, S3, S9).
+ * ({@link ToothSystem#straightFlankHeightMm}); for spur gears β = 0 and α_t = α_n. Derived: the straight
+ * flank of the rack ends on the line of action at the interference point (FORMULAS.md §2.3); the spur
+ * limits z_min 17 at 20° and 32 at 14.5° as in G. Niemann, H. Winter, Maschinenelemente II (from memory).
+ * The generating simulation confirms the limit (UndercutTest).
  *
  * <p>Practical limit: a slight undercut below the working flank is usually accepted down to 14 teeth at
- * 20° and 26 at 14.5° (S9). A profile-shift shortfall of at most h* ÷ 5 ({@link #SLIGHT_SHORTFALL}) gives
+ * 20° and 26 at 14.5° (Niemann/Winter, from memory). A profile-shift shortfall of at most h* ÷ 5 ({@link #SLIGHT_SHORTFALL}) gives
  * exactly those two limits (14 teeth at 20° fall short by 0.181, 13 by 0.240; 26 teeth at 14.5° by 0.185,
- * 25 by 0.217), so Hobwright calls a shortfall up to h* ÷ 5 slight (rule chosen to match S9).
+ * 25 by 0.217), so Hobwright calls a shortfall up to h* ÷ 5 slight (rule chosen to match those limits).
  */
 public final class Undercut {
     /** Largest profile-shift shortfall, as a fraction of h*, still called a slight undercut. */

@@ -14,9 +14,9 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * contact: d_c = sqrt(d_b² + (d_b tan α_Mt − D_M / cos β_b)²)
  * </pre>
  * x is the shift of the thinned tooth x_E (this is the same as adding E_sn/(z m_n)). Sources: the
- * standard measurement-over-wires relation; the US wire-table example 32 T, 4 DP, 20°, wire 1.728/P →
- * 8.6032 in (ashokagears gear-size page quoting Machinery's Handbook, FORMULAS.md S6) is reproduced in
- * the tests. For helical gears z m_n cos α_n = d_b cos β_b makes the ball relation the same
+ * standard measurement-over-wires relation (FORMULAS.md §3.2); the wire-table value 32 T, 1 DP, 20°, wire
+ * 1.728/P → 34.4130 in (Machinery's Handbook, from memory) is reproduced in the tests, and a brute-force
+ * construction of the pin on sampled flanks checks every case (BruteForceCrossCheckTest). For helical gears z m_n cos α_n = d_b cos β_b makes the ball relation the same
  * (FORMULAS.md §1.2 identity).
  *
  * @param pinDiameterMm     D_M, mm
@@ -31,7 +31,7 @@ import org.hobwright.wizard.geometry.InvoluteGear;
 public record OverPins(double pinDiameterMm, double overPinsMm, double centreDiameterMm, double contactDiameterMm,
                        boolean balls, boolean touchesInvolute) {
 
-    /** The rule factor of the US wire tables: D_M = 1.728 / P, i.e. 1.728 m_n (FORMULAS.md S6). */
+    /** The rule factor of the US wire tables: D_M = 1.728 / P, i.e. 1.728 m_n (Machinery's Handbook, from memory). */
     public static final double RULE_FACTOR = 1.728;
 
     /**

@@ -7,7 +7,7 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * Which pin or ball diameter the inspection values use, and why.
  *
  * <p>Rule, in order: the diameter given in the job; else the US wire-table size D_M = 1.728 m_n
- * (= 1.728/P, ashokagears gear-size page quoting Machinery's Handbook, FORMULAS.md S6); if that pin does
+ * (= 1.728/P, Machinery's Handbook wire tables, from memory; FORMULAS.md §3.2); if that pin does
  * not touch the involute between root form and tip or does not stand above the tip (large profile
  * shifts, few teeth), the pin touching at d + 2 x m_n ({@link OverPins#idealPinMm}), rounded to the
  * nearest shop step (0.01 mm in millimetre jobs, 0.0005 in in inch jobs: common practice, no source).

@@ -13,8 +13,8 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * d_c   = sqrt(d_b² + (W_k cos β_b)²)              diameter where the anvils touch
  * </pre>
  * x is the shift of the thinned tooth x_E = x + E_sn / (2 m_n tan α_n) (FORMULAS.md §2.1), so the value
- * includes the thickness allowance. Sources: machinecalcs span calculator (spur form and the
- * m = 2, z = 20 example), the helical form as in ISO 21771 / DIN 3960 (clause from memory); the
+ * includes the thickness allowance. Sources: the base tangent length of ISO 21771 / DIN 3960 (clause
+ * from memory; FORMULAS.md §3.1), checked against two planes touching sampled flanks in the tests; the
  * k rule puts the anvil contact on the circle d + 2 x m_n (derived; reduces to the classic
  * k = z α/180° + 0.5 for spur gears without shift). The lower-neighbour tie rule follows printed span
  * tables (from memory).

@@ -29,41 +29,41 @@ final class Blockers {
         HobSpec hob = job.hob();
         MachineProfile machine = job.machine();
         if (ratio.hobTurnsPerWorkTurn() > machine.maxSyncRatio()) {
-            error(PlanCodes.SYNC_RATIO_TOO_HIGH, "gear.teeth", String.format(Locale.ROOT, "the sync ratio %d:%d is more"
+            error(PlanCode.PLAN_SYNC_RATIO_TOO_HIGH, "gear.teeth", String.format(Locale.ROOT, "the sync ratio %d:%d is more"
                     + " than the machine's largest ratio %.1f", ratio.hobTurns(), ratio.workTurns(),
-                    machine.maxSyncRatio()), "use a hob with more starts", PlanCodes.MACHINE);
+                    machine.maxSyncRatio()), "use a hob with more starts");
         }
         double depth = (touchOff - root) / 2;
         if (!(root > 0) || !(depth > 0)) {
-            error(PlanCodes.NO_DEPTH, "gear.blankDiameter", String.format(Locale.ROOT, "the blank diameter %.4f mm must"
+            error(PlanCode.PLAN_NO_DEPTH, "gear.blankDiameter", String.format(Locale.ROOT, "the blank diameter %.4f mm must"
                     + " be larger than the root diameter %.4f mm, which must be above 0", touchOff, root),
-                    "check the blank diameter, the tooth count and the tooth system", "ISO 21771 (root diameter)");
+                    "check the blank diameter, the tooth count and the tooth system");
         } else if (depth >= hob.outsideDiameterMm() / 2) {
-            error(PlanCodes.HOB_TOO_SMALL, "hob.outsideDiameter", String.format(Locale.ROOT, "the hob radius %.3f mm is"
+            error(PlanCode.PLAN_HOB_TOO_SMALL, "hob.outsideDiameter", String.format(Locale.ROOT, "the hob radius %.3f mm is"
                     + " not larger than the %.3f mm depth to cut", hob.outsideDiameterMm() / 2, depth),
-                    "use a larger hob", "cut geometry, FORMULAS.md §7.1");
+                    "use a larger hob");
         }
         if (Math.abs(swivel.machineAngleDeg()) > machine.swivel().maxAngleDeg()) {
-            error(PlanCodes.SWIVEL_BEYOND_HOLDER, "machine.swivel.maxAngle", "the swivel setting " + swivel.text()
+            error(PlanCode.PLAN_SWIVEL_BEYOND_HOLDER, "machine.swivel.maxAngle", "the swivel setting " + swivel.text()
                     + " is beyond the holder's " + machine.swivel().maxAngleDeg() + " degrees",
-                    "use a hob of the same hand as the gear (smaller swivel) or another holder", PlanCodes.MACHINE);
+                    "use a hob of the same hand as the gear (smaller swivel) or another holder");
         }
         if (!window.isOpen()) {
-            error(PlanCodes.SPEED_WINDOW_EMPTY, "machine", String.format(Locale.ROOT, "no hob speed satisfies both the"
+            error(PlanCode.PLAN_SPEED_WINDOW_EMPTY, "machine", String.format(Locale.ROOT, "no hob speed satisfies both the"
                     + " %s (%.1f rpm) and the %s (%.1f rpm)", window.minLimit(), window.minRpm(), window.maxLimit(),
-                    window.maxRpm()), "check the spindle limits of the machine profile and the hob", PlanCodes.MACHINE);
+                    window.maxRpm()), "check the spindle limits of the machine profile and the hob");
         }
         boolean open = job.cycle().cuttingSpeedMPerMin().isEmpty() || job.cycle().roughFeedMmPerRev().isEmpty()
                 || job.cycle().finishFeedMmPerRev().isEmpty();
         if (row.isEmpty() && open) {
-            error(PlanCodes.CUTTING_DATA_MISSING, "cycle.workMaterial", "the cutting-data table has no row for "
+            error(PlanCode.PLAN_CUTTING_DATA_MISSING, "cycle.workMaterial", "the cutting-data table has no row for "
                     + job.cycle().workMaterial() + " with a " + hob.material() + " hob, and the cycle leaves the"
                     + " cutting speed or a feed open", "give cycle.cuttingSpeed, roughFeed and finishFeed, or add a"
-                    + " row to your cutting-data table", PlanCodes.TABLE);
+                    + " row to your cutting-data table");
         }
     }
 
-    private void error(String code, String field, String message, String fix, String source) {
-        findings.add(Finding.error(code, field, message, fix, source));
+    private void error(PlanCode code, String field, String message, String fix) {
+        findings.add(code.at(field, message, fix));
     }
 }

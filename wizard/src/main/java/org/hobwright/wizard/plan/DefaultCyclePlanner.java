@@ -54,9 +54,8 @@ public final class DefaultCyclePlanner implements CyclePlanner {
         JobAnalysis analysis = JobAnalyser.analyse(job);
         List<Finding> findings = new ArrayList<>(analysis.findings());
         if (!analysis.hasErrors() && (analysis.gear().isEmpty() || analysis.hobSetup().isEmpty())) {
-            findings.add(Finding.error(PlanCodes.INVARIANT_BROKEN, "job", "the analysis gave no gear geometry or hob"
-                    + " setup and no error", "do not post; report this job to the Hobwright developers",
-                    "Hobwright safety invariants"));
+            findings.add(PlanCode.PLAN_INVARIANT_BROKEN.at("job", "the analysis gave no gear geometry or hob"
+                    + " setup and no error", "do not post; report this job to the Hobwright developers"));
         }
         if (Finding.anyError(findings)) {
             return unplanned(analysis, findings);

@@ -64,7 +64,7 @@ public final class FastestCycle {
         double tableRpm = Kinematics.hobRpm(limits.row().cuttingSpeed().max(), g.hobOutsideDiameterMm());
         if (tableRpm < rpm) {
             rpm = tableRpm;
-            speedLimit = "cutting speed range of the " + PlanCodes.TABLE;
+            speedLimit = "cutting speed range of the " + PlanSources.TABLE;
         }
         if (!(rpm >= w.minRpm()) || !(rpm > 0)) {
             return Optional.empty();

@@ -63,9 +63,9 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
 
     private static double given(double feed, Optional<ValueRange> range, String field, List<Finding> findings) {
         if (range.isPresent() && !range.get().contains(feed)) {
-            findings.add(Finding.warning(PlanCodes.FEED_OUTSIDE_TABLE, field, String.format(Locale.ROOT,
+            findings.add(PlanCode.PLAN_FEED_OUTSIDE_TABLE.at(field, String.format(Locale.ROOT,
                     "feed %.3f mm per work revolution is outside the typical %.3f to %.3f mm", feed, range.get().min(),
-                    range.get().max()), "confirm the feed with the hob supplier", PlanCodes.TABLE));
+                    range.get().max()), "confirm the feed with the hob supplier"));
         }
         return feed;
     }
@@ -73,9 +73,9 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
     private static double lowered(ValueRange range, double limit, String field, String why, List<Finding> findings) {
         double feed = Math.min(range.mid(), limit);
         if (feed < range.min()) {
-            findings.add(Finding.info(PlanCodes.FEED_LOWERED_FOR_TARGET, field, String.format(Locale.ROOT,
+            findings.add(PlanCode.PLAN_FEED_LOWERED_FOR_TARGET.at(field, String.format(Locale.ROOT,
                     "feed set to %.4f mm per work revolution, below the typical %.3f mm, to meet the %s", feed,
-                    range.min(), why), PlanCodes.TABLE));
+                    range.min(), why), null));
         }
         return feed;
     }
@@ -84,9 +84,9 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
         if (feed <= cap) {
             return feed;
         }
-        findings.add(Finding.warning(PlanCodes.FEED_RATE_CAPPED, field, String.format(Locale.ROOT,
+        findings.add(PlanCode.PLAN_FEED_RATE_CAPPED.at(field, String.format(Locale.ROOT,
                 "feed %.4f mm per work revolution would exceed the machine's %.1f mm/min; lowered to %.4f mm", feed,
-                rate, cap), "accept the lower feed, or lower the cutting speed", PlanCodes.MACHINE));
+                rate, cap), "accept the lower feed, or lower the cutting speed"));
         return cap;
     }
 }

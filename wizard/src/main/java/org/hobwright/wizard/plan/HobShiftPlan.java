@@ -34,8 +34,8 @@ public record HobShiftPlan(double positionMm, double usableMm, double stepMm, in
                                             double fullDepthMm, double pressureAngleDeg, List<Finding> findings) {
         if (machine.hobShiftTravelMm().isEmpty()) {
             if (cycle.hobShiftPerPartMm() > 0) {
-                findings.add(Finding.info(PlanCodes.HOB_SHIFT_NO_AXIS, "cycle.hobShift.perPart",
-                        "this machine has no hob-shift axis; the hob is not shifted", PlanCodes.MACHINE));
+                findings.add(PlanCode.PLAN_HOB_SHIFT_NO_AXIS.at("cycle.hobShift.perPart",
+                        "this machine has no hob-shift axis; the hob is not shifted", null));
             }
             return Optional.empty();
         }
@@ -44,16 +44,16 @@ public record HobShiftPlan(double positionMm, double usableMm, double stepMm, in
         double step = cycle.hobShiftPerPartMm();
         if (usable <= 0) {
             if (step > 0) {
-                findings.add(Finding.warning(PlanCodes.HOB_SHIFT_NO_ROOM, "hob.length", String.format(Locale.ROOT,
+                findings.add(PlanCode.PLAN_HOB_SHIFT_NO_ROOM.at("hob.length", String.format(Locale.ROOT,
                         "the hob (%.3f mm long) has no room to shift beyond its working width of %.3f mm",
-                        hob.lengthMm(), width), "use a longer hob or set cycle.hobShift.perPart to 0", PlanCodes.NO_SOURCE));
+                        hob.lengthMm(), width), "use a longer hob or set cycle.hobShift.perPart to 0"));
             }
             return Optional.of(new HobShiftPlan(0, 0, 0, cycle.hobShiftEveryParts(), 1));
         }
         if (step > usable) {
-            findings.add(Finding.warning(PlanCodes.HOB_SHIFT_STEP_TOO_LARGE, "cycle.hobShift.perPart",
+            findings.add(PlanCode.PLAN_HOB_SHIFT_STEP_TOO_LARGE.at("cycle.hobShift.perPart",
                     String.format(Locale.ROOT, "a shift of %.3f mm is more than the usable range of %.3f mm", step,
-                            usable), String.format(Locale.ROOT, "shift at most %.3f mm", usable), PlanCodes.NO_SOURCE));
+                            usable), String.format(Locale.ROOT, "shift at most %.3f mm", usable)));
             step = 0;
         }
         int positions = step > 0 ? (int) Math.floor(usable / step + 1e-9) + 1 : 1;

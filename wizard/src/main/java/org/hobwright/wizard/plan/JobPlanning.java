@@ -3,6 +3,7 @@ package org.hobwright.wizard.plan;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.Severity;
 import org.hobwright.api.cycle.CycleSummary;
 import org.hobwright.api.cycle.FastestProposal;
 import org.hobwright.api.cycle.GearData;
@@ -65,9 +66,9 @@ final class JobPlanning {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
         if (swivel.rounded()) {
-            findings.add(Finding.info(PlanCodes.SWIVEL_ROUNDED, "machine.swivel.resolution",
+            findings.add(PlanCode.PLAN_SWIVEL_ROUNDED.at("machine.swivel.resolution",
                     "the holder's resolution rounds the swivel setting from " + Angles.dms(swivel.exactDeg()) + " to "
-                    + swivel.text(), PlanCodes.MACHINE));
+                    + swivel.text(), null));
         }
         double depth = (touchOff - root) / 2;
         QualityLimits targets = QualityLimits.of(cycle.targets(), analysis.tolerances(), table.qualityDefaults(), row);
@@ -84,9 +85,9 @@ final class JobPlanning {
         Prediction prediction = Prediction.of(model, settings);
         prediction.check(targets, model, findings);
         findings.addAll(TravelCheck.check(path.steps(), machine));
-        invariants(root).violations(path.steps()).forEach(v -> findings.add(Finding.error(
-                PlanCodes.INVARIANT_BROKEN, "job", "planner safety check failed: " + v,
-                "do not post; report this job to the Hobwright developers", "Hobwright safety invariants")));
+        invariants(root).violations(path.steps()).forEach(v -> findings.add(
+                PlanCode.PLAN_INVARIANT_BROKEN.at("job", "planner safety check failed: " + v,
+                "do not post; report this job to the Hobwright developers")));
         Optional<FastestProposal> fastest = cycle.fastest()
                 ? fastest(geometry, drive, model, window, row, targets, path.cycleTimeS()) : Optional.empty();
         SetupValues setup = new SetupValues(touchOff, touchOff, root, hs.leadAngleDeg(), hs.swivelAngleDeg(),
@@ -134,26 +135,25 @@ final class JobPlanning {
     private Optional<FastestProposal> fastest(CycleGeometry geometry, Drive drive, CutModel model, SpeedWindow window,
                                               Optional<CuttingData> row, QualityLimits targets, double userTimeS) {
         if (row.isEmpty()) {
-            findings.add(Finding.warning(PlanCodes.FASTEST_NONE, "cycle.workMaterial",
+            findings.add(PlanCode.PLAN_FASTEST_NONE.at(Severity.WARNING, "cycle.workMaterial",
                     "the fastest cycle needs the cutting-data limits for " + cycle.workMaterial() + " with a "
-                            + hob.material() + " hob", "add a row to your cutting-data table", PlanCodes.TABLE));
+                            + hob.material() + " hob", "add a row to your cutting-data table", PlanSources.TABLE));
             return Optional.empty();
         }
         Optional<FastestCycle.Result> r = FastestCycle.find(geometry, drive, model, new FastestCycle.Limits(window,
                 row.get(), targets, machine.maxFeedMmPerMin(), cycle.finishStockMm()));
         if (r.isEmpty()) {
-            findings.add(Finding.warning(PlanCodes.FASTEST_NONE, "machine", "no speed and feed satisfy every limit"
+            findings.add(PlanCode.PLAN_FASTEST_NONE.at(Severity.WARNING, "machine", "no speed and feed satisfy every limit"
                     + " at once, so no fastest cycle can be proposed", "check the machine's speed limits",
-                    PlanCodes.MACHINE));
+                    PlanSources.MACHINE));
             return Optional.empty();
         }
         FastestProposal p = r.get().proposal();
-        findings.add(Finding.info(PlanCodes.FASTEST, "cycle.fastest", "fastest cycle " + Text.fixed(p.cycleTimeS(), 1)
+        findings.add(PlanCode.PLAN_FASTEST.at("cycle.fastest", "fastest cycle " + Text.fixed(p.cycleTimeS(), 1)
                 + " s (proved lower bound " + Text.fixed(p.lowerBoundS(), 1) + " s) against "
                 + Text.fixed(userTimeS, 1) + " s planned: " + Text.fixed(p.cuttingSpeedMPerMin(), 1) + " m/min, "
                 + p.passes() + " pass(es), roughing " + Text.fixed(p.roughFeedMmPerRev(), 3) + " mm, finishing "
-                + Text.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(),
-                "fastest-cycle search (derived)"));
+                + Text.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(), null));
         return Optional.of(p);
     }
 

@@ -4,12 +4,12 @@ package org.hobwright.wizard.plan;
  * Speeds of the generating drive.
  *
  * <pre>
- * n₀ = 1000 · v_c / (π · d_a0)          hob speed, min⁻¹             (zhygear hobbing process planning, FORMULAS.md S12)
+ * n₀ = 1000 · v_c / (π · d_a0)          hob speed, min⁻¹             (definition of cutting speed, FORMULAS.md §5.1)
  * v_c = π · d_a0 · n₀ / 1000            cutting speed at the hob tip, m/min (the same relation inverted)
  * n₂ = n₀ · z₀ / z₂                     work speed: one tooth per start per hob turn (generating condition)
  * v_fa = f_a · n₂                       axial feed rate, mm/min
  * Δφ₂ = 360 · sin|β| / (π · z₂ · m_n)   differential, degrees of work rotation per mm of axial travel,
- *                                       from the lead p_z = π z₂ m_n / sin|β| (FORMULAS.md S11)
+ *                                       from the lead p_z = π z₂ m_n / sin|β| (FORMULAS.md §5.2)
  * </pre>
  * d_a0 hob outside diameter mm, v_c m/min, z₀ hob starts, z₂ gear teeth, f_a mm per work
  * revolution, β helix angle, m_n normal module mm.
@@ -45,7 +45,7 @@ public final class Kinematics {
 
     /**
      * Differential magnitude 360 sin|β| / (π z₂ m_n), degrees of work rotation per mm of axial hob
-     * travel; 0 for a spur gear. Source: helix lead p_z = π z m_n / sin β (FORMULAS.md S11, S3).
+     * travel; 0 for a spur gear. Source: helix lead p_z = π z m_n / sin β (FORMULAS.md §1.2, §5.2).
      */
     public static double differentialDegPerMm(double helixAngleDeg, int teeth, double moduleMm) {
         return 360.0 * Math.sin(Math.toRadians(Math.abs(helixAngleDeg))) / (Math.PI * teeth * moduleMm);

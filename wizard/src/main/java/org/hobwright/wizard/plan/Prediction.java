@@ -25,28 +25,25 @@ public record Prediction(double feedMarkFlankUm, double feedMarkRootUm, double e
     /** Adds a finding for every target this prediction exceeds. */
     public void check(QualityLimits t, CutModel model, List<Finding> findings) {
         if (feedMarkFlankUm > t.feedMarkUm() * (1 + 1e-9)) {
-            findings.add(Finding.warning(PlanCodes.FEED_MARK_OVER_TARGET, "cycle.finishFeed", String.format(Locale.ROOT,
+            findings.add(PlanCode.PLAN_FEED_MARK_OVER_TARGET.at("cycle.finishFeed", String.format(Locale.ROOT,
                     "predicted flank feed marks %.2f µm exceed the %.2f µm target (%s)", feedMarkFlankUm,
                     t.feedMarkUm(), t.feedMarkSource()), String.format(Locale.ROOT,
                     "finish at %.3f mm per work revolution or less",
-                    Math.floor(model.feedForFeedMark(t.feedMarkUm()) * 1000) / 1000),
-                    "feed-mark depth, FORMULAS.md §6.1 (derived for helical gears)"));
+                    Math.floor(model.feedForFeedMark(t.feedMarkUm()) * 1000) / 1000)));
         }
         if (envelopingUm > t.envelopingUm() * (1 + 1e-9)) {
-            findings.add(Finding.warning(PlanCodes.ENVELOPING_OVER_TARGET, "hob.gashes", String.format(Locale.ROOT,
+            findings.add(PlanCode.PLAN_ENVELOPING_OVER_TARGET.at("hob.gashes", String.format(Locale.ROOT,
                     "predicted enveloping flats %.2f µm exceed the %.2f µm target (%s)", envelopingUm,
                     t.envelopingUm(), t.envelopingSource()),
-                    "use a hob with more gashes or fewer starts", "enveloping depth, FORMULAS.md §6.2 (derived)"));
+                    "use a hob with more gashes or fewer starts"));
         }
         if (t.hasChipLimit() && maxChipMm > t.chipMm() * (1 + 1e-9)) {
-            findings.add(Finding.warning(PlanCodes.CHIP_OVER_LIMIT, "cycle.roughFeed", String.format(Locale.ROOT,
+            findings.add(PlanCode.PLAN_CHIP_OVER_LIMIT.at("cycle.roughFeed", String.format(Locale.ROOT,
                     "predicted chip thickness %.4f mm exceeds the %.4f mm limit (%s)", maxChipMm, t.chipMm(),
-                    t.chipSource()), "lower the feed or take more passes (cycle.roughDepth)",
-                    "Hoffmeister 1970 (exponents from memory)"));
+                    t.chipSource()), "lower the feed or take more passes (cycle.roughDepth)"));
         } else if (!t.hasChipLimit()) {
-            findings.add(Finding.info(PlanCodes.CHIP_LIMIT_UNKNOWN, "cycle.targets.maxChipThickness",
-                    "no chip-thickness limit is known for this material and hob, so chip load is not checked",
-                    PlanCodes.TABLE));
+            findings.add(PlanCode.PLAN_CHIP_LIMIT_UNKNOWN.at("cycle.targets.maxChipThickness",
+                    "no chip-thickness limit is known for this material and hob, so chip load is not checked", null));
         }
     }
 }

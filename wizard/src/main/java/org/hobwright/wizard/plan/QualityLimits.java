@@ -42,13 +42,13 @@ public record QualityLimits(double feedMarkUm, String feedMarkSource, double env
             ToleranceData t = tolerances.get();
             mark = defaults.toleranceShare() * t.helixFormUm();
             markSource = "share " + defaults.toleranceShare() + " of helix form tolerance f_fβT of flank class "
-                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanCodes.NO_SOURCE + ")";
+                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanSources.NO_SOURCE + ")";
             env = defaults.toleranceShare() * t.profileFormUm();
             envSource = "share " + defaults.toleranceShare() + " of profile form tolerance f_fαT of flank class "
-                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanCodes.NO_SOURCE + ")";
+                    + t.flankToleranceClass() + " (ISO 1328-1:2013; share: " + PlanSources.NO_SOURCE + ")";
         } else {
             mark = defaults.feedMarkDepthUm();
-            markSource = "default of the " + PlanCodes.TABLE;
+            markSource = "default of the " + PlanSources.TABLE;
             env = defaults.envelopingDepthUm();
             envSource = markSource;
         }
@@ -67,7 +67,7 @@ public record QualityLimits(double feedMarkUm, String feedMarkSource, double env
             chipSource = "cycle.targets.maxChipThickness";
         } else if (row.isPresent()) {
             chip = row.get().maxChipThicknessMm();
-            chipSource = PlanCodes.TABLE;
+            chipSource = PlanSources.TABLE;
         }
         return new QualityLimits(mark, markSource, env, envSource, chip, chipSource);
     }

@@ -3,6 +3,7 @@ package org.hobwright.wizard.plan;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.Severity;
 
 /**
  * Picks the hob speed of the user's plan: from the job's cutting speed, or the middle of the
@@ -34,19 +35,19 @@ public final class SpeedChoice {
         if (wanted > window.maxRpm()) {
             rpm = window.maxRpm();
             limited = true;
-            findings.add(Finding.warning(PlanCodes.HOB_RPM_CAPPED, "cycle.cuttingSpeed", Text.fixed(vc.get(), 1)
+            findings.add(PlanCode.PLAN_HOB_RPM_CAPPED.at("cycle.cuttingSpeed", Text.fixed(vc.get(), 1)
                     + " m/min needs " + Text.fixed(wanted, 1) + " rpm on a " + Text.fixed(hobOutsideMm, 3)
                     + " mm hob; the " + window.maxLimit() + " allows " + Text.fixed(rpm, 1)
                     + " rpm, so the cut runs at " + Text.fixed(Kinematics.cuttingSpeed(rpm, hobOutsideMm), 1) + " m/min",
-                    "accept the lower speed, or use a smaller hob or a faster spindle", PlanCodes.MACHINE));
+                    "accept the lower speed, or use a smaller hob or a faster spindle"));
         } else if (wanted < window.minRpm()) {
             rpm = window.minRpm();
             limited = true;
-            findings.add(Finding.warning(PlanCodes.HOB_RPM_RAISED, "cycle.cuttingSpeed", Text.fixed(vc.get(), 1)
+            findings.add(PlanCode.PLAN_HOB_RPM_RAISED.at("cycle.cuttingSpeed", Text.fixed(vc.get(), 1)
                     + " m/min needs " + Text.fixed(wanted, 1) + " rpm; the " + window.minLimit() + " is "
                     + Text.fixed(rpm, 1) + " rpm, so the cut runs at "
                     + Text.fixed(Kinematics.cuttingSpeed(rpm, hobOutsideMm), 1) + " m/min",
-                    "check the higher cutting speed with the hob supplier", PlanCodes.MACHINE));
+                    "check the higher cutting speed with the hob supplier"));
         }
         double used = Kinematics.cuttingSpeed(rpm, hobOutsideMm);
         if (row.isPresent() && !row.get().cuttingSpeed().contains(used)) {
@@ -54,9 +55,9 @@ public final class SpeedChoice {
             String msg = "cutting speed " + Text.fixed(used, 1) + " m/min is outside the typical " + Text.fixed(r.min(), 0)
                     + " to " + Text.fixed(r.max(), 0) + " m/min for " + row.get().workMaterial() + " with a "
                     + row.get().hobMaterial() + " hob";
-            findings.add(limited ? Finding.info(PlanCodes.CUTTING_SPEED_OUTSIDE_TABLE, "cycle.cuttingSpeed", msg,
-                    PlanCodes.TABLE) : Finding.warning(PlanCodes.CUTTING_SPEED_OUTSIDE_TABLE, "cycle.cuttingSpeed",
-                    msg, "confirm the speed with the hob supplier", PlanCodes.TABLE));
+            findings.add(limited ? PlanCode.PLAN_CUTTING_SPEED_OUTSIDE_TABLE.at(Severity.INFO, "cycle.cuttingSpeed", msg, null,
+                    PlanSources.TABLE) : PlanCode.PLAN_CUTTING_SPEED_OUTSIDE_TABLE.at("cycle.cuttingSpeed",
+                    msg, "confirm the speed with the hob supplier"));
         }
         return Optional.of(rpm);
     }

@@ -16,7 +16,7 @@ import org.hobwright.api.job.HobbingMethod;
  * <ul>
  * <li><b>Hob.</b> A hob tooth at the contact point moves along +Z when the hob turns clockwise seen
  *     from its drive end. Climb hobbing means the teeth move against the feed at contact (R. P.
- *     Phillips, "Design and Selection of Hobs", Gear Technology, FORMULAS.md S13), so climb = clockwise,
+ *     Phillips, "Design and Selection of Hobs", Gear Technology, glossary; FORMULAS.md §7.4), so climb = clockwise,
  *     conventional = counter-clockwise.</li>
  * <li><b>Work.</b> Like a worm and wheel: a right-hand thread turned clockwise (seen from its drive
  *     end) carries its tooth pattern toward −Y, which drags the gear teeth at the contact point

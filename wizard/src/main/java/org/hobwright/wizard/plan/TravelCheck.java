@@ -43,21 +43,19 @@ public final class TravelCheck {
         List<Finding> out = new ArrayList<>(2);
         double tol = 1e-9;
         if (minDia < machine.radialMinMm() - tol || maxDia > machine.radialMaxMm() + tol) {
-            out.add(Finding.error(PlanCodes.TRAVEL_RADIAL, maxDia > machine.radialMaxMm() + tol
+            out.add(PlanCode.PLAN_TRAVEL_RADIAL.at(maxDia > machine.radialMaxMm() + tol
                             ? "machine.travel.radialMax" : "machine.travel.radialMin",
                     String.format(Locale.ROOT, "the cycle needs work diameters %.3f to %.3f mm, the machine reaches"
                             + " %.3f to %.3f mm", minDia, maxDia, machine.radialMinMm(), machine.radialMaxMm()),
-                    "reduce cycle.radialClearance or the blank diameter, or use a machine with more radial travel",
-                    PlanCodes.MACHINE));
+                    "reduce cycle.radialClearance or the blank diameter, or use a machine with more radial travel"));
         }
         if (minAx < machine.axialMinMm() - tol || maxAx > machine.axialMaxMm() + tol) {
-            out.add(Finding.error(PlanCodes.TRAVEL_AXIAL, minAx < machine.axialMinMm() - tol
+            out.add(PlanCode.PLAN_TRAVEL_AXIAL.at(minAx < machine.axialMinMm() - tol
                             ? "machine.travel.axialMin" : "machine.travel.axialMax",
                     String.format(Locale.ROOT, "the cycle needs axial positions %.3f to %.3f mm from the entry face,"
                             + " the machine reaches %.3f to %.3f mm", minAx, maxAx, machine.axialMinMm(),
                             machine.axialMaxMm()),
-                    "reduce cycle.axialClearance, use a smaller hob (shorter approach) or move the part's zero",
-                    PlanCodes.MACHINE));
+                    "reduce cycle.axialClearance, use a smaller hob (shorter approach) or move the part's zero"));
         }
         return out;
     }

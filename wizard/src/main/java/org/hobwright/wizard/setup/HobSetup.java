@@ -9,7 +9,7 @@ import org.hobwright.wizard.geometry.ToothSystem;
  *
  * <pre>
  * d_m0 = d_a0 − 2 h_aP0           hob reference diameter when not given (h_aP0 = gear dedendum h_fP)
- * sin γ = z₀ m_n / d_m0           hob lead angle (hob computation page, FORMULAS.md S10)
+ * sin γ = z₀ m_n / d_m0           hob lead angle of the thread helix (derived, FORMULAS.md §4.1)
  * η = β − γ                       swivel angle, β and γ signed, right hand positive
  * </pre>
  * The swivel rule: same hand |η| = |β| − γ, opposite hand |η| = |β| + γ, spur |η| = γ (standard

@@ -10,7 +10,7 @@ package org.hobwright.wizard.simulate;
  * angle. For spur gears (β = 0) this is the hob-maker handbook form recorded in FORMULAS.md §6.2
  * (cusp ρ Δφ²/8 between tangents of the involute, ρ = (d/2) sin α_n, Δφ = 2π z₀/(i z); derived
  * there, remembered from handbooks). The helical factor 1/cos β was settled by this project's
- * generating simulation (DEVELOPERS.md, "Generating simulation"): the transverse cusp is
+ * generating simulation (FORMULAS.md §6.2, with the deciding cases): the transverse cusp is
  * ρ_t Δφ²/8 with ρ_t = r sin α_t, and normal to the flank it is cos β_b times that, which is the
  * spur form divided by cos β because sin α_t cos β_b = sin α_n. The virtual-gear factor cos³ β
  * does not hold. In the transverse plane the depth is δ / cos β_b.

@@ -45,12 +45,9 @@ public final class GeneratingSimulation {
         return run(setupOf(job, gear, Math.max(RESOLUTION_MM, REPORT_SPACING * mn))).toData();
     }
 
-    /** Finding code when a planned job cannot be simulated (warning; the cycle is still planned). */
-    public static final String NOT_RUN = "SIM_NOT_RUN";
-
     /**
      * {@link #simulate} for a cycle planner: a job the simulation cannot run on gives a
-     * {@link #NOT_RUN} warning (naming the field and the fix) and no simulation.
+     * {@link SimulationCode#SIM_NOT_RUN} warning (naming the field and the fix) and no simulation.
      *
      * @param job      the job
      * @param gear     its geometry
@@ -61,8 +58,8 @@ public final class GeneratingSimulation {
         try {
             return Optional.of(simulate(job, gear));
         } catch (SimulationInputException e) {
-            findings.add(Finding.warning(NOT_RUN, e.field(), "the generating simulation cannot run: " + e.getMessage(),
-                    e.fix(), "generating simulation"));
+            findings.add(SimulationCode.SIM_NOT_RUN.at(e.field(), "the generating simulation cannot run: "
+                    + e.getMessage(), e.fix()));
             return Optional.empty();
         }
     }

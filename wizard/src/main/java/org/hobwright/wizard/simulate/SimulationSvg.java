@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.cycle.Point;
+import org.hobwright.text.Xml;
 
 /**
  * Draws a simulated tooth space as SVG: the profile continuous rolling would cut beside the cut
@@ -56,7 +57,7 @@ public final class SimulationSvg {
         s.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"%.0f\" height=\"%.0f\""
                 + " viewBox=\"0 0 %.0f %.0f\" font-family=\"sans-serif\" font-size=\"11\">%n", width, height, width, height));
         s.append("<rect width=\"100%\" height=\"100%\" fill=\"white\"/>\n");
-        text(s, MARGIN, 22, 14, escape(title) + " — generating simulation, one tooth space (transverse section)");
+        text(s, MARGIN, 22, 14, Xml.escape(title) + " — generating simulation, one tooth space (transverse section)");
         GeneratingSetup st = sim.setup();
         text(s, MARGIN, height - 28, 11, String.format(Locale.ROOT,
                 "z %d, m_n %s mm, β %s°, x %s (with the thickness allowance), hob %d start(s), %d gashes.",
@@ -180,9 +181,6 @@ public final class SimulationSvg {
         return String.format(Locale.ROOT, "%.4g", v);
     }
 
-    static String escape(String text) {
-        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
-    }
 
     /** Bounding box of points. */
     private record Box(double minX, double minY, double maxX, double maxY) {

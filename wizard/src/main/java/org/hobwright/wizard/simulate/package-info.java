@@ -6,7 +6,7 @@
  * {@code SimulationData}, used by the planner) and
  * {@link org.hobwright.wizard.simulate.GeneratingSimulation#run} (full detail, used by the
  * {@code simulate} verb and {@link org.hobwright.wizard.simulate.SimulationSvg}). Lengths in mm,
- * angles in radians inside. The method, the conventions and the settled helical factor of the
- * enveloping depth are described in DEVELOPERS.md, "Generating simulation".
+ * angles in radians inside. The model, the method and the conventions are described in NOTES.md
+ * beside this package; the settled helical factor of the enveloping depth in FORMULAS.md §6.2.
  */
 package org.hobwright.wizard.simulate;

@@ -7,7 +7,7 @@ import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
 import org.hobwright.wizard.store.RangeWords;
 
@@ -17,9 +17,6 @@ import org.hobwright.wizard.store.RangeWords;
  * the values fit together is left to the job checks.
  */
 public final class FieldCheck {
-    /** Source named by the findings of this check. */
-    static final String SOURCE = "Hobwright job file format, version 1";
-
     private FieldCheck() {
     }
 
@@ -35,24 +32,24 @@ public final class FieldCheck {
     public static Optional<Finding> check(FieldDef field, String text, List<String> choices, Units units) {
         if (text.isEmpty()) {
             return field.required()
-                    ? error("WIZARD_VALUE_MISSING", field, "a value is needed", "enter a value")
+                    ? error(WizardCode.WIZARD_VALUE_MISSING, field, "a value is needed", "enter a value")
                     : Optional.empty();
         }
         return switch (field.type()) {
             case NUMBER -> number(text).map(v -> range(field, v, units))
-                    .orElseGet(() -> error("WIZARD_NOT_A_NUMBER", field, "\"" + text + "\" is not a number",
+                    .orElseGet(() -> error(WizardCode.WIZARD_NOT_A_NUMBER, field, "\"" + text + "\" is not a number",
                             "enter a number with a point as the decimal mark, e.g. 1.25"));
             case INTEGER -> integer(text).map(v -> range(field, v, units))
-                    .orElseGet(() -> error("WIZARD_NOT_A_WHOLE_NUMBER", field,
+                    .orElseGet(() -> error(WizardCode.WIZARD_NOT_A_WHOLE_NUMBER, field,
                             "\"" + text + "\" is not a whole number", "enter a whole number, e.g. 24"));
             case ANGLE -> Angles.parse(text).map(v -> range(field, v, units))
-                    .orElseGet(() -> error("WIZARD_NOT_AN_ANGLE", field, "\"" + text + "\" is not an angle",
+                    .orElseGet(() -> error(WizardCode.WIZARD_NOT_AN_ANGLE, field, "\"" + text + "\" is not an angle",
                             "enter decimal degrees (13.2368) or degrees, minutes, seconds (13°14'12\" or 13 14 12)"));
             case CHOICE -> choices.contains(text) ? Optional.empty()
-                    : error("WIZARD_NOT_A_CHOICE", field, "\"" + text + "\" is not one of the choices",
+                    : error(WizardCode.WIZARD_NOT_A_CHOICE, field, "\"" + text + "\" is not one of the choices",
                             "enter one of " + String.join(", ", choices));
             case BOOLEAN -> yesNo(text).isPresent() ? Optional.empty()
-                    : error("WIZARD_NOT_YES_OR_NO", field, "\"" + text + "\" is neither yes nor no",
+                    : error(WizardCode.WIZARD_NOT_YES_OR_NO, field, "\"" + text + "\" is neither yes nor no",
                             "enter yes or no");
             case TEXT -> Optional.empty();
         };
@@ -97,7 +94,7 @@ public final class FieldCheck {
             return Optional.empty();
         }
         String allowed = RangeWords.of(field, units);
-        return error("WIZARD_OUT_OF_RANGE", field, "must be " + allowed + ", was " + plain(v)
+        return error(WizardCode.WIZARD_OUT_OF_RANGE, field, "must be " + allowed + ", was " + plain(v)
                 + RangeWords.suffix(field.unit().symbol(units)), "enter a value " + allowed);
     }
 
@@ -106,7 +103,7 @@ public final class FieldCheck {
         return Decimal.readable(v);
     }
 
-    private static Optional<Finding> error(String code, FieldDef field, String message, String fix) {
-        return Optional.of(Finding.error(code, field.key(), field.label() + ": " + message, fix, SOURCE));
+    private static Optional<Finding> error(WizardCode code, FieldDef field, String message, String fix) {
+        return Optional.of(code.at(field.key(), field.label() + ": " + message, fix));
     }
 }

@@ -60,8 +60,8 @@ public final class LibraryServices implements StepServices {
         } catch (ProviderMissingException e) {
             return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(),
                     Optional.empty(), List.of(), Optional.empty(), Optional.empty(),
-                    List.of(Finding.error("WIZARD_NO_PLANNER", "job", e.getMessage(),
-                            "put hobwright-wizard on the class path", "Hobwright SPI")));
+                    List.of(WizardCode.WIZARD_NO_PLANNER.at("job", e.getMessage(),
+                            "put hobwright-wizard on the class path")));
         }
     }
 

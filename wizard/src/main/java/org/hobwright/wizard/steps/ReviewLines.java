@@ -9,7 +9,7 @@ import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.UnitKind;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 
 /**
  * The lines of the REVIEW step and of the terminal's run summary: setup, inspection, cycle time

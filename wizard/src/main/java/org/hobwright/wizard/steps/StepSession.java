@@ -85,8 +85,8 @@ public final class StepSession implements Wizard {
     public List<Finding> answer(String key, String text) {
         Optional<FieldDef> field = StepFields.of(current()).stream().filter(f -> f.key().equals(key)).findFirst();
         if (field.isEmpty()) {
-            return List.of(Finding.error("WIZARD_UNKNOWN_FIELD", key, "step " + current() + " has no field \""
-                    + key + "\"", "answer one of the fields of the current step", FieldCheck.SOURCE));
+            return List.of(WizardCode.WIZARD_UNKNOWN_FIELD.at(key, "step " + current() + " has no field \""
+                    + key + "\"", "answer one of the fields of the current step"));
         }
         String value = text == null ? "" : text.strip();
         Optional<Finding> problem = FieldCheck.check(field.get(), value, choices(field.get()), units());

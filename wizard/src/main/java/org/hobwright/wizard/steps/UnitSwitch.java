@@ -18,9 +18,6 @@ import org.hobwright.api.job.Units;
  * values keep 10 significant digits.
  */
 final class UnitSwitch {
-    /** Code of the remark an answer to {@code units} returns when it converted answers. */
-    static final String CONVERTED = "WIZARD_UNITS_CONVERTED";
-
     private record Typed(String text, Units units) {
     }
 
@@ -60,9 +57,9 @@ final class UnitSwitch {
         if (converted == 0) {
             return Optional.empty();
         }
-        return Optional.of(Finding.info(CONVERTED, StepFields.UNITS, converted + " length, feed and speed answer"
+        return Optional.of(WizardCode.WIZARD_UNITS_CONVERTED.at(StepFields.UNITS, converted + " length, feed and speed answer"
                 + (converted == 1 ? " was" : "s were") + " converted to " + (to == Units.IN ? "inch" : "millimetre")
-                + " units; check them on their steps", FieldCheck.SOURCE));
+                + " units; check them on their steps", null));
     }
 
     private static boolean converts(UnitKind kind) {

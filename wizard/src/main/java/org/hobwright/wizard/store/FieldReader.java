@@ -9,7 +9,7 @@ import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.FieldDefault;
 import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.FieldType;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ObjectNode;
@@ -79,18 +79,18 @@ final class FieldReader {
 
     /** Adds an error finding about {@code key}. */
     void error(InputCode code, String key, String what, String fix) {
-        out.add(code.finding(path(key), doc.at(path(key)) + ": " + path(key) + " " + what, fix));
+        out.add(code.at(path(key), doc.at(path(key)) + ": " + path(key) + " " + what, fix));
     }
 
     /** Adds a finding about the object itself (e.g. a conflict between two keys). */
     void problem(InputCode code, String key, String message, String fix) {
-        out.add(code.finding(path(key), doc.at(path(key)) + ": " + message, fix));
+        out.add(code.at(path(key), doc.at(path(key)) + ": " + message, fix));
     }
 
     /** Reports a missing required key. */
     void missing(String key, String fix) {
         String where = path.isEmpty() ? doc.source() : doc.at(path);
-        out.add(InputCode.INPUT_MISSING.finding(path(key), where + ": " + path(key) + " is required", fix));
+        out.add(InputCode.INPUT_MISSING.at(path(key), where + ": " + path(key) + " is required", fix));
     }
 
     /** Reports a missing required field, with the table's label and proposal as the fix. */
@@ -102,7 +102,7 @@ final class FieldReader {
     /** Checks that a text is a library name (it names a file); an error finding when not. */
     boolean checkName(String key, String name) {
         Optional<Finding> bad = Names.check(path(key), name);
-        bad.ifPresent(b -> out.add(InputCode.INPUT_VALUE.finding(path(key), doc.at(path(key)) + ": " + b.message(),
+        bad.ifPresent(b -> out.add(InputCode.INPUT_VALUE.at(path(key), doc.at(path(key)) + ": " + b.message(),
                 b.fix().orElse(null))));
         return bad.isEmpty();
     }
@@ -117,7 +117,7 @@ final class FieldReader {
             return Optional.of(Units.fromSymbol(v.stringValue()));
         }
         String where = v == null ? (path.isEmpty() ? doc.source() : doc.at(path)) : doc.at(path(key));
-        out.add(InputCode.INPUT_UNITS.finding(path(key), where + ": " + path(key)
+        out.add(InputCode.INPUT_UNITS.at(path(key), where + ": " + path(key)
                 + (v == null ? " is missing" : " is " + Shape.describe(v)) + "; it must be \"mm\" or \"in\"",
                 "add \"units\": \"mm\" or \"units\": \"in\""));
         return Optional.empty();
@@ -242,7 +242,7 @@ final class FieldReader {
     }
 
     private void wrongType(FieldDef f, JsonNode v) {
-        out.add(InputCode.INPUT_WRONG_TYPE.finding(path(f.leaf()), doc.at(path(f.leaf())) + ": " + path(f.leaf())
+        out.add(InputCode.INPUT_WRONG_TYPE.at(path(f.leaf()), doc.at(path(f.leaf())) + ": " + path(f.leaf())
                 + " must be " + Shape.words(f.type()) + ", was " + Shape.describe(v), null));
     }
 

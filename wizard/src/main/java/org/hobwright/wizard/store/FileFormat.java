@@ -72,25 +72,25 @@ public enum FileFormat {
     Loaded<JsonDocument> open(JsonDocument doc) {
         JsonNode format = doc.root().get("format");
         if (format == null || !format.isString()) {
-            return Loaded.unreadable(InputCode.INPUT_FORMAT.finding("format",
+            return Loaded.unreadable(InputCode.INPUT_FORMAT.at("format",
                     doc.at("format") + ": \"format\" is missing or not a text; this should be a " + word + " file",
                     "add \"format\": \"" + word + "\""));
         }
         if (!format.stringValue().equals(word)) {
-            return Loaded.unreadable(InputCode.INPUT_FORMAT.finding("format",
+            return Loaded.unreadable(InputCode.INPUT_FORMAT.at("format",
                     doc.at("format") + ": this is a \"" + format.stringValue() + "\" file, expected \"" + word + "\"",
                     "give a " + word + " file here"));
         }
         JsonNode version = doc.root().get("version");
         if (version == null || !version.isNumber() || version.doubleValue() != Math.rint(version.doubleValue())) {
-            return Loaded.unreadable(InputCode.INPUT_VERSION.finding("version",
+            return Loaded.unreadable(InputCode.INPUT_VERSION.at("version",
                     doc.at("version") + ": \"version\" is missing or not a whole number",
                     "add \"version\": " + VERSION));
         }
         double asNumber = version.doubleValue();
         int v = asNumber > VERSION || asNumber < 0 ? -1 : (int) asNumber;
         if (v < 0) {
-            return Loaded.unreadable(InputCode.INPUT_VERSION.finding("version",
+            return Loaded.unreadable(InputCode.INPUT_VERSION.at("version",
                     doc.at("version") + ": version " + version + " of " + word + " is not one this program reads"
                             + " (0 to " + VERSION + ")",
                     asNumber > VERSION ? "use a newer Hobwright, or save the file as version " + VERSION : null));
@@ -99,7 +99,7 @@ public enum FileFormat {
         JsonDocument current = doc;
         if (v < VERSION) {
             current = Migrations.migrate(this, v, doc);
-            findings.add(InputCode.INPUT_MIGRATED.finding("version",
+            findings.add(InputCode.INPUT_MIGRATED.at("version",
                     doc.source() + ": version " + v + " read and migrated to version " + VERSION,
                     "save the file again to store it as version " + VERSION));
         }

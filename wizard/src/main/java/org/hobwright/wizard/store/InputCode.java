@@ -1,16 +1,14 @@
 package org.hobwright.wizard.store;
 
-import java.util.Optional;
-import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.FindingCode;
 import org.hobwright.api.check.Severity;
 
 /**
  * Finding codes of the file readers and the library, with their severity and whether they make
- * the input unreadable (exit code 2) rather than wrong (exit code 1). The table in DEVELOPERS.md
- * ("Finding codes: input and library") lists the same codes; a test keeps both in step. Codes are
- * never reused for another meaning.
+ * the input unreadable (exit code 2) rather than wrong (exit code 1); listed in
+ * {@code wizard/FINDINGS.md}. Codes are never reused for another meaning.
  */
-public enum InputCode {
+public enum InputCode implements FindingCode {
     /** The file does not exist. */
     INPUT_NO_FILE(Severity.ERROR, true, "the file does not exist"),
     /** The path names a folder or something else that is not a regular file. */
@@ -71,7 +69,12 @@ public enum InputCode {
         this.meaning = meaning;
     }
 
-    /** The severity of findings with this code. */
+    @Override
+    public String code() {
+        return name();
+    }
+
+    @Override
     public Severity severity() {
         return severity;
     }
@@ -86,19 +89,13 @@ public enum InputCode {
         return unreadable;
     }
 
-    /** What the code means, in a few words (the DEVELOPERS.md table says the same). */
+    @Override
     public String meaning() {
         return meaning;
     }
 
-    /**
-     * A finding with this code.
-     *
-     * @param field   path of the field, e.g. {@code gear.module}; {@code job} or {@code file} when none fits
-     * @param message what is wrong, naming the file and line where known
-     * @param fix     what would fix it, or null
-     */
-    public Finding finding(String field, String message, String fix) {
-        return new Finding(severity, name(), field, message, Optional.ofNullable(fix), SOURCE);
+    @Override
+    public String source() {
+        return SOURCE;
     }
 }

@@ -79,7 +79,7 @@ public final class JobReader {
     /** Reads a job from a tree built in memory, with overrides. */
     public Loaded<HobJob> read(JsonNode tree, String sourceName, Overrides overrides) {
         if (tree == null || !tree.isObject()) {
-            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("job", sourceName
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.at("job", sourceName
                     + ": a job must be a JSON object", null));
         }
         ObjectNode copy = ((ObjectNode) tree).deepCopy();
@@ -128,7 +128,7 @@ public final class JobReader {
                 return Loaded.of(new HobJob(name, units.get(), gear.get(), hob.get(), machine.get().profile(),
                         settings), out);
             } catch (IllegalArgumentException | NullPointerException | java.util.NoSuchElementException e) {
-                out.add(InputCode.INPUT_VALUE.finding("job", doc.source() + ": " + e.getMessage(), null));
+                out.add(InputCode.INPUT_VALUE.at("job", doc.source() + ": " + e.getMessage(), null));
                 return Loaded.failed(out);
             }
         });

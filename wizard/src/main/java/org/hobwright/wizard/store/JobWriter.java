@@ -16,7 +16,7 @@ import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;

@@ -10,7 +10,7 @@ import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Objects;
-import org.hobwright.post.text.JsonTrees;
+import org.hobwright.text.JsonTrees;
 import tools.jackson.core.JacksonException;
 import tools.jackson.core.JsonParser;
 import tools.jackson.core.JsonToken;
@@ -48,17 +48,17 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
     public static Loaded<JsonDocument> read(Path file) {
         String source = file.toString();
         if (!Files.exists(file)) {
-            return Loaded.unreadable(InputCode.INPUT_NO_FILE.finding("file",
+            return Loaded.unreadable(InputCode.INPUT_NO_FILE.at("file",
                     source + ": no such file", "check the path"));
         }
         if (!Files.isRegularFile(file)) {
-            return Loaded.unreadable(InputCode.INPUT_NOT_A_FILE.finding("file",
+            return Loaded.unreadable(InputCode.INPUT_NOT_A_FILE.at("file",
                     source + ": is a folder, not a file", "name a .json file"));
         }
         try {
             long size = Files.size(file);
             if (size > MAX_BYTES) {
-                return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.finding("file",
+                return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.at("file",
                         source + ": " + size + " bytes is more than the limit of " + MAX_BYTES + " bytes",
                         "a job or library file is a few kilobytes; check that this is the right file"));
             }
@@ -72,10 +72,10 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
                     .decode(ByteBuffer.wrap(bytes)).toString();
             return parse(text, source);
         } catch (CharacterCodingException e) {
-            return Loaded.unreadable(InputCode.INPUT_IO.finding("file",
+            return Loaded.unreadable(InputCode.INPUT_IO.at("file",
                     source + ": not UTF-8 text", "save the file as UTF-8"));
         } catch (IOException e) {
-            return Loaded.unreadable(InputCode.INPUT_IO.finding("file",
+            return Loaded.unreadable(InputCode.INPUT_IO.at("file",
                     source + ": cannot be read (" + e.getClass().getSimpleName() + ": " + e.getMessage() + ")",
                     "check the file's permissions"));
         }
@@ -84,30 +84,30 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
     /** Parses a JSON text; {@code source} names it in messages. */
     public static Loaded<JsonDocument> parse(String json, String source) {
         if (json.length() > MAX_BYTES) {
-            return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.finding("file",
+            return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.at("file",
                     source + ": more than the limit of " + MAX_BYTES + " characters", null));
         }
         Map<String, Integer> lines = new HashMap<>();
         try (JsonParser p = JsonTrees.parser(json)) {
             JsonToken first = p.nextToken();
             if (first != JsonToken.START_OBJECT) {
-                return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
+                return Loaded.unreadable(InputCode.INPUT_MALFORMED.at("file",
                         source + ":" + line(p.currentTokenLocation()) + ": the file must hold one JSON object { ... }",
                         null));
             }
             ObjectNode root = JsonTrees.readObject(p, "", lines::put);
             JsonToken after = p.nextToken();
             if (after != null) {
-                return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
+                return Loaded.unreadable(InputCode.INPUT_MALFORMED.at("file",
                         source + ":" + line(p.currentTokenLocation()) + ": text after the end of the JSON object",
                         "remove everything after the closing brace"));
             }
             return Loaded.of(new JsonDocument(source, root, lines));
         } catch (JsonTrees.DuplicateKey e) {
-            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding(e.path(),
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.at(e.path(),
                     source + ":" + e.line() + ": key \"" + e.path() + "\" appears twice", "keep one of them"));
         } catch (JacksonException e) {
-            return Loaded.unreadable(InputCode.INPUT_MALFORMED.finding("file",
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.at("file",
                     source + ":" + line(e.getLocation()) + ": malformed JSON: " + JsonTrees.message(e),
                     "check brackets, commas and quotes near that line"));
         }

@@ -133,7 +133,7 @@ public final class Library {
         if (t.machine().equals(machine)) {
             return Loaded.of(t);
         }
-        return Loaded.unreadable(List.of(InputCode.LIBRARY_WRONG_MACHINE.finding("machine", d.at("machine")
+        return Loaded.unreadable(List.of(InputCode.LIBRARY_WRONG_MACHINE.at("machine", d.at("machine")
                 + ": template \"" + t.name() + "\" is stored for machine \"" + machine + "\" but names machine \""
                 + t.machine() + "\"", "correct its \"machine\" key or save it again")));
     }
@@ -198,7 +198,7 @@ public final class Library {
     private static Loaded<JsonDocument> dialectFormat(JsonDocument d) {
         JsonNode f = d.root().get("format");
         if (f == null || !f.isString() || !f.stringValue().equals(DIALECT_FORMAT)) {
-            return Loaded.unreadable(InputCode.INPUT_FORMAT.finding("format", d.at("format")
+            return Loaded.unreadable(InputCode.INPUT_FORMAT.at("format", d.at("format")
                     + ": not a dialect file (\"format\" must be \"" + DIALECT_FORMAT + "\")", null));
         }
         return Loaded.of(d);
@@ -207,7 +207,7 @@ public final class Library {
 
     private static <T> Loaded<T> checkStem(Loaded<T> loaded, String name, Function<T, String> nameOf, String what) {
         return loaded.then(v -> nameOf.apply(v).equals(name) ? Loaded.of(v)
-                : Loaded.failed(List.of(InputCode.INPUT_CONFLICT.finding("name", "the " + what + " file \"" + name
+                : Loaded.failed(List.of(InputCode.INPUT_CONFLICT.at("name", "the " + what + " file \"" + name
                         + ".json\" names itself \"" + nameOf.apply(v) + "\"", "rename the file or correct its name"))));
     }
 

@@ -47,7 +47,7 @@ public final class Names {
                 ? "it has " + name.length() + " characters, at most " + MAX_LENGTH + " are allowed"
                 : name.startsWith(".") ? "it starts with a dot"
                 : "only letters, digits, '.', '_' and '-' are allowed";
-        return Optional.of(InputCode.LIBRARY_BAD_NAME.finding(what,
+        return Optional.of(InputCode.LIBRARY_BAD_NAME.at(what,
                 what + " name " + shown + " is not allowed: " + why,
                 "use a name like varrow-sl16 or brass_fine.2"));
     }

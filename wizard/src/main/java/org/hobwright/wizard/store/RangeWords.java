@@ -4,7 +4,7 @@ import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.FieldRange;
 import org.hobwright.api.job.UnitKind;
 import org.hobwright.api.job.Units;
-import org.hobwright.post.text.Decimal;
+import org.hobwright.text.Decimal;
 
 /**
  * The allowed values of a field in words, in the units of the file or job ("between 5 and 2000",

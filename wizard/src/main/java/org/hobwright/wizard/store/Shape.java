@@ -103,7 +103,7 @@ final class Shape {
             String child = path.isEmpty() ? key : path + "." + key;
             Shape s = keys.get(key);
             if (s == null) {
-                out.add(InputCode.INPUT_UNKNOWN_KEY.finding(child,
+                out.add(InputCode.INPUT_UNKNOWN_KEY.at(child,
                         doc.at(child) + ": unknown key \"" + key + "\"" + (path.isEmpty() ? "" : " in " + path),
                         "allowed here: " + String.join(", ", keys.keySet())));
             } else {
@@ -124,7 +124,7 @@ final class Shape {
                 case OBJECT -> "an object { ... }";
                 case NAME_OR_OBJECT -> "a name or an object { ... }";
             };
-            out.add(InputCode.INPUT_WRONG_TYPE.finding(path,
+            out.add(InputCode.INPUT_WRONG_TYPE.at(path,
                     doc.at(path) + ": " + path + " must be " + words + ", was " + describe(v), null));
         } else if (v.isObject()) {
             checkObject(doc, v, path, out);
@@ -158,7 +158,7 @@ final class Shape {
             return "a list";
         }
         if (v.isNumber()) {
-            return org.hobwright.post.text.Decimal.readable(v.doubleValue());
+            return org.hobwright.text.Decimal.readable(v.doubleValue());
         }
         return v.toString();
     }

@@ -67,7 +67,7 @@ final class Shelf {
                     try {
                         return Loaded.of(Files.readString(saved));
                     } catch (IOException e) {
-                        return Loaded.unreadable(InputCode.INPUT_IO.finding("file", saved + ": cannot be read", null));
+                        return Loaded.unreadable(InputCode.INPUT_IO.at("file", saved + ": cannot be read", null));
                     }
                 });
             }
@@ -97,7 +97,7 @@ final class Shelf {
     }
 
     Finding notFound(String folder, String what, String name) {
-        return InputCode.LIBRARY_NOT_FOUND.finding(what, "no " + what + " \"" + name + "\" in " + folder(folder)
+        return InputCode.LIBRARY_NOT_FOUND.at(what, "no " + what + " \"" + name + "\" in " + folder(folder)
                 + " or among the built-in ones", "list them with the " + (what.equals("template") ? "templates"
                 : what + "s") + " list command, or save one first");
     }
@@ -150,11 +150,11 @@ final class Shelf {
                 AtomicFiles.removeStaleTemps(target.getParent(), target.getFileName().toString(), STALE);
                 return Loaded.of(target);
             } catch (FileAlreadyExistsException e) {
-                return Loaded.unreadable(List.of(InputCode.LIBRARY_EXISTS.finding(what,
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_EXISTS.at(what,
                         target + ": a saved " + what + " \""
                         + name + "\" exists already", "add --force to replace it")));
             } catch (IOException | RuntimeException e) {
-                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what,
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.at(what,
                         target + ": cannot be written ("
                         + e.getClass().getSimpleName() + ": " + e.getMessage() + "); nothing was changed", null)));
             }
@@ -169,12 +169,12 @@ final class Shelf {
                     return Loaded.of(target);
                 }
             } catch (IOException e) {
-                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.finding(what,
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_WRITE_FAILED.at(what,
                         target + ": cannot be removed ("
                         + e.getMessage() + ")", null)));
             }
             if (builtins.text(folder + "/" + name + ".json").isPresent()) {
-                return Loaded.unreadable(List.of(InputCode.LIBRARY_READ_ONLY.finding(what, "the " + what + " \"" + name
+                return Loaded.unreadable(List.of(InputCode.LIBRARY_READ_ONLY.at(what, "the " + what + " \"" + name
                         + "\" is built in and cannot be removed", "save one of the same name to use instead of it")));
             }
             return Loaded.unreadable(notFound(folder, what, name));

@@ -24,13 +24,13 @@ import org.hobwright.api.cycle.ToleranceData;
  * (the totals from the unrounded components) and then rounded by clause 5.2.3: above 10 µm to 1 µm,
  * from 5 to 10 µm to 0.5 µm, below 5 µm to 0.1 µm. Scope (clause 1): 5 ≤ z ≤ 1000,
  * 5 ≤ d ≤ 15 000 mm, 0.5 ≤ m_n ≤ 70 mm, 4 ≤ b ≤ 1200 mm, β ≤ 45°; outside it the standard gives no
- * values and none are extrapolated. Equation numbers and the rounding rule as given by three
- * public implementations (FORMULAS.md §9.1, S14); the scope as printed in the standard's abstract.
+ * values and none are extrapolated. Formulas in clause 5.3; the formulas, equation numbers and the
+ * rounding rule from memory, not read in the standard's text (FORMULAS.md §9.1); the scope as printed in
+ * the standard's published abstract.
  *
- * <p>Equation (7): two of the three implementations include the 0.001 d term, one (citing the 2018 DIN
- * edition) leaves it out. Hobwright includes it: the majority of the sources read have it, it has the
- * same form as the single pitch tolerance (5), and the AGMA adoption's formula as remembered has it
- * (from memory). The difference is 0.001 d · √2^(A−5) µm, below 1 µm for d under about 700 mm at class
+ * <p>Equation (7): the 0.001 d term is remembered with it and was seen quoted without it. Hobwright
+ * includes it: it has the same form as the single pitch tolerance (5), and the AGMA adoption's formula
+ * as remembered has it (from memory). The difference is 0.001 d · √2^(A−5) µm, below 1 µm for d under about 700 mm at class
  * 5, and it only enters F_αT. The tests pin the choice with both worked examples of FORMULAS.md §9.1.
  */
 public final class FlankTolerances {

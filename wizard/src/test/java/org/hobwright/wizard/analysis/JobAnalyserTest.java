@@ -60,7 +60,7 @@ class JobAnalyserTest {
     }
 
     // The 12-tooth pinion of the sample scenario: x_min = 1 − 12 sin² 20°/2 = 0.2981 with h* = 0.99997 (ISO 53 A,
-    // drivetrainhub undercut function) → the wizard proposes x = 0.30; with x = 0.3 there is no undercut.
+    // FORMULAS.md §2.3) → the wizard proposes x = 0.30; with x = 0.3 there is no undercut.
     @Test
     void smallPinionGetsTheShiftToUse() {
         JobBuilder b = new JobBuilder();
@@ -76,7 +76,7 @@ class JobAnalyserTest {
         assertFalse(has(JobAnalyser.analyse(b.build()), "GEAR_UNDERCUT"));
     }
 
-    // 14 teeth at 20°: the practical limit (easyengcalc, S9) → only a remark.
+    // 14 teeth at 20°: the practical limit (Niemann/Winter, from memory; FORMULAS.md §2.3) → only a remark.
     @Test
     void fourteenTeethIsASlightUndercut() {
         JobBuilder b = new JobBuilder();
@@ -132,7 +132,7 @@ class JobAnalyserTest {
     }
 
     // Span and over-pins printed without the thickness allowance: W_3 of m 1, z 24 is 7.71645 mm
-    // (cos 20°·(2.5π + 24 inv 20°), machinecalcs form), the allowance −0.03 takes 0.03 cos 20° = 0.02819 off.
+    // (cos 20°·(2.5π + 24 inv 20°), FORMULAS.md §3.1), the allowance −0.03 takes 0.03 cos 20° = 0.02819 off.
     @Test
     void drawingSpanWithoutAllowanceIsCaught() {
         JobBuilder b = new JobBuilder();

@@ -62,7 +62,7 @@ class SimulateCommandTest {
 
     @Test
     void smallPinionShowsUndercut() throws Exception {
-        // 12 teeth, no shift: below the 17-tooth limit of FORMULAS.md §2.3 (S9)
+        // 12 teeth, no shift: below the 17-tooth limit of FORMULAS.md §2.3
         Path job = tmp.resolve("pinion.json");
         Files.writeString(job, sampleJob().replace("\"teeth\": 24", "\"teeth\": 12")
                 .replace("\"blankDiameter\": 26.0", "\"blankDiameter\": 14.0")

@@ -40,7 +40,7 @@ class GearGeometryReferenceTest {
         assertRelative(expected, actual, 5e-6, id + " " + quantity + " (" + source + ")");
     }
 
-    // Module from diametral pitch: m = 25.4 / P (drivetrainhub notebooks-gears, FORMULAS.md case 8) and back
+    // Module from diametral pitch: m = 25.4 / P (the inch is 25.4 mm exactly, FORMULAS.md case 8) and back
     // (m 2.5 → P 10.16, FORMULAS.md section 1.4).
     @ParameterizedTest
     @CsvSource({"12, 2.11667", "10, 2.54", "32, 0.79375"})

@@ -7,8 +7,8 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 class ToothSystemTest {
 
-    // Basic rack factors: ISO 53:1998 A-D as implemented in gfsReboucas/Drivetrain-python racks.py (FORMULAS.md S2);
-    // AGMA coarse/fine from Mott, Machine Elements, 4th ed., Table 8-4 (S4); 14.5° full depth from memory.
+    // Basic rack factors: ISO 53:1998 types A-D (factors from memory, FORMULAS.md §1.3);
+    // AGMA coarse/fine from Mott, Machine Elements, 4th ed., Table 8-4; 14.5° full depth from memory.
     @ParameterizedTest
     @CsvSource({
         "iso53-a, 1.0, 1.25, 0.38, 20", "iso53-b, 1.0, 1.25, 0.30, 20", "iso53-c, 1.0, 1.25, 0.25, 20",
@@ -30,7 +30,7 @@ class ToothSystemTest {
         assertEquals(dedendumIn, fine.dedendumMm(25.4 / p) / 25.4, 1e-12);
     }
 
-    // ISO 53 §5.9 largest fillet radius (S2): c ≤ 0.295 m → c/(1 − sin α); the 14.5° rack's 0.209/P equals the
+    // Largest fillet radius of the rack (FORMULAS.md §1.3, derived; ISO 53 clause 5.9 from memory): c ≤ 0.295 m → c/(1 − sin α); the 14.5° rack's 0.209/P equals the
     // largest radius that fits its 0.157/P clearance (0.157/(1 − sin 14.5°) = 0.209439).
     @ParameterizedTest
     @CsvSource({"iso53-a, 20, 0.379951", "full-depth-14.5, 14.5, 0.209439"})
@@ -39,7 +39,7 @@ class ToothSystemTest {
         assertEquals(expected, s.maxRootRadiusMm(1, Math.toRadians(alpha)), 1e-6);
     }
 
-    // ISO 53 §5.9 second form for 0.295 m < c ≤ 0.396 m (S2): (π m/4 − h_fP tan α)/tan((90° − α)/2); for
+    // Second form for 0.295 m < c ≤ 0.396 m (FORMULAS.md §1.3): (π m/4 − h_fP tan α)/tan((90° − α)/2); for
     // h_fP = 1.35 m, c = 0.35 m, α = 20° by hand: (0.785398 − 0.491362)/0.700208 = 0.419930.
     @org.junit.jupiter.api.Test
     void largestRootRadiusOfADeepRackUsesTheSecondForm() {

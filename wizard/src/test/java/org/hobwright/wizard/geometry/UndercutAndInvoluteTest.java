@@ -12,8 +12,8 @@ import org.junit.jupiter.params.provider.CsvSource;
 
 class UndercutAndInvoluteTest {
 
-    // Undercut limits with h* = 1 (FORMULAS.md cases 13, 14 and section 2.3; drivetrainhub notebooks-gears functions,
-    // easyengcalc gear-undercut page: z_min 17 at 20°, 32 at 14.5°).
+    // Undercut limits with h* = 1 (FORMULAS.md cases 13, 14 and section 2.3, derived there;
+    // z_min 17 at 20°, 32 at 14.5° as in Niemann/Winter, from memory).
     @ParameterizedTest
     @CsvSource({
         "20, 0, 12, 17.0973, 0.298133", "20, 15, 12, 15.5378, 0.227691", "14.5, 0, 12, 31.9029, 0.623859"})
@@ -23,7 +23,7 @@ class UndercutAndInvoluteTest {
         assertEquals(xMin, Undercut.minProfileShift(1.0, g), 5e-6);
     }
 
-    // Practical limit 14 teeth at 20° and 26 at 14.5° (easyengcalc, S9): the fewest teeth whose shift shortfall
+    // Practical limit 14 teeth at 20° and 26 at 14.5° (Niemann/Winter, from memory): the fewest teeth whose shift shortfall
     // at x = 0 stays within h* ÷ 5.
     @ParameterizedTest
     @CsvSource({"20, 14", "14.5, 26"})

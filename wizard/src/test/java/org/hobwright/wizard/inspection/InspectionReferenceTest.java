@@ -66,7 +66,7 @@ class InspectionReferenceTest {
         assertEquals(true, OverPins.of(thin, 1.75).overPinsMm() < OverPins.of(plain, 1.75).overPinsMm());
     }
 
-    // Pin choice: job pin first, else 1.728 m (US wire tables, S6) when it fits.
+    // Pin choice: job pin first, else 1.728 m (US wire tables, Machinery's Handbook) when it fits.
     @Test
     void pinChoiceFollowsTheStatedRule() {
         InvoluteGear g = TestGears.gear(24, 1, 20, 0, 0);

@@ -42,7 +42,7 @@ class DefaultCyclePlannerTest {
         HobCycle c = planner.plan(SampleJobs.spurMetric());
         assertFalse(c.hasErrors(), c.findings().toString());
         SetupValues s = c.setup().orElseThrow();
-        close(272.837, s.hobRpm(), "n0, FORMULAS.md §10 row 29 (S12)");
+        close(272.837, s.hobRpm(), "n0, FORMULAS.md §10 row 29");
         close(272.837 / 20, s.workRpm(), "n2 = n0 z0 / z2");
         assertEquals(20, s.syncHobTurns());
         assertEquals(1, s.syncWorkTurns());
@@ -58,7 +58,7 @@ class DefaultCyclePlannerTest {
         close(9.09457, s.workRpm(), "FORMULAS.md §10 row 30");
         assertEquals(30, s.syncHobTurns());
         // RH hob, climb: hob and work clockwise; the RH gear's extra rotation is counter-clockwise, so it
-        // opposes the work's sense (derived rule, SpindleSenses); magnitude FORMULAS.md §10 row 31 (S11)
+        // opposes the work's sense (derived rule, SpindleSenses); magnitude FORMULAS.md §10 row 31
         close(-0.494308, s.differentialDegPerMm(), "differential");
         CycleStep.SyncOn on = steps(c, CycleStep.SyncOn.class).get(0);
         assertEquals(Rotation.CLOCKWISE, on.hobRotation());
@@ -112,8 +112,8 @@ class DefaultCyclePlannerTest {
         assertFalse(c.hasErrors());
         assertEquals(200, c.setup().orElseThrow().hobRpm(), 1e-9);
         close(Math.PI * 70 * 200 / 1000, c.setup().orElseThrow().cuttingSpeedMPerMin(), "speed actually used");
-        assertTrue(finding(c, PlanCodes.HOB_RPM_CAPPED).message().contains(SpeedWindow.HOB_SPINDLE_MAX));
-        assertEquals(Severity.WARNING, finding(c, PlanCodes.HOB_RPM_CAPPED).severity());
+        assertTrue(finding(c, PlanCode.PLAN_HOB_RPM_CAPPED.code()).message().contains(SpeedWindow.HOB_SPINDLE_MAX));
+        assertEquals(Severity.WARNING, finding(c, PlanCode.PLAN_HOB_RPM_CAPPED.code()).severity());
     }
 
     @Test
@@ -122,12 +122,12 @@ class DefaultCyclePlannerTest {
                 OptionalDouble.of(1.5), OptionalDouble.of(1.5), OptionalDouble.empty(), 0, QualityTargets.DEFAULTS, false));
         HobCycle c = planner.plan(fast);
         assertEquals(2000, c.setup().orElseThrow().hobRpm(), 1e-9, "hob maker's 2000 rpm");
-        assertTrue(finding(c, PlanCodes.HOB_RPM_CAPPED).message().contains(SpeedWindow.HOB_MAKER_MAX));
+        assertTrue(finding(c, PlanCode.PLAN_HOB_RPM_CAPPED.code()).message().contains(SpeedWindow.HOB_MAKER_MAX));
         HobJob slowWork = TestJobs.with(SampleJobs.spurMetric(), TestJobs.speeds(SampleJobs.machine(true), 50, 6000, 1, 5));
         HobCycle w = planner.plan(slowWork);
         assertEquals(100, w.setup().orElseThrow().hobRpm(), 1e-9, "work 5 rpm x 20 teeth");
         assertEquals(5, w.setup().orElseThrow().workRpm(), 1e-9);
-        assertTrue(finding(w, PlanCodes.HOB_RPM_CAPPED).message().contains(SpeedWindow.WORK_SPINDLE_MAX));
+        assertTrue(finding(w, PlanCode.PLAN_HOB_RPM_CAPPED.code()).message().contains(SpeedWindow.WORK_SPINDLE_MAX));
     }
 
     @Test
@@ -135,7 +135,7 @@ class DefaultCyclePlannerTest {
         HobJob job = TestJobs.with(SampleJobs.spurMetric(), TestJobs.speeds(SampleJobs.machine(true), 500, 6000, 1, 3000));
         HobCycle c = planner.plan(job);
         assertEquals(500, c.setup().orElseThrow().hobRpm(), 1e-9);
-        assertTrue(has(c, PlanCodes.HOB_RPM_RAISED));
+        assertTrue(has(c, PlanCode.PLAN_HOB_RPM_RAISED.code()));
     }
 
     @Test
@@ -144,7 +144,7 @@ class DefaultCyclePlannerTest {
         HobCycle c = planner.plan(job);
         assertTrue(c.hasErrors());
         assertTrue(c.steps().isEmpty());
-        assertEquals(Severity.ERROR, finding(c, PlanCodes.SPEED_WINDOW_EMPTY).severity());
+        assertEquals(Severity.ERROR, finding(c, PlanCode.PLAN_SPEED_WINDOW_EMPTY.code()).severity());
     }
 
     @Test
@@ -153,10 +153,10 @@ class DefaultCyclePlannerTest {
         HobCycle a = planner.plan(axial);
         assertTrue(a.hasErrors());
         assertTrue(a.steps().isEmpty());
-        assertEquals("machine.travel.axialMin", finding(a, PlanCodes.TRAVEL_AXIAL).field());
+        assertEquals("machine.travel.axialMin", finding(a, PlanCode.PLAN_TRAVEL_AXIAL.code()).field());
         assertTrue(a.summary().isPresent(), "the summary is still computed");
         HobJob radial = TestJobs.with(SampleJobs.spurMetric(), TestJobs.travels(SampleJobs.machine(true), 40, -200, 300));
-        assertEquals("machine.travel.radialMax", finding(planner.plan(radial), PlanCodes.TRAVEL_RADIAL).field());
+        assertEquals("machine.travel.radialMax", finding(planner.plan(radial), PlanCode.PLAN_TRAVEL_RADIAL.code()).field());
     }
 
     @Test
@@ -219,8 +219,8 @@ class DefaultCyclePlannerTest {
         assertTrue(s.finishFeedMmPerRev() <= row.finishFeed().mid());
         assertTrue(s.maxChipThicknessMm() <= row.maxChipThicknessMm() * (1 + 1e-9));
         assertTrue(s.feedMarkFlankUm() <= CuttingDataTable.builtIn().qualityDefaults().feedMarkDepthUm() * (1 + 1e-9));
-        assertFalse(has(c, PlanCodes.FEED_MARK_OVER_TARGET));
-        assertFalse(has(c, PlanCodes.CHIP_OVER_LIMIT));
+        assertFalse(has(c, PlanCode.PLAN_FEED_MARK_OVER_TARGET.code()));
+        assertFalse(has(c, PlanCode.PLAN_CHIP_OVER_LIMIT.code()));
     }
 
     @Test
@@ -234,10 +234,10 @@ class DefaultCyclePlannerTest {
         close(2.74838, s.feedMarkFlankUm(), "flank");
         close(8.03571, s.feedMarkRootUm(), "root");
         close(FinishFormulas.envelopingDepthUm(2, 20, 1, 14, 20, 0), s.envelopingDepthUm(), "enveloping");
-        assertTrue(finding(c, PlanCodes.FEED_MARK_OVER_TARGET).fix().orElseThrow().contains("0.904"),
+        assertTrue(finding(c, PlanCode.PLAN_FEED_MARK_OVER_TARGET.code()).fix().orElseThrow().contains("0.904"),
                 "fix names the largest feed, √(4·70·0.001/sin 20°) = 0.90481 mm (FORMULAS.md §6.1), rounded down");
-        assertTrue(has(c, PlanCodes.ENVELOPING_OVER_TARGET));
-        assertTrue(has(c, PlanCodes.CHIP_OVER_LIMIT));
+        assertTrue(has(c, PlanCode.PLAN_ENVELOPING_OVER_TARGET.code()));
+        assertTrue(has(c, PlanCode.PLAN_CHIP_OVER_LIMIT.code()));
         assertFalse(c.hasErrors(), "quality findings are warnings");
     }
 
@@ -245,14 +245,14 @@ class DefaultCyclePlannerTest {
     void missingCuttingDataIsAnErrorOnlyWhenSomethingIsOpen() {
         HobJob open = TestJobs.with(SampleJobs.spurMetric(), TestJobs.cycle("unobtainium", OptionalDouble.empty(),
                 OptionalDouble.of(1), OptionalDouble.of(1), OptionalDouble.empty(), 0, QualityTargets.DEFAULTS, false));
-        assertTrue(has(planner.plan(open), PlanCodes.CUTTING_DATA_MISSING));
+        assertTrue(has(planner.plan(open), PlanCode.PLAN_CUTTING_DATA_MISSING.code()));
         assertTrue(planner.plan(open).hasErrors());
         HobJob given = TestJobs.with(SampleJobs.spurMetric(), TestJobs.cycle("unobtainium", OptionalDouble.of(30),
                 OptionalDouble.of(1), OptionalDouble.of(1), OptionalDouble.empty(), 0, QualityTargets.DEFAULTS, true));
         HobCycle c = planner.plan(given);
         assertFalse(c.hasErrors());
-        assertTrue(has(c, PlanCodes.CHIP_LIMIT_UNKNOWN));
-        assertTrue(has(c, PlanCodes.FASTEST_NONE), "no fastest cycle without table limits");
+        assertTrue(has(c, PlanCode.PLAN_CHIP_LIMIT_UNKNOWN.code()));
+        assertTrue(has(c, PlanCode.PLAN_FASTEST_NONE.code()), "no fastest cycle without table limits");
     }
 
     @Test
@@ -267,7 +267,7 @@ class DefaultCyclePlannerTest {
         assertTrue(p.cuttingSpeedMPerMin() <= 40 * (1 + 1e-12), "table maximum 40 m/min for HSS in this steel");
         assertTrue(p.bindingLimit().contains("cutting speed range"), p.bindingLimit());
         assertEquals(30, c.setup().orElseThrow().cuttingSpeedMPerMin(), 1e-9, "the user's plan is kept");
-        assertTrue(has(c, PlanCodes.FASTEST));
+        assertTrue(has(c, PlanCode.PLAN_FASTEST.code()));
     }
 
     @Test
@@ -279,7 +279,7 @@ class DefaultCyclePlannerTest {
         assertEquals(-23.0 / 12, s.swivelSettingDeg(), 1e-12);
         assertEquals("-1° 55′", s.swivelSettingText());
         assertTrue(s.swivelDirection().contains("in the negative direction"), s.swivelDirection());
-        assertTrue(has(c, PlanCodes.SWIVEL_ROUNDED));
+        assertTrue(has(c, PlanCode.PLAN_SWIVEL_ROUNDED.code()));
         assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.Swivel), "manual holder");
         assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.HobShift), "no shift axis");
         assertTrue(c.summary().orElseThrow().fastest().isPresent());

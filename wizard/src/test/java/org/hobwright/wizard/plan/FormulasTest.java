@@ -16,7 +16,7 @@ class FormulasTest {
 
     @Test
     void hobSpeedFromCuttingSpeedAndOutsideDiameter() {
-        // FORMULAS.md §10 row 29, n₀ = 1000 v_c / (π d_a0) (zhygear hobbing process planning, S12)
+        // FORMULAS.md §10 row 29, n₀ = 1000 v_c / (π d_a0) (definition of cutting speed)
         close(272.837, Kinematics.hobRpm(60, 70), "n0");
         close(60, Kinematics.cuttingSpeed(Kinematics.hobRpm(60, 70), 70), "v_c round trip");
     }
@@ -31,7 +31,7 @@ class FormulasTest {
 
     @Test
     void differentialFromTheHelixLead() {
-        // FORMULAS.md §10 row 31 (lead p_z = π z m_n / sin β, S11): §1.5 gear m_n 2, z 30, β 15° → 0.494308 °/mm
+        // FORMULAS.md §10 row 31 (lead p_z = π z m_n / sin β, §5.2): §1.5 gear m_n 2, z 30, β 15° → 0.494308 °/mm
         close(0.494308, Kinematics.differentialDegPerMm(15, 30, 2), "differential");
         // per work revolution at f_a = 1.5: 0.741462° (FORMULAS.md §5.2)
         close(0.741462, 1.5 * Kinematics.differentialDegPerMm(15, 30, 2), "per revolution");
@@ -57,8 +57,8 @@ class FormulasTest {
         // FORMULAS.md §10 row 33 and §6.2 examples (derived; matches the hob-maker handbook form from memory)
         close(0.287041, FinishFormulas.envelopingDepthUm(2, 30, 1, 14, 20, 0), "m2 z30 i14");
         close(1.14816, FinishFormulas.envelopingDepthUm(2, 30, 2, 14, 20, 0), "two starts");
-        // helical: the spur value / cos 15° (FORMULAS.md §6.2's open question, settled by the generating simulation:
-        // DEVELOPERS.md "Generating simulation"; FORMULAS.md's cos³ β value 0.258687 does not hold)
+        // helical: the spur value / cos 15° (FORMULAS.md §6.2, settled by the generating simulation and a 3-D
+        // envelope; the rejected cos³ β form would give 0.258687)
         close(0.297167, FinishFormulas.envelopingDepthUm(2, 30, 1, 14, 20, 15), "helical 15");
         close(0.293021, FinishFormulas.envelopingDepthUm(1, 20, 1, 12, 20, 0), "m1 z20 i12");
     }

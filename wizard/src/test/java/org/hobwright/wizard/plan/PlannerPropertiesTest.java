@@ -26,8 +26,8 @@ class PlannerPropertiesTest {
     private static final int CASES = 10_000;
     private static final double REL = 1e-9;
     /** Findings that mean the user's plan breaks a limit the optimiser keeps. */
-    private static final Set<String> OUTSIDE_LIMITS = Set.of(PlanCodes.CUTTING_SPEED_OUTSIDE_TABLE,
-            PlanCodes.FEED_OUTSIDE_TABLE, PlanCodes.FEED_MARK_OVER_TARGET, PlanCodes.CHIP_OVER_LIMIT);
+    private static final Set<String> OUTSIDE_LIMITS = Set.of(PlanCode.PLAN_CUTTING_SPEED_OUTSIDE_TABLE.code(),
+            PlanCode.PLAN_FEED_OUTSIDE_TABLE.code(), PlanCode.PLAN_FEED_MARK_OVER_TARGET.code(), PlanCode.PLAN_CHIP_OVER_LIMIT.code());
 
     private final DefaultCyclePlanner planner = new DefaultCyclePlanner();
 
@@ -46,7 +46,7 @@ class PlannerPropertiesTest {
             } catch (RuntimeException e) {
                 throw new AssertionError(id, e);
             }
-            assertTrue(c.findings().stream().noneMatch(f -> f.code().equals(PlanCodes.INVARIANT_BROKEN)), id);
+            assertTrue(c.findings().stream().noneMatch(f -> f.code().equals(PlanCode.PLAN_INVARIANT_BROKEN.code())), id);
             assertEquals(c.hasErrors(), c.steps().isEmpty(), id);
             c.summary().ifPresent(s -> finite(s, id));
             if (c.hasErrors()) {
@@ -160,7 +160,7 @@ class PlannerPropertiesTest {
         if (p.passes() > FastestCycle.MAX_PASSES) {
             fail("too many passes, " + id);
         }
-        Finding info = c.findings().stream().filter(f -> f.code().equals(PlanCodes.FASTEST)).findFirst().orElseThrow();
+        Finding info = c.findings().stream().filter(f -> f.code().equals(PlanCode.PLAN_FASTEST.code())).findFirst().orElseThrow();
         assertTrue(info.message().contains("lower bound"), id);
     }
 }

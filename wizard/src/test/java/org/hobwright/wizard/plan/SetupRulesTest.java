@@ -82,7 +82,7 @@ class SetupRulesTest {
                 double omegaY = senses.hob() == Rotation.CLOCKWISE ? 1 : -1;
                 double toothVz = cross(new double[] {0, omegaY, 0}, new double[] {-1, 0, 0})[2];
                 boolean againstFeed = toothVz > 0; // feed is −Z
-                assertEquals(method == HobbingMethod.CLIMB, againstFeed, "climb means teeth against the feed (S13)");
+                assertEquals(method == HobbingMethod.CLIMB, againstFeed, "climb means teeth against the feed (Phillips, FORMULAS.md §7.4)");
                 // a thread of hand h turned by ω_y carries its pattern along −h·sign(ω_y)·Y (screw rule);
                 // the gear point at +X·r must move with it: v = ω_z Z × X r = ω_z r Y
                 double patternVy = -hobHand.sign() * omegaY;
@@ -150,7 +150,7 @@ class SetupRulesTest {
         assertTrue(f.isEmpty());
         var tooFar = TestJobs.shiftAndFastest(job.cycle(), 70, 1, false);
         HobShiftPlan.of(job.machine(), job.hob(), tooFar, 4.5, 20, f);
-        assertEquals(PlanCodes.HOB_SHIFT_STEP_TOO_LARGE, f.get(0).code());
+        assertEquals(PlanCode.PLAN_HOB_SHIFT_STEP_TOO_LARGE.code(), f.get(0).code());
     }
 
     @Test

@@ -17,7 +17,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 class HobSetupTest {
     private static final ToothSystem ISO_A = ToothSystem.builtIn("iso53-a").orElseThrow();
 
-    // Hob lead angle sin γ = z₀ m_n / d_m0 (hob computation page, FORMULAS.md S10, case 26): m 2, d_a0 70 →
+    // Hob lead angle sin γ = z₀ m_n / d_m0 (thread helix, FORMULAS.md §4.1, case 26): m 2, d_a0 70 →
     // d_m0 = 70 − 2·2.5 = 65, γ = 1.76323° = 1° 45′ 47.6″; two starts 3.52812° = 3° 31′ 41.2″ (FORMULAS.md section 4.1).
     @ParameterizedTest
     @CsvSource({"1, 1.76323, 1° 45′ 47.6″", "2, 3.52812, 3° 31′ 41.2″"})
@@ -59,7 +59,7 @@ class HobSetupTest {
         assertEquals(-1.9, s.swivelAngleDeg(), 0);
     }
 
-    // Sign properties (STYLE.md section 5; the rule is the definition η = β − γ): reversing both hands reverses η;
+    // Sign properties (FORMULAS.md §4.2; the rule is the definition η = β − γ): reversing both hands reverses η;
     // same hand |η| = |β| − γ, opposite |η| = |β| + γ, spur |η| = γ. 10,000 fixed-seed cases.
     @Test
     void signRulesHoldForRandomGearsAndHobs() {

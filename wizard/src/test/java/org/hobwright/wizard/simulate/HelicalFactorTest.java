@@ -12,10 +12,10 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * FORMULAS.md §6.2 leaves open whether the helical enveloping depth carries cos³ β (virtual spur
- * gear) or 1/cos β (transverse-plane derivation). The simulation decides: its measured depth,
+ * Whether the helical enveloping depth carries cos³ β (virtual spur gear) or 1/cos β
+ * (transverse-plane derivation, FORMULAS.md §6.2). The simulation decides: its measured depth,
  * normal to the flank, follows the spur form / cos β within 1 %, and at 30° and 45° lies far from
- * the cos³ β form. These are the deciding cases quoted in DEVELOPERS.md ("Generating simulation").
+ * the cos³ β form. These are the deciding cases quoted in FORMULAS.md §6.2.
  */
 class HelicalFactorTest {
 

@@ -22,7 +22,7 @@ class PlannedCycleTest {
             // and the depth measured on the simulated flank
             assertEquals(plannerMm, sim.envelopingDepthMm(), 0.10 * plannerMm, job.name());
             assertEquals(plannerMm, sim.closedFormEnvelopingDepthMm(), 1e-12, job.name());
-            assertTrue(cycle.findings().stream().noneMatch(f -> f.code().equals(GeneratingSimulation.NOT_RUN)));
+            assertTrue(cycle.findings().stream().noneMatch(f -> f.code().equals(SimulationCode.SIM_NOT_RUN.code())));
         }
     }
 }

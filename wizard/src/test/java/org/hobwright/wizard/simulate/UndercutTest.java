@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * The simulation's undercut (some cut reaches inside the true involute) against the engineering
- * rule for rack generation, FORMULAS.md §2.3 (source S3, numbers S9), which the engineering core's
+ * rule for rack generation, FORMULAS.md §2.3 (derived there), which the engineering core's
  * undercut check ({@link Undercut}) also applies:
  * x_min = h* − z sin² α_t / (2 cos β), h* = h_aP0* − ρ_aP0* (1 − sin α_n) the height of the
  * tool's straight flank below the datum line.
@@ -40,7 +40,7 @@ class UndercutTest {
 
     @Test
     void smallPinionWithoutShiftIsUndercut() {
-        // 12 teeth, x = 0, standard 12-gash hob: below the practical 14 and theoretical 17 teeth (S9)
+        // 12 teeth, x = 0, standard 12-gash hob: below the practical 14 and theoretical 17 teeth (FORMULAS.md §2.3)
         ToothSpaceSimulation sim = GeneratingSimulation.run(Jobs.setup(12, 1, 0, 0, "iso53-a", 1, 12));
         assertTrue(sim.undercut());
         assertTrue(sim.undercutDepthMm() > 1e-4, "undercut depth " + sim.undercutDepthMm());
@@ -50,7 +50,7 @@ class UndercutTest {
 
     @Test
     void eighteenTeethWithoutShiftAreNotUndercut() {
-        // z_min = 17.0973 at 20° (S9: 17 theoretical)
+        // z_min = 17.0973 at 20° (17 theoretical, FORMULAS.md §2.3)
         assertFalse(GeneratingSimulation.run(Jobs.setup(18, 1, 0, 0, "iso53-a", 1, 12)).undercut());
     }
 

@@ -271,7 +271,7 @@ class StepSessionTest {
 
         List<Finding> said = w.answer("units", "in");
         assertEquals(1, said.size());
-        assertEquals(UnitSwitch.CONVERTED, said.get(0).code());
+        assertEquals(WizardCode.WIZARD_UNITS_CONVERTED.code(), said.get(0).code());
         assertFalse(said.get(0).isError(), "the answer is taken");
         assertEquals("in", w.value("units"));
         assertEquals("1", w.value("gear.faceWidth"));

@@ -11,7 +11,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 class FlankTolerancesTest {
 
     // ISO 1328-1:2013 eq. (5)-(12), worked examples of FORMULAS.md section 9.1 (case 38), computed with the formulas as
-    // implemented in three public implementations (S14); f_HαT with the 0.001 d term (see FlankTolerances).
+    // from memory, not read in the standard's text (FORMULAS.md §9.1); f_HαT with the 0.001 d term (see FlankTolerances).
     // columns: class, d, m_n, b, then unrounded f_pT, F_pT, f_HαT, f_fαT, F_αT, f_HβT, f_fβT, F_βT
     @ParameterizedTest
     @CsvSource({
@@ -55,7 +55,7 @@ class FlankTolerancesTest {
         assertEquals(rounded, FlankTolerances.round(raw), 1e-12);
     }
 
-    // Each class is √2 times the one before, from the unrounded class-5 value (clause 5.2.2, S14).
+    // Each class is √2 times the one before, from the unrounded class-5 value (clause 5.2.2, from memory).
     @Test
     void classStepIsRootTwo() {
         for (int a = 1; a < 11; a++) {

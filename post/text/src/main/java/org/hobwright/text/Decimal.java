@@ -1,4 +1,4 @@
-package org.hobwright.post.text;
+package org.hobwright.text;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;

@@ -1,4 +1,4 @@
-package org.hobwright.post.text;
+package org.hobwright.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

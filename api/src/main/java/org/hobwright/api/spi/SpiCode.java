@@ -1,0 +1,38 @@
+package org.hobwright.api.spi;
+
+import org.hobwright.api.check.FindingCode;
+import org.hobwright.api.check.Severity;
+
+/** Finding codes of the provider look-up ({@link Providers}); listed in {@code api/FINDINGS.md}. */
+public enum SpiCode implements FindingCode {
+    /** A provider failed to load or to state its SPI version; it was skipped. */
+    SPI_PROVIDER_BROKEN("a provider could not be loaded or failed when asked for its SPI version; it was skipped"),
+    /** A provider was built for another SPI version; it was skipped. */
+    SPI_VERSION_MISMATCH("a provider was built for another SPI version; it was skipped");
+
+    private final String meaning;
+
+    SpiCode(String meaning) {
+        this.meaning = meaning;
+    }
+
+    @Override
+    public String code() {
+        return name();
+    }
+
+    @Override
+    public Severity severity() {
+        return Severity.WARNING;
+    }
+
+    @Override
+    public String meaning() {
+        return meaning;
+    }
+
+    @Override
+    public String source() {
+        return "Hobwright SPI";
+    }
+}
