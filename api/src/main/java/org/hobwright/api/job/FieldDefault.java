@@ -73,7 +73,7 @@ public record FieldDefault(String metric, String inch, Origin origin, String sou
     /** Where the default comes from, in a few words, e.g. {@code ISO 53:1998 standard basic rack}. */
     public String describe() {
         return switch (origin) {
-            case NONE -> "none: must be given";
+            case NONE -> source;
             case STANDARD -> "standard: " + source;
             case CONVENTION -> "trade convention: " + source;
             case COMPUTED -> "left out: " + source;

@@ -46,6 +46,8 @@ public final class JobFields {
 
     private static final String SPUR = "a spur gear unless the drawing gives a helix (common practice)";
     private static final String PLANNER = "the planner takes it from the cutting-data table";
+    private static final FieldDefault PITCH = new FieldDefault("", "", FieldDefault.Origin.NONE,
+            "none: give the module or the diametral pitch, exactly one");
     private static final FieldDefault ISO53_20 = FieldDefault.standard("20",
             "ISO 53:1998 standard basic rack, pressure angle 20°");
 
@@ -63,12 +65,11 @@ public final class JobFields {
     public static final FieldDef GEAR_TEETH = add(FieldDef.of("gear.teeth", INTEGER, NONE).range(5, 2000).mustGive()
             .text("Number of teeth", "Tooth count z from the drawing."));
     public static final FieldDef GEAR_MODULE = add(FieldDef.of("gear.module", NUMBER, MODULE).range(0.05, 100)
-            .optional(FieldDefault.unused("give the module or the diametral pitch, exactly one"))
-            .text("Normal module", "Normal module m_n in mm. Give the module or the diametral pitch, not both"
-                    + " ('-' clears a value)."));
+            .optional(PITCH)
+            .text("Normal module", "Normal module m_n in mm. Give the module or the diametral pitch, not both."));
     public static final FieldDef GEAR_DIAMETRAL_PITCH = add(FieldDef.of("gear.diametralPitch", NUMBER,
             DIAMETRAL_PITCH).range(0.254, 508)
-            .optional(FieldDefault.unused("give the module or the diametral pitch, exactly one"))
+            .optional(PITCH)
             .text("Normal diametral pitch", "Normal diametral pitch P_n in teeth per inch, instead of the module."));
     public static final FieldDef GEAR_PRESSURE_ANGLE = add(FieldDef.of("gear.pressureAngle", ANGLE, UnitKind.ANGLE)
             .range(10, 45).required(ISO53_20)
@@ -135,11 +136,11 @@ public final class JobFields {
 
     // ---------------------------------------------------------------- hob
     public static final FieldDef HOB_MODULE = add(FieldDef.of("hob.module", NUMBER, MODULE).range(0.05, 100)
-            .optional(FieldDefault.unused("give the module or the diametral pitch, exactly one"))
+            .optional(PITCH)
             .text("Hob normal module", "Normal module of the hob in mm; must match the gear's pitch."));
     public static final FieldDef HOB_DIAMETRAL_PITCH = add(FieldDef.of("hob.diametralPitch", NUMBER,
             DIAMETRAL_PITCH).range(0.254, 508)
-            .optional(FieldDefault.unused("give the module or the diametral pitch, exactly one"))
+            .optional(PITCH)
             .text("Hob normal diametral pitch", "Normal diametral pitch of the hob, instead of the module."));
     public static final FieldDef HOB_PRESSURE_ANGLE = add(FieldDef.of("hob.pressureAngle", ANGLE, UnitKind.ANGLE)
             .range(10, 45).required(ISO53_20)

@@ -9,13 +9,14 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * Answers the step model proposes from other answers: the tooth system that goes with the pitch
- * ({@link ToothSystem#forPitch}) and the cycle values of a chosen template.
+ * ({@link ToothSystem#forPitch}) and the cycle values of a chosen template. A proposal replaces only
+ * an empty answer or an earlier proposal, never a value the user typed.
  */
 final class Proposals {
     private static final String SYSTEM = JobFields.GEAR_TOOTH_SYSTEM.key();
 
-    private Proposals() {
-    }
+    /** The tooth system last proposed (empty when none was). */
+    private String proposedSystem = "";
 
     /** The tooth system the gear's pitch answers call for; empty while no pitch is answered. */
     static String toothSystem(Answers answers) {
@@ -27,15 +28,13 @@ final class Proposals {
         return m != null ? ToothSystem.FOR_MODULE : "";
     }
 
-    /**
-     * Proposes the tooth system for the pitch when the tooth system is still unanswered or still
-     * the proposal of the pitch before the answer ({@code before}).
-     */
-    static void followPitch(Answers answers, String before) {
+    /** Proposes the tooth system for the pitch when it is still unanswered or still an earlier proposal. */
+    void followPitch(Answers answers) {
         String now = answers.get(SYSTEM);
         String proposal = toothSystem(answers);
-        if (!proposal.isEmpty() && (now.isEmpty() || now.equals(before))) {
+        if (!proposal.isEmpty() && (now.isEmpty() || now.equals(proposedSystem))) {
             answers.put(SYSTEM, proposal);
+            proposedSystem = proposal;
         }
     }
 

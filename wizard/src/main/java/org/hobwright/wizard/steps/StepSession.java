@@ -43,6 +43,7 @@ public final class StepSession implements Wizard {
     private final StepServices services;
     private final Answers answers;
     private final UnitSwitch unitSwitch = new UnitSwitch();
+    private final Proposals proposals = new Proposals();
     private int index;
     private List<Finding> shown = List.of();
     private Optional<HobJob> job = Optional.empty();
@@ -101,10 +102,9 @@ public final class StepSession implements Wizard {
             answers.put(hobKey, value);
         }
         Units before = units();
-        String systemBefore = Proposals.toothSystem(answers);
         answers.put(key, value);
         unitSwitch.typed(field.get(), value, before);
-        Proposals.followPitch(answers, systemBefore);
+        proposals.followPitch(answers);
         if (key.equals(StepFields.MACHINE) && !services.templates(value).contains(answers.get(StepFields.TEMPLATE))) {
             answers.put(StepFields.TEMPLATE, "");
         }

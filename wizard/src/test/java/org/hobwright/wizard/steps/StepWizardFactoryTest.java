@@ -9,13 +9,14 @@ import java.util.Map;
 import java.util.ServiceLoader;
 import org.hobwright.api.spi.Spi;
 import org.hobwright.api.testkit.SampleJobs;
+import org.hobwright.api.wizard.FieldSpec;
 import org.hobwright.api.wizard.StepId;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.api.wizard.WizardFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** A host finds the factory with ServiceLoader and starts from the sample or from its own job. */
+/** A host finds the factory with ServiceLoader and starts blank or from its own job. */
 class StepWizardFactoryTest {
     @TempDir
     Path home;
@@ -29,11 +30,25 @@ class StepWizardFactoryTest {
     }
 
     @Test
-    void aSessionStartsOnGearWithTheSampleJob() {
+    void aSessionStartsBlankOnGear() {
         Wizard w = factory().start(Map.of("home", home.toString()));
         assertEquals(StepId.GEAR, w.view().id());
-        assertEquals("metering-pump-gear", w.value("name"));
-        assertEquals("varrow-sl16", w.value("machine"));
+        assertEquals("", w.value("name"), "no sample part name on a real program");
+        assertEquals("", w.value("gear.teeth"));
+        assertEquals("", w.value("machine"));
+        assertEquals("20", w.value("gear.pressureAngle"));
+        FieldSpec pressure = w.view().fields().stream().filter(f -> f.key().equals("gear.pressureAngle"))
+                .findFirst().orElseThrow();
+        assertTrue(pressure.help().contains("ISO 53:1998"), "says where the default comes from: " + pressure.help());
+        assertTrue(w.answer("gear.module", "2").isEmpty());
+        assertEquals("iso53-a", w.value("gear.toothSystem"), "the tooth system of a module gear");
+        assertEquals("2", w.value("hob.module"), "the hob follows the gear's pitch");
+        assertTrue(w.answer("gear.module", "").isEmpty());
+        assertTrue(w.answer("gear.diametralPitch", "32").isEmpty());
+        assertEquals("agma-fine", w.value("gear.toothSystem"), "fine pitch from 20 diametral pitch");
+        assertTrue(w.answer("gear.toothSystem", "iso53-c").isEmpty());
+        assertTrue(w.answer("gear.diametralPitch", "10").isEmpty());
+        assertEquals("iso53-c", w.value("gear.toothSystem"), "a tooth system answered is kept");
     }
 
     @Test
