@@ -2,7 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * How the user wants the gear cut. Empty values are filled by the planner from the cutting-data
@@ -23,6 +24,7 @@ import org.hobwright.api.Validate;
  * @param hobShiftEveryParts  shift after this many parts, at least 1
  * @param fastest             true to let the optimiser propose the shortest cycle beside the user's plan
  */
+@ApiStatus(since = "1.0")
 public record CycleSettings(
         String workMaterial,
         OptionalDouble cuttingSpeedMPerMin,
@@ -40,21 +42,21 @@ public record CycleSettings(
         boolean fastest) {
 
     public CycleSettings {
-        Validate.text("cycle.workMaterial", workMaterial);
+        Checks.text("cycle.workMaterial", workMaterial);
         Objects.requireNonNull(cuttingSpeedMPerMin, "cuttingSpeedMPerMin");
-        Validate.field(JobFields.CYCLE_CUTTING_SPEED, cuttingSpeedMPerMin);
+        Checks.field(JobFields.CYCLE_CUTTING_SPEED, cuttingSpeedMPerMin);
         Objects.requireNonNull(roughFeedMmPerRev, "roughFeedMmPerRev");
-        Validate.field(JobFields.CYCLE_ROUGH_FEED, roughFeedMmPerRev);
+        Checks.field(JobFields.CYCLE_ROUGH_FEED, roughFeedMmPerRev);
         Objects.requireNonNull(finishFeedMmPerRev, "finishFeedMmPerRev");
-        Validate.field(JobFields.CYCLE_FINISH_FEED, finishFeedMmPerRev);
+        Checks.field(JobFields.CYCLE_FINISH_FEED, finishFeedMmPerRev);
         Objects.requireNonNull(roughDepthMm, "roughDepthMm");
-        Validate.field(JobFields.CYCLE_ROUGH_DEPTH, roughDepthMm);
-        Validate.field(JobFields.CYCLE_FINISH_STOCK, finishStockMm);
-        Validate.present("cycle.method", method);
-        Validate.field(JobFields.CYCLE_AXIAL_CLEARANCE, axialClearanceMm);
-        Validate.field(JobFields.CYCLE_RADIAL_CLEARANCE, radialClearanceMm);
-        Validate.present("cycle.targets", targets);
-        Validate.field(JobFields.HOB_SHIFT_PER_PART, hobShiftPerPartMm);
-        Validate.field(JobFields.HOB_SHIFT_EVERY_PARTS, hobShiftEveryParts);
+        Checks.field(JobFields.CYCLE_ROUGH_DEPTH, roughDepthMm);
+        Checks.field(JobFields.CYCLE_FINISH_STOCK, finishStockMm);
+        Checks.present("cycle.method", method);
+        Checks.field(JobFields.CYCLE_AXIAL_CLEARANCE, axialClearanceMm);
+        Checks.field(JobFields.CYCLE_RADIAL_CLEARANCE, radialClearanceMm);
+        Checks.present("cycle.targets", targets);
+        Checks.field(JobFields.HOB_SHIFT_PER_PART, hobShiftPerPartMm);
+        Checks.field(JobFields.HOB_SHIFT_EVERY_PARTS, hobShiftEveryParts);
     }
 }

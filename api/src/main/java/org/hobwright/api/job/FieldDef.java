@@ -1,5 +1,7 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -22,6 +24,7 @@ import org.hobwright.api.wizard.FieldType;
  * @param label       short label in plain words
  * @param help        one or two sentences of help
  */
+@ApiStatus(since = "1.1")
 public record FieldDef(String key, FieldType type, UnitKind unit, FieldRange range, List<String> choices,
                        boolean required, FieldDefault dflt, boolean libraryName, String label, String help) {
     public FieldDef {

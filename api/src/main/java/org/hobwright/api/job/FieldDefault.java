@@ -1,5 +1,7 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 import java.util.Objects;
 
 /**
@@ -12,8 +14,10 @@ import java.util.Objects;
  * @param origin where the default comes from
  * @param source the standard, the convention, or what Hobwright computes instead, in words
  */
+@ApiStatus(since = "1.1")
 public record FieldDefault(String metric, String inch, Origin origin, String source) {
     /** Where a default comes from. */
+    @ApiStatus(since = "1.1")
     public enum Origin {
         /** None: the value must be given. */
         NONE,

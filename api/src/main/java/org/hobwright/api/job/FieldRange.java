@@ -1,5 +1,7 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 /**
  * The allowed values of a numeric field, in canonical units (mm, m/min, degrees, ...). One range
  * per field: the file readers, the wizard, the JSON schemas and the api records all use it.
@@ -8,6 +10,7 @@ package org.hobwright.api.job;
  * @param minOpen true when {@code min} itself is not allowed ("greater than")
  * @param max     highest allowed value, itself allowed ({@link Double#POSITIVE_INFINITY} for none)
  */
+@ApiStatus(since = "1.1")
 public record FieldRange(double min, boolean minOpen, double max) {
     /** Any finite number (also the range of fields that are not numbers). */
     public static final FieldRange ANY = new FieldRange(Double.NEGATIVE_INFINITY, false, Double.POSITIVE_INFINITY);

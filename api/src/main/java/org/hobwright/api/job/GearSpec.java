@@ -4,7 +4,8 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The gear as the drawing specifies it, in canonical units (mm, degrees). Every number must lie in
@@ -28,6 +29,7 @@ import org.hobwright.api.Validate;
  * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class, if the drawing gives one
  * @param drawing               values printed on the drawing, for the drawing check
  */
+@ApiStatus(since = "1.0")
 public record GearSpec(
         String partName,
         int teeth,
@@ -46,24 +48,24 @@ public record GearSpec(
         DrawingValues drawing) {
 
     public GearSpec {
-        Validate.text("partName", partName);
-        Validate.field(JobFields.GEAR_TEETH, teeth);
-        Validate.present("pitch", pitch);
-        Validate.field(JobFields.GEAR_PRESSURE_ANGLE, pressureAngleDeg);
-        Validate.field(JobFields.GEAR_HELIX_ANGLE, helixAngleDeg);
-        Validate.present("hand", hand);
-        Validate.field(JobFields.GEAR_FACE_WIDTH, faceWidthMm);
-        Validate.field(JobFields.GEAR_PROFILE_SHIFT, profileShift);
-        Validate.field(JobFields.GEAR_THICKNESS_ALLOWANCE, thicknessAllowanceMm);
-        Validate.text("toothSystem", toothSystem);
+        Checks.text("partName", partName);
+        Checks.field(JobFields.GEAR_TEETH, teeth);
+        Checks.present("pitch", pitch);
+        Checks.field(JobFields.GEAR_PRESSURE_ANGLE, pressureAngleDeg);
+        Checks.field(JobFields.GEAR_HELIX_ANGLE, helixAngleDeg);
+        Checks.present("hand", hand);
+        Checks.field(JobFields.GEAR_FACE_WIDTH, faceWidthMm);
+        Checks.field(JobFields.GEAR_PROFILE_SHIFT, profileShift);
+        Checks.field(JobFields.GEAR_THICKNESS_ALLOWANCE, thicknessAllowanceMm);
+        Checks.text("toothSystem", toothSystem);
         Objects.requireNonNull(customProportions, "customProportions");
         Objects.requireNonNull(blankDiameterMm, "blankDiameterMm");
-        Validate.field(JobFields.GEAR_BLANK_DIAMETER, blankDiameterMm);
+        Checks.field(JobFields.GEAR_BLANK_DIAMETER, blankDiameterMm);
         Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
-        Validate.field(JobFields.GEAR_PIN_DIAMETER, pinDiameterMm);
+        Checks.field(JobFields.GEAR_PIN_DIAMETER, pinDiameterMm);
         Objects.requireNonNull(flankToleranceClass, "flankToleranceClass");
-        Validate.field(JobFields.GEAR_TOLERANCE_CLASS, flankToleranceClass);
-        Validate.present("drawing", drawing);
+        Checks.field(JobFields.GEAR_TOLERANCE_CLASS, flankToleranceClass);
+        Checks.present("drawing", drawing);
         if (toothSystem.equals("custom") != customProportions.isPresent()) {
             throw new IllegalArgumentException(
                     "customProportions must be given exactly when toothSystem is \"custom\", toothSystem was \""
@@ -84,5 +86,244 @@ public record GearSpec(
     /** Normal module in mm. */
     public double moduleMm() {
         return pitch.moduleMm();
+    }
+
+    /**
+     * This gear spec with another {@code partName}.
+     *
+     * @param partName the part name or number, for headers and file names
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPartName(String partName) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code teeth}.
+     *
+     * @param teeth number of teeth z, at least 1 (the wizard's checks ask for far more)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withTeeth(int teeth) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code pitch}.
+     *
+     * @param pitch normal pitch as given on the drawing
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPitch(Pitch pitch) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code pressureAngleDeg}.
+     *
+     * @param pressureAngleDeg normal pressure angle α_n, degrees, 1 to 45
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPressureAngleDeg(double pressureAngleDeg) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code helixAngleDeg}.
+     *
+     * @param helixAngleDeg helix angle β at the reference cylinder, magnitude, degrees, 0 to 60 (0 = spur)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withHelixAngleDeg(double helixAngleDeg) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code hand}.
+     *
+     * @param hand helix hand (ignored for spur gears)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withHand(Hand hand) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code faceWidthMm}.
+     *
+     * @param faceWidthMm face width b, mm, greater than 0
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withFaceWidthMm(double faceWidthMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code profileShift}.
+     *
+     * @param profileShift profile shift coefficient x (in normal module), -3 to 3
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withProfileShift(double profileShift) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code thicknessAllowanceMm}.
+     *
+     * @param thicknessAllowanceMm normal tooth-thickness allowance E_sn, mm (negative thins the tooth), -10 to 10
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withThicknessAllowanceMm(double thicknessAllowanceMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code toothSystem}.
+     *
+     * @param toothSystem tooth system identifier ({@code iso53-a}, {@code iso53-b}, {@code iso53-c}, {
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withToothSystem(String toothSystem) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code customProportions}.
+     *
+     * @param customProportions basic rack factors, present exactly when the tooth system is {@code custom}
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withCustomProportions(Optional<ToothProportions> customProportions) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code customProportions} given.
+     *
+     * @param customProportions the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withCustomProportions(ToothProportions customProportions) {
+        return withCustomProportions(Optional.of(customProportions));
+    }
+
+    /**
+     * This gear spec with another {@code blankDiameterMm}.
+     *
+     * @param blankDiameterMm the diameter the blank is turned to before hobbing, if known
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withBlankDiameterMm(OptionalDouble blankDiameterMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code blankDiameterMm} given.
+     *
+     * @param blankDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withBlankDiameterMm(double blankDiameterMm) {
+        return withBlankDiameterMm(OptionalDouble.of(blankDiameterMm));
+    }
+
+    /**
+     * This gear spec with another {@code pinDiameterMm}.
+     *
+     * @param pinDiameterMm the pin or ball the inspector will use, if chosen
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPinDiameterMm(OptionalDouble pinDiameterMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code pinDiameterMm} given.
+     *
+     * @param pinDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPinDiameterMm(double pinDiameterMm) {
+        return withPinDiameterMm(OptionalDouble.of(pinDiameterMm));
+    }
+
+    /**
+     * This gear spec with another {@code flankToleranceClass}.
+     *
+     * @param flankToleranceClass ISO 1328-1:2013 flank tolerance class 1 to 11, if the drawing gives one
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withFlankToleranceClass(OptionalInt flankToleranceClass) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code flankToleranceClass} given.
+     *
+     * @param flankToleranceClass the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withFlankToleranceClass(int flankToleranceClass) {
+        return withFlankToleranceClass(OptionalInt.of(flankToleranceClass));
+    }
+
+    /**
+     * This gear spec with another {@code drawing}.
+     *
+     * @param drawing values printed on the drawing, for the drawing check
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withDrawing(DrawingValues drawing) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
     }
 }

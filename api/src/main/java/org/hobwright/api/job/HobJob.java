@@ -1,6 +1,7 @@
 package org.hobwright.api.job;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * One hobbing job: the gear, the hob, the machine and how to cut, all in canonical units, plus
@@ -13,14 +14,81 @@ import org.hobwright.api.Validate;
  * @param machine the machine profile
  * @param cycle   the cycle settings
  */
+@ApiStatus(since = "1.0")
 public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine,
                      CycleSettings cycle) {
     public HobJob {
-        Validate.text("name", name);
-        Validate.present("units", units);
-        Validate.present("gear", gear);
-        Validate.present("hob", hob);
-        Validate.present("machine", machine);
-        Validate.present("cycle", cycle);
+        Checks.text("name", name);
+        Checks.present("units", units);
+        Checks.present("gear", gear);
+        Checks.present("hob", hob);
+        Checks.present("machine", machine);
+        Checks.present("cycle", cycle);
+    }
+
+    /**
+     * This hob job with another {@code name}.
+     *
+     * @param name job name, used for output file names
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withName(String name) {
+        return new HobJob(name, units, gear, hob, machine, cycle);
+    }
+
+    /**
+     * This hob job with another {@code units}.
+     *
+     * @param units the user's length unit
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withUnits(Units units) {
+        return new HobJob(name, units, gear, hob, machine, cycle);
+    }
+
+    /**
+     * This hob job with another {@code gear}.
+     *
+     * @param gear the gear
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withGear(GearSpec gear) {
+        return new HobJob(name, units, gear, hob, machine, cycle);
+    }
+
+    /**
+     * This hob job with another {@code hob}.
+     *
+     * @param hob the hob
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withHob(HobSpec hob) {
+        return new HobJob(name, units, gear, hob, machine, cycle);
+    }
+
+    /**
+     * This hob job with another {@code machine}.
+     *
+     * @param machine the machine profile
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withMachine(MachineProfile machine) {
+        return new HobJob(name, units, gear, hob, machine, cycle);
+    }
+
+    /**
+     * This hob job with another {@code cycle}.
+     *
+     * @param cycle the cycle settings
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withCycle(CycleSettings cycle) {
+        return new HobJob(name, units, gear, hob, machine, cycle);
     }
 }

@@ -2,7 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The hob, in canonical units. Every number must lie in the range of its field in {@link JobFields}.
@@ -20,6 +21,7 @@ import org.hobwright.api.Validate;
  * @param maxRpm              the hob maker's speed limit, rpm, if given
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
  */
+@ApiStatus(since = "1.0")
 public record HobSpec(
         Pitch pitch,
         double pressureAngleDeg,
@@ -34,24 +36,190 @@ public record HobSpec(
         String material) {
 
     public HobSpec {
-        Validate.present("hob.pitch", pitch);
-        Validate.field(JobFields.HOB_PRESSURE_ANGLE, pressureAngleDeg);
-        Validate.field(JobFields.HOB_STARTS, starts);
-        Validate.present("hob.hand", hand);
-        Validate.field(JobFields.HOB_OUTSIDE_DIAMETER, outsideDiameterMm);
+        Checks.present("hob.pitch", pitch);
+        Checks.field(JobFields.HOB_PRESSURE_ANGLE, pressureAngleDeg);
+        Checks.field(JobFields.HOB_STARTS, starts);
+        Checks.present("hob.hand", hand);
+        Checks.field(JobFields.HOB_OUTSIDE_DIAMETER, outsideDiameterMm);
         Objects.requireNonNull(leadAngleDeg, "leadAngleDeg");
-        Validate.field(JobFields.HOB_LEAD_ANGLE, leadAngleDeg);
+        Checks.field(JobFields.HOB_LEAD_ANGLE, leadAngleDeg);
         Objects.requireNonNull(referenceDiameterMm, "referenceDiameterMm");
-        Validate.field(JobFields.HOB_REFERENCE_DIAMETER, referenceDiameterMm);
-        Validate.field(JobFields.HOB_GASHES, gashes);
-        Validate.field(JobFields.HOB_LENGTH, lengthMm);
+        Checks.field(JobFields.HOB_REFERENCE_DIAMETER, referenceDiameterMm);
+        Checks.field(JobFields.HOB_GASHES, gashes);
+        Checks.field(JobFields.HOB_LENGTH, lengthMm);
         Objects.requireNonNull(maxRpm, "maxRpm");
-        Validate.field(JobFields.HOB_MAX_RPM, maxRpm);
-        Validate.text("hob.material", material);
+        Checks.field(JobFields.HOB_MAX_RPM, maxRpm);
+        Checks.text("hob.material", material);
     }
 
     /** Normal module in mm. */
     public double moduleMm() {
         return pitch.moduleMm();
+    }
+
+    /**
+     * This hob spec with another {@code pitch}.
+     *
+     * @param pitch normal pitch of the hob (must match the gear's)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withPitch(Pitch pitch) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with another {@code pressureAngleDeg}.
+     *
+     * @param pressureAngleDeg normal pressure angle of the hob profile, degrees, 1 to 45
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withPressureAngleDeg(double pressureAngleDeg) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with another {@code starts}.
+     *
+     * @param starts number of starts (threads) z₀, 1 to 12
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withStarts(int starts) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with another {@code hand}.
+     *
+     * @param hand thread hand
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withHand(Hand hand) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with another {@code outsideDiameterMm}.
+     *
+     * @param outsideDiameterMm outside (tip) diameter d_a0, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withOutsideDiameterMm(double outsideDiameterMm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with another {@code leadAngleDeg}.
+     *
+     * @param leadAngleDeg lead angle γ as marked on the hob, degrees (magnitude), if marked
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withLeadAngleDeg(OptionalDouble leadAngleDeg) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with a {@code leadAngleDeg} given.
+     *
+     * @param leadAngleDeg the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withLeadAngleDeg(double leadAngleDeg) {
+        return withLeadAngleDeg(OptionalDouble.of(leadAngleDeg));
+    }
+
+    /**
+     * This hob spec with another {@code referenceDiameterMm}.
+     *
+     * @param referenceDiameterMm reference (pitch) diameter d_m0, mm, if known; otherwise derived from the
+     *     outside diameter and the tooth system's hob addendum
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withReferenceDiameterMm(OptionalDouble referenceDiameterMm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with a {@code referenceDiameterMm} given.
+     *
+     * @param referenceDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withReferenceDiameterMm(double referenceDiameterMm) {
+        return withReferenceDiameterMm(OptionalDouble.of(referenceDiameterMm));
+    }
+
+    /**
+     * This hob spec with another {@code gashes}.
+     *
+     * @param gashes number of gashes (flutes), at least 1
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withGashes(int gashes) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with another {@code lengthMm}.
+     *
+     * @param lengthMm usable hob length, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withLengthMm(double lengthMm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with another {@code maxRpm}.
+     *
+     * @param maxRpm the hob maker's speed limit, rpm, if given
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withMaxRpm(OptionalDouble maxRpm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+    }
+
+    /**
+     * This hob spec with a {@code maxRpm} given.
+     *
+     * @param maxRpm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withMaxRpm(double maxRpm) {
+        return withMaxRpm(OptionalDouble.of(maxRpm));
+    }
+
+    /**
+     * This hob spec with another {@code material}.
+     *
+     * @param material cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withMaterial(String material) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
     }
 }

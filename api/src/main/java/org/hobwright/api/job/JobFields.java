@@ -1,5 +1,7 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 import static org.hobwright.api.wizard.FieldType.ANGLE;
 import static org.hobwright.api.wizard.FieldType.BOOLEAN;
 import static org.hobwright.api.wizard.FieldType.CHOICE;
@@ -29,6 +31,7 @@ import java.util.Optional;
  * angle: the range Hobwright hobs (common practice, no source; ISO 1328-1:2013 also starts at 5
  * teeth). The other limits only keep out values that cannot be meant (common practice, no source).
  */
+@ApiStatus(since = "1.1")
 public final class JobFields {
     private static final List<FieldDef> ALL = new ArrayList<>();
 

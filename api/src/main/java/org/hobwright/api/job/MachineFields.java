@@ -1,5 +1,7 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 import static org.hobwright.api.wizard.FieldType.ANGLE;
 import static org.hobwright.api.wizard.FieldType.BOOLEAN;
 import static org.hobwright.api.wizard.FieldType.CHOICE;
@@ -20,6 +22,7 @@ import java.util.Optional;
  * a job's inline machine (there under {@code machine.}). Limits only keep out values that cannot
  * be meant (common practice, no source); what a machine can do is its builder's data.
  */
+@ApiStatus(since = "1.1")
 public final class MachineFields {
     private static final List<FieldDef> ALL = new ArrayList<>();
 

@@ -2,7 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * What a machine can do and how it counts. Every machine-specific word of the NC program comes
@@ -27,6 +28,7 @@ import org.hobwright.api.Validate;
  * @param syncSettleS        dwell after switching synchronisation on, s
  * @param maxHobDiameterMm   largest hob the holder takes, mm
  */
+@ApiStatus(since = "1.0")
 public record MachineProfile(
         String name,
         String dialect,
@@ -48,12 +50,12 @@ public record MachineProfile(
         double maxHobDiameterMm) {
 
     public MachineProfile {
-        Validate.text("machine.name", name);
-        Validate.text("machine.dialect", dialect);
-        Validate.field(MachineFields.WORK_MIN_RPM, workMinRpm);
-        Validate.field(MachineFields.WORK_MAX_RPM, workMaxRpm);
-        Validate.field(MachineFields.HOB_MIN_RPM, hobMinRpm);
-        Validate.field(MachineFields.HOB_MAX_RPM, hobMaxRpm);
+        Checks.text("machine.name", name);
+        Checks.text("machine.dialect", dialect);
+        Checks.field(MachineFields.WORK_MIN_RPM, workMinRpm);
+        Checks.field(MachineFields.WORK_MAX_RPM, workMaxRpm);
+        Checks.field(MachineFields.HOB_MIN_RPM, hobMinRpm);
+        Checks.field(MachineFields.HOB_MAX_RPM, hobMaxRpm);
         if (workMinRpm > workMaxRpm) {
             throw new IllegalArgumentException("machine.workMinRpm (" + workMinRpm
                     + ") must not exceed machine.workMaxRpm (" + workMaxRpm + ")");
@@ -62,25 +64,25 @@ public record MachineProfile(
             throw new IllegalArgumentException("machine.hobMinRpm (" + hobMinRpm
                     + ") must not exceed machine.hobMaxRpm (" + hobMaxRpm + ")");
         }
-        Validate.field(MachineFields.MAX_SYNC_RATIO, maxSyncRatio);
-        Validate.present("machine.swivel", swivel);
-        Validate.field(MachineFields.RADIAL_MIN, radialMinMm);
-        Validate.field(MachineFields.RADIAL_MAX, radialMaxMm);
+        Checks.field(MachineFields.MAX_SYNC_RATIO, maxSyncRatio);
+        Checks.present("machine.swivel", swivel);
+        Checks.field(MachineFields.RADIAL_MIN, radialMinMm);
+        Checks.field(MachineFields.RADIAL_MAX, radialMaxMm);
         if (radialMinMm >= radialMaxMm) {
             throw new IllegalArgumentException("machine.radialMin (" + radialMinMm
                     + ") must be less than machine.radialMax (" + radialMaxMm + ")");
         }
-        Validate.field(MachineFields.AXIAL_MIN, axialMinMm);
-        Validate.field(MachineFields.AXIAL_MAX, axialMaxMm);
+        Checks.field(MachineFields.AXIAL_MIN, axialMinMm);
+        Checks.field(MachineFields.AXIAL_MAX, axialMaxMm);
         if (axialMinMm >= axialMaxMm) {
             throw new IllegalArgumentException("machine.axialMin (" + axialMinMm
                     + ") must be less than machine.axialMax (" + axialMaxMm + ")");
         }
         Objects.requireNonNull(hobShiftTravelMm, "hobShiftTravelMm");
-        hobShiftTravelMm.ifPresent(v -> Validate.positive("machine.hobShiftTravel", v));
-        Validate.field(MachineFields.RAPID, rapidMmPerMin);
-        Validate.field(MachineFields.MAX_FEED, maxFeedMmPerMin);
-        Validate.field(MachineFields.SYNC_SETTLE, syncSettleS);
-        Validate.field(MachineFields.MAX_HOB_DIAMETER, maxHobDiameterMm);
+        hobShiftTravelMm.ifPresent(v -> Checks.positive("machine.hobShiftTravel", v));
+        Checks.field(MachineFields.RAPID, rapidMmPerMin);
+        Checks.field(MachineFields.MAX_FEED, maxFeedMmPerMin);
+        Checks.field(MachineFields.SYNC_SETTLE, syncSettleS);
+        Checks.field(MachineFields.MAX_HOB_DIAMETER, maxHobDiameterMm);
     }
 }

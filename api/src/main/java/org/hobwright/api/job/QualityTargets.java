@@ -2,6 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * Limits the planner checks the predicted finish against. Empty values take defaults from the
@@ -11,6 +13,7 @@ import java.util.OptionalDouble;
  * @param envelopingDepthUm  largest enveloping-cut (generating flat) depth, micrometres
  * @param maxChipThicknessMm largest undeformed chip thickness, mm
  */
+@ApiStatus(since = "1.0")
 public record QualityTargets(
         OptionalDouble feedMarkDepthUm,
         OptionalDouble envelopingDepthUm,
@@ -24,8 +27,8 @@ public record QualityTargets(
         Objects.requireNonNull(feedMarkDepthUm, "feedMarkDepthUm");
         Objects.requireNonNull(envelopingDepthUm, "envelopingDepthUm");
         Objects.requireNonNull(maxChipThicknessMm, "maxChipThicknessMm");
-        org.hobwright.api.Validate.field(JobFields.TARGET_FEED_MARK_DEPTH, feedMarkDepthUm);
-        org.hobwright.api.Validate.field(JobFields.TARGET_ENVELOPING_DEPTH, envelopingDepthUm);
-        org.hobwright.api.Validate.field(JobFields.TARGET_MAX_CHIP_THICKNESS, maxChipThicknessMm);
+        Checks.field(JobFields.TARGET_FEED_MARK_DEPTH, feedMarkDepthUm);
+        Checks.field(JobFields.TARGET_ENVELOPING_DEPTH, envelopingDepthUm);
+        Checks.field(JobFields.TARGET_MAX_CHIP_THICKNESS, maxChipThicknessMm);
     }
 }

@@ -1,5 +1,7 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 import static org.hobwright.api.wizard.FieldType.CHOICE;
 import static org.hobwright.api.wizard.FieldType.TEXT;
 import static org.hobwright.api.job.UnitKind.NONE;
@@ -12,6 +14,7 @@ import java.util.Optional;
  * The fields of a cycle template (format {@code hobwright-template}, version 1): its own four and
  * the job's cycle fields ({@link JobFields#cycle()}), which it fills in a job that leaves them out.
  */
+@ApiStatus(since = "1.1")
 public final class TemplateFields {
     public static final FieldDef UNITS = FieldDef.of("units", CHOICE, NONE).choices(JobFields.UNIT_WORDS)
             .required(FieldDefault.convention("mm", "millimetres, the SI unit of length"))

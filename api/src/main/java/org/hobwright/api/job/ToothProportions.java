@@ -1,6 +1,7 @@
 package org.hobwright.api.job;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * Basic rack proportions of a {@code custom} tooth system, as factors of the normal module.
@@ -9,11 +10,12 @@ import org.hobwright.api.Validate;
  * @param dedendumFactor   h_fP / m_n, greater than the addendum factor
  * @param rootRadiusFactor ρ_fP / m_n
  */
+@ApiStatus(since = "1.0")
 public record ToothProportions(double addendumFactor, double dedendumFactor, double rootRadiusFactor) {
     public ToothProportions {
-        Validate.field(JobFields.GEAR_CUSTOM_ADDENDUM, addendumFactor);
-        Validate.field(JobFields.GEAR_CUSTOM_DEDENDUM, dedendumFactor);
-        Validate.field(JobFields.GEAR_CUSTOM_ROOT_RADIUS, rootRadiusFactor);
+        Checks.field(JobFields.GEAR_CUSTOM_ADDENDUM, addendumFactor);
+        Checks.field(JobFields.GEAR_CUSTOM_DEDENDUM, dedendumFactor);
+        Checks.field(JobFields.GEAR_CUSTOM_ROOT_RADIUS, rootRadiusFactor);
         if (dedendumFactor <= addendumFactor) {
             throw new IllegalArgumentException("dedendumFactor must be greater than addendumFactor ("
                     + addendumFactor + "), was " + dedendumFactor);

@@ -1,9 +1,12 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 /**
  * What a field's number measures, so that its unit follows the file's length unit. Every
  * conversion goes through {@link Units}, the one place where unit facts live.
  */
+@ApiStatus(since = "1.1")
 public enum UnitKind {
     /** No unit (counts, words, factors, ratios). */
     NONE("", ""),

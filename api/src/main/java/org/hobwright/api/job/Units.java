@@ -1,10 +1,13 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 /**
  * The length unit a job, template or report is written in. Everything inside Hobwright is in
  * millimetres; this enum is the one place where lengths cross between the user's unit and
  * millimetres.
  */
+@ApiStatus(since = "1.0")
 public enum Units {
     /** Millimetres; cutting speeds in metres per minute. */
     MM("mm", 1.0, 1.0),
@@ -40,11 +43,13 @@ public enum Units {
     }
 
     /** Converts a cutting speed in this unit system (m/min or ft/min) to metres per minute. */
+    @ApiStatus(since = "1.1")
     public double cuttingSpeedToMPerMin(double value) {
         return value * metresPerSpeedLength;
     }
 
     /** Converts a cutting speed in metres per minute to this unit system's (m/min or ft/min). */
+    @ApiStatus(since = "1.1")
     public double cuttingSpeedFromMPerMin(double metresPerMinute) {
         return metresPerMinute / metresPerSpeedLength;
     }

@@ -1,6 +1,7 @@
 package org.hobwright.text;
 
 import java.math.BigDecimal;
+import java.math.MathContext;
 import java.math.RoundingMode;
 
 /**
@@ -83,6 +84,59 @@ public final class Decimal {
     /** Formats with trailing zeros kept, e.g. {@code fixed(2.5, 3)} gives {@code 2.500}. */
     public static String fixed(double value, int decimals) {
         return fixed(value, decimals, true);
+    }
+
+    // ---- directed rounding for NC words -------------------------------------------------------
+
+    /** Digits a directed rounding keeps before it rounds: well above binary noise, far below any word. */
+    private static final MathContext SIGNIFICANT = new MathContext(12, RoundingMode.HALF_EVEN);
+
+    /**
+     * A number rounded to a fixed count of decimals in a chosen direction, as an NC word needs it:
+     * {@link RoundingMode#CEILING} or {@link RoundingMode#FLOOR} where only one direction is safe
+     * (a position that must stay outside the root, a speed at its upper limit),
+     * {@link RoundingMode#HALF_UP} (the rule of {@link #fixed}) elsewhere. Like {@link #fixed} it
+     * rounds the shortest decimal that identifies the double, so 0.1 rounded up to one decimal is
+     * 0.1, not 0.2. A directed mode (up, down, ceiling, floor) first takes the value to 12
+     * significant digits, so that the last bits of binary arithmetic (0.5000000000000001 from
+     * 12.7 / 25.4) do not move a word by a whole unit; the half-way modes round the digits as they
+     * are. The result has exactly {@code decimals} digits after the point and is never negative zero.
+     *
+     * @param value    the number (must be finite)
+     * @param decimals digits after the point, 0 or more
+     * @param mode     the direction
+     * @return the rounded number
+     * @throws IllegalArgumentException naming the value when it is not finite
+     */
+    public static BigDecimal rounded(double value, int decimals, RoundingMode mode) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("value must be a finite number, was " + value);
+        }
+        BigDecimal v = BigDecimal.valueOf(value);
+        boolean directed = mode == RoundingMode.UP || mode == RoundingMode.DOWN || mode == RoundingMode.CEILING
+                || mode == RoundingMode.FLOOR;
+        BigDecimal r = (directed ? v.round(SIGNIFICANT) : v).setScale(decimals, mode);
+        return r.signum() == 0 ? r.abs() : r;
+    }
+
+    /**
+     * The text of a rounded number ({@link #rounded}): plain digits, a point, no exponent.
+     *
+     * @param value         the number, its scale the count of decimals to write
+     * @param trailingZeros false strips trailing zeros after the point but keeps the point, as
+     *                      {@link #fixed(double, int, boolean)} does
+     */
+    public static String text(BigDecimal value, boolean trailingZeros) {
+        BigDecimal v = value.signum() == 0 ? value.abs() : value;
+        String text = v.toPlainString();
+        if (trailingZeros || v.scale() <= 0) {
+            return text;
+        }
+        int end = text.length();
+        while (text.charAt(end - 1) == '0') {
+            end--;
+        }
+        return text.substring(0, end);
     }
 
     /**

@@ -2,6 +2,7 @@ package org.hobwright.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
@@ -72,5 +73,42 @@ class DecimalTest {
     void refusesWhatIsNotANumber() {
         assertThrows(IllegalArgumentException.class, () -> Decimal.fixed(Double.NaN, 2));
         assertThrows(IllegalArgumentException.class, () -> Decimal.fixed(Double.POSITIVE_INFINITY, 2, false));
+    }
+
+    /**
+     * Directed rounding for NC words: up never gives less than the value and less than one unit
+     * more, down the mirror of it, against the JDK's {@link BigDecimal} on the decimal the double
+     * prints; half-up gives the same digits as {@link Decimal#fixed}.
+     */
+    @Test
+    void directedRoundingStaysOnItsSideWithinOneUnit() {
+        SplittableRandom random = new SplittableRandom(4120);
+        for (int i = 0; i < 20_000; i++) {
+            double v = (random.nextDouble() * 2 - 1) * Math.pow(10, random.nextInt(-6, 7));
+            int d = random.nextInt(0, 6);
+            BigDecimal exact = new BigDecimal(Double.toString(v));
+            BigDecimal unit = BigDecimal.ONE.movePointLeft(d);
+            BigDecimal up = Decimal.rounded(v, d, RoundingMode.CEILING);
+            BigDecimal down = Decimal.rounded(v, d, RoundingMode.FLOOR);
+            BigDecimal slack = exact.abs().multiply(new BigDecimal("1e-11"));
+            assertTrue(up.compareTo(exact.subtract(slack)) >= 0 && up.compareTo(exact.add(unit)) < 0, v + " up " + up);
+            assertTrue(down.compareTo(exact.add(slack)) <= 0 && down.compareTo(exact.subtract(unit)) > 0,
+                    v + " down " + down);
+            assertEquals(d, up.scale());
+            assertEquals(Decimal.fixed(v, d), Decimal.text(Decimal.rounded(v, d, RoundingMode.HALF_UP), true));
+        }
+    }
+
+    @Test
+    void directedRoundingIgnoresTheLastBitsOfBinaryArithmetic() {
+        // 12.7 mm / 25.4 is 0.5000000000000001 in binary; as an inch word it is 0.5000, not 0.5001
+        assertEquals("0.5000", Decimal.rounded(12.7 / 25.4, 4, RoundingMode.UP).toPlainString());
+        assertEquals("0.1", Decimal.rounded(0.1, 1, RoundingMode.CEILING).toPlainString());
+        assertEquals("0.000", Decimal.rounded(-0.0004, 3, RoundingMode.CEILING).toPlainString());
+        assertEquals("-0.001", Decimal.rounded(-0.0004, 3, RoundingMode.FLOOR).toPlainString());
+        assertEquals("24.", Decimal.text(new BigDecimal("24.000"), false));
+        assertEquals("17.5", Decimal.text(new BigDecimal("17.500"), false));
+        assertEquals("0", Decimal.text(new BigDecimal("0"), false));
+        assertThrows(IllegalArgumentException.class, () -> Decimal.rounded(Double.NaN, 2, RoundingMode.UP));
     }
 }

@@ -27,6 +27,32 @@ class SampleJobNumbersTest {
         assertEquals(expected, actual, Math.abs(expected) * relative + 1e-12, what);
     }
 
+    /**
+     * A number printed in a text agrees with the expected value to half a unit of its last printed digit
+     * ("0.2981" within 0.00005, "11.68" within 0.005; trailing zeros are not printed, so "0.3" stands for 0.30).
+     */
+    private static void printed(double expected, String number, String what) {
+        int dot = number.indexOf('.');
+        double halfUnit = 0.5 * Math.pow(10, dot < 0 ? 0 : -(number.length() - dot - 1));
+        assertEquals(expected, Double.parseDouble(number), halfUnit + 1e-12, what);
+    }
+
+    /** The number (digits, sign, decimal point) that follows {@code prefix} in {@code text}. */
+    private static String numberAfter(String text, String prefix) {
+        int start = text.indexOf(prefix);
+        assertTrue(start >= 0, "\"" + prefix + "\" in: " + text);
+        int i = start + prefix.length();
+        int end = i;
+        while (end < text.length() && ("-.".indexOf(text.charAt(end)) >= 0 || Character.isDigit(text.charAt(end)))) {
+            end++;
+        }
+        String number = text.substring(i, end);
+        if (number.endsWith(".")) {
+            number = number.substring(0, number.length() - 1);
+        }
+        return number;
+    }
+
     @Test
     void meteringPumpGear() {
         PlanRun r = PlanRun.of("metering-pump-gear.json", work);
@@ -91,9 +117,24 @@ class SampleJobNumbersTest {
     void pinionWithTwelveTeethIsUndercutAndTheShiftIsProposed() {
         PlanRun r = PlanRun.of("dosing-pinion-z12.json", work);
         var undercut = r.finding("UNDERCUT").orElseThrow(() -> new AssertionError(r.describe()));
-        // x_min = h* − z sin² α / 2 = 1 − 12 sin² 20° / 2 = 0.298133 (FORMULAS.md §2.3, case 13)
-        String fix = undercut.at("/fix").asString() + " " + undercut.at("/message").asString();
-        assertTrue(fix.contains("0.3") || fix.contains("0.29"), "proposes x ≈ 0.30: " + undercut);
+        // ISO 53 A hob: straight-flank height h* = h_fP − ρ_fP (1 − sin α) = 1.25 − 0.38 (1 − sin 20°) = 0.999968;
+        // x_min = h* − z sin² α / 2 = 0.298101 and z_min = 2 h* / sin² α = 17.097 (FORMULAS.md §2.3, case 13)
+        double sin = Math.sin(Math.toRadians(20));
+        double hStar = 1.25 - 0.38 * (1 - sin);
+        double xMin = hStar - 12 * sin * sin / 2;
+        String message = undercut.at("/message").asString();
+        String fix = undercut.at("/fix").asString();
+        printed(xMin, numberAfter(message, "needs a shift of at least "), "x_min in " + message);
+        printed(2 * hStar / (sin * sin), numberAfter(message, "no undercut from "), "z_min in " + message);
+        // the proposal is x_min rounded up to 0.01: 0.30; with it d_a = m (z + 2 + 2x) = 11.68 mm,
+        // d_f = m (z − 2.5 + 2x) = 8.08 mm (ISO 21771 eq. (33), (34)) and the tip thickness 0.435738 m
+        // (FORMULAS.md §2.2, case 12 neighbour; the generating simulation checks that relation)
+        double x = Math.ceil(xMin * 100) / 100;
+        assertEquals(0.30, x, 1e-12);
+        printed(x, numberAfter(fix, "set gear.profileShift to "), "proposed shift in " + fix);
+        printed(0.8 * (12 + 2 + 2 * x), numberAfter(fix, "tip diameter "), "tip diameter in " + fix);
+        printed(0.8 * (12 - 2.5 + 2 * x), numberAfter(fix, "root diameter "), "root diameter in " + fix);
+        printed(0.435738 * 0.8, numberAfter(fix, "tip thickness "), "tip thickness in " + fix);
         close(11.2, r.number("/gear/tipDiameter"), 1e-9, "d_a, x = 0");
         close(9.6 - 2 * 1.25 * 0.8, r.number("/gear/rootDiameter"), 1e-9, "d_f, x = 0");
     }

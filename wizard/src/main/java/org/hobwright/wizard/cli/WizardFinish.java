@@ -1,12 +1,15 @@
 package org.hobwright.wizard.cli;
 
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.host.PlannedJob;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.wizard.Wizard;
+import org.hobwright.wizard.run.Outputs;
 import org.hobwright.wizard.steps.StepFields;
 import org.hobwright.wizard.steps.StepSession;
 import org.hobwright.wizard.steps.UsedCycle;
@@ -40,9 +43,11 @@ final class WizardFinish implements TerminalWizard.Finish {
     public boolean offer(Wizard wizard, Prompter prompter) {
         TerminalWizard asker = new TerminalWizard(wizard, prompter);
         HobJob job = wizard.job().orElseThrow();
-        Map<String, String> jobFile = Map.of(job.name() + JOB_FILE, JobWriter.text(session.answers().toTree()));
-        JobInput in = new JobInput("wizard answers", Optional.of(job), List.of(), wizard.cycle());
-        Outputs.Produced produced = outputs.produce(List.of(in), jobFile);
+        Outputs.Produced written = outputs.produce(List.of(new Outputs.Named("wizard answers",
+                new PlannedJob(job, wizard.cycle().orElseThrow()))));
+        Map<String, String> files = new LinkedHashMap<>(written.files());
+        files.put(job.name() + JOB_FILE, JobWriter.text(session.answers().toTree()));
+        Outputs.Produced produced = new Outputs.Produced(files, written.findings());
         List<String> replaced = OutputFolder.existing(folder, produced.files().keySet());
         String line = asker.read("Write the program, CSV, setup sheet, report and job file to " + folder
                 + (replaced.isEmpty() ? "" : " (replacing " + String.join(", ", replaced) + ")")

@@ -7,6 +7,7 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.wizard.store.CuttingData;
 
 /**
  * The problems that stop a cycle from being planned at all; each becomes an error finding naming

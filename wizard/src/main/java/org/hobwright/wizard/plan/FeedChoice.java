@@ -5,6 +5,8 @@ import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.ValueRange;
 
 /**
  * Picks the feeds of the user's plan. A feed the job gives is kept (a finding says when it lies

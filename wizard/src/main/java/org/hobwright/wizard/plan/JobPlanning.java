@@ -19,6 +19,8 @@ import org.hobwright.wizard.analysis.JobAnalysis;
 import org.hobwright.wizard.setup.Angles;
 import org.hobwright.wizard.setup.HobSetup;
 import org.hobwright.wizard.simulate.GeneratingSimulation;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataTable;
 
 /**
  * Plans one analysed job: checks what would stop the cycle, resolves speeds, passes and feeds,
@@ -65,6 +67,7 @@ final class JobPlanning {
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
+        Clearances.check(cycle, job.units(), findings);
         if (swivel.rounded()) {
             findings.add(PlanCode.PLAN_SWIVEL_ROUNDED.at("machine.swivel.resolution",
                     "the holder's resolution rounds the swivel setting from " + Angles.dms(swivel.exactDeg()) + " to "

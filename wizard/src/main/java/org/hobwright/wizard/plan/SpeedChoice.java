@@ -4,6 +4,8 @@ import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.check.Severity;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.ValueRange;
 
 /**
  * Picks the hob speed of the user's plan: from the job's cutting speed, or the middle of the

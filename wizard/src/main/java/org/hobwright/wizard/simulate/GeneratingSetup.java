@@ -110,6 +110,11 @@ public record GeneratingSetup(int teeth, double normalModuleMm, double pressureA
         return Math.PI / teeth - st / (2 * referenceRadiusMm()) - Involute.inv(transversePressureAngleRad());
     }
 
+    /** True when the hob's tip radius leaves a tip flat (or the two radii just meet): the hob tooth can exist. */
+    public boolean hobHasTipFlat() {
+        return rack().hasTipFlat();
+    }
+
     /** The transverse rack tooth of the hob. */
     TransverseRack rack() {
         return new TransverseRack(transversePressureAngleRad(), Math.PI * transverseModuleMm() / 4, hobAddendumMm,

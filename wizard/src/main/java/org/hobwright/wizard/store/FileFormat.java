@@ -10,7 +10,7 @@ import tools.jackson.databind.JsonNode;
 
 /**
  * The three file formats this package reads, version {@value #VERSION}, with their structure
- * (DEVELOPERS.md, "File formats, version 1"). Opening a document checks {@code format} and
+ * (wizard/README.md, "File formats, version 1"). Opening a document checks {@code format} and
  * {@code version}, migrates an older version in memory, and checks the structure.
  */
 public enum FileFormat {

@@ -57,7 +57,7 @@ public enum InputCode implements FindingCode {
     LIBRARY_WRONG_MACHINE(Severity.ERROR, true, "a template made for another machine");
 
     /** The source named in every finding of this catalogue. */
-    public static final String SOURCE = "Hobwright file formats, version 1 (DEVELOPERS.md)";
+    public static final String SOURCE = "Hobwright file formats, version 1 (wizard/README.md)";
 
     private final Severity severity;
     private final boolean unreadable;

@@ -9,7 +9,7 @@ import java.util.function.DoubleUnaryOperator;
  * reference circle (the definition of tooth thickness), and swept along the helix z = φ · p_z / 2π for a
  * helical gear. Distances and extremes are found by sampling and golden-section refinement.
  */
-final class SampledFlanks {
+public final class SampledFlanks {
     private static final double GOLDEN = (Math.sqrt(5) - 1) / 2;
 
     private final int z;
@@ -23,7 +23,7 @@ final class SampledFlanks {
      * Builds the flank model from first definitions: m_t = m_n / cos β, d = z m_t,
      * tan α_t = tan α_n / cos β, d_b = d cos α_t, s_t = m_t (π/2 + 2 x tan α_n) + E_sn / cos β, p_z = π d / tan β.
      */
-    SampledFlanks(int z, double mn, double alphaNDeg, double betaDeg, double x, double allowance, double tipDiameter) {
+    public SampledFlanks(int z, double mn, double alphaNDeg, double betaDeg, double x, double allowance, double tipDiameter) {
         double beta = Math.toRadians(betaDeg);
         double an = Math.toRadians(alphaNDeg);
         double mt = mn / Math.cos(beta);
@@ -75,10 +75,24 @@ final class SampledFlanks {
     }
 
     /** Shortest distance from a point to the lower flank of the tooth above the gap centred on +x (φ limited). */
-    double distanceToGapFlank(double[] c, double phiRange) {
+    public double distanceToGapFlank(double[] c, double phiRange) {
         double centre = Math.PI / z;
         DoubleUnaryOperator overPhi = phi -> minimise(t -> dist(point(centre, false, t, phi), c), 0, tipRoll() * 1.5);
         return leadPerRad == 0 ? overPhi.applyAsDouble(0) : minimise(overPhi, -phiRange, phiRange, 40);
+    }
+
+    /**
+     * Diameter of the flank point nearest to c (the lower flank of the tooth above the gap centred on +x, φ
+     * limited): where a ball centred at c touches the helicoid. The involute is continued beyond the tip, so
+     * a ball riding on the tip edge shows a contact above the tip diameter.
+     */
+    double nearestFlankDiameter(double[] c, double phiRange) {
+        double centre = Math.PI / z;
+        DoubleUnaryOperator overT = phi -> minimise(t -> dist(point(centre, false, t, phi), c), 0, tipRoll() * 1.5);
+        double phi = leadPerRad == 0 ? 0 : argmin(overT, -phiRange, phiRange, 40);
+        double t = argmin(s -> dist(point(centre, false, s, phi), c), 0, tipRoll() * 1.5, 200);
+        double[] p = point(centre, false, t, phi);
+        return 2 * Math.hypot(p[0], p[1]);
     }
 
     /** Largest projection onto n of the upper flank of the tooth centred at {@code centre}, |z| ≤ b/2. */
@@ -107,6 +121,11 @@ final class SampledFlanks {
 
     /** Minimum of f on [lo, hi]: n samples, then golden-section search around the best. */
     static double minimise(DoubleUnaryOperator f, double lo, double hi, int n) {
+        return f.applyAsDouble(argmin(f, lo, hi, n));
+    }
+
+    /** Where f is least on [lo, hi]: n samples, then golden-section search around the best. */
+    static double argmin(DoubleUnaryOperator f, double lo, double hi, int n) {
         double step = (hi - lo) / n;
         int best = 0;
         double bestValue = Double.POSITIVE_INFINITY;
@@ -138,6 +157,7 @@ final class SampledFlanks {
                 fd = f.applyAsDouble(d);
             }
         }
-        return Math.min(bestValue, Math.min(fc, fd));
+        double found = fc < fd ? c : d;
+        return Math.min(fc, fd) < bestValue ? found : lo + best * step;
     }
 }

@@ -57,6 +57,10 @@ class ApproachCrossCheckTest {
     void matchesTheWorkedExample() {
         // FORMULAS.md §10 row 35: 18.1330 mm
         assertEquals(18.1330, independent(4.5, 70, 66.9166, 13.2368), 5e-4);
+        // FORMULAS.md §10 row 34: with the hob square to the gear (η = 0) the construction is the spur case,
+        // E = √(h (d_a0 − h)) = 17.1683 mm for h 4.5, d_a0 70; the blank diameter does not enter
+        assertEquals(17.1683, independent(4.5, 70, 66.9166, 0), 5e-4);
+        assertEquals(CutGeometry.approachSpur(4.5, 70), independent(4.5, 70, 40, 0), 1e-8);
     }
 
     @Test

@@ -3,14 +3,17 @@ package org.hobwright.wizard.setup;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.util.Locale;
+
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
 
 class AnglesTest {
 
-    // Worked values: 13.2368° = 13° 14′ 12.5″ (12.48″) and 1.76323° = 1° 45′ 47.6″ — conversion by
-    // definition of the minute (1/60°) and second (1/3600°), checked by hand.
+    // Reading: by definition of the minute (1/60°) and second (1/3600°); 13°14'12" = 13 + 14/60 + 12/3600.
     @ParameterizedTest
     @CsvSource(delimiter = '|', value = {
         "1.5|1.5", "1°30'|1.5", "1 30 0|1.5", "1° 30′ 0″|1.5", "-1°30'|-1.5", "13d14m12s|13.236666666666666",
@@ -52,19 +55,70 @@ class AnglesTest {
         }
     }
 
-    /** The texts are those of java.util.Formatter with the patterns they replace, over every tenth of a second. */
+    /**
+     * The degrees, minutes and seconds of an angle, computed exactly: the double's exact decimal value
+     * (BigDecimal) times 3600, rounded half up to the tenth of a second (or times 60 to the minute), split by
+     * integer division. No floating-point product and no Math.round, so a wrong rounding or carry in
+     * {@link Angles} cannot agree with it.
+     */
+    private static String exactDms(double deg, boolean seconds) {
+        return text(deg < 0, exactUnits(deg, seconds, RoundingMode.HALF_UP), seconds);
+    }
+
+    private static String text(boolean negative, long units, boolean seconds) {
+        String sign = negative && units > 0 ? "-" : "";
+        return seconds
+                ? String.format(Locale.ROOT, "%s%d° %02d′ %02d.%d″", sign, units / 36000, units / 600 % 60,
+                        units / 10 % 60, units % 10)
+                : String.format(Locale.ROOT, "%s%d° %02d′", sign, units / 60, units % 60);
+    }
+
+    /** |deg| in tenths of a second (or in minutes), exactly, rounded as asked. */
+    private static long exactUnits(double deg, boolean seconds, RoundingMode rounding) {
+        return new BigDecimal(deg).abs().multiply(BigDecimal.valueOf(seconds ? 36000 : 60))
+                .setScale(0, rounding).longValueExact();
+    }
+
+    /**
+     * Within 1e-6 of a unit of a half, the double product in {@link Angles} may land on either side
+     * (2.0083333333333333° is 120.49999999999999...′ exactly and is shown as 2° 01′): there either neighbour
+     * is accepted. Everywhere else the text must be the exactly rounded one.
+     */
+    private static void assertText(double deg, boolean seconds) {
+        String actual = seconds ? Angles.dms(deg) : Angles.degreesMinutes(deg);
+        BigDecimal scaled = new BigDecimal(deg).abs().multiply(BigDecimal.valueOf(seconds ? 36000 : 60));
+        double fraction = scaled.subtract(new BigDecimal(scaled.toBigInteger())).doubleValue();
+        if (Math.abs(fraction - 0.5) < 1e-6) {
+            String down = text(deg < 0, exactUnits(deg, seconds, RoundingMode.DOWN), seconds);
+            String up = text(deg < 0, exactUnits(deg, seconds, RoundingMode.UP), seconds);
+            assertTrue(actual.equals(down) || actual.equals(up), actual + " for " + deg + ": " + down + " or " + up);
+        } else {
+            assertEquals(exactDms(deg, seconds), actual, (seconds ? "dms of " : "degrees and minutes of ") + deg);
+        }
+    }
+
+    // The worked values of FORMULAS.md §4.3 and case 28 from exact decimal arithmetic: 13.2368° is 47 652.48″
+    // → 13° 14′ 12.5″; 1.76323° is 6 347.628″ → 1° 45′ 47.6″; 29.999999° is 107 999.9964″ → 30° 00′ 00.0″.
+    @ParameterizedTest
+    @ValueSource(doubles = {13.2368, 1.76323, -1.76323, 29.999999, 0, 16.7632, 3.52812, 45, 0.0000138, -0.0000138})
+    void workedValuesMatchExactArithmetic(double deg) {
+        assertEquals(exactDms(deg, true), Angles.dms(deg), "dms of " + deg);
+        assertEquals(exactDms(deg, false), Angles.degreesMinutes(deg), "degrees and minutes of " + deg);
+    }
+
+    /** Every 613th tenth of a second from −3° to 91°, and 2,000 fixed-seed angles, against exact arithmetic. */
     @org.junit.jupiter.api.Test
-    void textsMatchTheJdkFormatter() {
-        for (long tenths = -36000 * 3; tenths <= 36000 * 91; tenths += 7) {
+    void textsMatchExactArithmetic() {
+        for (long tenths = -36000 * 3; tenths <= 36000 * 91; tenths += 613) {
             double deg = tenths / 36000.0;
-            long t = Math.round(Math.abs(deg) * 36000.0);
-            String sign = deg < 0 && t > 0 ? "-" : "";
-            assertEquals(String.format(java.util.Locale.ROOT, "%s%d° %02d′ %04.1f″", sign, t / 36000,
-                    (t % 36000) / 600, (t % 600) / 10.0), Angles.dms(deg), "dms of " + deg);
-            long minutes = Math.round(Math.abs(deg) * 60.0);
-            String msign = deg < 0 && minutes > 0 ? "-" : "";
-            assertEquals(String.format(java.util.Locale.ROOT, "%s%d° %02d′", msign, minutes / 60, minutes % 60),
-                    Angles.degreesMinutes(deg), "degrees and minutes of " + deg);
+            assertText(deg, true);
+            assertText(deg, false);
+        }
+        java.util.SplittableRandom r = new java.util.SplittableRandom(1296);
+        for (int i = 0; i < 2_000; i++) {
+            double deg = r.nextDouble(-90, 90);
+            assertText(deg, true);
+            assertText(deg, false);
         }
     }
 }

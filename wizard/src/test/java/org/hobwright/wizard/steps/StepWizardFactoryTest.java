@@ -1,6 +1,7 @@
 package org.hobwright.wizard.steps;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -25,13 +26,13 @@ class StepWizardFactoryTest {
         List<WizardFactory> found = ServiceLoader.load(WizardFactory.class).stream().map(ServiceLoader.Provider::get)
                 .toList();
         assertEquals(1, found.size(), found::toString);
-        assertEquals(Spi.VERSION, found.get(0).spiVersion());
+        assertEquals(Spi.API_VERSION, found.get(0).apiVersion());
         return found.get(0);
     }
 
     @Test
     void aSessionStartsBlankOnGear() {
-        Wizard w = factory().start(Map.of("home", home.toString()));
+        Wizard w = factory().start(Map.of(WizardFactory.HOME, home.toString()));
         assertEquals(StepId.GEAR, w.view().id());
         assertEquals("", w.value("name"), "no sample part name on a real program");
         assertEquals("", w.value("gear.teeth"));
@@ -49,6 +50,22 @@ class StepWizardFactoryTest {
         assertTrue(w.answer("gear.toothSystem", "iso53-c").isEmpty());
         assertTrue(w.answer("gear.diametralPitch", "10").isEmpty());
         assertEquals("iso53-c", w.value("gear.toothSystem"), "a tooth system answered is kept");
+    }
+
+    @Test
+    void aSessionStartsBlankUnlessTheSampleIsAskedFor() {
+        Wizard blank = factory().start(Map.of(WizardFactory.HOME, home.toString()));
+        assertEquals(StepId.GEAR, blank.view().id());
+        for (FieldSpec f : blank.view().fields()) {
+            assertTrue(f.defaultValue().isEmpty() || f.help().contains("Default: standard")
+                    || f.help().contains("Default: trade convention"), f.key() + " has no sample value");
+        }
+        assertEquals("", blank.value("gear.teeth"));
+        assertFalse(blank.next(true).moved(), "a blank gear step cannot complete");
+        Wizard sample = factory().start(Map.of(WizardFactory.HOME, home.toString(),
+                WizardFactory.START, WizardFactory.START_SAMPLE));
+        assertEquals("metering-pump-gear", sample.value("name"));
+        assertEquals("varrow-sl16", sample.value("machine"));
     }
 
     @Test
