@@ -3,7 +3,6 @@ package org.hobwright.post.nc;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
@@ -97,9 +96,9 @@ final class SafetyCheck {
                                 + " comes before the synchronisation is on",
                                 "switch the synchronisation on before the first feed move");
                     } else if (!fed && settle < limits.syncSettleS() * (1 - REL)) {
-                        error(PostCode.NC_SAFETY_SETTLE, "machine.syncSettle", String.format(Locale.ROOT,
-                                "the first feed move %d follows the synchronisation after %.3f s of dwell, the machine"
-                                        + " needs %.3f s", index, settle, limits.syncSettleS()),
+                        error(PostCode.NC_SAFETY_SETTLE, "machine.syncSettle", "the first feed move " + index
+                                + " follows the synchronisation after " + Decimal.fixed(settle, 3)
+                                + " s of dwell, the machine needs " + Decimal.fixed(limits.syncSettleS(), 3) + " s",
                                 "dwell for the machine's settle time after the synchronisation");
                     }
                     fed = true;
@@ -124,9 +123,9 @@ final class SafetyCheck {
         double ratio = (double) s.hobTurns() / s.workTurns();
         String at = " at " + s.hobTurns() + ":" + s.workTurns();
         if (ratio > limits.maxSyncRatio() * (1 + REL)) {
-            error(PostCode.NC_SAFETY_SYNC_RATIO, "machine.maxSyncRatio", String.format(Locale.ROOT,
-                    "operation %d asks for a ratio of %d:%d, above the machine's largest %.1f:1",
-                    index, s.hobTurns(), s.workTurns(), limits.maxSyncRatio()), "use a multi-start hob or another machine");
+            error(PostCode.NC_SAFETY_SYNC_RATIO, "machine.maxSyncRatio", "operation " + index + " asks for a ratio of "
+                    + s.hobTurns() + ":" + s.workTurns() + ", above the machine's largest "
+                    + Decimal.fixed(limits.maxSyncRatio(), 1) + ":1", "use a multi-start hob or another machine");
         }
         TemplateKey sync = s.differentialDegPerMm() != 0 ? TemplateKey.SYNC_ON_HELIX : TemplateKey.SYNC_ON;
         BigDecimal hob = p.number(Placeholder.HOB_RPM);
@@ -177,17 +176,18 @@ final class SafetyCheck {
         String unit = w.units().symbol() + " per work revolution";
         double plannedRate = mv.feedMmPerRev() * plannedWorkRpm;
         if (!(mv.feedMmPerRev() > 0) || plannedRate > limits.maxFeedMmPerMin() * (1 + REL)) {
-            error(PostCode.NC_SAFETY_FEED_RATE, "machine.maxFeed", String.format(Locale.ROOT, "feed move %d asks for %s %s"
-                    + " at %s rpm of the work, %s mm/min; a feed must be above zero and not above the machine's %s"
-                    + " mm/min", index, plain(w.feed(mv.feedMmPerRev())), unit, plain(plannedWorkRpm),
-                    plain(plannedRate), plain(limits.maxFeedMmPerMin())), "lower the feed or the speed");
+            error(PostCode.NC_SAFETY_FEED_RATE, "machine.maxFeed", "feed move " + index + " asks for "
+                    + plain(w.feed(mv.feedMmPerRev())) + " " + unit + " at " + plain(plannedWorkRpm)
+                    + " rpm of the work, " + plain(plannedRate)
+                    + " mm/min; a feed must be above zero and not above the machine's "
+                    + plain(limits.maxFeedMmPerMin()) + " mm/min", "lower the feed or the speed");
         } else if (f.signum() <= 0) {
             precision("feed move " + index + " writes the feed as " + word + "; a feed word must be above zero",
                     Placeholder.FEED, w.feed(mv.feedMmPerRev()), unit, "raise the feed");
         } else if (!Double.isNaN(workBound) && w.feedMmPerRev(f) * workBound > limits.maxFeedMmPerMin() * (1 + REL)) {
-            precision(String.format(Locale.ROOT, "feed move %d (%s) at up to %s rpm of the work feeds %s mm/min,"
-                    + " above the machine's %s mm/min", index, word, plain(workBound),
-                    plain(w.feedMmPerRev(f) * workBound), plain(limits.maxFeedMmPerMin())), Placeholder.FEED,
+            precision("feed move " + index + " (" + word + ") at up to " + plain(workBound) + " rpm of the work feeds "
+                    + plain(w.feedMmPerRev(f) * workBound) + " mm/min, above the machine's "
+                    + plain(limits.maxFeedMmPerMin()) + " mm/min", Placeholder.FEED,
                     w.feed(mv.feedMmPerRev()), unit, "lower the feed or the speed");
         }
     }
@@ -196,13 +196,14 @@ final class SafetyCheck {
         String what = mv.rapid() ? "rapid move" : "feed move";
         String fix = "plan the cycle again; no move may go inside the final infeed diameter";
         if (mv.diameterMm() < limits.rootDiameterMm() * (1 - REL)) {
-            error(PostCode.NC_SAFETY_BELOW_ROOT, "cycle.steps", String.format(Locale.ROOT,
-                    "%s %d goes to diameter %s mm, inside the final root diameter %s mm", what, index,
-                    plain(mv.diameterMm()), plain(limits.rootDiameterMm())), fix);
+            error(PostCode.NC_SAFETY_BELOW_ROOT, "cycle.steps", what + " " + index + " goes to diameter "
+                    + plain(mv.diameterMm()) + " mm, inside the final root diameter " + plain(limits.rootDiameterMm())
+                    + " mm", fix);
         } else if (dia < limits.rootDiameterMm() * (1 - REL)) {
-            precision(String.format(Locale.ROOT, "%s %d goes to %s, diameter %s mm, inside the final root diameter %s"
-                    + " mm", what, index, axisWord(d.radial(), p.number(Placeholder.RADIAL)), plain(dia),
-                    plain(limits.rootDiameterMm())), Placeholder.RADIAL, w.radial(mv.diameterMm()), w.units().symbol(),
+            precision(what + " " + index + " goes to " + axisWord(d.radial(), p.number(Placeholder.RADIAL))
+                    + ", diameter " + plain(dia) + " mm, inside the final root diameter "
+                    + plain(limits.rootDiameterMm())
+                    + " mm", Placeholder.RADIAL, w.radial(mv.diameterMm()), w.units().symbol(),
                     fix);
         }
     }
@@ -234,12 +235,12 @@ final class SafetyCheck {
         if (gap >= reach * (1 - REL)) {
             return;
         }
-        error(PostCode.NC_SAFETY_RAPID_IN_BLANK, "cycle.axialClearance", String.format(Locale.ROOT,
-                "rapid move %d to %s %s brings the hob %s mm into the blank: the hob tip at diameter %s mm needs %s mm"
-                        + " of axial clear from the blank's faces (blank diameter %s mm, face 0 to %s mm), it has %s mm",
-                index, axisWord(d.radial(), p.number(Placeholder.RADIAL)), axisWord(d.axial(),
-                        p.number(Placeholder.AXIAL)), plain(reach - gap), plain(lowDia), plain(reach),
-                plain(limits.blankDiameterMm()), plain(limits.faceWidthMm()), plain(gap)),
+        error(PostCode.NC_SAFETY_RAPID_IN_BLANK, "cycle.axialClearance", "rapid move " + index + " to "
+                + axisWord(d.radial(), p.number(Placeholder.RADIAL)) + " "
+                + axisWord(d.axial(), p.number(Placeholder.AXIAL)) + " brings the hob " + plain(reach - gap)
+                + " mm into the blank: the hob tip at diameter " + plain(lowDia) + " mm needs " + plain(reach)
+                + " mm of axial clear from the blank's faces (blank diameter " + plain(limits.blankDiameterMm())
+                + " mm, face 0 to " + plain(limits.faceWidthMm()) + " mm), it has " + plain(gap) + " mm",
                 "raise cycle.axialClearance and cycle.radialClearance, then plan again");
     }
 
@@ -261,7 +262,8 @@ final class SafetyCheck {
 
     /** A word that breaks an invariant the planned value kept: the dialect's decimals are the cause. */
     private void precision(String text, Placeholder p, double planned, String unit, String fix) {
-        error(PostCode.NC_SAFETY_PRECISION, "dialect." + w.decimalsKey(p), text + ": the planned " + plain(planned) + " "
+        error(PostCode.NC_SAFETY_PRECISION, "dialect." + w.decimalsKey(p), text + ": the planned " + plain(planned)
+                + " "
                 + unit + " cannot be written safely with " + w.decimals(p) + " decimals (" + w.decimalsKey(p) + ")",
                 "give the dialect more decimals if the control accepts them, or change the job so the value can be"
                         + " written (" + fix + ")");
@@ -282,7 +284,7 @@ final class SafetyCheck {
     }
 
     private static String plain(double v) {
-        return Double.isFinite(v) ? Decimal.exact(Double.parseDouble(Decimal.fixed(v, 6))) : String.valueOf(v);
+        return Decimal.plain(v, 6);
     }
 
     private static String plain(BigDecimal v) {

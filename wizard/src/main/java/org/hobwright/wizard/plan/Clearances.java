@@ -4,6 +4,7 @@ import java.util.List;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 
 /**
  * The air gaps the rapids keep from the blank: a radial or axial clearance below 0.5 mm is a
@@ -29,10 +30,10 @@ final class Clearances {
         }
         int decimals = units == Units.MM ? 3 : 4;
         findings.add(PlanCode.PLAN_CLEARANCE_SMALL.at(field, "the " + which + " clearance "
-                + Text.fixed(units.fromMm(mm), decimals) + " " + units.symbol() + " is below "
-                + Text.fixed(units.fromMm(MIN_MM), decimals) + " " + units.symbol() + ": the hob rapids to within it of"
+                + Decimal.fixed(units.fromMm(mm), decimals) + " " + units.symbol() + " is below "
+                + Decimal.fixed(units.fromMm(MIN_MM), decimals) + " " + units.symbol() + ": the hob rapids to within it of"
                 + " the blank as drawn, with nothing left for the blank's size, runout and position or the rapid's"
-                + " overshoot", "give a clearance of at least " + Text.fixed(units.fromMm(MIN_MM), decimals) + " "
+                + " overshoot", "give a clearance of at least " + Decimal.fixed(units.fromMm(MIN_MM), decimals) + " "
                 + units.symbol()));
     }
 }

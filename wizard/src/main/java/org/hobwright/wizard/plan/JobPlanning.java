@@ -15,6 +15,7 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.analysis.JobAnalysis;
 import org.hobwright.wizard.setup.Angles;
 import org.hobwright.wizard.setup.HobSetup;
@@ -152,11 +153,11 @@ final class JobPlanning {
             return Optional.empty();
         }
         FastestProposal p = r.get().proposal();
-        findings.add(PlanCode.PLAN_FASTEST.at("cycle.fastest", "fastest cycle " + Text.fixed(p.cycleTimeS(), 1)
-                + " s (proved lower bound " + Text.fixed(p.lowerBoundS(), 1) + " s) against "
-                + Text.fixed(userTimeS, 1) + " s planned: " + Text.fixed(p.cuttingSpeedMPerMin(), 1) + " m/min, "
-                + p.passes() + " pass(es), roughing " + Text.fixed(p.roughFeedMmPerRev(), 3) + " mm, finishing "
-                + Text.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(), null));
+        findings.add(PlanCode.PLAN_FASTEST.at("cycle.fastest", "fastest cycle " + Decimal.fixed(p.cycleTimeS(), 1)
+                + " s (proved lower bound " + Decimal.fixed(p.lowerBoundS(), 1) + " s) against "
+                + Decimal.fixed(userTimeS, 1) + " s planned: " + Decimal.fixed(p.cuttingSpeedMPerMin(), 1) + " m/min, "
+                + p.passes() + " pass(es), roughing " + Decimal.fixed(p.roughFeedMmPerRev(), 3) + " mm, finishing "
+                + Decimal.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(), null));
         return Optional.of(p);
     }
 

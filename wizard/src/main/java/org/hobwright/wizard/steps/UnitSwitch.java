@@ -1,7 +1,5 @@
 package org.hobwright.wizard.steps;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
@@ -9,6 +7,7 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.UnitKind;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 
 /**
  * Keeps length, feed and cutting-speed answers meaning the same when the job's unit changes: a
@@ -78,7 +77,6 @@ final class UnitSwitch {
             return Optional.empty();
         }
         double out = kind.fromCanonical(kind.toCanonical(v, from), to);
-        BigDecimal rounded = new BigDecimal(out).round(new MathContext(10)).stripTrailingZeros();
-        return Optional.of(rounded.scale() < 0 ? rounded.setScale(0).toPlainString() : rounded.toPlainString());
+        return Optional.of(Decimal.significant(out, 10));
     }
 }
