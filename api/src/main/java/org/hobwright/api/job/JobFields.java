@@ -44,6 +44,8 @@ public final class JobFields {
     public static final List<String> HOB_MATERIALS = List.of("hss", "hss-coated", "carbide");
     /** Hobbing methods. */
     public static final List<String> METHODS = List.of("climb", "conventional");
+    /** Senses a hob cuts in, seen from its own drive end. */
+    public static final List<String> SENSES = List.of("clockwise", "counter-clockwise");
     /** Length units of a file. */
     public static final List<String> UNIT_WORDS = List.of("mm", "in");
 
@@ -173,6 +175,13 @@ public final class JobFields {
             .text("Hob speed limit", "The hob maker's speed limit, if given."));
     public static final FieldDef HOB_MATERIAL = add(FieldDef.of("hob.material", CHOICE, NONE).choices(HOB_MATERIALS)
             .mustGive().text("Hob material", "Cutting material of the hob."));
+    public static final FieldDef HOB_CUTTING_SENSE = add(FieldDef.of("hob.cuttingSense", CHOICE, NONE).choices(SENSES)
+            .optional(FieldDefault.computed("clockwise, with a remark"))
+            .text("Hob cutting sense", "The sense the hob cuts in, seen from its own drive end: its cutting faces"
+                    + " lead."));
+    public static final FieldDef HOB_IDENTIFIER = add(FieldDef.of("hob.identifier", TEXT, NONE)
+            .optional(FieldDefault.unused("no identifier on the setup sheet"))
+            .text("Hob identifier", "Your tool number or serial of the hob, for the setup sheet."));
 
     // ---------------------------------------------------------------- machine
     public static final FieldDef MACHINE = add(FieldDef.of("machine", CHOICE, NONE).mustGive().namesLibraryEntry()
@@ -240,6 +249,25 @@ public final class JobFields {
     public static final FieldDef CYCLE_FASTEST = add(FieldDef.of("cycle.fastest", BOOLEAN, NONE)
             .optional(FieldDefault.convention("no", "only the cycle asked for"))
             .text("Propose the fastest cycle", "Yes to have the optimiser propose the shortest cycle beside yours."));
+    public static final FieldDef CYCLE_BATCH_SIZE = add(FieldDef.of("cycle.batchSize", INTEGER, NONE)
+            .range(1, 1_000_000).optional(FieldDefault.convention("1", "one part"))
+            .text("Parts in the batch", "How many parts to cut; the review gives the time per part, the batch time"
+                    + " and the hob life."));
+    public static final FieldDef CYCLE_PROGRAM_NUMBER = add(FieldDef.of("cycle.programNumber", INTEGER, NONE)
+            .range(0, 99_999_999).optional(FieldDefault.computed("the dialect's program number"))
+            .text("Program number", "The program number; it must lie in the dialect's range."));
+    public static final FieldDef CYCLE_TOOL_STATION = add(FieldDef.of("cycle.toolStation", INTEGER, NONE)
+            .range(0, 99_999).optional(FieldDefault.computed("the dialect's tool station"))
+            .text("Hob tool station", "The tool station the hob sits in; it must lie in the dialect's range."));
+    public static final FieldDef CYCLE_HOB_TURNED_ROUND = add(FieldDef.of("cycle.hobTurnedRound", BOOLEAN, NONE)
+            .optional(FieldDefault.convention("no", "the hob mounted the usual way"))
+            .text("Hob turned round on its arbor", "Yes only when the hob is mounted the other way round: the hob"
+                    + " spindle then runs against the hob's marked sense."));
+    public static final FieldDef HOB_LIFE_PER_TOOTH = add(FieldDef.of("cycle.hobLife.lengthPerTooth", NUMBER,
+            UnitKind.METRE).range(FieldRange.POSITIVE).optional(FieldDefault.computed("a typical value by hob"
+                    + " material"))
+            .text("Hob life per tooth", "Wear criterion: metres of gear tooth flank one hob tooth cuts before the"
+                    + " hob must be sharpened."));
 
     private JobFields() {
     }

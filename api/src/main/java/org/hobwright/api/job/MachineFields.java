@@ -26,6 +26,9 @@ import java.util.Optional;
 public final class MachineFields {
     private static final List<FieldDef> ALL = new ArrayList<>();
 
+    /** How the teeth of a clockwise-turning hob move at the work. */
+    public static final List<String> TEETH_MOVES = List.of("away-from-chuck", "toward-chuck");
+
     /** Scales of a swivel holder. */
     public static final List<String> SCALES = List.of("degrees-minutes", "decimal-degrees");
 
@@ -45,10 +48,19 @@ public final class MachineFields {
             .range(FieldRange.NON_NEGATIVE).mustGive().text("Work spindle: lowest speed", "Lowest stable speed."));
     public static final FieldDef WORK_MAX_RPM = add(FieldDef.of("workSpindle.maxRpm", NUMBER, RPM)
             .range(FieldRange.POSITIVE).mustGive().text("Work spindle: highest speed", "Highest speed."));
+    public static final FieldDef WORK_PHASED_SYNC = add(FieldDef.of("workSpindle.phasedSync", BOOLEAN, NONE)
+            .optional(FieldDefault.convention("no", NOT_UNLESS))
+            .text("Phased synchronisation", "True when the control can start the synchronisation at a set"
+                    + " work-spindle angle."));
     public static final FieldDef HOB_MIN_RPM = add(FieldDef.of("hobSpindle.minRpm", NUMBER, RPM)
             .range(FieldRange.NON_NEGATIVE).mustGive().text("Hob spindle: lowest speed", "Lowest stable speed."));
     public static final FieldDef HOB_MAX_RPM = add(FieldDef.of("hobSpindle.maxRpm", NUMBER, RPM)
             .range(FieldRange.POSITIVE).mustGive().text("Hob spindle: highest speed", "Highest speed."));
+    public static final FieldDef HOB_CLOCKWISE_TEETH_MOVE = add(FieldDef.of("hobSpindle.clockwiseTeethMove", CHOICE,
+            NONE).choices(TEETH_MOVES).optional(FieldDefault.convention(TEETH_MOVES.get(0), "the usual mounting,"
+                    + " unless the profile says otherwise"))
+            .text("Clockwise hob: teeth move", "With the hob spindle turning clockwise seen from its drive end, the"
+                    + " way the hob teeth at the work move along the work axis."));
     public static final FieldDef MAX_SYNC_RATIO = add(FieldDef.of("maxSyncRatio", NUMBER, NONE)
             .range(FieldRange.POSITIVE).mustGive()
             .text("Largest sync ratio", "Largest hob turns per work turn the synchronisation accepts."));
@@ -98,12 +110,24 @@ public final class MachineFields {
     public static final FieldDef MAX_HOB_DIAMETER = add(FieldDef.of("maxHobDiameter", NUMBER, LENGTH)
             .range(FieldRange.POSITIVE).mustGive().text("Largest hob", "Largest hob the holder takes."));
 
+    public static final FieldDef TIME_LOAD = add(time("load", "Load time", "Putting a blank in and clamping it."));
+    public static final FieldDef TIME_UNLOAD = add(time("unload", "Unload time", "Taking the finished part out."));
+    public static final FieldDef TIME_SWIVEL = add(time("swivel", "Swivel time", "One programmed swivel positioning."));
+    public static final FieldDef TIME_HOB_SHIFT = add(time("hobShift", "Hob-shift time", "One hob shift."));
+    public static final FieldDef TIME_HOB_CHANGE = add(time("hobChange", "Hob change time", "Taking a worn hob off"
+            + " and setting a sharp one."));
+
     private MachineFields() {
     }
 
     private static FieldDef add(FieldDef f) {
         ALL.add(f);
         return f;
+    }
+
+    private static FieldDef time(String leaf, String label, String help) {
+        return FieldDef.of("times." + leaf, NUMBER, SECONDS).range(FieldRange.NON_NEGATIVE)
+                .optional(FieldDefault.computed("0 s, with a remark")).text(label, help + " Measured by the shop.");
     }
 
     /** Every field of a machine profile, in the order written. */

@@ -29,7 +29,9 @@ public enum UnitKind {
     /** A spindle speed, revolutions per minute. */
     RPM("rpm", "rpm"),
     /** A time in seconds. */
-    SECONDS("s", "s");
+    SECONDS("s", "s"),
+    /** A length in metres in every file (a wear length of the flank). */
+    METRE("m", "m");
 
     private final String metric;
     private final String inch;

@@ -3,11 +3,13 @@ package org.hobwright.wizard.store;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.OptionalInt;
 import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.api.job.RunSettings;
 import org.hobwright.api.job.Units;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ObjectNode;
@@ -26,12 +28,12 @@ final class CycleReader {
     record Values(Optional<String> workMaterial, OptionalDouble cuttingSpeed, OptionalDouble roughFeed,
                   OptionalDouble finishFeed, OptionalDouble roughDepth, double finishStock, HobbingMethod method,
                   double axialClearance, double radialClearance, boolean coolant, QualityTargets targets,
-                  double shiftPerPart, int shiftEvery, boolean fastest) {
+                  double shiftPerPart, int shiftEvery, boolean fastest, RunSettings run) {
 
         CycleSettings settings() {
             return new CycleSettings(workMaterial.orElseThrow(), cuttingSpeed, roughFeed, finishFeed, roughDepth,
                     finishStock, method, axialClearance, radialClearance, coolant, targets, shiftPerPart, shiftEvery,
-                    fastest);
+                    fastest, run);
         }
     }
 
@@ -60,8 +62,14 @@ final class CycleReader {
         double perPart = s.value(JobFields.HOB_SHIFT_PER_PART);
         int every = s.integer(JobFields.HOB_SHIFT_EVERY_PARTS).orElse(1);
         boolean fastest = f.bool(JobFields.CYCLE_FASTEST);
+        int batch = f.integer(JobFields.CYCLE_BATCH_SIZE).orElse(1);
+        OptionalInt program = f.integer(JobFields.CYCLE_PROGRAM_NUMBER);
+        OptionalInt station = f.integer(JobFields.CYCLE_TOOL_STATION);
+        boolean turnedRound = f.bool(JobFields.CYCLE_HOB_TURNED_ROUND);
+        OptionalDouble life = f.child("hobLife").number(JobFields.HOB_LIFE_PER_TOOTH);
         return new Values(material, speed, rough, finish, depth, stock, method, axial, radial, coolant,
-                new QualityTargets(mark, env, chip), perPart, every, fastest);
+                new QualityTargets(mark, env, chip), perPart, every, fastest,
+                new RunSettings(batch, program, station, turnedRound, life));
     }
 
     /**

@@ -5,6 +5,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.CuttingSense;
 import org.hobwright.api.job.DrawingValues;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.GearSpec;
@@ -125,11 +126,14 @@ final class JobParts {
         double length = f.value(JobFields.HOB_LENGTH);
         OptionalDouble maxRpm = f.number(JobFields.HOB_MAX_RPM);
         Optional<String> material = f.text(JobFields.HOB_MATERIAL);
+        Optional<CuttingSense> sense = f.text(JobFields.HOB_CUTTING_SENSE)
+                .map(w -> w.equals(CuttingSense.CLOCKWISE.word()) ? CuttingSense.CLOCKWISE : CuttingSense.COUNTER_CLOCKWISE);
+        Optional<String> identifier = f.text(JobFields.HOB_IDENTIFIER);
         if (errors(out) > before) {
             return Optional.empty();
         }
         return Optional.of(new HobSpec(pitch.orElseThrow(), alpha, starts, Hand.fromWord(hand.orElseThrow()), outside,
-                lead, reference, gashes, length, maxRpm, material.orElseThrow()));
+                lead, reference, gashes, length, maxRpm, material.orElseThrow(), sense, identifier));
     }
 
     static int errors(List<Finding> out) {

@@ -12,8 +12,10 @@ import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.MachineFields;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.api.job.RunSettings;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.JsonTrees;
@@ -108,6 +110,14 @@ public final class JobWriter {
         put(shift, JobFields.HOB_SHIFT_PER_PART, c.hobShiftPerPartMm(), units);
         shift.put(JobFields.HOB_SHIFT_EVERY_PARTS.leaf(), c.hobShiftEveryParts());
         n.put(JobFields.CYCLE_FASTEST.leaf(), c.fastest());
+        RunSettings r = c.run();
+        n.put(JobFields.CYCLE_BATCH_SIZE.leaf(), r.batchSize());
+        r.programNumber().ifPresent(v -> n.put(JobFields.CYCLE_PROGRAM_NUMBER.leaf(), v));
+        r.toolStation().ifPresent(v -> n.put(JobFields.CYCLE_TOOL_STATION.leaf(), v));
+        n.put(JobFields.CYCLE_HOB_TURNED_ROUND.leaf(), r.hobTurnedRound());
+        if (r.hobLifePerToothM().isPresent()) {
+            put(n.putObject("hobLife"), JobFields.HOB_LIFE_PER_TOOTH, r.hobLifePerToothM(), units);
+        }
         return n;
     }
 
@@ -178,6 +188,8 @@ public final class JobWriter {
         put(n, JobFields.HOB_LENGTH, h.lengthMm(), units);
         put(n, JobFields.HOB_MAX_RPM, h.maxRpm(), units);
         n.put(JobFields.HOB_MATERIAL.leaf(), h.material());
+        h.cuttingSense().ifPresent(v -> n.put(JobFields.HOB_CUTTING_SENSE.leaf(), v.word()));
+        h.identifier().ifPresent(v -> n.put(JobFields.HOB_IDENTIFIER.leaf(), v));
         return n;
     }
 
@@ -191,9 +203,12 @@ public final class JobWriter {
         ObjectNode work = n.putObject("workSpindle");
         put(work, MachineFields.WORK_MIN_RPM, m.workMinRpm(), units);
         put(work, MachineFields.WORK_MAX_RPM, m.workMaxRpm(), units);
+        work.put(MachineFields.WORK_PHASED_SYNC.leaf(), m.phasedSync());
         ObjectNode hob = n.putObject("hobSpindle");
         put(hob, MachineFields.HOB_MIN_RPM, m.hobMinRpm(), units);
         put(hob, MachineFields.HOB_MAX_RPM, m.hobMaxRpm(), units);
+        hob.put(MachineFields.HOB_CLOCKWISE_TEETH_MOVE.leaf(), m.clockwiseTeethTowardChuck() ? MachineReader.TOWARD_CHUCK
+                : MachineReader.AWAY_FROM_CHUCK);
         put(n, MachineFields.MAX_SYNC_RATIO, m.maxSyncRatio(), units);
         n.put(MachineFields.FOLLOWS_HELIX.leaf(), m.followsHelix());
         SwivelHolder s = m.swivel();
@@ -215,6 +230,16 @@ public final class JobWriter {
         put(n, MachineFields.MAX_FEED, m.maxFeedMmPerMin(), units);
         put(n, MachineFields.SYNC_SETTLE, m.syncSettleS(), units);
         put(n, MachineFields.MAX_HOB_DIAMETER, m.maxHobDiameterMm(), units);
+        MachineTimes t = m.times();
+        ObjectNode times = NODES.objectNode();
+        put(times, MachineFields.TIME_LOAD, t.loadS(), units);
+        put(times, MachineFields.TIME_UNLOAD, t.unloadS(), units);
+        put(times, MachineFields.TIME_SWIVEL, t.swivelS(), units);
+        put(times, MachineFields.TIME_HOB_SHIFT, t.hobShiftS(), units);
+        put(times, MachineFields.TIME_HOB_CHANGE, t.hobChangeS(), units);
+        if (!times.isEmpty()) {
+            n.set("times", times);
+        }
         return n;
     }
 

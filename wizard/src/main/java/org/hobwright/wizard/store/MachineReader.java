@@ -7,6 +7,7 @@ import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.MachineFields;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
 
@@ -14,6 +15,10 @@ import org.hobwright.api.job.Units;
 final class MachineReader {
     static final String SCALE_DM = MachineFields.SCALES.get(0);
     static final String SCALE_DEC = MachineFields.SCALES.get(1);
+    /** Clockwise-turning hob teeth move away from the chuck at the work (the default). */
+    static final String AWAY_FROM_CHUCK = MachineFields.TEETH_MOVES.get(0);
+    /** Clockwise-turning hob teeth move toward the chuck at the work. */
+    static final String TOWARD_CHUCK = MachineFields.TEETH_MOVES.get(1);
 
     private MachineReader() {
     }
@@ -71,6 +76,12 @@ final class MachineReader {
         double maxFeed = f.value(MachineFields.MAX_FEED);
         double settle = f.value(MachineFields.SYNC_SETTLE);
         double maxHob = f.value(MachineFields.MAX_HOB_DIAMETER);
+        boolean towardChuck = hobSp.word(MachineFields.HOB_CLOCKWISE_TEETH_MOVE).map(TOWARD_CHUCK::equals).orElse(false);
+        boolean phased = work.bool(MachineFields.WORK_PHASED_SYNC);
+        FieldReader t = f.child("times");
+        MachineTimes times = new MachineTimes(t.number(MachineFields.TIME_LOAD), t.number(MachineFields.TIME_UNLOAD),
+                t.number(MachineFields.TIME_SWIVEL), t.number(MachineFields.TIME_HOB_SHIFT),
+                t.number(MachineFields.TIME_HOB_CHANGE));
         if (JobParts.errors(out) > errorsBefore) {
             return Optional.empty();
         }
@@ -80,7 +91,7 @@ final class MachineReader {
                         positiveIsRight),
                 radialMin, radialMax, axialMin, axialMax,
                 shift.isPresent() && shift.getAsDouble() > 0 ? shift : OptionalDouble.empty(),
-                rapid, maxFeed, settle, maxHob);
+                rapid, maxFeed, settle, maxHob, towardChuck, times, phased);
         return Optional.of(new MachineFile(p, f.units(), description));
     }
 

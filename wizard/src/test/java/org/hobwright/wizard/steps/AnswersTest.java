@@ -27,7 +27,8 @@ class AnswersTest {
         List<String> expected = new ArrayList<>(leaves(sample, "").stream().filter(l -> !l.startsWith("$schema"))
                 .toList());
         expected.addAll(List.of("cycle.axialClearance=1", "cycle.fastest=false", "cycle.finishStock=0",
-                "cycle.hobShift.everyParts=1", "cycle.hobShift.perPart=0", "cycle.radialClearance=1", "gear.hand=right"));
+                "cycle.hobShift.everyParts=1", "cycle.hobShift.perPart=0", "cycle.radialClearance=1", "gear.hand=right",
+                "cycle.batchSize=1", "cycle.hobTurnedRound=false"));
         expected.sort(null);
         assertEquals(expected, leaves(back, ""));
     }

@@ -39,11 +39,18 @@ class FieldCoverageTest {
                 Optional.of(new ToothProportions(1, 1.25, 0.3)), OptionalDouble.of(44.5), OptionalDouble.of(3.5),
                 OptionalInt.of(7), drawing);
         HobSpec hob = new HobSpec(new Pitch.Module(2), 20, 1, Hand.LEFT, 60, OptionalDouble.of(2.1),
-                OptionalDouble.of(55), 12, 60, OptionalDouble.of(3000), "carbide");
+                OptionalDouble.of(55), 12, 60, OptionalDouble.of(3000), "carbide")
+                .withCuttingSense(Optional.of(org.hobwright.api.job.CuttingSense.COUNTER_CLOCKWISE))
+                .withIdentifier(Optional.of("H-17"));
         CycleSettings cycle = new CycleSettings("brass", OptionalDouble.of(80), OptionalDouble.of(1),
                 OptionalDouble.of(0.5), OptionalDouble.of(1.5), 0.2, HobbingMethod.CONVENTIONAL, 2, 3, false,
-                new QualityTargets(OptionalDouble.of(2), OptionalDouble.of(3), OptionalDouble.of(0.1)), 0.5, 10, true);
-        return new HobJob("full", Units.MM, gear, hob, SampleJobs.machine(true), cycle);
+                new QualityTargets(OptionalDouble.of(2), OptionalDouble.of(3), OptionalDouble.of(0.1)), 0.5, 10, true)
+                .withRun(new org.hobwright.api.job.RunSettings(50, OptionalInt.of(1234), OptionalInt.of(7), true,
+                        OptionalDouble.of(8)));
+        var machine = SampleJobs.machine(true).withTimes(new org.hobwright.api.job.MachineTimes(OptionalDouble.of(20),
+                OptionalDouble.of(10), OptionalDouble.of(5), OptionalDouble.of(2), OptionalDouble.of(600)))
+                .withPhasedSync(true).withClockwiseTeethTowardChuck(true);
+        return new HobJob("full", Units.MM, gear, hob, machine, cycle);
     }
 
     private static Set<String> leaves(JsonNode n, String path, Set<String> out) {
