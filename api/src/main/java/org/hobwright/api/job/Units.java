@@ -52,13 +52,23 @@ public enum Units {
         return mm / mmPerUnit;
     }
 
-    /** Converts a cutting speed in this unit system (m/min or ft/min) to metres per minute. */
+    /**
+     * Converts a cutting speed in this unit system (m/min or ft/min) to metres per minute.
+     *
+     * @param value value
+     * @return converts a cutting speed in this unit system (m/min or ft/min) to metres per minute
+     */
     @ApiStatus(since = "1.1")
     public double cuttingSpeedToMPerMin(double value) {
         return value * metresPerSpeedLength;
     }
 
-    /** Converts a cutting speed in metres per minute to this unit system's (m/min or ft/min). */
+    /**
+     * Converts a cutting speed in metres per minute to this unit system's (m/min or ft/min).
+     *
+     * @param metresPerMinute metresPerMinute
+     * @return converts a cutting speed in metres per minute to this unit system's (m/min or ft/min)
+     */
     @ApiStatus(since = "1.1")
     public double cuttingSpeedFromMPerMin(double metresPerMinute) {
         return metresPerMinute / metresPerSpeedLength;
