@@ -1,6 +1,7 @@
 package org.hobwright.api.job;
 
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.ApiStatus;
 import org.hobwright.api.internal.Checks;
@@ -20,6 +21,9 @@ import org.hobwright.api.internal.Checks;
  * @param lengthMm            usable hob length, mm
  * @param maxRpm              the hob maker's speed limit, rpm, if given
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+ * @param cuttingSense        the sense the hob cuts in, seen from its drive end, if stated (the planner
+ *                            assumes clockwise otherwise and says so)
+ * @param identifier          the shop's identifier of the hob (tool number, serial), if given
  */
 @ApiStatus(since = "1.0")
 public record HobSpec(
@@ -33,7 +37,9 @@ public record HobSpec(
         int gashes,
         double lengthMm,
         OptionalDouble maxRpm,
-        String material) {
+        String material,
+        @ApiStatus(since = "1.1") Optional<CuttingSense> cuttingSense,
+        @ApiStatus(since = "1.1") Optional<String> identifier) {
 
     public HobSpec {
         Checks.present("hob.pitch", pitch);
@@ -50,6 +56,18 @@ public record HobSpec(
         Objects.requireNonNull(maxRpm, "maxRpm");
         Checks.positive("hob.maxRpm", maxRpm);
         Checks.text("hob.material", material);
+        Objects.requireNonNull(cuttingSense, "cuttingSense");
+        Objects.requireNonNull(identifier, "identifier");
+        identifier.ifPresent(id -> Checks.text("hob.identifier", id));
+    }
+
+    /** A hob whose cutting sense and identifier are not stated. */
+    @ApiStatus(since = "1.1")
+    public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
+                   OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
+                   OptionalDouble maxRpm, String material) {
+        this(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg, referenceDiameterMm, gashes,
+                lengthMm, maxRpm, material, Optional.empty(), Optional.empty());
     }
 
     /** Normal module in mm. */
@@ -66,7 +84,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withPitch(Pitch pitch) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -78,7 +96,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withPressureAngleDeg(double pressureAngleDeg) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -90,7 +108,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withStarts(int starts) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -102,7 +120,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withHand(Hand hand) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -114,7 +132,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withOutsideDiameterMm(double outsideDiameterMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -126,7 +144,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withLeadAngleDeg(OptionalDouble leadAngleDeg) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -150,7 +168,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withReferenceDiameterMm(OptionalDouble referenceDiameterMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -173,7 +191,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withGashes(int gashes) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -185,7 +203,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withLengthMm(double lengthMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -197,7 +215,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withMaxRpm(OptionalDouble maxRpm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 
     /**
@@ -220,6 +238,30 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withMaterial(String material) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+    }
+
+    /**
+     * This hob spec with another {@code cuttingSense}.
+     *
+     * @param cuttingSense the sense the hob cuts in, seen from its drive end, if stated
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withCuttingSense(Optional<CuttingSense> cuttingSense) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+    }
+
+    /**
+     * This hob spec with another {@code identifier}.
+     *
+     * @param identifier the shop's identifier of the hob, if given
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withIdentifier(Optional<String> identifier) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
     }
 }

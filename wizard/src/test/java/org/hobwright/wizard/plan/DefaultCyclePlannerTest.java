@@ -83,8 +83,8 @@ class DefaultCyclePlannerTest {
     void stepsComeInTheSafeOrder() {
         HobCycle c = planner.plan(SampleJobs.helicalMetric());
         List<String> kinds = c.steps().stream().map(CycleStep::kind).filter(k -> !k.equals("comment")).toList();
-        assertEquals(List.of("swivel", "hob-shift", "sync-on", "dwell", "coolant", "rapid", "rapid", "feed", "feed",
-                "rapid", "rapid", "coolant", "sync-off", "spindles-stop"), kinds);
+        assertEquals(List.of("swivel", "hob-shift", "sync-on", "dwell", "coolant", "rapid", "rapid", "rapid", "feed",
+                "feed", "rapid", "rapid", "rapid", "coolant", "sync-off", "spindles-stop"), kinds);
         assertInstanceOf(CycleStep.Comment.class, c.steps().get(0));
         assertTrue(c.steps().stream().anyMatch(s -> s instanceof CycleStep.Comment m && m.text().startsWith("sync: hob 30 : work 1")),
                 "the sync comment names the ratio and the senses beside the moves");
@@ -282,7 +282,15 @@ class DefaultCyclePlannerTest {
         assertEquals("-1° 55′", s.swivelSettingText());
         assertTrue(s.swivelDirection().contains("in the negative direction"), s.swivelDirection());
         assertTrue(has(c, PlanCode.PLAN_SWIVEL_ROUNDED.code()));
-        assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.Swivel), "manual holder");
+        // a manual holder: the setting is a step (a row of the cycle CSV), not a move of the control
+        List<CycleStep> swivels = c.steps().stream().filter(x -> x instanceof CycleStep.Swivel).toList();
+        assertEquals(1, swivels.size(), "manual holder: one swivel step");
+        CycleStep.Swivel manual = (CycleStep.Swivel) swivels.get(0);
+        assertFalse(manual.programmable(), "manual holder");
+        assertEquals(-23.0 / 12, manual.machineAngleDeg(), 1e-12);
+        // every move carries the hob's 32 mm tip diameter (metering-pump-gear.json)
+        assertTrue(c.steps().stream().filter(x -> x instanceof CycleStep.Feed).allMatch(x ->
+                ((CycleStep.Feed) x).hobTipDiameterMm() == 32), "hob tip diameter on the feeds");
         assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.HobShift), "no shift axis");
         assertTrue(c.summary().orElseThrow().fastest().isPresent());
     }
