@@ -17,6 +17,13 @@ import org.hobwright.api.job.HobJob;
 @ApiStatus(since = "1.1")
 public record PlannedJob(HobJob job, HobCycle cycle) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param job the job
+     * @param cycle the cycle planned for it
+     */
     public PlannedJob {
         Checks.present("job", job);
         Checks.present("cycle", cycle);
@@ -27,12 +34,12 @@ public record PlannedJob(HobJob job, HobCycle cycle) {
         }
     }
 
-    /** True when the cycle has an error finding: nothing may be written. */
+    /** {@return true when the cycle has an error finding: nothing may be written} */
     public boolean hasErrors() {
         return cycle.hasErrors();
     }
 
-    /** The cycle's findings, errors first. */
+    /** {@return the cycle's findings, errors first} */
     public List<Finding> findings() {
         return cycle.findings();
     }

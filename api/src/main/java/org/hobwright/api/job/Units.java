@@ -27,17 +27,27 @@ public enum Units {
         this.metresPerSpeedLength = metresPerSpeedLength;
     }
 
-    /** The symbol used in files and on screen: {@code mm} or {@code in}. */
+    /** {@return the symbol used in files and on screen: {@code mm} or {@code in}} */
     public String symbol() {
         return symbol;
     }
 
-    /** Converts a length in this unit to millimetres. */
+    /**
+     * Converts a length in this unit to millimetres.
+     *
+     * @param value value
+     * @return converts a length in this unit to millimetres
+     */
     public double toMm(double value) {
         return value * mmPerUnit;
     }
 
-    /** Converts a length in millimetres to this unit. */
+    /**
+     * Converts a length in millimetres to this unit.
+     *
+     * @param mm mm
+     * @return converts a length in millimetres to this unit
+     */
     public double fromMm(double mm) {
         return mm / mmPerUnit;
     }
@@ -58,6 +68,8 @@ public enum Units {
      * Reads a unit symbol as written in a job file.
      *
      * @throws IllegalArgumentException naming the symbol when it is neither {@code mm} nor {@code in}
+     * @param symbol symbol
+     * @return reads a unit symbol as written in a job file
      */
     public static Units fromSymbol(String symbol) {
         for (Units u : values()) {

@@ -33,6 +33,15 @@ public record WriteContext(HobJob job, String generatedOn, String toolVersion, M
     @ApiStatus(since = "1.1")
     public static final String REPORT_WITH_ERRORS = "report.withErrors";
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param job the job the cycle was planned from
+     * @param generatedOn the date to print in headers
+     * @param toolVersion version of the program that writes the files
+     * @param resources named texts a writer may need
+     */
     public WriteContext {
         Checks.present("job", job);
         Checks.text("generatedOn", generatedOn);
@@ -54,11 +63,17 @@ public record WriteContext(HobJob job, String generatedOn, String toolVersion, M
      * @return the context
      */
     @ApiStatus(since = "1.1")
-    public static WriteContext of(HobJob job, LocalDate generatedOn, String toolVersion, Map<String, String> resources) {
+    public static WriteContext of(HobJob job, LocalDate generatedOn, String toolVersion,
+                                  Map<String, String> resources) {
         return new WriteContext(job, Checks.present("generatedOn", generatedOn).toString(), toolVersion, resources);
     }
 
-    /** A named resource, if present. */
+    /**
+     * A named resource, if present.
+     *
+     * @param key key
+     * @return A named resource, if present
+     */
     public Optional<String> resource(String key) {
         return Optional.ofNullable(resources.get(key));
     }
