@@ -27,7 +27,8 @@ public record PlannedJob(HobJob job, HobCycle cycle) {
     public PlannedJob {
         Checks.present("job", job);
         Checks.present("cycle", cycle);
-        if (cycle.plannedFor().isPresent() && !cycle.plannedFor().get().equals(job)) {
+        // the same instance needs no comparison (a record's equals is bootstrapped at its first call)
+        if (cycle.plannedFor().isPresent() && cycle.plannedFor().get() != job && !cycle.plannedFor().get().equals(job)) {
             throw new IllegalArgumentException("the cycle was planned for job \"" + cycle.plannedFor().get().name()
                     + "\", not for job \"" + job.name() + "\" as given");
         }

@@ -45,13 +45,9 @@ public record WriteContext(HobJob job, String generatedOn, String toolVersion, M
     public WriteContext {
         Checks.present("job", job);
         Checks.text("generatedOn", generatedOn);
-        try {
-            if (!LocalDate.parse(generatedOn).toString().equals(generatedOn)) {
-                throw new DateTimeException(generatedOn);
-            }
-        } catch (DateTimeException e) {
+        if (!isoDate(generatedOn)) {
             throw new IllegalArgumentException("generatedOn must be an ISO 8601 date like 2026-12-01, was \""
-                    + generatedOn + "\"", e);
+                    + generatedOn + "\"");
         }
         Checks.text("toolVersion", toolVersion);
         resources = Map.copyOf(Checks.present("resources", resources));
@@ -80,5 +76,26 @@ public record WriteContext(HobJob job, String generatedOn, String toolVersion, M
      */
     public Optional<String> resource(String key) {
         return Optional.ofNullable(resources.get(key));
+    }
+
+    /**
+     * True for a calendar date written {@code YYYY-MM-DD}. Read digit by digit: the JDK's date
+     * parser would load its formatter machinery and regular expressions into every run that writes.
+     */
+    private static boolean isoDate(String text) {
+        if (text.length() != 10 || text.charAt(4) != '-' || text.charAt(7) != '-') {
+            return false;
+        }
+        for (int i = 0; i < 10; i++) {
+            if (i != 4 && i != 7 && (text.charAt(i) < '0' || text.charAt(i) > '9')) {
+                return false;
+            }
+        }
+        try {
+            return LocalDate.of(Integer.parseInt(text, 0, 4, 10), Integer.parseInt(text, 5, 7, 10),
+                    Integer.parseInt(text, 8, 10, 10)).toString().equals(text);
+        } catch (DateTimeException e) {
+            return false;
+        }
     }
 }
