@@ -103,10 +103,53 @@ public record Finding(Severity severity, String code, String field, String messa
         return findings.stream().anyMatch(Finding::isError);
     }
 
-    /** {@return one line for a terminal: {@code error GEAR_UNDERCUT gear.teeth: message (fix: ...)}} */
+    /**
+     * One line for a terminal. Control characters a value from a file brought into the text are
+     * shown escaped ({@link #printable}).
+     *
+     * @return {@code error GEAR_UNDERCUT gear.teeth: message (fix: ...)}
+     */
     public String line() {
-        return severity.word() + " " + code + " " + field + ": " + message
-                + fix.map(f -> " (fix: " + f + ")").orElse("");
+        return printable(severity.word() + " " + code + " " + field + ": " + message
+                + fix.map(f -> " (fix: " + f + ")").orElse(""));
+    }
+
+    /**
+     * The text with every control, format and line-separator character shown as an escape
+     * ({@code \n}, {@code \r}, {@code \t}, else {@code \u001B}), so that a key or value from a file
+     * keeps a message on one line and sends no terminal codes (escape sequences, bidirectional
+     * overrides).
+     *
+     * @param text any text
+     * @return the text, unchanged when it holds no such character
+     */
+    @ApiStatus(since = "1.1")
+    public static String printable(String text) {
+        StringBuilder out = null;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            int type = Character.getType(c);
+            boolean hidden = type == Character.CONTROL || type == Character.FORMAT
+                    || type == Character.LINE_SEPARATOR || type == Character.PARAGRAPH_SEPARATOR;
+            if (hidden && out == null) {
+                out = new StringBuilder(text.length() + 16).append(text, 0, i);
+            }
+            if (out != null) {
+                if (!hidden) {
+                    out.append(c);
+                } else if (c == '\n') {
+                    out.append("\\n");
+                } else if (c == '\r') {
+                    out.append("\\r");
+                } else if (c == '\t') {
+                    out.append("\\t");
+                } else {
+                    String hex = Integer.toHexString(c).toUpperCase(java.util.Locale.ROOT);
+                    out.append("\\u").append("0000", hex.length(), 4).append(hex);
+                }
+            }
+        }
+        return out == null ? text : out.toString();
     }
 
     /** The same as {@link #line()}: one line, so that a list of findings prints readably. */

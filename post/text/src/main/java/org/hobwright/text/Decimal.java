@@ -361,7 +361,10 @@ public final class Decimal {
         if (a >= 1e-4 && a < 1e9) {
             return withoutPoint(fixed(value, Math.max(0, 5 - exponent), false));
         }
-        String mantissa = withoutPoint(fixed(value / Math.pow(10, exponent), 3, false));
+        // in two steps below 1e-300: 10 to the power -308 and less is not a normal double (or 0)
+        double scaled = exponent < -300 ? value * 1e300 / Math.pow(10, exponent + 300)
+                : value / Math.pow(10, exponent);
+        String mantissa = withoutPoint(fixed(scaled, 3, false));
         if (mantissa.equals("10") || mantissa.equals("-10")) {
             mantissa = mantissa.substring(0, mantissa.length() - 1);
             exponent++;

@@ -208,4 +208,21 @@ class DecimalTest {
         assertThrows(IllegalArgumentException.class, () -> Decimal.scaled(Double.NaN, 2, Decimal.Rounding.CEILING));
         assertThrows(IllegalArgumentException.class, () -> Decimal.scaled(1e300, 3, Decimal.Rounding.HALF_UP));
     }
+
+    @Test
+    void readableAtEveryMagnitudeIncludingSubnormals() {
+        // the smallest subnormal, the largest double and values between: four significant digits and
+        // a power of ten outside 0.0001 to 1e9, checked against BigDecimal's rounding to 4 digits
+        double[] cases = {Double.MIN_VALUE, -Double.MIN_VALUE, 2.5e-320, Double.MIN_NORMAL, 1e-301, 1.2345e-250,
+            1e-5, 1e9, 1e300, Double.MAX_VALUE, -Double.MAX_VALUE};
+        for (double v : cases) {
+            String text = Decimal.readable(v);
+            int e = text.indexOf('e');
+            assertTrue(e > 0, v + " as " + text);
+            BigDecimal reference = new BigDecimal(v).round(new MathContext(4, RoundingMode.HALF_UP));
+            assertEquals(0, new BigDecimal(text).compareTo(reference), v + " as " + text + ", reference " + reference);
+        }
+        assertEquals("4.941e-324", Decimal.readable(Double.MIN_VALUE));
+        assertEquals("1.798e308", Decimal.readable(Double.MAX_VALUE));
+    }
 }

@@ -1,5 +1,7 @@
 package org.hobwright.wizard.cli;
 
+import org.hobwright.api.check.Finding;
+
 /**
  * A problem that ends a command with a one-line message and an exit code: a usage error or an
  * input that cannot be read (2), or a job with errors when there is nothing else to print (1).
@@ -26,10 +28,10 @@ final class CliFailure extends RuntimeException {
     /** Prints the one line of a failed run and returns its exit code (3 for a fault of Hobwright itself). */
     static int report(Exception ex, java.io.PrintWriter err) {
         if (ex instanceof CliFailure f) {
-            err.println("hobwright: " + f.getMessage());
+            err.println("hobwright: " + Finding.printable(f.getMessage()));
             return f.exitCode();
         }
-        err.println("hobwright: internal error: " + ex);
+        err.println("hobwright: internal error: " + Finding.printable(String.valueOf(ex)));
         return ExitCodes.INTERNAL;
     }
 }

@@ -1,5 +1,6 @@
 package org.hobwright.wizard.cli;
 
+import org.hobwright.api.check.Finding;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.Optional;
@@ -43,7 +44,7 @@ public final class HobwrightCommand implements Callable<Integer> {
     }
 
     Optional<Path> home() {
-        return Optional.ofNullable(home);
+        return Optional.ofNullable(home).map(h -> PlanRequest.named(h, "--home"));
     }
 
     @Override
@@ -62,7 +63,7 @@ public final class HobwrightCommand implements Callable<Integer> {
         cl.setExecutionExceptionHandler((ex, line, parsed) -> CliFailure.report(ex, line.getErr()));
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine where = ex.getCommandLine();
-            where.getErr().println("hobwright: " + ex.getMessage() + " (see '"
+            where.getErr().println("hobwright: " + Finding.printable(String.valueOf(ex.getMessage())) + " (see '"
                     + where.getCommandSpec().qualifiedName() + " --help')");
             return ExitCodes.USAGE;
         });

@@ -1,5 +1,6 @@
 package org.hobwright.wizard.cli;
 
+import org.hobwright.api.check.Finding;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
@@ -19,20 +20,21 @@ final class LibraryCommands {
         for (LibraryEntry e : entries) {
             String where = e.builtIn() ? "built-in" : e.hidesBuiltIn() ? "saved, hides the built-in one" : "saved";
             String name = e.machine().isEmpty() ? e.name() : e.machine() + "/" + e.name();
-            out.println(name + "  (" + where + ")" + (e.description().isEmpty() ? "" : "  " + e.description()));
+            out.println(Finding.printable(name + "  (" + where + ")" + (e.description().isEmpty() ? ""
+                    : "  " + e.description())));
         }
         return ExitCodes.OK;
     }
 
     /** Prints a file's text. */
     static int show(Loaded<String> text, PrintWriter out) {
-        out.println(Store.readable(ok(text)).get().strip());
+        Store.readable(ok(text)).get().strip().lines().forEach(l -> out.println(Finding.printable(l)));
         return ExitCodes.OK;
     }
 
     /** Reports a save or removal: the path on success, else a one-line failure (exit 2). */
     static int changed(Loaded<Path> result, String done, PrintWriter out) {
-        out.println(done + " " + ok(result).get());
+        out.println(Finding.printable(done + " " + ok(result).get()));
         return ExitCodes.OK;
     }
 

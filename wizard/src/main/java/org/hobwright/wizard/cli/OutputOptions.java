@@ -1,7 +1,6 @@
 package org.hobwright.wizard.cli;
 
 import java.nio.file.Path;
-import java.util.Optional;
 import picocli.CommandLine.Option;
 
 /** The output options of {@code wizard}, {@code demo} and {@code plan}. */
@@ -16,6 +15,6 @@ final class OutputOptions {
 
     /** The folder given, or the default one. */
     Path folder() {
-        return Optional.ofNullable(out).orElse(Path.of(PlanRequest.DEFAULT_OUT));
+        return out == null ? Path.of(PlanRequest.DEFAULT_OUT) : PlanRequest.named(out, "--out");
     }
 }

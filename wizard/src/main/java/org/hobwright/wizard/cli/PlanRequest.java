@@ -28,16 +28,30 @@ record PlanRequest(List<Path> inputs, Optional<String> machine, Optional<String>
     /** A {@code plan} run: without {@code --out}, writes to the default folder unless {@code --json} is asked. */
     static PlanRequest plan(List<Path> inputs, String machine, String template, Path out, boolean json,
                             boolean fastest, String date, Path home) {
-        Optional<Path> folder = out != null ? Optional.of(out)
+        Optional<Path> folder = out != null ? Optional.of(named(out, "--out"))
                 : json ? Optional.empty() : Optional.of(Path.of(DEFAULT_OUT));
         return new PlanRequest(inputs, Optional.ofNullable(machine), Optional.ofNullable(template), folder, json,
-                fastest, Optional.ofNullable(date), Optional.ofNullable(home));
+                fastest, Optional.ofNullable(date), Optional.ofNullable(home).map(h -> named(h, "--home")));
     }
 
     /** A {@code demo} run of the built-in sample job. */
     static PlanRequest demo(Path out, String date, Path home) {
         return new PlanRequest(List.of(), Optional.empty(), Optional.empty(),
-                Optional.of(out == null ? Path.of(DEFAULT_OUT) : out), false, false, Optional.ofNullable(date),
-                Optional.ofNullable(home));
+                Optional.of(out == null ? Path.of(DEFAULT_OUT) : named(out, "--out")), false, false,
+                Optional.ofNullable(date), Optional.ofNullable(home).map(h -> named(h, "--home")));
+    }
+
+    /**
+     * A folder given on the command line; an empty one is a usage error, not the current folder
+     * (whose files would be replaced).
+     *
+     * @throws CliFailure (exit 2) when the name is empty or blank
+     */
+    static Path named(Path folder, String option) {
+        if (folder.toString().isBlank()) {
+            throw CliFailure.usage(option + " needs a folder name; an empty one would mean the current folder"
+                    + " (give \".\" to mean it)");
+        }
+        return folder;
     }
 }

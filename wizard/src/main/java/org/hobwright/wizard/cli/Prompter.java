@@ -1,5 +1,6 @@
 package org.hobwright.wizard.cli;
 
+import org.hobwright.api.check.Finding;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -33,7 +34,7 @@ final class Prompter {
 
     /** Prints a line. */
     void say(String line) {
-        out.println(line);
+        out.println(Finding.printable(line));
     }
 
     /**
@@ -42,12 +43,12 @@ final class Prompter {
      * @return the answer, stripped, or empty when the input has ended
      */
     Optional<String> ask(String prompt) {
-        out.print(prompt);
+        out.print(Finding.printable(prompt));
         out.flush();
         try {
             String line = in.readLine();
             if (echo || line == null) {
-                out.println(line == null ? "" : line);
+                out.println(line == null ? "" : Finding.printable(line));
             }
             return Optional.ofNullable(line).map(String::strip);
         } catch (IOException e) {

@@ -21,11 +21,11 @@ final class RunPrinter {
     void job(JobInput in) {
         List<Finding> findings = in.allFindings();
         long errors = findings.stream().filter(Finding::isError).count();
-        out.println(in.name() + " (" + in.source() + "): " + (errors == 0 ? "planned"
-                : errors + " error" + (errors == 1 ? "" : "s")));
+        out.println(Finding.printable(in.name() + " (" + in.source() + "): " + (errors == 0 ? "planned"
+                : errors + " error" + (errors == 1 ? "" : "s"))));
         if (errors == 0) {
             Units units = in.job().map(j -> j.units()).orElse(Units.MM);
-            in.cycle().ifPresent(c -> ReviewLines.of(c, units).forEach(l -> out.println("  " + l)));
+            in.cycle().ifPresent(c -> ReviewLines.of(c, units).forEach(l -> out.println("  " + Finding.printable(l))));
         }
         findings(findings);
     }
@@ -41,8 +41,8 @@ final class RunPrinter {
 
     /** What was written where, and which older files of the same names it replaced. */
     void written(Path folder, Collection<String> names, Collection<String> replaced) {
-        out.println("Wrote " + names.size() + " file" + (names.size() == 1 ? "" : "s") + " to " + folder + ": "
-                + String.join(", ", names));
+        out.println(Finding.printable("Wrote " + names.size() + " file" + (names.size() == 1 ? "" : "s") + " to "
+                + folder + ": " + String.join(", ", names)));
         if (!replaced.isEmpty()) {
             out.println("Replaced " + replaced.size() + " older file" + (replaced.size() == 1 ? "" : "s")
                     + " of the same name" + (replaced.size() == 1 ? "" : "s") + ": " + String.join(", ", replaced));

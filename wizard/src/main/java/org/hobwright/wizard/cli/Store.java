@@ -14,6 +14,7 @@ import org.hobwright.wizard.store.AtomicFiles;
 import org.hobwright.wizard.store.JobReader;
 import org.hobwright.wizard.store.Library;
 import org.hobwright.wizard.store.Loaded;
+import org.hobwright.wizard.store.OutputSet;
 
 /**
  * The template library and job reader as the terminal tool uses them: unreadable input becomes a
@@ -73,7 +74,8 @@ final class Store {
     }
 
     /**
-     * Writes every file into the folder atomically, all or nothing, replacing older outputs.
+     * Writes every file into the folder atomically, all or nothing, replacing older outputs
+     * ({@link OutputSet}: never into the library folder).
      *
      * @throws CliFailure (exit 2) when the folder cannot be written
      */
@@ -81,7 +83,7 @@ final class Store {
         Map<String, AtomicFiles.Content> contents = new LinkedHashMap<>();
         files.forEach((name, text) -> contents.put(name, AtomicFiles.text(text)));
         try {
-            AtomicFiles.writeAll(folder, contents, true);
+            OutputSet.write(folder, contents, true, Optional.of(library.home()));
         } catch (IOException e) {
             throw CliFailure.usage("cannot write to " + folder + ": " + e.getMessage() + "; nothing was written");
         }

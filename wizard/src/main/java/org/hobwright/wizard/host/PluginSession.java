@@ -28,6 +28,7 @@ import org.hobwright.wizard.steps.Answers;
 import org.hobwright.wizard.steps.LibraryServices;
 import org.hobwright.wizard.steps.StepSession;
 import org.hobwright.wizard.store.AtomicFiles;
+import org.hobwright.wizard.store.OutputSet;
 import org.hobwright.wizard.store.JobReader;
 import org.hobwright.wizard.store.JobWriter;
 import org.hobwright.wizard.store.Library;
@@ -36,7 +37,7 @@ import org.hobwright.wizard.store.Loaded;
 /**
  * One host session on a library folder: the store's job reader, the library's planner
  * ({@link org.hobwright.wizard.run.LibraryPlanner}), the writers posting through {@link Outputs},
- * and all-or-nothing writing through {@link AtomicFiles}, the same pieces the terminal tool uses.
+ * and all-or-nothing writing through {@link OutputSet}, the same pieces the terminal tool uses.
  * Everything runs on the caller's thread: the session starts no thread and keeps no file open.
  */
 final class PluginSession implements HostSession {
@@ -110,7 +111,7 @@ final class PluginSession implements HostSession {
         Map<String, AtomicFiles.Content> contents = new LinkedHashMap<>();
         produced.files().forEach((name, text) -> contents.put(name, AtomicFiles.text(text)));
         try {
-            AtomicFiles.writeAll(folder, contents, true);
+            OutputSet.write(folder, contents, true, Optional.of(library.home()));
         } catch (IOException | RuntimeException e) {
             List<Finding> findings = new ArrayList<>(produced.findings());
             findings.add(RunCode.OUTPUT_WRITE_FAILED.at("out", "cannot write to " + folder + ": " + e.getMessage()

@@ -10,6 +10,7 @@ import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
 import org.hobwright.wizard.store.RangeWords;
+import org.hobwright.wizard.store.WorkingRange;
 
 /**
  * Checks one answer as soon as it is typed: its type, its range, its choice, all from the field
@@ -90,8 +91,11 @@ public final class FieldCheck {
     }
 
     private static Optional<Finding> range(FieldDef field, double v, Units units) {
-        if (field.range().contains(field.unit().toCanonical(v, units))) {
-            return Optional.empty();
+        double canonical = field.unit().toCanonical(v, units);
+        if (field.range().contains(canonical) || Double.isInfinite(canonical)) {
+            return WorkingRange.violation(field, canonical).flatMap(why -> error(WizardCode.WIZARD_OUT_OF_RANGE,
+                    field, why + ", was " + plain(v) + RangeWords.suffix(field.unit().symbol(units)),
+                    "enter a value of a size a machine works with"));
         }
         String allowed = RangeWords.of(field, units);
         return error(WizardCode.WIZARD_OUT_OF_RANGE, field, "must be " + allowed + ", was " + plain(v)

@@ -77,6 +77,6 @@ final class UnitSwitch {
             return Optional.empty();
         }
         double out = kind.fromCanonical(kind.toCanonical(v, from), to);
-        return Optional.of(Decimal.significant(out, 10));
+        return Double.isFinite(out) ? Optional.of(Decimal.significant(out, 10)) : Optional.empty();
     }
 }

@@ -14,9 +14,6 @@ import java.nio.file.StandardCopyOption;
 import java.nio.file.StandardOpenOption;
 import java.nio.file.attribute.PosixFileAttributeView;
 import java.time.Duration;
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.concurrent.ThreadLocalRandom;
 
@@ -80,119 +77,19 @@ public final class AtomicFiles {
     }
 
     /**
-     * Writes a set of files into a folder, all or nothing. When the folder does not exist yet,
-     * the files are written into a temporary sibling folder that is then moved into place in one
-     * step. When it exists, every file is first written to a temporary file; only when all are
-     * written are they moved into place, and if a move fails the files already moved are put
-     * back as they were.
+     * Writes a set of files into a folder, all or nothing: {@link OutputSet#write} without a
+     * library to keep out of.
      *
      * @param folder  the output folder
      * @param files   plain file name to content, written in this order
      * @param replace true to replace existing files of the same names
-     * @throws IOException when anything fails; the folder is then as it was
+     * @throws IOException when anything fails; the folder then holds the whole old set
      */
     public static void writeAll(Path folder, Map<String, Content> files, boolean replace) throws IOException {
-        Map<String, Content> ordered = new LinkedHashMap<>(files);
-        for (String name : ordered.keySet()) {
-            if (name.isEmpty() || name.startsWith(".") || name.contains("/") || name.contains("\\")) {
-                throw new IllegalArgumentException("output file name \"" + name + "\" is not a plain file name");
-            }
-        }
-        Path abs = folder.toAbsolutePath();
-        if (!Files.exists(abs)) {
-            writeNewFolder(abs, ordered);
-        } else {
-            writeIntoFolder(abs, ordered, replace);
-        }
+        OutputSet.write(folder, files, replace, java.util.Optional.empty());
     }
 
-    private static void writeNewFolder(Path folder, Map<String, Content> files) throws IOException {
-        Path parent = folder.getParent();
-        Files.createDirectories(parent);
-        Path staging = createUnique(parent, "." + folder.getFileName() + ".", "", true);
-        try {
-            for (Map.Entry<String, Content> e : files.entrySet()) {
-                writeFully(staging.resolve(e.getKey()), e.getValue());
-            }
-            try {
-                Files.move(staging, folder, StandardCopyOption.ATOMIC_MOVE);
-                syncFolder(parent);
-            } catch (FileSystemException raced) {
-                if (!Files.isDirectory(folder)) {
-                    throw raced;
-                }
-                // another writer created the folder meanwhile: fall back to file by file
-                Map<String, Content> again = new LinkedHashMap<>();
-                for (String name : files.keySet()) {
-                    Path staged = staging.resolve(name);
-                    again.put(name, out -> Files.copy(staged, out));
-                }
-                writeIntoFolder(folder, again, false);
-            }
-        } finally {
-            deleteTree(staging);
-        }
-    }
-
-    private static void writeIntoFolder(Path folder, Map<String, Content> files, boolean replace) throws IOException {
-        if (!replace) {
-            for (String name : files.keySet()) {
-                if (Files.exists(folder.resolve(name))) {
-                    throw new FileAlreadyExistsException(folder.resolve(name).toString());
-                }
-            }
-        }
-        Map<String, Path> temps = new LinkedHashMap<>();
-        List<Path> backups = new ArrayList<>();
-        List<String> moved = new ArrayList<>();
-        try {
-            for (Map.Entry<String, Content> e : files.entrySet()) {
-                temps.put(e.getKey(), writeTemp(folder, e.getKey(), e.getValue()));
-            }
-            for (Map.Entry<String, Path> e : temps.entrySet()) {
-                Path target = folder.resolve(e.getKey());
-                Path backup = null;
-                if (Files.exists(target)) {
-                    backup = folder.resolve("." + e.getKey() + ".old" + TEMP_SUFFIX);
-                    Files.copy(target, backup, StandardCopyOption.REPLACE_EXISTING);
-                }
-                backups.add(backup);
-                keepPermissions(target, e.getValue());
-                move(e.getValue(), target);
-                moved.add(e.getKey());
-            }
-            syncFolder(folder);
-        } catch (IOException | RuntimeException failure) {
-            rollBack(folder, moved, backups, failure);
-            throw failure;
-        } finally {
-            for (Path t : temps.values()) {
-                Files.deleteIfExists(t);
-            }
-            for (Path b : backups) {
-                if (b != null) {
-                    Files.deleteIfExists(b);
-                }
-            }
-        }
-    }
-
-    private static void rollBack(Path folder, List<String> moved, List<Path> backups, Exception failure) {
-        for (int i = 0; i < moved.size(); i++) {
-            Path target = folder.resolve(moved.get(i));
-            try {
-                if (backups.get(i) != null) {
-                    move(backups.get(i), target);
-                } else {
-                    Files.deleteIfExists(target);
-                }
-            } catch (IOException e) {
-                failure.addSuppressed(e);
-            }
-        }
-    }
-
-    private static Path writeTemp(Path folder, String name, Content content) throws IOException {
+    static Path writeTemp(Path folder, String name, Content content) throws IOException {
         Path temp = createUnique(folder, "." + name + ".", TEMP_SUFFIX, false);
         try {
             writeFully(temp, content);
@@ -210,7 +107,7 @@ public final class AtomicFiles {
      * folder) may need to read. Named with a plain random number, so that no secure random
      * generator (with its security providers, a start-up cost) is set up for a name.
      */
-    private static Path createUnique(Path folder, String prefix, String suffix, boolean directory)
+    static Path createUnique(Path folder, String prefix, String suffix, boolean directory)
             throws IOException {
         while (true) {
             Path path = folder.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong()) + suffix);
@@ -222,8 +119,17 @@ public final class AtomicFiles {
         }
     }
 
+    /** A free name for a new file, prefix, a random number and suffix (not created). */
+    static Path uniqueName(Path folder, String prefix, String suffix) {
+        Path path;
+        do {
+            path = folder.resolve(prefix + Long.toUnsignedString(ThreadLocalRandom.current().nextLong()) + suffix);
+        } while (Files.exists(path));
+        return path;
+    }
+
     /** Gives a file about to replace {@code target} the target's POSIX permissions, where there are any. */
-    private static void keepPermissions(Path target, Path replacement) {
+    static void keepPermissions(Path target, Path replacement) {
         try {
             if (Files.getFileAttributeView(target, PosixFileAttributeView.class) != null && Files.exists(target)) {
                 Files.setPosixFilePermissions(replacement, Files.getPosixFilePermissions(target));
@@ -233,7 +139,7 @@ public final class AtomicFiles {
         }
     }
 
-    private static void writeFully(Path file, Content content) throws IOException {
+    static void writeFully(Path file, Content content) throws IOException {
         try (FileChannel ch = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE,
                 StandardOpenOption.TRUNCATE_EXISTING);
              OutputStream out = java.nio.channels.Channels.newOutputStream(ch)) {
@@ -278,7 +184,7 @@ public final class AtomicFiles {
         return removed;
     }
 
-    private static void move(Path from, Path to) throws IOException {
+    static void move(Path from, Path to) throws IOException {
         try {
             Files.move(from, to, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
         } catch (AtomicMoveNotSupportedException e) {
@@ -304,7 +210,7 @@ public final class AtomicFiles {
         }
     }
 
-    private static void deleteTree(Path dir) throws IOException {
+    static void deleteTree(Path dir) throws IOException {
         if (!Files.exists(dir)) {
             return;
         }

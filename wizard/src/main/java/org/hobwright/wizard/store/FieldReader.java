@@ -213,10 +213,16 @@ final class FieldReader {
                     "enter " + RangeWords.of(f, units));
             return OptionalDouble.empty();
         }
-        if (!f.range().contains(canonical)) {
+        if (Double.isFinite(canonical) && !f.range().contains(canonical)) {
             String unit = f.unit().symbol(units);
             error(InputCode.INPUT_VALUE, f.leaf(), "must be " + RangeWords.of(f, units) + ", was "
                     + Decimal.readable(raw) + RangeWords.suffix(unit), "enter " + RangeWords.of(f, units));
+            return OptionalDouble.empty();
+        }
+        Optional<String> working = WorkingRange.violation(f, canonical);
+        if (working.isPresent()) {
+            error(InputCode.INPUT_VALUE, f.leaf(), working.get() + ", was " + Decimal.readable(raw)
+                    + RangeWords.suffix(f.unit().symbol(units)), "enter a value of a size a machine works with");
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(canonical);

@@ -1,6 +1,7 @@
 package org.hobwright.wizard.store;
 
 import java.io.IOException;
+import java.io.InputStream;
 import java.nio.ByteBuffer;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
@@ -26,6 +27,9 @@ import tools.jackson.databind.node.ObjectNode;
  * @param lines  line number (1-based) of each key's path; empty for trees not read from text
  */
 public record JsonDocument(String source, ObjectNode root, Map<String, Integer> lines) {
+    /** The field a finding names for the empty key {@code ""} at the top of a file. */
+    static final String EMPTY_KEY = "\"\"";
+
     /** Largest file read, in bytes (1 MB): job and library files are a few kilobytes. */
     public static final long MAX_BYTES = 1_000_000;
 
@@ -46,31 +50,44 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
      * UTF-8, and hold one JSON object with no repeated keys.
      */
     public static Loaded<JsonDocument> read(Path file) {
+        return text(file).then(t -> parse(t, file.toString()));
+    }
+
+    /**
+     * A file's text: it must exist, be a regular file of at most {@link #MAX_BYTES} bytes and be
+     * UTF-8. At most one byte more than the limit is read, whatever size the file system reports
+     * (a file under {@code /proc} reports 0 bytes and may hold more, or never end).
+     */
+    public static Loaded<String> text(Path file) {
         String source = file.toString();
         if (!Files.exists(file)) {
             return Loaded.unreadable(InputCode.INPUT_NO_FILE.at("file",
                     source + ": no such file", "check the path"));
         }
         if (!Files.isRegularFile(file)) {
-            return Loaded.unreadable(InputCode.INPUT_NOT_A_FILE.at("file",
-                    source + ": is a folder, not a file", "name a .json file"));
+            return Loaded.unreadable(InputCode.INPUT_NOT_A_FILE.at("file", source + (Files.isDirectory(file)
+                    ? ": is a folder, not a file" : ": is not a regular file (a device, a pipe or a socket)"),
+                    "name a .json file"));
         }
+        String fix = "a job or library file is a few kilobytes; check that this is the right file";
         try {
             long size = Files.size(file);
             if (size > MAX_BYTES) {
                 return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.at("file",
-                        source + ": " + size + " bytes is more than the limit of " + MAX_BYTES + " bytes",
-                        "a job or library file is a few kilobytes; check that this is the right file"));
+                        source + ": " + size + " bytes is more than the limit of " + MAX_BYTES + " bytes", fix));
             }
-            byte[] bytes = Files.readAllBytes(file);
+            byte[] bytes;
+            try (InputStream in = Files.newInputStream(file)) {
+                bytes = in.readNBytes((int) MAX_BYTES + 1);
+            }
             if (bytes.length > MAX_BYTES) {
-                return read(file);
+                return Loaded.unreadable(InputCode.INPUT_TOO_LARGE.at("file",
+                        source + ": more than the limit of " + MAX_BYTES + " bytes", fix));
             }
-            String text = StandardCharsets.UTF_8.newDecoder()
+            return Loaded.of(StandardCharsets.UTF_8.newDecoder()
                     .onMalformedInput(CodingErrorAction.REPORT)
                     .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(bytes)).toString();
-            return parse(text, source);
+                    .decode(ByteBuffer.wrap(bytes)).toString());
         } catch (CharacterCodingException e) {
             return Loaded.unreadable(InputCode.INPUT_IO.at("file",
                     source + ": not UTF-8 text", "save the file as UTF-8"));
@@ -104,7 +121,7 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
             }
             return Loaded.of(new JsonDocument(source, root, lines));
         } catch (JsonTrees.DuplicateKey e) {
-            return Loaded.unreadable(InputCode.INPUT_MALFORMED.at(e.path(),
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.at(e.path().isEmpty() ? EMPTY_KEY : e.path(),
                     source + ":" + e.line() + ": key \"" + e.path() + "\" appears twice", "keep one of them"));
         } catch (JacksonException e) {
             return Loaded.unreadable(InputCode.INPUT_MALFORMED.at("file",

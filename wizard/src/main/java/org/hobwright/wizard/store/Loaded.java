@@ -80,7 +80,7 @@ public record Loaded<T>(Optional<T> value, List<Finding> findings, boolean unrea
      */
     public String errorLine() {
         return findings.stream().filter(Finding::isError).findFirst()
-                .map(f -> f.message() + f.fix().map(x -> " (" + x + ")").orElse(""))
+                .map(f -> Finding.printable(f.message() + f.fix().map(x -> " (" + x + ")").orElse("")))
                 .orElse("");
     }
 

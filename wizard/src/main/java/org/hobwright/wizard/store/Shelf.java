@@ -63,13 +63,7 @@ final class Shelf {
         return named(what, name, () -> {
             Path saved = file(folder, name);
             if (Files.isRegularFile(saved)) {
-                return JsonDocument.read(saved).then(d -> {
-                    try {
-                        return Loaded.of(Files.readString(saved));
-                    } catch (IOException e) {
-                        return Loaded.unreadable(InputCode.INPUT_IO.at("file", saved + ": cannot be read", null));
-                    }
-                });
+                return JsonDocument.text(saved).then(t -> JsonDocument.parse(t, saved.toString()).map(d -> t));
             }
             return builtins.text(folder + "/" + name + ".json").map(t -> Loaded.of(withoutSchemaLine(t)))
                     .orElseGet(() -> Loaded.unreadable(notFound(folder, what, name)));
@@ -145,6 +139,10 @@ final class Shelf {
     Loaded<Path> save(String folder, String name, String what, String text, boolean force) {
         return named(what, name, () -> {
             Path target = file(folder, name);
+            Optional<Finding> linked = linked(folder, what);
+            if (linked.isPresent()) {
+                return Loaded.unreadable(linked.get());
+            }
             try {
                 AtomicFiles.writeText(target, text, force);
                 AtomicFiles.removeStaleTemps(target.getParent(), target.getFileName().toString(), STALE);
@@ -164,6 +162,10 @@ final class Shelf {
     Loaded<Path> remove(String folder, String what, String name) {
         return named(what, name, () -> {
             Path target = file(folder, name);
+            Optional<Finding> linked = linked(folder, what);
+            if (linked.isPresent()) {
+                return Loaded.unreadable(linked.get());
+            }
             try {
                 if (Files.deleteIfExists(target)) {
                     return Loaded.of(target);
@@ -179,5 +181,22 @@ final class Shelf {
             }
             return Loaded.unreadable(notFound(folder, what, name));
         });
+    }
+
+    /**
+     * A library folder below the home (machines, templates and each machine's, dialects) that is a
+     * symbolic link: a save would land outside the library, so it is refused.
+     */
+    private Optional<Finding> linked(String folder, String what) {
+        Path p = home;
+        for (String part : folder.split("/")) {
+            p = p.resolve(part);
+            if (Files.isSymbolicLink(p)) {
+                return Optional.of(InputCode.LIBRARY_WRITE_FAILED.at(what, p + " is a symbolic link; the library"
+                        + " keeps its files in real folders (a save would land outside it); nothing was changed",
+                        "replace the link by a folder, or give --home the folder the link points to"));
+            }
+        }
+        return Optional.empty();
     }
 }
