@@ -165,7 +165,7 @@ class WizardEndToEndTest {
         assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
         assertFalse(Files.exists(dir.resolve("out")));
         assertTrue(wizard.out().contains("Saved template fine-finish"), wizard::toString);
-        Path saved = home.resolve("templates/varrow-sl16/fine-finish.json");
+        Path saved = home.resolve("templates/varrow-1605/fine-finish.json");
         assertTrue(Files.readString(saved).contains("\"finishFeed\""), Files.readString(saved));
 
         Path job = Files.writeString(dir.resolve("job.json"), Store.builtinText("jobs/metering-pump-gear.json"));
