@@ -101,6 +101,8 @@ final class NcRenderer {
     private TemplateKey key(NcOp op) {
         if (op instanceof NcOp.Fixed f) {
             return f.key();
+        } else if (op instanceof NcOp.Safe safe) {
+            return safe.key();
         } else if (op instanceof NcOp.Synchronise s) {
             return s.helical() ? TemplateKey.SYNC_ON_HELIX : TemplateKey.SYNC_ON;
         } else if (op instanceof NcOp.Wait) {
@@ -118,7 +120,8 @@ final class NcRenderer {
     private Map<Placeholder, String> values(PostedOp posted) {
         NcOp op = posted.op();
         Map<Placeholder, String> v = new EnumMap<>(Placeholder.class);
-        v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(d.programNumber()));
+        v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(programNumber(job, d)));
+        v.put(Placeholder.TOOL, String.valueOf(toolStation(job, d)));
         v.put(Placeholder.PROGRAM_NAME, CommentText.clean(job.name(), d.comments()));
         posted.numbers().forEach((p, n) -> v.put(p, Decimal.text(n, d.trailingZeros())));
         if (op instanceof NcOp.Synchronise s) {
@@ -130,10 +133,24 @@ final class NcRenderer {
             v.put(Placeholder.SWIVEL, d.swivel().orElseThrow().letter() + v.get(Placeholder.SWIVEL));
         } else if (op instanceof NcOp.ShiftTo) {
             v.put(Placeholder.SHIFT, d.shift().orElseThrow().letter() + v.get(Placeholder.SHIFT));
+        } else if (op instanceof NcOp.Safe) {
+            v.put(Placeholder.SAFE_RADIAL, d.radial().letter() + v.get(Placeholder.SAFE_RADIAL));
         } else if (op instanceof NcOp.Move) {
             v.put(Placeholder.RADIAL, d.radial().letter() + v.get(Placeholder.RADIAL));
             v.put(Placeholder.AXIAL, d.axial().letter() + v.get(Placeholder.AXIAL));
         }
         return v;
+    }
+
+    /** The program number: the job's (or its template's), else the dialect's default. */
+    static long programNumber(HobJob job, Dialect d) {
+        return job.cycle().run().programNumber().isPresent() ? job.cycle().run().programNumber().getAsInt()
+                : d.programNumbers().dflt();
+    }
+
+    /** The hob's tool station: the job's (or its template's), else the dialect's default. */
+    static long toolStation(HobJob job, Dialect d) {
+        return job.cycle().run().toolStation().isPresent() ? job.cycle().run().toolStation().getAsInt()
+                : d.toolStations().dflt();
     }
 }

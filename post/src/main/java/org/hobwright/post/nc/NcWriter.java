@@ -11,6 +11,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.CycleWriter;
 import org.hobwright.api.spi.OutputFile;
 import org.hobwright.api.spi.Spi;
@@ -75,11 +76,12 @@ public final class NcWriter implements CycleWriter {
         }
         Dialect dialect = loaded.dialect().get();
         List<Finding> missing = missingTemplates(cycle, dialect);
+        missing.addAll(numbers(context.job(), dialect));
         if (!missing.isEmpty()) {
             return WriteResult.refused(missing);
         }
         NcProgram program = NcProgramBuilder.build(cycle, NcHeader.lines(cycle, context, dialect),
-                context.job().units());
+                context.job().units(), context.job().machine().radialMaxMm());
         WordUnits units = new WordUnits(dialect, context.job().units());
         PostLimits limits = PostLimits.of(context.job(), cycle.setup().orElseThrow());
         List<PostedOp> posted = PostedWords.of(program, dialect, units, limits);
@@ -144,6 +146,24 @@ public final class NcWriter implements CycleWriter {
                         + "\", which the dialect does not have",
                         "add \"" + k.key() + "\" to \"templates\" with the words from the control builder's manual"));
             }
+        }
+        return out;
+    }
+
+    /** The program number and the tool station must be ones the dialect's control takes. */
+    private static List<Finding> numbers(HobJob job, Dialect d) {
+        List<Finding> out = new ArrayList<>(2);
+        long program = NcRenderer.programNumber(job, d);
+        if (!d.programNumbers().takes(program)) {
+            out.add(PostCode.NC_PROGRAM_NUMBER.at("cycle.programNumber", "program number " + program + " is not one "
+                    + d.name() + " takes (" + d.programNumbers().min() + " to " + d.programNumbers().max() + ")",
+                    "give cycle.programNumber from " + d.programNumbers().min() + " to " + d.programNumbers().max()));
+        }
+        long tool = NcRenderer.toolStation(job, d);
+        if (!d.toolStations().takes(tool)) {
+            out.add(PostCode.NC_TOOL_STATION.at("cycle.toolStation", "tool station " + tool + " is not one "
+                    + d.name() + " has (" + d.toolStations().min() + " to " + d.toolStations().max() + ")",
+                    "give cycle.toolStation from " + d.toolStations().min() + " to " + d.toolStations().max()));
         }
         return out;
     }
