@@ -29,6 +29,8 @@ public enum PostCode implements FindingCode {
     NC_DIALECT_BAD_TEMPLATE("a template that cannot be read, or a placeholder where it has no value", Sources.DIALECT),
     NC_PROGRAM_NUMBER("a program number the dialect's control cannot take", Sources.DIALECT),
     NC_TOOL_STATION("a tool station the dialect's control does not have", Sources.DIALECT),
+    NC_PROGRAM_TOO_LONG("a cycle with more steps than a program may have (20,000 operations)",
+            Sources.POST),
     NC_LINE_TOO_LONG("a block longer than the dialect's maxLineLength", Sources.DIALECT),
     NC_SAFETY_CUT_WITHOUT_SYNC("a feed move before the synchronisation is on", Sources.SAFETY),
     NC_SAFETY_SETTLE("less dwell than the machine's settle time between the synchronisation and the first feed",

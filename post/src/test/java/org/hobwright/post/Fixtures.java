@@ -78,10 +78,10 @@ public final class Fixtures {
 
         /**
          * The shipped dialects this cycle can be posted with: every one that has the axes its steps
-         * move (a programmable swivel, a hob-shift axis).
+         * move (a programmable swivel, a hob-shift axis); a manual swivel holder is set by hand.
          */
         public List<String> dialects() {
-            boolean swivel = cycle.steps().stream().anyMatch(CycleStep.Swivel.class::isInstance);
+            boolean swivel = cycle.steps().stream().anyMatch(s -> s instanceof CycleStep.Swivel sw && sw.programmable());
             boolean shift = cycle.steps().stream().anyMatch(CycleStep.HobShift.class::isInstance);
             return Fixtures.dialects().stream().filter(d -> (!swivel || dialectText(d).contains("\"swivel\": {"))
                     && (!shift || dialectText(d).contains("\"shift\": {"))).toList();

@@ -31,6 +31,9 @@ final class NcProgramBuilder {
         ops.add(new NcOp.Safe(TemplateKey.SAFE_START, safeDiameterMm));
         ops.add(new NcOp.Fixed(TemplateKey.TOOL_CALL));
         for (CycleStep step : cycle.steps()) {
+            if (step instanceof CycleStep.Swivel s && !s.programmable()) {
+                continue;       // a manual holder: the setter sets it (header and setup sheet), no block
+            }
             ops.add(op(step));
         }
         ops.add(new NcOp.Safe(TemplateKey.SAFE_END, safeDiameterMm));

@@ -28,6 +28,11 @@ import org.hobwright.post.PostFindings;
  */
 public final class NcWriter implements CycleWriter {
     private static final int KEPT = 16;
+    /**
+     * Most operations a program may have: far beyond a hobbing cycle (about six a pass, and the
+     * planner makes at most 200 passes), it keeps the text bounded for a cycle from any planner.
+     */
+    static final int MAX_OPERATIONS = 20_000;
     private final Map<String, DialectLoader.Loaded> dialects = new ConcurrentHashMap<>();
 
 
@@ -82,6 +87,11 @@ public final class NcWriter implements CycleWriter {
         }
         NcProgram program = NcProgramBuilder.build(cycle, NcHeader.lines(cycle, context, dialect),
                 context.job().units(), context.job().machine().radialMaxMm());
+        if (program.ops().size() > MAX_OPERATIONS) {
+            return WriteResult.refused(List.of(PostCode.NC_PROGRAM_TOO_LONG.at("cycle.steps", "the cycle has "
+                    + cycle.steps().size() + " steps; a program may have at most " + MAX_OPERATIONS + " operations",
+                    "plan fewer passes (cycle.roughDepth)")));
+        }
         WordUnits units = new WordUnits(dialect, context.job().units());
         PostLimits limits = PostLimits.of(context.job(), cycle.setup().orElseThrow());
         List<PostedOp> posted = PostedWords.of(program, dialect, units, limits);
@@ -132,7 +142,7 @@ public final class NcWriter implements CycleWriter {
         for (CycleStep s : cycle.steps()) {
             if (s instanceof CycleStep.SyncOn on && on.differentialDegPerMm() != 0) {
                 needed.add(TemplateKey.SYNC_ON_HELIX);
-            } else if (s instanceof CycleStep.Swivel) {
+            } else if (s instanceof CycleStep.Swivel sw && sw.programmable()) {
                 needed.add(TemplateKey.SWIVEL_TO);
             } else if (s instanceof CycleStep.HobShift) {
                 needed.add(TemplateKey.HOB_SHIFT);

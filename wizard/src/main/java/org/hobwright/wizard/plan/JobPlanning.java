@@ -66,7 +66,7 @@ final class JobPlanning {
         double root = gd.rootDiameterMm();
         SpeedWindow window = SpeedWindow.of(machine, hob, ratio);
         Optional<CuttingData> row = table.find(cycle.workMaterial(), hob.material(), gear.moduleMm());
-        new Blockers(job, findings).check(ratio, swivel, touchOff, root, window, row);
+        new Blockers(job, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
@@ -138,13 +138,17 @@ final class JobPlanning {
                                   CutModel model, Drive drive) {
         double rpm = SpeedChoice.hobRpm(boxed(cycle.cuttingSpeedMPerMin()), row, hob.outsideDiameterMm(), window,
                 findings).orElseThrow();
-        double roughDepth = cycle.roughDepthMm().orElse(gear.moduleMm() <= ONE_PASS_MODULE_MM ? depth
-                : ROUGH_DEPTH_PER_MODULE * gear.moduleMm());
-        PassDepths depths = PassDepths.of(depth, roughDepth, cycle.finishStockMm());
+        PassDepths depths = PassDepths.of(depth, roughDepth(depth), cycle.finishStockMm());
         FeedChoice feeds = FeedChoice.of(new FeedChoice.Inputs(cycle.roughFeedMmPerRev(), cycle.finishFeedMmPerRev(),
                 row, targets, model, depths, drive.workRpm(rpm), machine.maxFeedMmPerMin()), findings).orElseThrow();
         return new PlanSettings(Kinematics.cuttingSpeed(rpm, hob.outsideDiameterMm()), rpm, feeds.roughMmPerRev(),
                 feeds.finishMmPerRev(), depths);
+    }
+
+    /** The job's roughing depth, or the default for its module, mm. */
+    private double roughDepth(double depth) {
+        return cycle.roughDepthMm().orElse(gear.moduleMm() <= ONE_PASS_MODULE_MM ? depth
+                : ROUGH_DEPTH_PER_MODULE * gear.moduleMm());
     }
 
     private CycleInvariants invariants(double root) {

@@ -34,6 +34,8 @@ public enum PlanCode implements FindingCode {
             PlanSources.MACHINE, ERROR),
     PLAN_TRAVEL_AXIAL("machine.travel.axialMin or axialMax", "a step outside the axial travel",
             PlanSources.MACHINE, ERROR),
+    PLAN_TOO_MANY_PASSES("cycle.roughDepth", "the roughing depth splits the depth into more passes than a cycle may"
+            + " have", "Hobwright limit of " + PassDepths.MAX_PASSES + " passes (bounds the program size)", ERROR),
     PLAN_INVARIANT_BROKEN("job", "a safety invariant failed inside the planner, or the analysis gave no geometry"
             + " without an error (a defect: report it)", "Hobwright safety invariants", ERROR),
     PLAN_HOB_RPM_CAPPED("cycle.cuttingSpeed", "hob speed lowered to a machine or hob limit",

@@ -60,6 +60,8 @@ public final class ToolpathBuilder {
         double retract = g.retractDiameterMm();
         double safe = Math.max(g.safeDiameterMm(), retract);
         int sign = drive.senses().feedSign();
+        double t = 0;               // the seconds of steps[0, counted): each step is added once
+        int counted = 0;
         List<PassSummary> passes = new ArrayList<>(s.passes().count());
         double ax = Double.NaN;
         for (int i = 0; i < s.passes().count(); i++) {
@@ -71,7 +73,9 @@ public final class ToolpathBuilder {
             double start = axial(g, sign, -(approach + g.axialClearanceMm()));
             double end = axial(g, sign, g.faceWidthMm() + overrun + g.axialClearanceMm());
             double passDia = g.touchOffDiameterMm() - 2 * depth;
-            double t0 = sum(steps);
+            double t0 = sum(steps, counted, t);
+            counted = steps.size();
+            t = t0;
             if (Double.isNaN(ax)) {
                 double lastEnd = axial(g, sign, g.faceWidthMm() + g.overrunMm(s.passes().depth(s.passes().count() - 1))
                         + g.axialClearanceMm());
@@ -82,14 +86,16 @@ public final class ToolpathBuilder {
             }
             steps.add(rapid(g, pass, retract, start, passDia + 2 * g.radialClearanceMm(), start));
             steps.add(new CycleStep.Feed(pass, passDia, start, feed, false,
-                    Kinematics.feedSeconds(g.radialClearanceMm(), feed, workRpm)));
+                    Kinematics.feedSeconds(g.radialClearanceMm(), feed, workRpm), g.hobOutsideDiameterMm()));
             steps.add(new CycleStep.Feed(pass, passDia, end, feed, true,
-                    Kinematics.feedSeconds(Math.abs(end - start), feed, workRpm)));
+                    Kinematics.feedSeconds(Math.abs(end - start), feed, workRpm), g.hobOutsideDiameterMm()));
             steps.add(rapid(g, pass, passDia, end, retract, end));
             steps.add(rapid(g, pass, retract, end, retract, start));
             ax = start;
+            t = sum(steps, counted, t);
+            counted = steps.size();
             passes.add(new PassSummary(pass, passDia, depth, feed, approach, overrun, Math.abs(end - start),
-                    sum(steps) - t0));
+                    t - t0));
         }
         steps.add(rapid(g, 0, retract, ax, safe, ax));
         if (coolant) {
@@ -97,7 +103,7 @@ public final class ToolpathBuilder {
         }
         steps.add(new CycleStep.SyncOff(0));
         steps.add(new CycleStep.SpindlesStop(0));
-        return new Toolpath(steps, passes, sum(steps));
+        return new Toolpath(steps, passes, sum(steps, counted, t));
     }
 
     /** Axial position from the front face of a position u in the cut's own coordinate. */
@@ -108,13 +114,14 @@ public final class ToolpathBuilder {
     private static CycleStep.Rapid rapid(CycleGeometry g, int pass, double fromDia, double fromAx, double toDia,
                                          double toAx) {
         double move = Math.max(Math.abs(fromDia - toDia) / 2, Math.abs(fromAx - toAx));
-        return new CycleStep.Rapid(pass, toDia, toAx, 60.0 * move / g.rapidMmPerMin());
+        return new CycleStep.Rapid(pass, toDia, toAx, 60.0 * move / g.rapidMmPerMin(), g.hobOutsideDiameterMm());
     }
 
-    private static double sum(List<CycleStep> steps) {
-        double t = 0;
-        for (CycleStep step : steps) {
-            t += step.seconds();
+    /** {@code before} plus the seconds of the steps from {@code from} on. */
+    private static double sum(List<CycleStep> steps, int from, double before) {
+        double t = before;
+        for (int i = from; i < steps.size(); i++) {
+            t += steps.get(i).seconds();
         }
         return t;
     }
