@@ -83,7 +83,7 @@ final class PostedWords {
         } else if (op instanceof NcOp.Safe safe) {
             // at the machine's travel limit: rounded toward the work, never past the limit
             n.put(Placeholder.SAFE_RADIAL, signed(directed(w.radial(safe.diameterMm()), Placeholder.RADIAL,
-                    RoundingMode.DOWN), d.radial().sign()));
+                    Rounding.DOWN), d.radial().sign()));
         } else if (op instanceof NcOp.Move m) {
             n.put(Placeholder.RADIAL, signed(directed(w.radial(m.diameterMm()), Placeholder.RADIAL, Rounding.CEILING),
                     d.radial().sign()));

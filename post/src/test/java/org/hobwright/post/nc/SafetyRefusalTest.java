@@ -130,7 +130,7 @@ class SafetyRefusalTest {
         }
         HobCycle big = new HobCycle(c.gear(), c.inspection(), c.tolerances(), c.setup(), steps, c.summary(),
                 c.simulation(), c.findings());
-        WriteResult r = new NcWriter().write(big, SPUR.context("varrow-ctl"));
+        WriteResult r = new NcWriter().write(big, SPUR.context("ottmere-ctl"));
         assertTrue(r.files().isEmpty());
         assertEquals(List.of("NC_PROGRAM_TOO_LONG"), r.findings().stream().map(Finding::code).toList());
     }
