@@ -8,6 +8,7 @@ import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
+import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.PostCode;
 import org.hobwright.text.JsonTrees;
 import tools.jackson.core.JacksonException;
@@ -78,6 +79,20 @@ public final class DialectLoader {
                     "correct the JSON at that line (" + FIX_SEE_README + ")");
         }
         return new Reading(fileName, lines, root).dialect();
+    }
+
+    /**
+     * The dialect a write context holds ({@link WriteContext#DIALECT}, named by
+     * {@link WriteContext#DIALECT_NAME} or the machine's dialect); empty when it holds none or one that
+     * does not load (the program writer reports why).
+     */
+    public static Optional<Dialect> of(WriteContext context) {
+        Optional<String> text = context.resource(WriteContext.DIALECT);
+        if (text.isEmpty()) {
+            return Optional.empty();
+        }
+        return load(context.resource(WriteContext.DIALECT_NAME).orElse(context.job().machine().dialect()), text.get())
+                .dialect();
     }
 
     private static Loaded unreadable(String fileName, int line, String field, String message, String fix) {

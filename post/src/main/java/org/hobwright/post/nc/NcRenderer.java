@@ -119,8 +119,9 @@ final class NcRenderer {
     private Map<Placeholder, String> values(PostedOp posted) {
         NcOp op = posted.op();
         Map<Placeholder, String> v = new EnumMap<>(Placeholder.class);
-        v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(programNumber(job, d)));
-        v.put(Placeholder.TOOL, String.valueOf(toolStation(job, d)));
+        JobNumbers numbers = JobNumbers.of(job, d);
+        v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(numbers.programNumber()));
+        v.put(Placeholder.TOOL, String.valueOf(numbers.toolStation()));
         v.put(Placeholder.PROGRAM_NAME, CommentText.clean(job.name(), d.comments()));
         posted.numbers().forEach((p, n) -> v.put(p, n.text(d.trailingZeros())));
         if (op instanceof NcOp.Synchronise s) {
@@ -139,17 +140,5 @@ final class NcRenderer {
             v.put(Placeholder.AXIAL, d.axial().letter() + v.get(Placeholder.AXIAL));
         }
         return v;
-    }
-
-    /** The program number: the job's (or its template's), else the dialect's default. */
-    static long programNumber(HobJob job, Dialect d) {
-        return job.cycle().run().programNumber().isPresent() ? job.cycle().run().programNumber().getAsInt()
-                : d.programNumbers().dflt();
-    }
-
-    /** The hob's tool station: the job's (or its template's), else the dialect's default. */
-    static long toolStation(HobJob job, Dialect d) {
-        return job.cycle().run().toolStation().isPresent() ? job.cycle().run().toolStation().getAsInt()
-                : d.toolStations().dflt();
     }
 }

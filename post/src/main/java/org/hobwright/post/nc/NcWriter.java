@@ -163,13 +163,14 @@ public final class NcWriter implements CycleWriter {
     /** The program number and the tool station must be ones the dialect's control takes. */
     private static List<Finding> numbers(HobJob job, Dialect d) {
         List<Finding> out = new ArrayList<>(2);
-        long program = NcRenderer.programNumber(job, d);
+        JobNumbers numbers = JobNumbers.of(job, d);
+        long program = numbers.programNumber();
         if (!d.programNumbers().takes(program)) {
             out.add(PostCode.NC_PROGRAM_NUMBER.at("cycle.programNumber", "program number " + program + " is not one "
                     + d.name() + " takes (" + d.programNumbers().min() + " to " + d.programNumbers().max() + ")",
                     "give cycle.programNumber from " + d.programNumbers().min() + " to " + d.programNumbers().max()));
         }
-        long tool = NcRenderer.toolStation(job, d);
+        long tool = numbers.toolStation();
         if (!d.toolStations().takes(tool)) {
             out.add(PostCode.NC_TOOL_STATION.at("cycle.toolStation", "tool station " + tool + " is not one "
                     + d.name() + " has (" + d.toolStations().min() + " to " + d.toolStations().max() + ")",

@@ -70,7 +70,7 @@ class ClimbAndConventionalTest {
     }
 
     /** +1 when the cutting moves run toward larger axial words, −1 the other way. */
-    private static int feedSign(List<NcReader.Block> blocks) {
+    static int feedSign(List<NcReader.Block> blocks) {
         double last = Double.NaN;
         int sign = 0;
         for (NcReader.Block b : blocks) {
