@@ -37,7 +37,7 @@ class HostileInputTest {
     /** The sample job with its machine given inline (all its values editable). */
     private ObjectNode withInlineMachine() {
         ObjectNode job = sample();
-        ObjectNode machine = (ObjectNode) JSON.readTree(Store.builtinText("machines/varrow-sl16.json"));
+        ObjectNode machine = (ObjectNode) JSON.readTree(Store.builtinText("machines/varrow-1605.json"));
         for (String key : List.of("$schema", "format", "version", "units", "description")) {
             machine.remove(key);
         }
@@ -152,8 +152,8 @@ class HostileInputTest {
         Path home = Files.createDirectory(dir.resolve("home"));
         Path elsewhere = Files.createDirectory(dir.resolve("elsewhere"));
         Files.createSymbolicLink(home.resolve("machines"), elsewhere);
-        Path machine = file("shop-lathe.json", Store.builtinText("machines/varrow-sl16.json")
-                .replace("\"varrow-sl16\"", "\"shop-lathe\""));
+        Path machine = file("shop-lathe.json", Store.builtinText("machines/varrow-1605.json")
+                .replace("\"varrow-1605\"", "\"shop-lathe\""));
         Cli.Run r = Cli.run(home, "machines", "save", machine.toString());
         assertEquals(ExitCodes.USAGE, r.code(), r::toString);
         assertTrue(r.err().contains("is a symbolic link"), r::toString);
