@@ -259,7 +259,7 @@ public final class CuttingDataReader {
     }
 
     private void add(InputCode code, String path, String message, String fix) {
-        out.add(code.at(path.isEmpty() ? JsonDocument.EMPTY_KEY : path, message, fix));
+        out.add(code.at(JsonDocument.field(path), message, fix));
         unreadable |= code.unreadable();
     }
 

@@ -27,8 +27,14 @@ import tools.jackson.databind.node.ObjectNode;
  * @param lines  line number (1-based) of each key's path; empty for trees not read from text
  */
 public record JsonDocument(String source, ObjectNode root, Map<String, Integer> lines) {
-    /** The field a finding names for the empty key {@code ""} at the top of a file. */
-    static final String EMPTY_KEY = "\"\"";
+    /**
+     * The field a finding names for a key path: the path itself, or the path in quotes when it is
+     * blank (the key {@code ""} or {@code " "} at the top of a file), so that the finding still
+     * names it.
+     */
+    static String field(String path) {
+        return path.isBlank() ? "\"" + path + "\"" : path;
+    }
 
     /** Largest file read, in bytes (1 MB): job and library files are a few kilobytes. */
     public static final long MAX_BYTES = 1_000_000;
@@ -121,7 +127,7 @@ public record JsonDocument(String source, ObjectNode root, Map<String, Integer> 
             }
             return Loaded.of(new JsonDocument(source, root, lines));
         } catch (JsonTrees.DuplicateKey e) {
-            return Loaded.unreadable(InputCode.INPUT_MALFORMED.at(e.path().isEmpty() ? EMPTY_KEY : e.path(),
+            return Loaded.unreadable(InputCode.INPUT_MALFORMED.at(field(e.path()),
                     source + ":" + e.line() + ": key \"" + e.path() + "\" appears twice", "keep one of them"));
         } catch (JacksonException e) {
             return Loaded.unreadable(InputCode.INPUT_MALFORMED.at("file",

@@ -103,7 +103,7 @@ final class Shape {
             String child = path.isEmpty() ? key : path + "." + key;
             Shape s = keys.get(key);
             if (s == null) {
-                out.add(InputCode.INPUT_UNKNOWN_KEY.at(child.isEmpty() ? JsonDocument.EMPTY_KEY : child,
+                out.add(InputCode.INPUT_UNKNOWN_KEY.at(JsonDocument.field(child),
                         doc.at(child) + ": unknown key \"" + key + "\"" + (path.isEmpty() ? "" : " in " + path),
                         "allowed here: " + String.join(", ", keys.keySet())));
             } else {

@@ -65,6 +65,9 @@ class HostileInputTest {
         ObjectNode job = sample();
         job.put("", 1);
         assertJobError(file("empty-key.json", job), "\"\"", "unknown key \"\"");
+        ObjectNode blank = sample();
+        blank.put(" ", 1);
+        assertJobError(file("blank-key.json", blank), "\" \"", "unknown key \" \"");
     }
 
     @Test
