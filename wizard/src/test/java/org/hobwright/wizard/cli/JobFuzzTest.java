@@ -4,7 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.BufferedReader;
 import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringReader;
+import java.io.StringWriter;
 import java.lang.management.ManagementFactory;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -16,6 +20,7 @@ import java.util.stream.Stream;
 import org.hobwright.post.nc.ReadBackWriter;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 import tools.jackson.databind.node.JsonNodeFactory;
@@ -118,6 +123,32 @@ class JobFuzzTest {
         return path + " = " + v;
     }
 
+    /**
+     * The tool's command line made once and run again for every job (picocli sets every option back
+     * to its initial value before each parse): building it costs more than a run that stops at a
+     * finding.
+     */
+    private static final class Reused {
+        private final StringWriter out = new StringWriter();
+        private final StringWriter err = new StringWriter();
+        private final CommandLine cl;
+
+        Reused(Path home) {
+            CliEnvironment env = new CliEnvironment(new BufferedReader(new StringReader("")), Cli.CLOCK,
+                    Map.of("HOBWRIGHT_HOME", home.toString()), JobFuzzTest.class.getClassLoader(), true);
+            cl = HobwrightCommand.commandLine(env);
+            cl.setOut(new PrintWriter(out, true));
+            cl.setErr(new PrintWriter(err, true));
+        }
+
+        Cli.Run run(String... args) {
+            out.getBuffer().setLength(0);
+            err.getBuffer().setLength(0);
+            int code = cl.execute(args);
+            return new Cli.Run(code, out.toString(), err.toString());
+        }
+    }
+
     @Test
     void mutatedJobsExitZeroOneOrTwoWithinBoundsAndPostOnlySafePrograms() throws IOException {
         List<ObjectNode> samples = samples();
@@ -128,6 +159,7 @@ class JobFuzzTest {
         long checkedBefore = ReadBackWriter.checked();
         int violationsBefore = ReadBackWriter.violations().size();
         int[] exits = new int[3];
+        Reused tool = new Reused(dir);
         Path job = dir.resolve("job.json");
         Path out = dir.resolve("out");
         for (int i = 0; i < JOBS; i++) {
@@ -140,7 +172,7 @@ class JobFuzzTest {
             Files.writeString(job, JSON.writeValueAsString(tree));
             long allocated = threads.getThreadAllocatedBytes(thread);
             long start = System.nanoTime();
-            Cli.Run run = Cli.run(dir, "plan", job.toString(), "--out", out.toString());
+            Cli.Run run = tool.run("plan", job.toString(), "--out", out.toString());
             long millis = (System.nanoTime() - start) / 1_000_000;
             long bytes = threads.getThreadAllocatedBytes(thread) - allocated;
             String all = run.out() + run.err();
@@ -150,6 +182,8 @@ class JobFuzzTest {
             assertFalse(all.contains("\u001b"), () -> name + ": a raw escape character in the output\n" + run);
             assertTrue(millis < MAX_MILLIS, () -> name + ": " + millis + " ms");
             assertTrue(bytes < MAX_ALLOCATED, () -> name + ": " + (bytes >> 20) + " MB allocated");
+            assertTrue(run.out().lines().filter(l -> l.contains(job + "): ")).count() <= 1,
+                    () -> name + ": one job per run, nothing kept from the run before\n" + run);
             exits[run.code()]++;
         }
         assertEquals(List.of(), ReadBackWriter.violations().subList(violationsBefore,
