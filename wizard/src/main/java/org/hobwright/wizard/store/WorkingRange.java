@@ -38,7 +38,7 @@ public final class WorkingRange {
             return Optional.of("must be a finite number");
         }
         // a finite value given in inches can overflow to infinity in mm: too large, not "not a number"
-        if (r.max() > LARGEST && canonical > LARGEST || r.min() < -LARGEST && canonical < -LARGEST
+        if (Double.isInfinite(r.max()) && canonical > LARGEST || Double.isInfinite(r.min()) && canonical < -LARGEST
                 || Double.isInfinite(canonical)) {
             return Optional.of("must be at most " + Decimal.readable(LARGEST) + unit
                     + " in size (Hobwright's working range)");
