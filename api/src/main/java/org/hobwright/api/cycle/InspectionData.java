@@ -1,5 +1,6 @@
 package org.hobwright.api.cycle;
 
+import java.util.Optional;
 import org.hobwright.api.ApiStatus;
 import org.hobwright.api.internal.Checks;
 
@@ -14,6 +15,8 @@ import org.hobwright.api.internal.Checks;
  * @param balls                  true when balls are meant (helical gears)
  * @param chordalThicknessMm     chordal tooth thickness at the reference circle (normal section)
  * @param chordalHeightMm        chordal height from the tip to that chord
+ * @param limits                 upper and lower limits, when the job gives a lower tooth-thickness allowance
+ *                               or a tolerance series
  */
 @ApiStatus(since = "1.0")
 public record InspectionData(
@@ -24,7 +27,8 @@ public record InspectionData(
         double overPinsMm,
         boolean balls,
         double chordalThicknessMm,
-        double chordalHeightMm) {
+        double chordalHeightMm,
+        @ApiStatus(since = "1.1") Optional<InspectionLimits> limits) {
 
     public InspectionData {
         Checks.atLeast("spanTeeth", spanTeeth, 1);
@@ -34,5 +38,13 @@ public record InspectionData(
         Checks.finite("overPinsMm", overPinsMm);
         Checks.finite("chordalThicknessMm", chordalThicknessMm);
         Checks.finite("chordalHeightMm", chordalHeightMm);
+        Checks.present("limits", limits);
+    }
+
+    /** Values without limits (the form of api 1.0). */
+    public InspectionData(int spanTeeth, double spanWidthMm, double spanContactDiameterMm, double pinDiameterMm,
+                          double overPinsMm, boolean balls, double chordalThicknessMm, double chordalHeightMm) {
+        this(spanTeeth, spanWidthMm, spanContactDiameterMm, pinDiameterMm, overPinsMm, balls, chordalThicknessMm,
+                chordalHeightMm, Optional.empty());
     }
 }

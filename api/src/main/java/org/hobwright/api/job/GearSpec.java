@@ -27,6 +27,12 @@ import org.hobwright.api.internal.Checks;
  * @param pinDiameterMm         the pin or ball the inspector will use, if chosen
  * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class 1 to 11, if the drawing gives one
  * @param drawing               values printed on the drawing, for the drawing check
+ * @param thicknessAllowanceLowerMm the lower normal tooth-thickness allowance E_sni, mm, -10 to 10 and not above
+ *                              {@code thicknessAllowanceMm} (the upper one, E_sns), when the drawing or a
+ *                              tolerance series gives one: the inspection values get upper and lower limits
+ * @param thicknessSeries       the tolerance series both allowances were taken from when the drawing gives
+ *                              none (e.g. {@code din3967-cd25}), as a label; the allowances carry the values
+ * @param mate                  the gear this one runs with, when the drawing gives it
  */
 @ApiStatus(since = "1.0")
 public record GearSpec(
@@ -44,7 +50,10 @@ public record GearSpec(
         OptionalDouble blankDiameterMm,
         OptionalDouble pinDiameterMm,
         OptionalInt flankToleranceClass,
-        DrawingValues drawing) {
+        DrawingValues drawing,
+        @ApiStatus(since = "1.1") OptionalDouble thicknessAllowanceLowerMm,
+        @ApiStatus(since = "1.1") Optional<String> thicknessSeries,
+        @ApiStatus(since = "1.1") Optional<MatingGear> mate) {
 
     public GearSpec {
         Checks.text("partName", partName);
@@ -65,11 +74,30 @@ public record GearSpec(
         Objects.requireNonNull(flankToleranceClass, "flankToleranceClass");
         Checks.range("flankToleranceClass", flankToleranceClass, 1, 11);
         Checks.present("drawing", drawing);
+        Objects.requireNonNull(thicknessAllowanceLowerMm, "thicknessAllowanceLowerMm");
+        Checks.range("thicknessAllowanceLower", thicknessAllowanceLowerMm, -10, 10);
+        if (thicknessAllowanceLowerMm.isPresent() && thicknessAllowanceLowerMm.getAsDouble() > thicknessAllowanceMm) {
+            throw new IllegalArgumentException("thicknessAllowanceLower must not be above thicknessAllowance ("
+                    + thicknessAllowanceMm + "), was " + thicknessAllowanceLowerMm.getAsDouble());
+        }
+        Objects.requireNonNull(thicknessSeries, "thicknessSeries");
+        thicknessSeries.ifPresent(t -> Checks.text("thicknessSeries", t));
+        Objects.requireNonNull(mate, "mate");
         if (toothSystem.equals("custom") != customProportions.isPresent()) {
             throw new IllegalArgumentException(
                     "customProportions must be given exactly when toothSystem is \"custom\", toothSystem was \""
                             + toothSystem + "\"");
         }
+    }
+
+    /** A gear without lower allowance, tolerance series or mate (the form of api 1.0). */
+    public GearSpec(String partName, int teeth, Pitch pitch, double pressureAngleDeg, double helixAngleDeg, Hand hand,
+                    double faceWidthMm, double profileShift, double thicknessAllowanceMm, String toothSystem,
+                    Optional<ToothProportions> customProportions, OptionalDouble blankDiameterMm,
+                    OptionalDouble pinDiameterMm, OptionalInt flankToleranceClass, DrawingValues drawing) {
+        this(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm, profileShift,
+                thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, OptionalDouble.empty(), Optional.empty(), Optional.empty());
     }
 
     /** True for a spur gear (helix angle 0). */
@@ -97,7 +125,7 @@ public record GearSpec(
     public GearSpec withPartName(String partName) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -110,7 +138,7 @@ public record GearSpec(
     public GearSpec withTeeth(int teeth) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -123,7 +151,7 @@ public record GearSpec(
     public GearSpec withPitch(Pitch pitch) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -136,7 +164,7 @@ public record GearSpec(
     public GearSpec withPressureAngleDeg(double pressureAngleDeg) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -149,7 +177,7 @@ public record GearSpec(
     public GearSpec withHelixAngleDeg(double helixAngleDeg) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -162,7 +190,7 @@ public record GearSpec(
     public GearSpec withHand(Hand hand) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -175,7 +203,7 @@ public record GearSpec(
     public GearSpec withFaceWidthMm(double faceWidthMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -188,7 +216,7 @@ public record GearSpec(
     public GearSpec withProfileShift(double profileShift) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -201,7 +229,7 @@ public record GearSpec(
     public GearSpec withThicknessAllowanceMm(double thicknessAllowanceMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -214,7 +242,7 @@ public record GearSpec(
     public GearSpec withToothSystem(String toothSystem) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -227,7 +255,7 @@ public record GearSpec(
     public GearSpec withCustomProportions(Optional<ToothProportions> customProportions) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -251,7 +279,7 @@ public record GearSpec(
     public GearSpec withBlankDiameterMm(OptionalDouble blankDiameterMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -275,7 +303,7 @@ public record GearSpec(
     public GearSpec withPinDiameterMm(OptionalDouble pinDiameterMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -299,7 +327,7 @@ public record GearSpec(
     public GearSpec withFlankToleranceClass(OptionalInt flankToleranceClass) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -323,6 +351,45 @@ public record GearSpec(
     public GearSpec withDrawing(DrawingValues drawing) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
+    }
+
+    /**
+     * This gear spec with a lower tooth-thickness allowance.
+     *
+     * @param thicknessAllowanceLowerMm the lower normal allowance E_sni, mm, not above the upper one
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withThicknessAllowanceLowerMm(OptionalDouble thicknessAllowanceLowerMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
+    }
+
+    /**
+     * This gear spec with another tolerance-series label.
+     *
+     * @param thicknessSeries the series the allowances were taken from, or empty
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withThicknessSeries(Optional<String> thicknessSeries) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
+    }
+
+    /**
+     * This gear spec with another mating gear.
+     *
+     * @param mate the gear this one runs with, or empty
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withMate(Optional<MatingGear> mate) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 }

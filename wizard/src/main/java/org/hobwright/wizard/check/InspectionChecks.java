@@ -6,6 +6,7 @@ import org.hobwright.wizard.geometry.InvoluteGear;
 import org.hobwright.wizard.inspection.InspectionValues;
 import org.hobwright.wizard.inspection.OverPins;
 import org.hobwright.wizard.inspection.PinChoice;
+import org.hobwright.wizard.tolerance.ThicknessSeries;
 
 /**
  * Can the inspector take the measurements? The pin or ball must touch the involute between the root
@@ -62,5 +63,22 @@ public final class InspectionChecks {
                     + words.length(faceWidthMm) + " is too narrow for span anvils over " + v.span().teeth()
                     + " teeth (needs about " + words.length(needed) + ")", "measure over balls instead"));
         }
+    }
+
+    /**
+     * Where the tooth-thickness allowances come from, for the report: {@code drawing}, or the DIN 3967 series
+     * with a warning that its values are from memory.
+     */
+    public static String limitsBasis(org.hobwright.api.job.GearSpec spec, Wording words, List<Finding> out) {
+        java.util.Optional<ThicknessSeries> series = spec.thicknessSeries().flatMap(ThicknessSeries::parse);
+        if (series.isEmpty()) {
+            return "drawing";
+        }
+        out.add(EngineeringCode.INSPECTION_LIMITS_SERIES.at("gear.thicknessSeries", series.get().label()
+                + " gives the allowances " + words.length(spec.thicknessAllowanceMm()) + " (upper) and "
+                + words.length(spec.thicknessAllowanceLowerMm().orElse(spec.thicknessAllowanceMm()))
+                + " (lower) for this reference diameter; Hobwright's table of the series is from memory",
+                "check both against DIN 3967 before the limits are used, or enter the drawing's allowances"));
+        return series.get().label() + " (from memory)";
     }
 }

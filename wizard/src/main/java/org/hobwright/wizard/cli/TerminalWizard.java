@@ -131,9 +131,9 @@ final class TerminalWizard {
         return !f.key().startsWith("gear.custom.") || "custom".equals(wizard.value("gear.toothSystem"));
     }
 
-    /** True for a value printed on the drawing. */
+    /** True for a value printed on the drawing (its printed values and its mating gear). */
     static boolean isDrawing(FieldSpec f) {
-        return f.key().startsWith("gear.drawing.");
+        return f.key().startsWith("gear.drawing.") || f.key().startsWith("gear.mate.");
     }
 
     private boolean anyDrawingValue(List<FieldSpec> fields) {

@@ -62,8 +62,14 @@ public final class StepFields {
             Field.of("gear.profileShift", "Profile shift coefficient", NONE, NUMBER,
                     "Profile shift x in modules; 0 for a standard gear.").range(-3, 3),
             Field.of("gear.thicknessAllowance", "Tooth thickness allowance", LENGTH, NUMBER,
-                    "Normal tooth thickness allowance E_sn; negative thins the tooth for backlash.")
+                    "Upper normal tooth thickness allowance E_sns; negative thins the tooth for backlash.")
                     .range(-10, 10),
+            Field.of("gear.thicknessAllowanceLower", "Lower tooth thickness allowance", LENGTH, NUMBER,
+                    "Lower normal allowance E_sni from the drawing; gives the inspection values their limits.")
+                    .range(-10, 10).optional(),
+            Field.of("gear.thicknessSeries", "Tooth thickness series", NONE, TEXT,
+                    "Only when the drawing gives no allowances: a DIN 3967 fit such as din3967-cd25 (its values"
+                            + " are from memory: check them); leave both allowances empty.").optional(),
             Field.of("gear.toothSystem", "Tooth system", NONE, CHOICE,
                     "Basic rack the gear is cut to; 'custom' asks for the factors below.")
                     .choices(ToothSystem.ids()),
@@ -95,7 +101,17 @@ public final class StepFields {
             Field.of("gear.drawing.pinDiameter", "Drawing: pin diameter", LENGTH, NUMBER,
                     "Pin or ball diameter of the printed over-pins value.").aboveZero().optional(),
             Field.of("gear.drawing.overPins", "Drawing: over pins", LENGTH, NUMBER,
-                    "Measurement over two pins or balls as printed.").aboveZero().optional());
+                    "Measurement over two pins or balls as printed.").aboveZero().optional(),
+            Field.of("gear.mate.teeth", "Drawing: mating gear teeth", NONE, INTEGER,
+                    "Tooth count of the gear this one runs with, if the drawing gives it.").range(1, 10000).optional(),
+            Field.of("gear.mate.profileShift", "Drawing: mating gear profile shift", NONE, NUMBER,
+                    "The mate's profile shift; empty works it out from the centre distance.").range(-3, 3).optional(),
+            Field.of("gear.mate.centreDistance", "Drawing: centre distance", LENGTH, NUMBER,
+                    "Centre distance of the pair as drawn.").aboveZero().optional(),
+            Field.of("gear.mate.thicknessAllowance", "Drawing: mate's upper allowance", LENGTH, NUMBER,
+                    "The mate's upper normal tooth thickness allowance; empty is 0.").range(-10, 10).optional(),
+            Field.of("gear.mate.thicknessAllowanceLower", "Drawing: mate's lower allowance", LENGTH, NUMBER,
+                    "The mate's lower normal tooth thickness allowance.").range(-10, 10).optional());
 
     private static final List<Field> CUTTER = List.of(
             Field.of("hob.module", "Hob normal module", MODULE, NUMBER,

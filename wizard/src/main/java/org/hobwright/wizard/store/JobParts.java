@@ -10,9 +10,11 @@ import org.hobwright.api.job.DrawingValues;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
 import org.hobwright.api.job.HobSpec;
+import org.hobwright.api.job.MatingGear;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.ToothProportions;
 import org.hobwright.wizard.geometry.ToothSystem;
+import org.hobwright.wizard.tolerance.ThicknessSeries;
 import org.hobwright.wizard.store.FieldReader.Kind;
 
 /**
@@ -61,6 +63,20 @@ final class JobParts {
         double width = f.required("faceWidth", Kind.LENGTH, Limit.POSITIVE, "give the face width");
         double shift = f.number("profileShift", Kind.PLAIN, Limit.range(-3, 3), 0);
         double allowance = f.number("thicknessAllowance", Kind.LENGTH, Limit.range(-10, 10), 0);
+        OptionalDouble lower = f.number("thicknessAllowanceLower", Kind.LENGTH, Limit.range(-10, 10));
+        if (lower.isPresent() && lower.getAsDouble() > allowance) {
+            f.problem(InputCode.INPUT_CONFLICT, "thicknessAllowanceLower", f.path("thicknessAllowanceLower")
+                    + " (" + FieldReader.format(f.raw("thicknessAllowanceLower").doubleValue()) + ") is above "
+                    + f.path("thicknessAllowance") + " (" + (f.has("thicknessAllowance")
+                    ? FieldReader.format(f.raw("thicknessAllowance").doubleValue()) : "0, not given") + ")",
+                    "the upper allowance (thicknessAllowance) is the larger one: swap the two values");
+        }
+        Optional<ThicknessSeries> series = series(f, teeth, pitch, beta);
+        if (series.isPresent()) {
+            double d = teeth * pitch.orElseThrow().moduleMm() / Math.cos(Math.toRadians(beta));
+            allowance = series.get().upperAllowanceMm(d);
+            lower = OptionalDouble.of(series.get().lowerAllowanceMm(d));
+        }
         Optional<String> system = f.has("toothSystem") ? f.choice("toothSystem", ToothSystem.ids())
                 : f.requiredText("toothSystem", "use one of " + String.join(", ", ToothSystem.ids()));
         Optional<ToothProportions> custom = custom(f, system);
@@ -68,12 +84,70 @@ final class JobParts {
         OptionalDouble pin = f.number("pinDiameter", Kind.LENGTH, Limit.POSITIVE);
         OptionalInt tolerance = f.integer("toleranceClass", 1, 11);
         DrawingValues drawing = drawing(f.child("drawing"));
+        Optional<MatingGear> mate = f.has("mate") ? mate(f.child("mate")) : Optional.empty();
         if (errors(out) > before) {
             return Optional.empty();
         }
         return Optional.of(new GearSpec(part, teeth, pitch.orElseThrow(), alpha, beta,
                 handWord.map(Hand::fromWord).orElse(Hand.RIGHT), width, shift, allowance, system.orElseThrow(),
-                custom, blank, pin, tolerance, drawing));
+                custom, blank, pin, tolerance, drawing, lower, series.map(ThicknessSeries::jobText), mate));
+    }
+
+    /**
+     * Reads {@code thicknessSeries} (e.g. {@code din3967-cd25}), which replaces both allowances: given
+     * together with either, it is a conflict. Empty when absent or wrong (with a finding).
+     */
+    private static Optional<ThicknessSeries> series(FieldReader f, int teeth, Optional<Pitch> pitch, double beta) {
+        Optional<String> text = f.text("thicknessSeries");
+        if (text.isEmpty()) {
+            return Optional.empty();
+        }
+        Optional<ThicknessSeries> series = ThicknessSeries.parse(text.get());
+        if (series.isEmpty()) {
+            f.problem(InputCode.INPUT_CHOICE, "thicknessSeries", f.path("thicknessSeries") + " \"" + text.get()
+                    + "\" is not a DIN 3967 fit", "write the allowance series (one of "
+                    + String.join(", ", ThicknessSeries.allowanceSeries()) + ") and the tolerance series (21 to 30),"
+                    + " e.g. \"" + ThicknessSeries.PREFIX + "cd25\"");
+            return Optional.empty();
+        }
+        for (String key : List.of("thicknessAllowance", "thicknessAllowanceLower")) {
+            if (f.has(key)) {
+                f.problem(InputCode.INPUT_CONFLICT, key, f.path(key) + " and " + f.path("thicknessSeries")
+                        + " both give the tooth-thickness allowances", "keep the drawing's allowances, or the series"
+                        + " when the drawing gives none");
+                return Optional.empty();
+            }
+        }
+        if (pitch.isEmpty() || teeth < 1 || !Double.isFinite(beta)) {
+            return Optional.empty();
+        }
+        double d = teeth * pitch.get().moduleMm() / Math.cos(Math.toRadians(beta));
+        if (!ThicknessSeries.covers(d)) {
+            f.problem(InputCode.INPUT_CONFLICT, "thicknessSeries", f.path("thicknessSeries") + ": DIN 3967 gives"
+                    + " allowances for reference diameters up to 1000 mm, this gear's is "
+                    + FieldReader.format(f.units().fromMm(d)) + " " + f.units().symbol(), "give the allowances in thicknessAllowance and"
+                    + " thicknessAllowanceLower");
+            return Optional.empty();
+        }
+        return series;
+    }
+
+    /** Reads the mating gear: its teeth, and optionally its shift, allowances and the centre distance. */
+    private static Optional<MatingGear> mate(FieldReader m) {
+        int teeth = m.requiredInt("teeth", 1, 100_000, "give the mating gear's number of teeth");
+        OptionalDouble shift = m.number("profileShift", Kind.PLAIN, Limit.range(-3, 3));
+        OptionalDouble centre = m.number("centreDistance", Kind.LENGTH, Limit.POSITIVE);
+        double upper = m.number("thicknessAllowance", Kind.LENGTH, Limit.range(-10, 10), 0);
+        OptionalDouble lower = m.number("thicknessAllowanceLower", Kind.LENGTH, Limit.range(-10, 10));
+        if (lower.isPresent() && lower.getAsDouble() > upper) {
+            m.problem(InputCode.INPUT_CONFLICT, "thicknessAllowanceLower", m.path("thicknessAllowanceLower")
+                    + " is above " + m.path("thicknessAllowance"), "swap the two values");
+            return Optional.empty();
+        }
+        if (teeth < 1 || !Double.isFinite(upper)) {
+            return Optional.empty();
+        }
+        return Optional.of(new MatingGear(teeth, shift, centre, upper, lower));
     }
 
     private static Optional<ToothProportions> custom(FieldReader f, Optional<String> system) {

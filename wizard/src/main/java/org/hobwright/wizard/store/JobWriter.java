@@ -140,7 +140,12 @@ public final class JobWriter {
         n.put("hand", g.hand().word());
         number(n, "faceWidth", units.fromMm(g.faceWidthMm()));
         number(n, "profileShift", g.profileShift());
-        number(n, "thicknessAllowance", units.fromMm(g.thicknessAllowanceMm()));
+        if (g.thicknessSeries().isPresent()) {
+            n.put("thicknessSeries", g.thicknessSeries().get());
+        } else {
+            number(n, "thicknessAllowance", units.fromMm(g.thicknessAllowanceMm()));
+            optional(n, "thicknessAllowanceLower", g.thicknessAllowanceLowerMm(), units::fromMm);
+        }
         n.put("toothSystem", g.toothSystem());
         g.customProportions().ifPresent(p -> {
             ObjectNode c = n.putObject("custom");
@@ -155,6 +160,14 @@ public final class JobWriter {
         if (!d.isEmpty()) {
             n.set("drawing", d);
         }
+        g.mate().ifPresent(m -> {
+            ObjectNode t = n.putObject("mate");
+            t.put("teeth", m.teeth());
+            optional(t, "profileShift", m.profileShift(), x -> x);
+            optional(t, "centreDistance", m.centreDistanceMm(), units::fromMm);
+            number(t, "thicknessAllowance", units.fromMm(m.thicknessAllowanceMm()));
+            optional(t, "thicknessAllowanceLower", m.thicknessAllowanceLowerMm(), units::fromMm);
+        });
         return n;
     }
 
