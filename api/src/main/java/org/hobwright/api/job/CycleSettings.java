@@ -43,27 +43,64 @@ public record CycleSettings(
         boolean fastest,
         @ApiStatus(since = "1.1") RunSettings run) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param workMaterial work material key of the cutting-data table, e.g. {@code steel-case-hardening}
+     * @param cuttingSpeedMPerMin the value
+     * @param roughFeedMmPerRev the value
+     * @param finishFeedMmPerRev the value
+     * @param roughDepthMm the value
+     * @param finishStockMm radial stock left for the finishing pass, mm (0 = one pass to full depth)
+     * @param method climb or conventional
+     * @param axialClearanceMm air gap before the approach and after the overrun, mm
+     * @param radialClearanceMm radial gap between the hob tip and the blank when rapid moving, mm
+     * @param coolant coolant on during the cut
+     * @param targets quality limits
+     * @param hobShiftPerPartMm hob shift applied between parts, mm (0 = no shifting)
+     * @param hobShiftEveryParts shift after this many parts, at least 1
+     * @param fastest true to let the optimiser propose the shortest cycle beside the user's plan
+     * @param run batch size, program number, tool station, hob mounting and hob life
+     */
     public CycleSettings {
         Checks.text("cycle.workMaterial", workMaterial);
         Objects.requireNonNull(cuttingSpeedMPerMin, "cuttingSpeedMPerMin");
-        Checks.positive("cycle.cuttingSpeed", cuttingSpeedMPerMin);
+        Checks.field(JobFields.CYCLE_CUTTING_SPEED, cuttingSpeedMPerMin);
         Objects.requireNonNull(roughFeedMmPerRev, "roughFeedMmPerRev");
-        Checks.positive("cycle.roughFeed", roughFeedMmPerRev);
+        Checks.field(JobFields.CYCLE_ROUGH_FEED, roughFeedMmPerRev);
         Objects.requireNonNull(finishFeedMmPerRev, "finishFeedMmPerRev");
-        Checks.positive("cycle.finishFeed", finishFeedMmPerRev);
+        Checks.field(JobFields.CYCLE_FINISH_FEED, finishFeedMmPerRev);
         Objects.requireNonNull(roughDepthMm, "roughDepthMm");
-        Checks.positive("cycle.roughDepth", roughDepthMm);
-        Checks.nonNegative("cycle.finishStock", finishStockMm);
+        Checks.field(JobFields.CYCLE_ROUGH_DEPTH, roughDepthMm);
+        Checks.field(JobFields.CYCLE_FINISH_STOCK, finishStockMm);
         Checks.present("cycle.method", method);
-        Checks.nonNegative("cycle.axialClearance", axialClearanceMm);
-        Checks.nonNegative("cycle.radialClearance", radialClearanceMm);
+        Checks.field(JobFields.CYCLE_AXIAL_CLEARANCE, axialClearanceMm);
+        Checks.field(JobFields.CYCLE_RADIAL_CLEARANCE, radialClearanceMm);
         Checks.present("cycle.targets", targets);
-        Checks.nonNegative("cycle.hobShiftPerPart", hobShiftPerPartMm);
-        Checks.atLeast("cycle.hobShiftEveryParts", hobShiftEveryParts, 1);
+        Checks.field(JobFields.HOB_SHIFT_PER_PART, hobShiftPerPartMm);
+        Checks.field(JobFields.HOB_SHIFT_EVERY_PARTS, hobShiftEveryParts);
         Checks.present("cycle.run", run);
     }
 
-    /** Settings for one part with the dialect's program number and tool station ({@link RunSettings#DEFAULTS}). */
+    /**
+     * Settings for one part with the dialect's program number and tool station ({@link RunSettings#DEFAULTS}).
+     *
+     * @param workMaterial work material key of the cutting-data table, e.g. {@code steel-case-hardening}
+     * @param cuttingSpeedMPerMin the value
+     * @param roughFeedMmPerRev the value
+     * @param finishFeedMmPerRev the value
+     * @param roughDepthMm the value
+     * @param finishStockMm radial stock left for the finishing pass, mm (0 = one pass to full depth)
+     * @param method climb or conventional
+     * @param axialClearanceMm air gap before the approach and after the overrun, mm
+     * @param radialClearanceMm radial gap between the hob tip and the blank when rapid moving, mm
+     * @param coolant coolant on during the cut
+     * @param targets quality limits
+     * @param hobShiftPerPartMm hob shift applied between parts, mm (0 = no shifting)
+     * @param hobShiftEveryParts shift after this many parts, at least 1
+     * @param fastest true to let the optimiser propose the shortest cycle beside the user's plan
+     */
     @ApiStatus(since = "1.1")
     public CycleSettings(String workMaterial, OptionalDouble cuttingSpeedMPerMin, OptionalDouble roughFeedMmPerRev,
                          OptionalDouble finishFeedMmPerRev, OptionalDouble roughDepthMm, double finishStockMm,

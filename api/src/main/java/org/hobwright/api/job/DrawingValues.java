@@ -33,6 +33,19 @@ public record DrawingValues(
             OptionalDouble.empty(), OptionalDouble.empty(), OptionalInt.empty(), OptionalDouble.empty(),
             OptionalDouble.empty(), OptionalDouble.empty());
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param pitchDiameterMm the value
+     * @param outsideDiameterMm the value
+     * @param rootDiameterMm the value
+     * @param wholeDepthMm the value
+     * @param spanTeeth the value
+     * @param spanWidthMm the value
+     * @param pinDiameterMm the value
+     * @param overPinsMm the value
+     */
     public DrawingValues {
         java.util.Objects.requireNonNull(pitchDiameterMm, "pitchDiameterMm");
         java.util.Objects.requireNonNull(outsideDiameterMm, "outsideDiameterMm");
@@ -42,6 +55,14 @@ public record DrawingValues(
         java.util.Objects.requireNonNull(spanWidthMm, "spanWidthMm");
         java.util.Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
         java.util.Objects.requireNonNull(overPinsMm, "overPinsMm");
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_PITCH_DIAMETER, pitchDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_OUTSIDE_DIAMETER, outsideDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_ROOT_DIAMETER, rootDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_WHOLE_DEPTH, wholeDepthMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_SPAN_TEETH, spanTeeth);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_SPAN, spanWidthMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_PIN_DIAMETER, pinDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_OVER_PINS, overPinsMm);
     }
 
     /**

@@ -8,24 +8,25 @@ import org.hobwright.api.ApiStatus;
 import org.hobwright.api.internal.Checks;
 
 /**
- * The gear as the drawing specifies it, in canonical units (mm, degrees).
+ * The gear as the drawing specifies it, in canonical units (mm, degrees). Every number must lie in
+ * the range of its field in {@link JobFields} (the constructor refuses others).
  *
  * @param partName              the part name or number, for headers and file names
- * @param teeth                 number of teeth z, at least 1 (the wizard's checks ask for far more)
+ * @param teeth                 number of teeth z
  * @param pitch                 normal pitch as given on the drawing
- * @param pressureAngleDeg      normal pressure angle α_n, degrees, 1 to 45
- * @param helixAngleDeg         helix angle β at the reference cylinder, magnitude, degrees, 0 to 60 (0 = spur)
+ * @param pressureAngleDeg      normal pressure angle α_n, degrees
+ * @param helixAngleDeg         helix angle β at the reference cylinder, magnitude, degrees (0 = spur)
  * @param hand                  helix hand (ignored for spur gears)
- * @param faceWidthMm           face width b, mm, greater than 0
- * @param profileShift          profile shift coefficient x (in normal module), -3 to 3
- * @param thicknessAllowanceMm  normal tooth-thickness allowance E_sn, mm (negative thins the tooth), -10 to 10
+ * @param faceWidthMm           face width b, mm
+ * @param profileShift          profile shift coefficient x (in normal module)
+ * @param thicknessAllowanceMm  normal tooth-thickness allowance E_sn, mm (negative thins the tooth)
  * @param toothSystem           tooth system identifier ({@code iso53-a}, {@code iso53-b}, {@code iso53-c},
  *                              {@code iso53-d}, {@code agma-coarse}, {@code agma-fine},
  *                              {@code full-depth-14.5}, {@code custom})
  * @param customProportions     basic rack factors, present exactly when the tooth system is {@code custom}
  * @param blankDiameterMm       the diameter the blank is turned to before hobbing, if known
  * @param pinDiameterMm         the pin or ball the inspector will use, if chosen
- * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class 1 to 11, if the drawing gives one
+ * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class, if the drawing gives one
  * @param drawing               values printed on the drawing, for the drawing check
  * @param thicknessAllowanceLowerMm the lower normal tooth-thickness allowance E_sni, mm, -10 to 10 and not above
  *                              {@code thicknessAllowanceMm} (the upper one, E_sns), when the drawing or a
@@ -55,27 +56,51 @@ public record GearSpec(
         @ApiStatus(since = "1.1") Optional<String> thicknessSeries,
         @ApiStatus(since = "1.1") Optional<MatingGear> mate) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param partName the part name or number, for headers and file names
+     * @param teeth number of teeth z, at least 1 (the wizard's checks ask for far more)
+     * @param pitch normal pitch as given on the drawing
+     * @param pressureAngleDeg normal pressure angle α_n, degrees, 1 to 45
+     * @param helixAngleDeg helix angle β at the reference cylinder, magnitude, degrees, 0 to 60 (0 = spur)
+     * @param hand helix hand (ignored for spur gears)
+     * @param faceWidthMm face width b, mm, greater than 0
+     * @param profileShift profile shift coefficient x (in normal module), -3 to 3
+     * @param thicknessAllowanceMm normal tooth-thickness allowance E_sn, mm (negative thins the tooth), -10 to 10
+     * @param toothSystem tooth system identifier ({@code iso53-a}, {@code iso53-b}, {@code iso53-c}, {
+     * @param customProportions the value
+     * @param blankDiameterMm the value
+     * @param pinDiameterMm the value
+     * @param flankToleranceClass the value
+     * @param drawing values printed on the drawing, for the drawing check
+     * @param thicknessAllowanceLowerMm the lower normal tooth-thickness allowance E_sni, mm, not above
+     *     {@code thicknessAllowanceMm}, if given
+     * @param thicknessSeries the tolerance series the allowances were taken from, if any
+     * @param mate the gear this one runs with, if the drawing gives it
+     */
     public GearSpec {
         Checks.text("partName", partName);
-        Checks.atLeast("teeth", teeth, 1);
+        Checks.field(JobFields.GEAR_TEETH, teeth);
         Checks.present("pitch", pitch);
-        Checks.range("pressureAngle", pressureAngleDeg, 1, 45);
-        Checks.range("helixAngle", helixAngleDeg, 0, 60);
+        Checks.field(JobFields.GEAR_PRESSURE_ANGLE, pressureAngleDeg);
+        Checks.field(JobFields.GEAR_HELIX_ANGLE, helixAngleDeg);
         Checks.present("hand", hand);
-        Checks.positive("faceWidth", faceWidthMm);
-        Checks.range("profileShift", profileShift, -3, 3);
-        Checks.range("thicknessAllowance", thicknessAllowanceMm, -10, 10);
+        Checks.field(JobFields.GEAR_FACE_WIDTH, faceWidthMm);
+        Checks.field(JobFields.GEAR_PROFILE_SHIFT, profileShift);
+        Checks.field(JobFields.GEAR_THICKNESS_ALLOWANCE, thicknessAllowanceMm);
         Checks.text("toothSystem", toothSystem);
         Objects.requireNonNull(customProportions, "customProportions");
         Objects.requireNonNull(blankDiameterMm, "blankDiameterMm");
-        Checks.positive("blankDiameter", blankDiameterMm);
+        Checks.field(JobFields.GEAR_BLANK_DIAMETER, blankDiameterMm);
         Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
-        Checks.positive("pinDiameter", pinDiameterMm);
+        Checks.field(JobFields.GEAR_PIN_DIAMETER, pinDiameterMm);
         Objects.requireNonNull(flankToleranceClass, "flankToleranceClass");
-        Checks.range("flankToleranceClass", flankToleranceClass, 1, 11);
+        Checks.field(JobFields.GEAR_TOLERANCE_CLASS, flankToleranceClass);
         Checks.present("drawing", drawing);
         Objects.requireNonNull(thicknessAllowanceLowerMm, "thicknessAllowanceLowerMm");
-        Checks.range("thicknessAllowanceLower", thicknessAllowanceLowerMm, -10, 10);
+        Checks.field(JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER, thicknessAllowanceLowerMm);
         if (thicknessAllowanceLowerMm.isPresent() && thicknessAllowanceLowerMm.getAsDouble() > thicknessAllowanceMm) {
             throw new IllegalArgumentException("thicknessAllowanceLower must not be above thicknessAllowance ("
                     + thicknessAllowanceMm + "), was " + thicknessAllowanceLowerMm.getAsDouble());
@@ -90,7 +115,25 @@ public record GearSpec(
         }
     }
 
-    /** A gear without lower allowance, tolerance series or mate (the form of api 1.0). */
+    /**
+     * A gear without lower allowance, tolerance series or mate (the form of api 1.0).
+     *
+     * @param partName the part name or number
+     * @param teeth number of teeth z
+     * @param pitch normal pitch
+     * @param pressureAngleDeg normal pressure angle α_n, degrees
+     * @param helixAngleDeg helix angle β, degrees (0 = spur)
+     * @param hand helix hand
+     * @param faceWidthMm face width b, mm
+     * @param profileShift profile shift coefficient x
+     * @param thicknessAllowanceMm normal tooth-thickness allowance E_sn, mm
+     * @param toothSystem tooth system identifier
+     * @param customProportions basic rack factors of the custom tooth system
+     * @param blankDiameterMm blank diameter, if known
+     * @param pinDiameterMm pin or ball diameter, if chosen
+     * @param flankToleranceClass ISO 1328-1:2013 flank tolerance class, if given
+     * @param drawing values printed on the drawing
+     */
     public GearSpec(String partName, int teeth, Pitch pitch, double pressureAngleDeg, double helixAngleDeg, Hand hand,
                     double faceWidthMm, double profileShift, double thicknessAllowanceMm, String toothSystem,
                     Optional<ToothProportions> customProportions, OptionalDouble blankDiameterMm,
@@ -100,17 +143,17 @@ public record GearSpec(
                 flankToleranceClass, drawing, OptionalDouble.empty(), Optional.empty(), Optional.empty());
     }
 
-    /** True for a spur gear (helix angle 0). */
+    /** {@return true for a spur gear (helix angle 0)} */
     public boolean isSpur() {
         return helixAngleDeg == 0.0;
     }
 
-    /** Helix angle with sign: positive right hand, negative left hand, 0 for spur. */
+    /** {@return helix angle with sign: positive right hand, negative left hand, 0 for spur} */
     public double signedHelixAngleDeg() {
         return isSpur() ? 0.0 : hand.sign() * helixAngleDeg;
     }
 
-    /** Normal module in mm. */
+    /** {@return normal module in mm} */
     public double moduleMm() {
         return pitch.moduleMm();
     }

@@ -17,6 +17,17 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.0")
 public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine,
                      CycleSettings cycle) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param name job name, used for output file names
+     * @param units the user's length unit
+     * @param gear the gear
+     * @param hob the hob
+     * @param machine the machine profile
+     * @param cycle the cycle settings
+     */
     public HobJob {
         Checks.text("name", name);
         Checks.present("units", units);

@@ -58,13 +58,39 @@ public record MachineProfile(
         @ApiStatus(since = "1.1") MachineTimes times,
         @ApiStatus(since = "1.1") boolean phasedSync) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param name profile name (letters, digits, '.', '_', '-')
+     * @param dialect name of the NC dialect file used to post for this machine
+     * @param workMinRpm lowest stable work-spindle speed, rpm
+     * @param workMaxRpm highest work-spindle speed, rpm
+     * @param hobMinRpm lowest hob-spindle (live tool) speed, rpm
+     * @param hobMaxRpm highest hob-spindle speed, rpm
+     * @param maxSyncRatio largest hob turns per work turn the synchronisation accepts
+     * @param followsHelix true when the control can add the helical (differential) work rotation
+     * @param swivel the swivel holder or axis
+     * @param radialMinMm smallest reachable diameter of the hob axis path, as a work diameter, mm
+     * @param radialMaxMm largest reachable work diameter for the hob, mm
+     * @param axialMinMm axial travel limit on the side away from the chuck, mm from the front face
+     * @param axialMaxMm axial travel limit on the chuck side, mm from the front face
+     * @param hobShiftTravelMm the value
+     * @param rapidMmPerMin rapid traverse rate used for time estimates, mm/min
+     * @param maxFeedMmPerMin highest programmable feed rate, mm/min
+     * @param syncSettleS dwell after switching synchronisation on, s
+     * @param maxHobDiameterMm largest hob the holder takes, mm
+     * @param clockwiseTeethTowardChuck true when clockwise-turning hob teeth move toward the chuck at the work
+     * @param times load, unload, swivel, hob-shift and hob-change times
+     * @param phasedSync true when the control can start the synchronisation at a set work-spindle angle
+     */
     public MachineProfile {
         Checks.text("machine.name", name);
         Checks.text("machine.dialect", dialect);
-        Checks.nonNegative("machine.workMinRpm", workMinRpm);
-        Checks.positive("machine.workMaxRpm", workMaxRpm);
-        Checks.nonNegative("machine.hobMinRpm", hobMinRpm);
-        Checks.positive("machine.hobMaxRpm", hobMaxRpm);
+        Checks.field(MachineFields.WORK_MIN_RPM, workMinRpm);
+        Checks.field(MachineFields.WORK_MAX_RPM, workMaxRpm);
+        Checks.field(MachineFields.HOB_MIN_RPM, hobMinRpm);
+        Checks.field(MachineFields.HOB_MAX_RPM, hobMaxRpm);
         if (workMinRpm > workMaxRpm) {
             throw new IllegalArgumentException("machine.workMinRpm (" + workMinRpm
                     + ") must not exceed machine.workMaxRpm (" + workMaxRpm + ")");
@@ -73,32 +99,51 @@ public record MachineProfile(
             throw new IllegalArgumentException("machine.hobMinRpm (" + hobMinRpm
                     + ") must not exceed machine.hobMaxRpm (" + hobMaxRpm + ")");
         }
-        Checks.positive("machine.maxSyncRatio", maxSyncRatio);
+        Checks.field(MachineFields.MAX_SYNC_RATIO, maxSyncRatio);
         Checks.present("machine.swivel", swivel);
-        Checks.nonNegative("machine.radialMin", radialMinMm);
-        Checks.positive("machine.radialMax", radialMaxMm);
+        Checks.field(MachineFields.RADIAL_MIN, radialMinMm);
+        Checks.field(MachineFields.RADIAL_MAX, radialMaxMm);
         if (radialMinMm >= radialMaxMm) {
             throw new IllegalArgumentException("machine.radialMin (" + radialMinMm
                     + ") must be less than machine.radialMax (" + radialMaxMm + ")");
         }
-        Checks.finite("machine.axialMin", axialMinMm);
-        Checks.finite("machine.axialMax", axialMaxMm);
+        Checks.field(MachineFields.AXIAL_MIN, axialMinMm);
+        Checks.field(MachineFields.AXIAL_MAX, axialMaxMm);
         if (axialMinMm >= axialMaxMm) {
             throw new IllegalArgumentException("machine.axialMin (" + axialMinMm
                     + ") must be less than machine.axialMax (" + axialMaxMm + ")");
         }
         Objects.requireNonNull(hobShiftTravelMm, "hobShiftTravelMm");
         hobShiftTravelMm.ifPresent(v -> Checks.positive("machine.hobShiftTravel", v));
-        Checks.positive("machine.rapid", rapidMmPerMin);
-        Checks.positive("machine.maxFeed", maxFeedMmPerMin);
-        Checks.nonNegative("machine.syncSettle", syncSettleS);
-        Checks.positive("machine.maxHobDiameter", maxHobDiameterMm);
+        Checks.field(MachineFields.RAPID, rapidMmPerMin);
+        Checks.field(MachineFields.MAX_FEED, maxFeedMmPerMin);
+        Checks.field(MachineFields.SYNC_SETTLE, syncSettleS);
+        Checks.field(MachineFields.MAX_HOB_DIAMETER, maxHobDiameterMm);
         Checks.present("machine.times", times);
     }
 
     /**
      * A machine whose clockwise-turning hob teeth move away from the chuck at the work, with no times
      * known and no phased synchronisation.
+     *
+     * @param name profile name (letters, digits, '.', '_', '-')
+     * @param dialect name of the NC dialect file used to post for this machine
+     * @param workMinRpm lowest stable work-spindle speed, rpm
+     * @param workMaxRpm highest work-spindle speed, rpm
+     * @param hobMinRpm lowest hob-spindle (live tool) speed, rpm
+     * @param hobMaxRpm highest hob-spindle speed, rpm
+     * @param maxSyncRatio largest hob turns per work turn the synchronisation accepts
+     * @param followsHelix true when the control can add the helical (differential) work rotation
+     * @param swivel the swivel holder or axis
+     * @param radialMinMm smallest reachable diameter of the hob axis path, as a work diameter, mm
+     * @param radialMaxMm largest reachable work diameter for the hob, mm
+     * @param axialMinMm axial travel limit on the side away from the chuck, mm from the front face
+     * @param axialMaxMm axial travel limit on the chuck side, mm from the front face
+     * @param hobShiftTravelMm the value
+     * @param rapidMmPerMin rapid traverse rate used for time estimates, mm/min
+     * @param maxFeedMmPerMin highest programmable feed rate, mm/min
+     * @param syncSettleS dwell after switching synchronisation on, s
+     * @param maxHobDiameterMm largest hob the holder takes, mm
      */
     @ApiStatus(since = "1.1")
     public MachineProfile(String name, String dialect, double workMinRpm, double workMaxRpm, double hobMinRpm,

@@ -23,15 +23,25 @@ import org.hobwright.api.internal.Checks;
 public record MatingGear(int teeth, OptionalDouble profileShift, OptionalDouble centreDistanceMm,
                          double thicknessAllowanceMm, OptionalDouble thicknessAllowanceLowerMm) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param teeth number of teeth of the mate
+     * @param profileShift the mate's profile shift coefficient, if given
+     * @param centreDistanceMm the centre distance as drawn, mm, if given
+     * @param thicknessAllowanceMm the mate's upper normal tooth-thickness allowance, mm
+     * @param thicknessAllowanceLowerMm the mate's lower normal tooth-thickness allowance, mm, if given
+     */
     public MatingGear {
-        Checks.atLeast("mate.teeth", teeth, 1);
+        Checks.field(JobFields.MATE_TEETH, teeth);
         Objects.requireNonNull(profileShift, "profileShift");
-        Checks.range("mate.profileShift", profileShift, -3, 3);
+        Checks.field(JobFields.MATE_PROFILE_SHIFT, profileShift);
         Objects.requireNonNull(centreDistanceMm, "centreDistanceMm");
-        Checks.positive("mate.centreDistance", centreDistanceMm);
-        Checks.range("mate.thicknessAllowance", thicknessAllowanceMm, -10, 10);
+        Checks.field(JobFields.MATE_CENTRE_DISTANCE, centreDistanceMm);
+        Checks.field(JobFields.MATE_THICKNESS_ALLOWANCE, thicknessAllowanceMm);
         Objects.requireNonNull(thicknessAllowanceLowerMm, "thicknessAllowanceLowerMm");
-        Checks.range("mate.thicknessAllowanceLower", thicknessAllowanceLowerMm, -10, 10);
+        Checks.field(JobFields.MATE_THICKNESS_ALLOWANCE_LOWER, thicknessAllowanceLowerMm);
         if (thicknessAllowanceLowerMm.isPresent() && thicknessAllowanceLowerMm.getAsDouble() > thicknessAllowanceMm) {
             throw new IllegalArgumentException("mate.thicknessAllowanceLower must not be above mate.thicknessAllowance ("
                     + thicknessAllowanceMm + "), was " + thicknessAllowanceLowerMm.getAsDouble());

@@ -13,23 +13,29 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.0")
 public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
 
-    /** Normal module in millimetres. */
+    /** {@return normal module in millimetres} */
     double moduleMm();
 
-    /** Normal diametral pitch in 1/in. */
+    /** {@return normal diametral pitch in 1/in} */
     default double diametralPitch() {
-        return 25.4 / moduleMm();
+        return Units.IN.toMm(1.0) / moduleMm();
     }
 
     /**
      * A pitch given as a module.
      *
-     * @param mm normal module, mm, greater than 0
+     * @param mm normal module, mm, in the range of {@link JobFields#GEAR_MODULE}
      */
     @ApiStatus(since = "1.0")
     record Module(double mm) implements Pitch {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param mm normal module, mm, greater than 0
+         */
         public Module {
-            Checks.positive("module", mm);
+            Checks.range("module", mm, JobFields.GEAR_MODULE.range().min(), JobFields.GEAR_MODULE.range().max());
         }
 
         @Override
@@ -41,17 +47,24 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
     /**
      * A pitch given as a diametral pitch.
      *
-     * @param perInch normal diametral pitch, 1/in, greater than 0
+     * @param perInch normal diametral pitch, 1/in, in the range of {@link JobFields#GEAR_DIAMETRAL_PITCH}
      */
     @ApiStatus(since = "1.0")
     record Diametral(double perInch) implements Pitch {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param perInch normal diametral pitch, 1/in, greater than 0
+         */
         public Diametral {
-            Checks.positive("diametralPitch", perInch);
+            Checks.range("diametralPitch", perInch, JobFields.GEAR_DIAMETRAL_PITCH.range().min(),
+                    JobFields.GEAR_DIAMETRAL_PITCH.range().max());
         }
 
         @Override
         public double moduleMm() {
-            return 25.4 / perInch;
+            return Units.IN.toMm(1.0) / perInch;
         }
 
         @Override

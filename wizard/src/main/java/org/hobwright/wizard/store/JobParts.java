@@ -7,33 +7,31 @@ import java.util.OptionalInt;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.CuttingSense;
 import org.hobwright.api.job.DrawingValues;
+import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
 import org.hobwright.api.job.HobSpec;
+import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.MatingGear;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.ToothProportions;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.hobwright.wizard.tolerance.ThicknessSeries;
-import org.hobwright.wizard.store.FieldReader.Kind;
 
 /**
- * Reads the gear and the hob of a job. Each method records a finding for every bad value and
- * returns empty when any value was bad, so that no record constructor sees a wrong value.
- * Ranges are those of the api records ({@link GearSpec}, {@link HobSpec}).
+ * Reads the gear and the hob of a job by the field table ({@link JobFields}). Each method records a
+ * finding for every bad value and returns empty when any value was bad, so that no record
+ * constructor sees a wrong value. Ranges, choices and defaults are the table's, as in the api
+ * records ({@link GearSpec}, {@link HobSpec}).
  */
 final class JobParts {
-    static final List<String> HANDS = List.of("right", "left");
-    static final List<String> HOB_MATERIALS = List.of("hss", "hss-coated", "carbide");
-    static final List<String> SENSES = List.of(CuttingSense.CLOCKWISE.word(), CuttingSense.COUNTER_CLOCKWISE.word());
-
     private JobParts() {
     }
 
     /** Reads the pitch: exactly one of {@code module} (mm) and {@code diametralPitch} (1/in), whatever the units. */
-    static Optional<Pitch> pitch(FieldReader f) {
-        boolean m = f.has("module");
-        boolean dp = f.has("diametralPitch");
+    static Optional<Pitch> pitch(FieldReader f, FieldDef module, FieldDef diametral) {
+        boolean m = f.has(module);
+        boolean dp = f.has(diametral);
         if (m == dp) {
             f.problem(InputCode.INPUT_PITCH, m ? "diametralPitch" : "module",
                     f.path("module") + " and " + f.path("diametralPitch")
@@ -43,54 +41,58 @@ final class JobParts {
             return Optional.empty();
         }
         if (m) {
-            return f.number("module", Kind.PLAIN, Limit.POSITIVE).stream().boxed().findFirst().map(Pitch.Module::new);
+            OptionalDouble v = f.number(module);
+            return v.isPresent() ? Optional.of(new Pitch.Module(v.getAsDouble())) : Optional.empty();
         }
-        return f.number("diametralPitch", Kind.PLAIN, Limit.POSITIVE).stream().boxed().findFirst()
-                .map(Pitch.Diametral::new);
+        OptionalDouble v = f.number(diametral);
+        return v.isPresent() ? Optional.of(new Pitch.Diametral(v.getAsDouble())) : Optional.empty();
     }
 
     static Optional<GearSpec> gear(FieldReader f, String jobName, List<Finding> out) {
         int before = errors(out);
-        String part = f.text("partName").orElse(jobName);
-        int teeth = f.requiredInt("teeth", 1, 100_000, "give the number of teeth");
-        Optional<Pitch> pitch = pitch(f);
-        double alpha = f.requiredAngle("pressureAngle", Limit.range(1, 45), "give the normal pressure angle, e.g. 20");
-        double beta = f.angle("helixAngle", Limit.range(0, 60), 0);
-        Optional<String> handWord = f.choice("hand", HANDS);
-        if (beta > 0 && !f.has("hand")) {
+        String part = f.text(JobFields.GEAR_PART_NAME).orElse(jobName);
+        int teeth = f.integer(JobFields.GEAR_TEETH).orElse(0);
+        Optional<Pitch> pitch = pitch(f, JobFields.GEAR_MODULE, JobFields.GEAR_DIAMETRAL_PITCH);
+        double alpha = f.value(JobFields.GEAR_PRESSURE_ANGLE);
+        double beta = f.value(JobFields.GEAR_HELIX_ANGLE);
+        Optional<String> handWord = f.word(JobFields.GEAR_HAND);
+        if (beta > 0 && !f.has(JobFields.GEAR_HAND)) {
             f.missing("hand", "a helical gear needs \"hand\": \"right\" or \"left\"");
         }
-        double width = f.required("faceWidth", Kind.LENGTH, Limit.POSITIVE, "give the face width");
-        double shift = f.number("profileShift", Kind.PLAIN, Limit.range(-3, 3), 0);
-        double allowance = f.number("thicknessAllowance", Kind.LENGTH, Limit.range(-10, 10), 0);
-        OptionalDouble lower = f.number("thicknessAllowanceLower", Kind.LENGTH, Limit.range(-10, 10));
+        double width = f.value(JobFields.GEAR_FACE_WIDTH);
+        double shift = f.value(JobFields.GEAR_PROFILE_SHIFT);
+        double allowance = f.value(JobFields.GEAR_THICKNESS_ALLOWANCE);
+        OptionalDouble lower = f.number(JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER);
         if (lower.isPresent() && lower.getAsDouble() > allowance) {
             f.problem(InputCode.INPUT_CONFLICT, "thicknessAllowanceLower", f.path("thicknessAllowanceLower")
                     + " (" + FieldReader.format(f.raw("thicknessAllowanceLower").doubleValue()) + ") is above "
-                    + f.path("thicknessAllowance") + " (" + (f.has("thicknessAllowance")
+                    + f.path("thicknessAllowance") + " (" + (f.has(JobFields.GEAR_THICKNESS_ALLOWANCE)
                     ? FieldReader.format(f.raw("thicknessAllowance").doubleValue()) : "0, not given") + ")",
                     "the upper allowance (thicknessAllowance) is the larger one: swap the two values");
         }
         Optional<ThicknessSeries> series = series(f, teeth, pitch, beta);
         if (series.isPresent()) {
-            double d = teeth * pitch.orElseThrow().moduleMm() / Math.cos(Math.toRadians(beta));
+            double d = referenceDiameterMm(teeth, pitch.orElseThrow(), beta);
             allowance = series.get().upperAllowanceMm(d);
             lower = OptionalDouble.of(series.get().lowerAllowanceMm(d));
         }
-        Optional<String> system = f.has("toothSystem") ? f.choice("toothSystem", ToothSystem.ids())
-                : f.requiredText("toothSystem", "use one of " + String.join(", ", ToothSystem.ids()));
+        Optional<String> system = f.text(JobFields.GEAR_TOOTH_SYSTEM);
         Optional<ToothProportions> custom = custom(f, system);
-        OptionalDouble blank = f.number("blankDiameter", Kind.LENGTH, Limit.POSITIVE);
-        OptionalDouble pin = f.number("pinDiameter", Kind.LENGTH, Limit.POSITIVE);
-        OptionalInt tolerance = f.integer("toleranceClass", 1, 11);
+        OptionalDouble blank = f.number(JobFields.GEAR_BLANK_DIAMETER);
+        OptionalDouble pin = f.number(JobFields.GEAR_PIN_DIAMETER);
+        OptionalInt tolerance = f.integer(JobFields.GEAR_TOLERANCE_CLASS);
         DrawingValues drawing = drawing(f.child("drawing"));
         Optional<MatingGear> mate = f.has("mate") ? mate(f.child("mate")) : Optional.empty();
         if (errors(out) > before) {
             return Optional.empty();
         }
         return Optional.of(new GearSpec(part, teeth, pitch.orElseThrow(), alpha, beta,
-                handWord.map(Hand::fromWord).orElse(Hand.RIGHT), width, shift, allowance, system.orElseThrow(),
+                Hand.fromWord(handWord.orElseThrow()), width, shift, allowance, system.orElseThrow(),
                 custom, blank, pin, tolerance, drawing, lower, series.map(ThicknessSeries::jobText), mate));
+    }
+
+    private static double referenceDiameterMm(int teeth, Pitch pitch, double helixDeg) {
+        return teeth * pitch.moduleMm() / Math.cos(Math.toRadians(helixDeg));
     }
 
     /**
@@ -98,35 +100,35 @@ final class JobParts {
      * together with either, it is a conflict. Empty when absent or wrong (with a finding).
      */
     private static Optional<ThicknessSeries> series(FieldReader f, int teeth, Optional<Pitch> pitch, double beta) {
-        Optional<String> text = f.text("thicknessSeries");
+        Optional<String> text = f.text(JobFields.GEAR_THICKNESS_SERIES);
         if (text.isEmpty()) {
             return Optional.empty();
         }
         Optional<ThicknessSeries> series = ThicknessSeries.parse(text.get());
         if (series.isEmpty()) {
             f.problem(InputCode.INPUT_CHOICE, "thicknessSeries", f.path("thicknessSeries") + " \"" + text.get()
-                    + "\" is not a DIN 3967 fit", "write the allowance series (one of "
+                    + "\" is not a DIN 3967 allowance and tolerance series", "write the allowance series (one of "
                     + String.join(", ", ThicknessSeries.allowanceSeries()) + ") and the tolerance series (21 to 30),"
                     + " e.g. \"" + ThicknessSeries.PREFIX + "cd25\"");
             return Optional.empty();
         }
-        for (String key : List.of("thicknessAllowance", "thicknessAllowanceLower")) {
+        for (FieldDef key : List.of(JobFields.GEAR_THICKNESS_ALLOWANCE, JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER)) {
             if (f.has(key)) {
-                f.problem(InputCode.INPUT_CONFLICT, key, f.path(key) + " and " + f.path("thicknessSeries")
-                        + " both give the tooth-thickness allowances", "keep the drawing's allowances, or the series"
-                        + " when the drawing gives none");
+                f.problem(InputCode.INPUT_CONFLICT, key.leaf(), f.path(key.leaf()) + " and "
+                        + f.path("thicknessSeries") + " both give the tooth-thickness allowances",
+                        "keep the drawing's allowances, or the series when the drawing gives none");
                 return Optional.empty();
             }
         }
         if (pitch.isEmpty() || teeth < 1 || !Double.isFinite(beta)) {
             return Optional.empty();
         }
-        double d = teeth * pitch.get().moduleMm() / Math.cos(Math.toRadians(beta));
+        double d = referenceDiameterMm(teeth, pitch.get(), beta);
         if (!ThicknessSeries.covers(d)) {
             f.problem(InputCode.INPUT_CONFLICT, "thicknessSeries", f.path("thicknessSeries") + ": DIN 3967 gives"
                     + " allowances for reference diameters up to 1000 mm, this gear's is "
-                    + FieldReader.format(f.units().fromMm(d)) + " " + f.units().symbol(), "give the allowances in thicknessAllowance and"
-                    + " thicknessAllowanceLower");
+                    + FieldReader.format(f.units().fromMm(d)) + " " + f.units().symbol(),
+                    "give the drawing's allowances in thicknessAllowance and thicknessAllowanceLower");
             return Optional.empty();
         }
         return series;
@@ -134,28 +136,33 @@ final class JobParts {
 
     /** Reads the mating gear: its teeth, and optionally its shift, allowances and the centre distance. */
     private static Optional<MatingGear> mate(FieldReader m) {
-        int teeth = m.requiredInt("teeth", 1, 100_000, "give the mating gear's number of teeth");
-        OptionalDouble shift = m.number("profileShift", Kind.PLAIN, Limit.range(-3, 3));
-        OptionalDouble centre = m.number("centreDistance", Kind.LENGTH, Limit.POSITIVE);
-        double upper = m.number("thicknessAllowance", Kind.LENGTH, Limit.range(-10, 10), 0);
-        OptionalDouble lower = m.number("thicknessAllowanceLower", Kind.LENGTH, Limit.range(-10, 10));
+        if (!m.has(JobFields.MATE_TEETH)) {
+            m.missing("teeth", "give the mating gear's number of teeth, or leave \"mate\" out");
+            return Optional.empty();
+        }
+        OptionalInt teeth = m.integer(JobFields.MATE_TEETH);
+        OptionalDouble shift = m.number(JobFields.MATE_PROFILE_SHIFT);
+        OptionalDouble centre = m.number(JobFields.MATE_CENTRE_DISTANCE);
+        double upper = m.value(JobFields.MATE_THICKNESS_ALLOWANCE);
+        OptionalDouble lower = m.number(JobFields.MATE_THICKNESS_ALLOWANCE_LOWER);
         if (lower.isPresent() && lower.getAsDouble() > upper) {
             m.problem(InputCode.INPUT_CONFLICT, "thicknessAllowanceLower", m.path("thicknessAllowanceLower")
-                    + " is above " + m.path("thicknessAllowance"), "swap the two values");
+                    + " is above " + m.path("thicknessAllowance"), "the upper allowance is the larger one: swap the"
+                    + " two values");
             return Optional.empty();
         }
-        if (teeth < 1 || !Double.isFinite(upper)) {
+        if (teeth.isEmpty() || !Double.isFinite(upper)) {
             return Optional.empty();
         }
-        return Optional.of(new MatingGear(teeth, shift, centre, upper, lower));
+        return Optional.of(new MatingGear(teeth.getAsInt(), shift, centre, upper, lower));
     }
 
     private static Optional<ToothProportions> custom(FieldReader f, Optional<String> system) {
         boolean isCustom = system.map(ToothSystem.CUSTOM::equals).orElse(false);
         if (!f.has("custom")) {
             if (isCustom) {
-                f.missing("custom", "give \"custom\": { \"addendum\": 1.0, \"dedendum\": 1.25, \"rootRadius\": 0.25 }"
-                        + " as factors of the module");
+                f.missing("custom", "give \"custom\": { \"addendum\": 1.0, \"dedendum\": 1.25, \"rootRadius\": 0.38 }"
+                        + " as factors of the module (ISO 53:1998 profile A)");
             }
             return Optional.empty();
         }
@@ -166,9 +173,9 @@ final class JobParts {
             return Optional.empty();
         }
         FieldReader c = f.child("custom");
-        double a = c.required("addendum", Kind.PLAIN, Limit.range(0.3, 2), "addendum factor, e.g. 1.0");
-        double d = c.required("dedendum", Kind.PLAIN, Limit.range(0.3, 3), "dedendum factor, e.g. 1.25");
-        double r = c.required("rootRadius", Kind.PLAIN, Limit.range(0, 1), "root radius factor, e.g. 0.25");
+        double a = c.value(JobFields.GEAR_CUSTOM_ADDENDUM);
+        double d = c.value(JobFields.GEAR_CUSTOM_DEDENDUM);
+        double r = c.value(JobFields.GEAR_CUSTOM_ROOT_RADIUS);
         if (Double.isFinite(a) && Double.isFinite(d) && d <= a) {
             c.problem(InputCode.INPUT_CONFLICT, "dedendum", c.path("dedendum") + " (" + FieldReader.format(d)
                     + ") must be greater than " + c.path("addendum") + " (" + FieldReader.format(a) + ")",
@@ -179,34 +186,32 @@ final class JobParts {
     }
 
     private static DrawingValues drawing(FieldReader d) {
-        return new DrawingValues(d.number("pitchDiameter", Kind.LENGTH, Limit.POSITIVE),
-                d.number("outsideDiameter", Kind.LENGTH, Limit.POSITIVE),
-                d.number("rootDiameter", Kind.LENGTH, Limit.POSITIVE),
-                d.number("wholeDepth", Kind.LENGTH, Limit.POSITIVE),
-                d.integer("spanTeeth", 1, 10_000),
-                d.number("span", Kind.LENGTH, Limit.POSITIVE),
-                d.number("pinDiameter", Kind.LENGTH, Limit.POSITIVE),
-                d.number("overPins", Kind.LENGTH, Limit.POSITIVE));
+        return new DrawingValues(d.number(JobFields.DRAWING_PITCH_DIAMETER),
+                d.number(JobFields.DRAWING_OUTSIDE_DIAMETER),
+                d.number(JobFields.DRAWING_ROOT_DIAMETER),
+                d.number(JobFields.DRAWING_WHOLE_DEPTH),
+                d.integer(JobFields.DRAWING_SPAN_TEETH),
+                d.number(JobFields.DRAWING_SPAN),
+                d.number(JobFields.DRAWING_PIN_DIAMETER),
+                d.number(JobFields.DRAWING_OVER_PINS));
     }
 
     static Optional<HobSpec> hob(FieldReader f, List<Finding> out) {
         int before = errors(out);
-        Optional<Pitch> pitch = pitch(f);
-        double alpha = f.requiredAngle("pressureAngle", Limit.range(1, 45), "give the hob's pressure angle, e.g. 20");
-        int starts = f.requiredInt("starts", 1, 12, "give the number of starts, usually 1");
-        Optional<String> hand = f.has("hand") ? f.choice("hand", HANDS)
-                : f.requiredText("hand", "\"right\" or \"left\" as marked on the hob");
-        double outside = f.required("outsideDiameter", Kind.LENGTH, Limit.POSITIVE, "give the hob's outside diameter");
-        OptionalDouble lead = f.angle("leadAngle", Limit.range(0, 45));
-        OptionalDouble reference = f.number("referenceDiameter", Kind.LENGTH, Limit.POSITIVE);
-        int gashes = f.requiredInt("gashes", 1, 1000, "give the number of gashes (flutes)");
-        double length = f.required("length", Kind.LENGTH, Limit.POSITIVE, "give the usable hob length");
-        OptionalDouble maxRpm = f.number("maxRpm", Kind.PLAIN, Limit.POSITIVE);
-        Optional<String> material = f.has("material") ? f.choice("material", HOB_MATERIALS)
-                : f.requiredText("material", "use one of " + String.join(", ", HOB_MATERIALS));
-        Optional<CuttingSense> sense = f.choice("cuttingSense", SENSES)
+        Optional<Pitch> pitch = pitch(f, JobFields.HOB_MODULE, JobFields.HOB_DIAMETRAL_PITCH);
+        double alpha = f.value(JobFields.HOB_PRESSURE_ANGLE);
+        int starts = f.integer(JobFields.HOB_STARTS).orElse(0);
+        Optional<String> hand = f.text(JobFields.HOB_HAND);
+        double outside = f.value(JobFields.HOB_OUTSIDE_DIAMETER);
+        OptionalDouble lead = f.number(JobFields.HOB_LEAD_ANGLE);
+        OptionalDouble reference = f.number(JobFields.HOB_REFERENCE_DIAMETER);
+        int gashes = f.integer(JobFields.HOB_GASHES).orElse(0);
+        double length = f.value(JobFields.HOB_LENGTH);
+        OptionalDouble maxRpm = f.number(JobFields.HOB_MAX_RPM);
+        Optional<String> material = f.text(JobFields.HOB_MATERIAL);
+        Optional<CuttingSense> sense = f.text(JobFields.HOB_CUTTING_SENSE)
                 .map(w -> w.equals(CuttingSense.CLOCKWISE.word()) ? CuttingSense.CLOCKWISE : CuttingSense.COUNTER_CLOCKWISE);
-        Optional<String> identifier = f.text("identifier");
+        Optional<String> identifier = f.text(JobFields.HOB_IDENTIFIER);
         if (errors(out) > before) {
             return Optional.empty();
         }
@@ -215,6 +220,12 @@ final class JobParts {
     }
 
     static int errors(List<Finding> out) {
-        return (int) out.stream().filter(Finding::isError).count();
+        int n = 0;
+        for (Finding f : out) {
+            if (f.isError()) {
+                n++;
+            }
+        }
+        return n;
     }
 }
