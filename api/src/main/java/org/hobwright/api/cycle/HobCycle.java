@@ -52,6 +52,7 @@ public record HobCycle(
      * @param findings every finding, errors first
      * @param plannedFor the job the cycle was planned for (empty from a planner built against api 1.0); writers
      *     refuse to write the cycle with another job
+     * @param pair the gear with its mate, when the job gives a mating gear and the pair could be computed
      */
     public HobCycle {
         Checks.present("gear", gear);
@@ -88,7 +89,19 @@ public record HobCycle(
         this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, Optional.empty());
     }
 
-    /** A cycle without a gear pair (the form before the mating gear). */
+    /**
+     * A cycle without a gear pair (the form before the mating gear).
+     *
+     * @param gear computed gear geometry
+     * @param inspection inspection values
+     * @param tolerances ISO 1328-1 flank tolerances, when a class is known
+     * @param setup setup values
+     * @param steps the ordered steps (empty when the job has errors)
+     * @param summary time and predicted quality
+     * @param simulation generating simulation, when run
+     * @param findings every finding, errors first
+     * @param plannedFor the job the cycle was planned for
+     */
     public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
                     Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
                     Optional<SimulationData> simulation, List<Finding> findings, Optional<HobJob> plannedFor) {

@@ -42,6 +42,7 @@ public record InspectionData(
      * @param balls true when balls are meant (helical gears)
      * @param chordalThicknessMm chordal tooth thickness at the reference circle (normal section)
      * @param chordalHeightMm chordal height from the tip to that chord
+     * @param limits upper and lower limits, when the job gives a lower allowance or a tolerance series
      */
     public InspectionData {
         Checks.atLeast("spanTeeth", spanTeeth, 1);
@@ -54,7 +55,18 @@ public record InspectionData(
         Checks.present("limits", limits);
     }
 
-    /** Values without limits (the form of api 1.0). */
+    /**
+     * Values without limits (the form of api 1.0).
+     *
+     * @param spanTeeth number of teeth spanned k
+     * @param spanWidthMm base tangent length W_k over k teeth
+     * @param spanContactDiameterMm diameter where the anvils touch the flanks
+     * @param pinDiameterMm pin (spur) or ball (helical) diameter D_M
+     * @param overPinsMm measurement over two pins or balls M_d
+     * @param balls true when balls are meant (helical gears)
+     * @param chordalThicknessMm chordal tooth thickness at the reference circle (normal section)
+     * @param chordalHeightMm chordal height from the tip to that chord
+     */
     public InspectionData(int spanTeeth, double spanWidthMm, double spanContactDiameterMm, double pinDiameterMm,
                           double overPinsMm, boolean balls, double chordalThicknessMm, double chordalHeightMm) {
         this(spanTeeth, spanWidthMm, spanContactDiameterMm, pinDiameterMm, overPinsMm, balls, chordalThicknessMm,

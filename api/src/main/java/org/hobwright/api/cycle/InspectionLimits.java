@@ -31,6 +31,22 @@ public record InspectionLimits(double upperAllowanceMm, double lowerAllowanceMm,
                                double chordalThicknessUpperMm, double chordalThicknessLowerMm,
                                double rootDiameterUpperMm, double rootDiameterLowerMm) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param upperAllowanceMm upper normal tooth-thickness allowance E_sns
+     * @param lowerAllowanceMm lower normal tooth-thickness allowance E_sni, not above the upper one
+     * @param basis where the allowances come from: {@code drawing}, or the series, e.g. {@code DIN 3967 cd25}
+     * @param spanWidthUpperMm largest span W_k
+     * @param spanWidthLowerMm smallest span W_k
+     * @param overPinsUpperMm largest measurement over pins or balls
+     * @param overPinsLowerMm smallest measurement over pins or balls
+     * @param chordalThicknessUpperMm largest chordal tooth thickness
+     * @param chordalThicknessLowerMm smallest chordal tooth thickness
+     * @param rootDiameterUpperMm root diameter as the hob cuts it for the upper allowance
+     * @param rootDiameterLowerMm root diameter for the lower allowance (the hob fed deeper)
+     */
     public InspectionLimits {
         Checks.finite("upperAllowanceMm", upperAllowanceMm);
         Checks.finite("lowerAllowanceMm", lowerAllowanceMm);

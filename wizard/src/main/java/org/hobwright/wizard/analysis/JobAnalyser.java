@@ -78,8 +78,10 @@ public final class JobAnalyser {
         InspectionValues inspection = InspectionValues.of(g, tip, spec.pinDiameterMm(), shopStepMm(job.units()));
         InspectionChecks.check(g, spec.faceWidthMm(), inspection, words, findings);
         if (spec.thicknessAllowanceLowerMm().isPresent()) {
-            inspection = inspection.withLimits(MeasurementLimits.of(g, inspection,
-                    spec.thicknessAllowanceLowerMm().getAsDouble(), InspectionChecks.limitsBasis(spec, words, findings)));
+            double lower = spec.thicknessAllowanceLowerMm().getAsDouble();
+            InspectionChecks.checkLowerLimit(g, inspection, lower, words, findings);
+            inspection = inspection.withLimits(MeasurementLimits.of(g, inspection, lower,
+                    InspectionChecks.limitsBasis(spec, words, findings)));
         }
         DrawingCheck.check(spec.drawing(), g, inspection.pins().pinDiameterMm(), words, findings);
         Optional<GearPairData> pair = spec.mate().isPresent()

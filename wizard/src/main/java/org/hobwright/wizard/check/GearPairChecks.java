@@ -22,6 +22,8 @@ import org.hobwright.wizard.geometry.InvoluteGear;
 public final class GearPairChecks {
     /** Smallest tip clearance without a warning, as a fraction of m_n (common practice, no source). */
     public static final double MIN_CLEARANCE_FACTOR = 0.1;
+    /** Backlash below zero by less than this is rounding, not a jam (mm). */
+    private static final double JAM_TOLERANCE_MM = 1e-6;
 
     private GearPairChecks() {
     }
@@ -75,7 +77,7 @@ public final class GearPairChecks {
         double jMax = loosest.normalBacklashMm(a);
         GearPair withoutAllowances = GearPair.of(g.withoutAllowance(), m.teeth(), mateShift, 0);
         double sum = withoutAllowances.profileShiftSum(a);
-        if (jMin < 0) {
+        if (jMin < -JAM_TOLERANCE_MM) {
             out.add(EngineeringCode.GEAR_PAIR_NO_BACKLASH.at("gear.mate.centreDistance", "at centre distance "
                     + words.length(a) + " the teeth at their upper allowances would jam (normal backlash "
                     + words.length(jMin) + "): it implies x₁ + x₂ = " + Decimal.fixed(sum, 4) + ", the shifts are "

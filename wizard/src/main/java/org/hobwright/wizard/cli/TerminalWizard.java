@@ -142,7 +142,8 @@ final class TerminalWizard {
     }
 
     private boolean anyDrawingValue(List<FieldSpec> fields) {
-        return fields.stream().filter(TerminalWizard::isDrawing).anyMatch(f -> !wizard.value(f.key()).isEmpty());
+        return fields.stream().filter(f -> isDrawing(f) && applies(f, wizard))
+                .anyMatch(f -> !wizard.value(f.key()).isEmpty());
     }
 
     /**

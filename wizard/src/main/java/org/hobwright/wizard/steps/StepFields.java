@@ -58,8 +58,9 @@ public final class StepFields {
 
     /**
      * True when a field applies to the answers so far: the custom rack factors only for the custom
-     * tooth system, the tooth-thickness allowances only without a thickness series. A field that does
-     * not apply is not asked, not checked and left out of the job.
+     * tooth system, the tooth-thickness allowances only without a thickness series, the mating gear's
+     * other values only with its tooth count. A field that does not apply is not asked, not checked and
+     * left out of the job.
      */
     public static boolean applies(String key, Answers answers) {
         return applies(key, answers::get);
@@ -79,6 +80,9 @@ public final class StepFields {
         if (key.equals(JobFields.GEAR_THICKNESS_ALLOWANCE.key())
                 || key.equals(JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER.key())) {
             return answer.apply(JobFields.GEAR_THICKNESS_SERIES.key()).isBlank();
+        }
+        if (key.startsWith("gear.mate.") && !key.equals(JobFields.MATE_TEETH.key())) {
+            return !answer.apply(JobFields.MATE_TEETH.key()).isBlank();
         }
         return true;
     }
