@@ -17,6 +17,7 @@ import org.hobwright.api.check.Finding;
  * @param summary     time and predicted quality
  * @param simulation  generating simulation, when run
  * @param findings    every finding, errors first
+ * @param spline      for a spline job, the spline's limits, pins and form check
  */
 public record HobCycle(
         Optional<GearData> gear,
@@ -26,7 +27,8 @@ public record HobCycle(
         List<CycleStep> steps,
         Optional<CycleSummary> summary,
         Optional<SimulationData> simulation,
-        List<Finding> findings) {
+        List<Finding> findings,
+        Optional<SplineData> spline) {
 
     public HobCycle {
         Validate.present("gear", gear);
@@ -37,10 +39,18 @@ public record HobCycle(
         Validate.present("summary", summary);
         Validate.present("simulation", simulation);
         findings = List.copyOf(Validate.present("findings", findings));
+        Validate.present("spline", spline);
         if (Finding.anyError(findings) && !steps.isEmpty()) {
             throw new IllegalArgumentException("a cycle with error findings must have no steps, had "
                     + steps.size());
         }
+    }
+
+    /** The cycle of a gear job. */
+    public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
+                    Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
+                    Optional<SimulationData> simulation, List<Finding> findings) {
+        this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, Optional.empty());
     }
 
     /** True when any finding is an error: nothing may be posted. */

@@ -1,5 +1,6 @@
 package org.hobwright.api.job;
 
+import java.util.Optional;
 import org.hobwright.api.Validate;
 
 /**
@@ -12,9 +13,10 @@ import org.hobwright.api.Validate;
  * @param hob     the hob
  * @param machine the machine profile
  * @param cycle   the cycle settings
+ * @param spline  for a spline job, what makes the part a spline; the gear then is its spur-gear frame
  */
 public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine,
-                     CycleSettings cycle) {
+                     CycleSettings cycle, Optional<SplineSpec> spline) {
     public HobJob {
         Validate.text("name", name);
         Validate.present("units", units);
@@ -22,5 +24,16 @@ public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, Machi
         Validate.present("hob", hob);
         Validate.present("machine", machine);
         Validate.present("cycle", cycle);
+        Validate.present("spline", spline);
+    }
+
+    /** A gear job. */
+    public HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine, CycleSettings cycle) {
+        this(name, units, gear, hob, machine, cycle, Optional.empty());
+    }
+
+    /** What the job cuts: {@code gear} or {@code spline}. */
+    public String part() {
+        return spline.isPresent() ? "spline" : "gear";
     }
 }

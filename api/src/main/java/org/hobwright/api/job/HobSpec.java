@@ -1,6 +1,7 @@
 package org.hobwright.api.job;
 
 import java.util.Objects;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.Validate;
 
@@ -19,6 +20,7 @@ import org.hobwright.api.Validate;
  * @param lengthMm            usable hob length, mm
  * @param maxRpm              the hob maker's speed limit, rpm, if given
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+ * @param splineProfile       for a spline hob, its root form, tip radius and addendum
  */
 public record HobSpec(
         Pitch pitch,
@@ -31,7 +33,8 @@ public record HobSpec(
         int gashes,
         double lengthMm,
         OptionalDouble maxRpm,
-        String material) {
+        String material,
+        Optional<SplineHobProfile> splineProfile) {
 
     public HobSpec {
         Validate.present("hob.pitch", pitch);
@@ -48,6 +51,15 @@ public record HobSpec(
         Objects.requireNonNull(maxRpm, "maxRpm");
         Validate.positive("hob.maxRpm", maxRpm);
         Validate.text("hob.material", material);
+        Objects.requireNonNull(splineProfile, "splineProfile");
+    }
+
+    /** A gear hob (no spline profile). */
+    public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
+                   OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
+                   OptionalDouble maxRpm, String material) {
+        this(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg, referenceDiameterMm, gashes,
+                lengthMm, maxRpm, material, Optional.empty());
     }
 
     /** Normal module in mm. */

@@ -65,9 +65,9 @@ final class SetupSheet {
         m.raw("<!DOCTYPE html>\n");
         m.open("html", "xmlns", "http://www.w3.org/1999/xhtml", "lang", "en").nl();
         m.open("head").empty("meta", "charset", "UTF-8")
-                .leaf("title", "Hobbing setup sheet – " + job.gear().partName()).open("style").raw(CSS).close("style").close("head");
+                .leaf("title", (job.spline().isPresent() ? "Spline hobbing" : "Hobbing") + " setup sheet – " + job.gear().partName()).open("style").raw(CSS).close("style").close("head");
         m.open("body").nl();
-        m.leaf("h1", "Hobbing setup sheet – " + job.gear().partName()).nl();
+        m.leaf("h1", (job.spline().isPresent() ? "Spline hobbing" : "Hobbing") + " setup sheet – " + job.gear().partName()).nl();
         m.leaf("p", "Job " + job.name() + " · machine " + job.machine().name() + " · units " + f.u().lengthSymbol()
                 + " · " + context.generatedOn() + " · Hobwright " + context.toolVersion(), "class", "meta").nl();
         m.open("div", "class", "cautions").leaf("strong", "Cautions").open("ul");
@@ -86,7 +86,11 @@ final class SetupSheet {
         m.close("div");
         SheetTables t = new SheetTables(m, f, job);
         t.setup(s, sum, job.cycle().coolant());
-        t.gear(g);
+        if (cycle.spline().isPresent()) {
+            t.spline(cycle.spline().get());
+        } else {
+            t.gear(g);
+        }
         cycle.inspection().ifPresent(t::inspection);
         t.quality(sum, TargetsGiven.none(sum.targets()) ? job.cycle().targets() : sum.targets(),
                 cycle.tolerances(), cycle.simulation());

@@ -7,6 +7,8 @@ import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.InspectionData;
+import org.hobwright.api.cycle.SimulationData;
+import org.hobwright.api.cycle.SplineData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
@@ -39,6 +41,9 @@ public final class JobAnalyser {
 
     /** Analyses a job. */
     public static JobAnalysis analyse(HobJob job) {
+        if (job.spline().isPresent()) {
+            return SplineJobAnalyser.analyse(job);
+        }
         List<Finding> findings = new ArrayList<>();
         Wording words = new Wording(job.units());
         GearSpec spec = job.gear();
@@ -86,11 +91,18 @@ public final class JobAnalyser {
         return units == Units.IN ? Units.IN.toMm(0.0005) : 0.01;
     }
 
-    private static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
+    static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
                                       Optional<ToleranceData> tolerances, Optional<HobSetup> setup,
                                       List<Finding> findings) {
+        return result(gear, inspection, tolerances, setup, findings, Optional.empty(), Optional.empty());
+    }
+
+    /** The analysis with its findings sorted errors first, each group in check order. */
+    static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
+                              Optional<ToleranceData> tolerances, Optional<HobSetup> setup, List<Finding> findings,
+                              Optional<SplineData> spline, Optional<SimulationData> simulation) {
         List<Finding> sorted = new ArrayList<>(findings);
         sorted.sort(Comparator.comparing(Finding::severity));
-        return new JobAnalysis(gear, inspection, tolerances, setup, sorted);
+        return new JobAnalysis(gear, inspection, tolerances, setup, sorted, spline, simulation);
     }
 }

@@ -8,7 +8,7 @@ final class SplineInputs {
     private SplineInputs() {
     }
 
-    static void check(SplineSpec s, List<Finding> findings) {
+    static void check(SplineDrawing s, List<Finding> findings) {
         SplineStandard std = s.standard();
         double a = s.pressureAngleDeg();
         boolean din = std == SplineStandard.DIN_5480;

@@ -57,8 +57,15 @@ public enum FileFormat {
         return m;
     }
 
+    private static final Shape SPLINE_KEYS = Shape.object(
+            "partName", Shape.TEXT, "standard", Shape.TEXT, "teeth", Shape.INTEGER, "module", Shape.NUMBER,
+            "diametralPitch", Shape.NUMBER_OR_TEXT, "pressureAngle", Shape.ANGLE, "root", Shape.TEXT,
+            "toleranceClass", Shape.INTEGER, "fitClass", Shape.TEXT, "referenceDiameter", Shape.NUMBER,
+            "faceWidth", Shape.NUMBER, "pinDiameter", Shape.NUMBER, "blankDiameter", Shape.NUMBER,
+            "allowance", Shape.NUMBER, "totalTolerance", Shape.NUMBER, "effectiveVariation", Shape.NUMBER);
+
     private static final Shape JOB_SHAPE = Shape.object(
-            "name", Shape.TEXT, "units", Shape.TEXT,
+            "name", Shape.TEXT, "units", Shape.TEXT, "part", Shape.TEXT,
             "gear", Shape.object("partName", Shape.TEXT, "teeth", Shape.INTEGER, "module", Shape.NUMBER,
                     "diametralPitch", Shape.NUMBER, "pressureAngle", Shape.ANGLE, "helixAngle", Shape.ANGLE,
                     "hand", Shape.TEXT, "faceWidth", Shape.NUMBER, "profileShift", Shape.NUMBER,
@@ -73,7 +80,8 @@ public enum FileFormat {
                     "pressureAngle", Shape.ANGLE, "starts", Shape.INTEGER, "hand", Shape.TEXT,
                     "outsideDiameter", Shape.NUMBER, "leadAngle", Shape.ANGLE, "referenceDiameter", Shape.NUMBER,
                     "gashes", Shape.INTEGER, "length", Shape.NUMBER, "maxRpm", Shape.NUMBER,
-                    "material", Shape.TEXT),
+                    "material", Shape.TEXT, "root", Shape.TEXT, "tipRadius", Shape.NUMBER, "addendum", Shape.NUMBER),
+            "spline", SPLINE_KEYS,
             "machine", Shape.nameOr(MACHINE_BODY),
             "cycle", CYCLE_KEYS.with(Map.of("template", Shape.TEXT), Set.of()))
             .with(HEADER, Set.of());

@@ -10,6 +10,7 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.Pitch;
+import org.hobwright.api.job.SplineHobProfile;
 import org.hobwright.api.job.ToothProportions;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.hobwright.wizard.store.FieldReader.Kind;
@@ -115,7 +116,7 @@ final class JobParts {
 
     static Optional<HobSpec> hob(FieldReader f, List<Finding> out) {
         int before = errors(out);
-        Optional<Pitch> pitch = pitch(f);
+        Optional<Pitch> pitch = SplineParts.pitch(f);
         double alpha = f.requiredAngle("pressureAngle", Limit.range(1, 45), "give the hob's pressure angle, e.g. 20");
         int starts = f.requiredInt("starts", 1, 12, "give the number of starts, usually 1");
         Optional<String> hand = f.has("hand") ? f.choice("hand", HANDS)
@@ -128,11 +129,12 @@ final class JobParts {
         OptionalDouble maxRpm = f.number("maxRpm", Kind.PLAIN, Limit.POSITIVE);
         Optional<String> material = f.has("material") ? f.choice("material", HOB_MATERIALS)
                 : f.requiredText("material", "use one of " + String.join(", ", HOB_MATERIALS));
+        Optional<SplineHobProfile> profile = SplineParts.hobProfile(f);
         if (errors(out) > before) {
             return Optional.empty();
         }
         return Optional.of(new HobSpec(pitch.orElseThrow(), alpha, starts, Hand.fromWord(hand.orElseThrow()), outside,
-                lead, reference, gashes, length, maxRpm, material.orElseThrow()));
+                lead, reference, gashes, length, maxRpm, material.orElseThrow(), profile));
     }
 
     static int errors(List<Finding> out) {

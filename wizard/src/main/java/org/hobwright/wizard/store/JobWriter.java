@@ -10,6 +10,7 @@ import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.MachineProfile;
 import org.hobwright.api.job.Pitch;
+import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
@@ -43,7 +44,12 @@ public final class JobWriter {
         ObjectNode root = header(FileFormat.JOB);
         root.put("name", job.name());
         root.put("units", units.symbol());
-        root.set("gear", gearTree(job.gear(), units));
+        if (job.spline().isPresent()) {
+            root.put("part", "spline");
+            root.set("spline", splineTree(job.gear(), job.spline().get(), units));
+        } else {
+            root.set("gear", gearTree(job.gear(), units));
+        }
         root.set("hob", hobTree(job.hob(), units));
         if (machineByName) {
             root.put("machine", job.machine().name());
@@ -148,6 +154,37 @@ public final class JobWriter {
         return n;
     }
 
+    /** A spline job's {@code spline} object: its gear frame's keys and what makes it a spline. */
+    private static ObjectNode splineTree(GearSpec g, SplineSpec s, Units units) {
+        ObjectNode n = NODES.objectNode();
+        n.put("partName", g.partName());
+        n.put("standard", s.standard());
+        n.put("teeth", g.teeth());
+        if (g.pitch() instanceof Pitch.Diametral d) {
+            n.put("diametralPitch", plain(d.perInch()) + "/" + plain(2 * d.perInch()));
+        } else {
+            pitch(n, g.pitch());
+        }
+        number(n, "pressureAngle", g.pressureAngleDeg());
+        n.put("root", s.root());
+        n.put("toleranceClass", s.toleranceClass());
+        n.put("fitClass", s.fitClass());
+        optional(n, "referenceDiameter", s.referenceDiameterMm(), units::fromMm);
+        number(n, "faceWidth", units.fromMm(g.faceWidthMm()));
+        optional(n, "pinDiameter", g.pinDiameterMm(), units::fromMm);
+        optional(n, "blankDiameter", g.blankDiameterMm(), units::fromMm);
+        optional(n, "allowance", s.allowanceMm(), units::fromMm);
+        optional(n, "totalTolerance", s.totalToleranceMm(), units::fromMm);
+        optional(n, "effectiveVariation", s.effectiveVariationMm(), units::fromMm);
+        return n;
+    }
+
+    /** A number as a short text: 16, 2.5. */
+    private static String plain(double v) {
+        double t = JsonNumbers.tidy(v);
+        return t == Math.rint(t) ? Long.toString((long) t) : Double.toString(t);
+    }
+
     private static ObjectNode drawingTree(DrawingValues d, Units units) {
         ObjectNode n = NODES.objectNode();
         optional(n, "pitchDiameter", d.pitchDiameterMm(), units::fromMm);
@@ -175,6 +212,11 @@ public final class JobWriter {
         number(n, "length", units.fromMm(h.lengthMm()));
         optional(n, "maxRpm", h.maxRpm(), v -> v);
         n.put("material", h.material());
+        h.splineProfile().ifPresent(p -> {
+            n.put("root", p.root());
+            number(n, "tipRadius", units.fromMm(p.tipRadiusMm()));
+            optional(n, "addendum", p.addendumMm(), units::fromMm);
+        });
         return n;
     }
 

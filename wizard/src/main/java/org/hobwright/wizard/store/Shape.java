@@ -27,6 +27,8 @@ final class Shape {
         BOOLEAN("true or false"),
         /** Degrees as a number or a degrees-minutes-seconds text. */
         ANGLE("an angle (a number of degrees or a text like \"13°14'12\\\"\")"),
+        /** A number, or a text such as a pitch written "16/32". */
+        NUMBER_OR_TEXT("a number or a text like \"16/32\""),
         /** An object with the keys of the shape. */
         OBJECT("an object { ... }"),
         /** The name of a library entry, or an object with the keys of the shape. */
@@ -52,6 +54,7 @@ final class Shape {
     static final Shape TEXT = new Shape(Type.TEXT, Map.of());
     static final Shape BOOLEAN = new Shape(Type.BOOLEAN, Map.of());
     static final Shape ANGLE = new Shape(Type.ANGLE, Map.of());
+    static final Shape NUMBER_OR_TEXT = new Shape(Type.NUMBER_OR_TEXT, Map.of());
 
     /** An object; {@code pairs} alternates key names and shapes, in the order files write them. */
     static Shape object(Object... pairs) {
@@ -115,7 +118,7 @@ final class Shape {
                     && Math.abs(v.doubleValue()) < 1e9;
             case TEXT -> v.isString();
             case BOOLEAN -> v.isBoolean();
-            case ANGLE -> v.isNumber() || v.isString();
+            case ANGLE, NUMBER_OR_TEXT -> v.isNumber() || v.isString();
             case OBJECT -> v.isObject();
             case NAME_OR_OBJECT -> v.isString() || v.isObject();
         };

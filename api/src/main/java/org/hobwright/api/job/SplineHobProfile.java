@@ -1,0 +1,21 @@
+package org.hobwright.api.job;
+
+import java.util.OptionalDouble;
+import org.hobwright.api.Validate;
+
+/**
+ * What a spline hob adds to a gear hob: the root form its tip cuts, its tip radius and its addendum.
+ * Lengths in mm.
+ *
+ * @param root        {@code flat} or {@code fillet}
+ * @param tipRadiusMm tip corner radius ρ_a0 (normal section)
+ * @param addendumMm  h_a0, tip line below the datum line where the hob tooth is π m / 2 thick; empty: the
+ *                    standard's
+ */
+public record SplineHobProfile(String root, double tipRadiusMm, OptionalDouble addendumMm) {
+    public SplineHobProfile {
+        Validate.text("hob.root", root);
+        Validate.nonNegative("hob.tipRadius", tipRadiusMm);
+        Validate.positive("hob.addendum", java.util.Objects.requireNonNull(addendumMm, "addendumMm"));
+    }
+}

@@ -1,0 +1,37 @@
+package org.hobwright.api.job;
+
+import java.util.Objects;
+import java.util.OptionalDouble;
+import org.hobwright.api.Validate;
+
+/**
+ * What makes a job's part an external involute spline, beside the spur-gear frame its {@link GearSpec}
+ * carries (teeth, pitch, pressure angle, face width, part name, blank and pin). Lengths in mm.
+ *
+ * @param standard             {@code iso4156}, {@code ansi-b92.1} or {@code din5480}
+ * @param root                 {@code flat} or {@code fillet}
+ * @param toleranceClass       tolerance class (ISO 4156, ANSI B92.1: 4 to 7; DIN 5480: the quality)
+ * @param fitClass             fit class or deviation series as the standard names it, e.g. {@code h}
+ * @param referenceDiameterMm  DIN 5480 reference diameter d_B
+ * @param allowanceMm          es (DIN 5480 A_s) from the drawing, signed, negative thins the tooth
+ * @param totalToleranceMm     T + λ (DIN 5480 T_G) from the drawing
+ * @param effectiveVariationMm λ (DIN 5480 T_eff) from the drawing
+ */
+public record SplineSpec(String standard, String root, int toleranceClass, String fitClass,
+                         OptionalDouble referenceDiameterMm, OptionalDouble allowanceMm,
+                         OptionalDouble totalToleranceMm, OptionalDouble effectiveVariationMm) {
+    public SplineSpec {
+        Validate.text("spline.standard", standard);
+        Validate.text("spline.root", root);
+        Validate.range("spline.toleranceClass", toleranceClass, 1, 16);
+        Validate.text("spline.fitClass", fitClass);
+        Objects.requireNonNull(referenceDiameterMm, "referenceDiameterMm");
+        Validate.positive("spline.referenceDiameter", referenceDiameterMm);
+        Objects.requireNonNull(allowanceMm, "allowanceMm");
+        Validate.range("spline.allowance", allowanceMm, -10, 10);
+        Objects.requireNonNull(totalToleranceMm, "totalToleranceMm");
+        Validate.positive("spline.totalTolerance", totalToleranceMm);
+        Objects.requireNonNull(effectiveVariationMm, "effectiveVariationMm");
+        Validate.range("spline.effectiveVariation", effectiveVariationMm, 0, 10);
+    }
+}
