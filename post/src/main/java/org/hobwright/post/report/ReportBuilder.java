@@ -55,7 +55,9 @@ final class ReportBuilder {
         root.put("toolVersion", context.toolVersion());
         root.put("job", job.name());
         root.put("part", job.gear().partName());
-        root.put("partKind", job.part());
+        if (job.spline().isPresent()) {
+            root.put("partKind", job.part());
+        }
         root.put("machine", job.machine().name());
         ObjectNode units = root.putObject("units");
         units.put("length", u.lengthSymbol());

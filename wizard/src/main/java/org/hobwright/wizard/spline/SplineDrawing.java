@@ -41,6 +41,12 @@ public record SplineDrawing(SplineStandard standard, int teeth, double moduleMm,
                 lengthMm, allowanceMm, totalToleranceMm, effectiveVariationMm);
     }
 
+    /** The same spline with another length. */
+    public SplineDrawing withLength(double length) {
+        return new SplineDrawing(standard, teeth, moduleMm, pressureAngleDeg, root, toleranceClass, fitClass,
+                referenceDiameterMm, length, allowanceMm, totalToleranceMm, effectiveVariationMm);
+    }
+
     /** Diametral pitch P = 25.4 / m, 1/in. */
     public double diametralPitch() {
         return 25.4 / moduleMm;
