@@ -1,8 +1,12 @@
 package org.hobwright.api.check;
 
+import java.util.ArrayList;
 import java.util.Collection;
+import java.util.Comparator;
+import java.util.List;
 import java.util.Optional;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * One problem or remark about a job, found by a check.
@@ -15,16 +19,17 @@ import org.hobwright.api.Validate;
  * @param source   the standard, handbook or rule the check rests on
  *                 ("common practice, no source" for a rule of thumb)
  */
+@ApiStatus(since = "1.0")
 public record Finding(Severity severity, String code, String field, String message, Optional<String> fix,
                       String source) {
 
     public Finding {
-        Validate.present("severity", severity);
-        Validate.text("code", code);
-        Validate.text("field", field);
-        Validate.text("message", message);
-        Validate.present("fix", fix);
-        Validate.text("source", source);
+        Checks.present("severity", severity);
+        Checks.text("code", code);
+        Checks.text("field", field);
+        Checks.text("message", message);
+        Checks.present("fix", fix);
+        Checks.text("source", source);
     }
 
     /** An error finding. */
@@ -56,5 +61,43 @@ public record Finding(Severity severity, String code, String field, String messa
     public String line() {
         return severity.word() + " " + code + " " + field + ": " + message
                 + fix.map(f -> " (fix: " + f + ")").orElse("");
+    }
+
+    /** The same as {@link #line()}: one line, so that a list of findings prints readably. */
+    @Override
+    @ApiStatus(since = "1.1")
+    public String toString() {
+        return line();
+    }
+
+    /**
+     * Findings as text, one {@link #line()} each, joined by line breaks.
+     *
+     * @param findings the findings
+     * @return the lines; empty text for no findings
+     */
+    @ApiStatus(since = "1.1")
+    public static String lines(Collection<Finding> findings) {
+        StringBuilder sb = new StringBuilder();
+        for (Finding f : findings) {
+            if (sb.length() > 0) {
+                sb.append(System.lineSeparator());
+            }
+            sb.append(f.line());
+        }
+        return sb.toString();
+    }
+
+    /**
+     * An unmodifiable copy of the findings, errors first, then warnings, then remarks (stable).
+     *
+     * @param findings the findings
+     * @return the sorted copy
+     */
+    @ApiStatus(since = "1.1")
+    public static List<Finding> errorsFirst(Collection<Finding> findings) {
+        List<Finding> out = new ArrayList<>(findings);
+        out.sort(Comparator.comparing(Finding::severity));
+        return List.copyOf(out);
     }
 }

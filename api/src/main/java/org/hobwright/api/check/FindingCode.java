@@ -2,6 +2,7 @@ package org.hobwright.api.check;
 
 import java.util.Optional;
 import java.util.Set;
+import org.hobwright.api.ApiStatus;
 
 /**
  * A stable finding code with what it means, how much it matters and what it rests on. Each
@@ -9,6 +10,7 @@ import java.util.Set;
  * module's {@code FINDINGS.md}, generated from the enum. A code is never reused for another
  * meaning.
  */
+@ApiStatus(since = "1.1")
 public interface FindingCode {
 
     /** The code as it appears in findings, e.g. {@code GEAR_UNDERCUT}. */

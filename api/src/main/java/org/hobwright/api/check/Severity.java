@@ -1,6 +1,9 @@
 package org.hobwright.api.check;
 
+import org.hobwright.api.ApiStatus;
+
 /** How much a finding matters. */
+@ApiStatus(since = "1.0")
 public enum Severity {
     /** The job cannot be cut as entered; nothing is written. */
     ERROR,

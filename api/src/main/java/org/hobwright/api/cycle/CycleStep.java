@@ -1,6 +1,7 @@
 package org.hobwright.api.cycle;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * One step of a hobbing cycle, in canonical units (mm, s, rpm, degrees). Steps name trade
@@ -11,6 +12,7 @@ import org.hobwright.api.Validate;
  *
  * <p>Each step says how long it takes; the cycle time is the sum of the steps' seconds.
  */
+@ApiStatus(since = "1.0")
 public sealed interface CycleStep {
 
     /** Duration of this step, s. */
@@ -24,9 +26,10 @@ public sealed interface CycleStep {
      *
      * @param text the remark, one line
      */
+    @ApiStatus(since = "1.0")
     record Comment(String text) implements CycleStep {
         public Comment {
-            Validate.present("text", text);
+            Checks.present("text", text);
             if (text.contains("\n") || text.contains("\r")) {
                 throw new IllegalArgumentException("comment must be one line, was \"" + text + "\"");
             }
@@ -48,6 +51,7 @@ public sealed interface CycleStep {
      *
      * @param on true to switch coolant on
      */
+    @ApiStatus(since = "1.0")
     record Coolant(boolean on) implements CycleStep {
         @Override
         public double seconds() {
@@ -66,10 +70,11 @@ public sealed interface CycleStep {
      * @param machineAngleDeg the setting in the machine's own sign convention, degrees
      * @param seconds         time allowed, s
      */
+    @ApiStatus(since = "1.0")
     record Swivel(double machineAngleDeg, double seconds) implements CycleStep {
         public Swivel {
-            Validate.range("machineAngleDeg", machineAngleDeg, -90, 90);
-            Validate.nonNegative("seconds", seconds);
+            Checks.range("machineAngleDeg", machineAngleDeg, -90, 90);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override
@@ -91,17 +96,18 @@ public sealed interface CycleStep {
      *                             far face, degrees, signed in the work's rotation sense (0 for spur)
      * @param seconds              time to start and lock, s
      */
+    @ApiStatus(since = "1.0")
     record SyncOn(int hobTurns, int workTurns, double hobRpm, double workRpm, Rotation hobRotation,
                   Rotation workRotation, double differentialDegPerMm, double seconds) implements CycleStep {
         public SyncOn {
-            Validate.atLeast("hobTurns", hobTurns, 1);
-            Validate.atLeast("workTurns", workTurns, 1);
-            Validate.positive("hobRpm", hobRpm);
-            Validate.positive("workRpm", workRpm);
-            Validate.present("hobRotation", hobRotation);
-            Validate.present("workRotation", workRotation);
-            Validate.finite("differentialDegPerMm", differentialDegPerMm);
-            Validate.nonNegative("seconds", seconds);
+            Checks.atLeast("hobTurns", hobTurns, 1);
+            Checks.atLeast("workTurns", workTurns, 1);
+            Checks.positive("hobRpm", hobRpm);
+            Checks.positive("workRpm", workRpm);
+            Checks.present("hobRotation", hobRotation);
+            Checks.present("workRotation", workRotation);
+            Checks.finite("differentialDegPerMm", differentialDegPerMm);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override
@@ -115,9 +121,10 @@ public sealed interface CycleStep {
      *
      * @param seconds time, s
      */
+    @ApiStatus(since = "1.0")
     record SyncOff(double seconds) implements CycleStep {
         public SyncOff {
-            Validate.nonNegative("seconds", seconds);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override
@@ -131,9 +138,10 @@ public sealed interface CycleStep {
      *
      * @param seconds time to stop, s
      */
+    @ApiStatus(since = "1.0")
     record SpindlesStop(double seconds) implements CycleStep {
         public SpindlesStop {
-            Validate.nonNegative("seconds", seconds);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override
@@ -147,9 +155,10 @@ public sealed interface CycleStep {
      *
      * @param seconds time, s
      */
+    @ApiStatus(since = "1.0")
     record Dwell(double seconds) implements CycleStep {
         public Dwell {
-            Validate.nonNegative("seconds", seconds);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override
@@ -164,10 +173,11 @@ public sealed interface CycleStep {
      * @param positionMm shift position from the hob's start end, mm
      * @param seconds    time, s
      */
+    @ApiStatus(since = "1.0")
     record HobShift(double positionMm, double seconds) implements CycleStep {
         public HobShift {
-            Validate.nonNegative("positionMm", positionMm);
-            Validate.nonNegative("seconds", seconds);
+            Checks.nonNegative("positionMm", positionMm);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override
@@ -184,12 +194,13 @@ public sealed interface CycleStep {
      * @param axialMm    hob centre along the work axis from the entry face, mm
      * @param seconds    time, s
      */
+    @ApiStatus(since = "1.0")
     record Rapid(int pass, double diameterMm, double axialMm, double seconds) implements CycleStep {
         public Rapid {
-            Validate.atLeast("pass", pass, 0);
-            Validate.nonNegative("diameterMm", diameterMm);
-            Validate.finite("axialMm", axialMm);
-            Validate.nonNegative("seconds", seconds);
+            Checks.atLeast("pass", pass, 0);
+            Checks.nonNegative("diameterMm", diameterMm);
+            Checks.finite("axialMm", axialMm);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override
@@ -208,14 +219,15 @@ public sealed interface CycleStep {
      * @param cutting       true when the hob removes material during this move
      * @param seconds       time, s
      */
+    @ApiStatus(since = "1.0")
     record Feed(int pass, double diameterMm, double axialMm, double feedMmPerRev, boolean cutting,
                 double seconds) implements CycleStep {
         public Feed {
-            Validate.atLeast("pass", pass, 0);
-            Validate.nonNegative("diameterMm", diameterMm);
-            Validate.finite("axialMm", axialMm);
-            Validate.positive("feedMmPerRev", feedMmPerRev);
-            Validate.nonNegative("seconds", seconds);
+            Checks.atLeast("pass", pass, 0);
+            Checks.nonNegative("diameterMm", diameterMm);
+            Checks.finite("axialMm", axialMm);
+            Checks.positive("feedMmPerRev", feedMmPerRev);
+            Checks.nonNegative("seconds", seconds);
         }
 
         @Override

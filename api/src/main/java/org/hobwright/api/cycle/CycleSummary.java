@@ -2,7 +2,8 @@ package org.hobwright.api.cycle;
 
 import java.util.List;
 import java.util.Optional;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 import org.hobwright.api.job.QualityTargets;
 
 /**
@@ -22,6 +23,7 @@ import org.hobwright.api.job.QualityTargets;
  *                              the planner (the job's own, or defaults from the tolerance class or the
  *                              cutting-data table); empty where no limit applies
  */
+@ApiStatus(since = "1.0")
 public record CycleSummary(
         double cycleTimeS,
         List<PassSummary> passes,
@@ -36,17 +38,17 @@ public record CycleSummary(
         QualityTargets targets) {
 
     public CycleSummary {
-        Validate.nonNegative("cycleTimeS", cycleTimeS);
-        passes = List.copyOf(Validate.present("passes", passes));
-        Validate.positive("finishFeedMmPerRev", finishFeedMmPerRev);
-        Validate.nonNegative("approachLengthMm", approachLengthMm);
-        Validate.nonNegative("overrunLengthMm", overrunLengthMm);
-        Validate.nonNegative("feedMarkFlankUm", feedMarkFlankUm);
-        Validate.nonNegative("feedMarkRootUm", feedMarkRootUm);
-        Validate.nonNegative("envelopingDepthUm", envelopingDepthUm);
-        Validate.nonNegative("maxChipThicknessMm", maxChipThicknessMm);
-        Validate.present("fastest", fastest);
-        Validate.present("targets", targets);
+        Checks.nonNegative("cycleTimeS", cycleTimeS);
+        passes = List.copyOf(Checks.present("passes", passes));
+        Checks.positive("finishFeedMmPerRev", finishFeedMmPerRev);
+        Checks.nonNegative("approachLengthMm", approachLengthMm);
+        Checks.nonNegative("overrunLengthMm", overrunLengthMm);
+        Checks.nonNegative("feedMarkFlankUm", feedMarkFlankUm);
+        Checks.nonNegative("feedMarkRootUm", feedMarkRootUm);
+        Checks.nonNegative("envelopingDepthUm", envelopingDepthUm);
+        Checks.nonNegative("maxChipThicknessMm", maxChipThicknessMm);
+        Checks.present("fastest", fastest);
+        Checks.present("targets", targets);
     }
 
     /** A summary without resolved targets (a planner that does not resolve them). */

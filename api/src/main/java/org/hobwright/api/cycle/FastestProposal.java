@@ -1,6 +1,7 @@
 package org.hobwright.api.cycle;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The optimiser's shortest cycle for the job's limits, shown beside the user's plan.
@@ -14,17 +15,18 @@ import org.hobwright.api.Validate;
  * @param finishFeedMmPerRev  proposed finishing feed, mm per work revolution
  * @param passes              proposed number of passes
  */
+@ApiStatus(since = "1.0")
 public record FastestProposal(double cycleTimeS, double lowerBoundS, String bindingLimit,
                               double cuttingSpeedMPerMin, double hobRpm, double roughFeedMmPerRev,
                               double finishFeedMmPerRev, int passes) {
     public FastestProposal {
-        Validate.positive("cycleTimeS", cycleTimeS);
-        Validate.positive("lowerBoundS", lowerBoundS);
-        Validate.text("bindingLimit", bindingLimit);
-        Validate.positive("cuttingSpeedMPerMin", cuttingSpeedMPerMin);
-        Validate.positive("hobRpm", hobRpm);
-        Validate.positive("roughFeedMmPerRev", roughFeedMmPerRev);
-        Validate.positive("finishFeedMmPerRev", finishFeedMmPerRev);
-        Validate.atLeast("passes", passes, 1);
+        Checks.positive("cycleTimeS", cycleTimeS);
+        Checks.positive("lowerBoundS", lowerBoundS);
+        Checks.text("bindingLimit", bindingLimit);
+        Checks.positive("cuttingSpeedMPerMin", cuttingSpeedMPerMin);
+        Checks.positive("hobRpm", hobRpm);
+        Checks.positive("roughFeedMmPerRev", roughFeedMmPerRev);
+        Checks.positive("finishFeedMmPerRev", finishFeedMmPerRev);
+        Checks.atLeast("passes", passes, 1);
     }
 }

@@ -1,7 +1,8 @@
 package org.hobwright.api.cycle;
 
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * Computed gear geometry (ISO 21771 relations), mm and degrees.
@@ -22,6 +23,7 @@ import org.hobwright.api.Validate;
  * @param tipThicknessMm             normal tooth thickness at the tip circle
  * @param virtualTeeth               virtual number of teeth z_n
  */
+@ApiStatus(since = "1.0")
 public record GearData(
         double transverseModuleMm,
         double transversePressureAngleDeg,
@@ -39,20 +41,20 @@ public record GearData(
         double virtualTeeth) {
 
     public GearData {
-        Validate.positive("transverseModuleMm", transverseModuleMm);
-        Validate.finite("transversePressureAngleDeg", transversePressureAngleDeg);
-        Validate.positive("referenceDiameterMm", referenceDiameterMm);
-        Validate.positive("baseDiameterMm", baseDiameterMm);
-        Validate.positive("tipDiameterMm", tipDiameterMm);
-        Validate.finite("rootDiameterMm", rootDiameterMm);
-        Validate.finite("addendumMm", addendumMm);
-        Validate.finite("dedendumMm", dedendumMm);
-        Validate.finite("wholeDepthMm", wholeDepthMm);
-        Validate.finite("baseHelixAngleDeg", baseHelixAngleDeg);
-        Validate.present("leadMm", leadMm);
-        leadMm.ifPresent(v -> Validate.finite("leadMm", v));
-        Validate.finite("toothThicknessMm", toothThicknessMm);
-        Validate.finite("tipThicknessMm", tipThicknessMm);
-        Validate.finite("virtualTeeth", virtualTeeth);
+        Checks.positive("transverseModuleMm", transverseModuleMm);
+        Checks.finite("transversePressureAngleDeg", transversePressureAngleDeg);
+        Checks.positive("referenceDiameterMm", referenceDiameterMm);
+        Checks.positive("baseDiameterMm", baseDiameterMm);
+        Checks.positive("tipDiameterMm", tipDiameterMm);
+        Checks.finite("rootDiameterMm", rootDiameterMm);
+        Checks.finite("addendumMm", addendumMm);
+        Checks.finite("dedendumMm", dedendumMm);
+        Checks.finite("wholeDepthMm", wholeDepthMm);
+        Checks.finite("baseHelixAngleDeg", baseHelixAngleDeg);
+        Checks.present("leadMm", leadMm);
+        leadMm.ifPresent(v -> Checks.finite("leadMm", v));
+        Checks.finite("toothThicknessMm", toothThicknessMm);
+        Checks.finite("tipThicknessMm", tipThicknessMm);
+        Checks.finite("virtualTeeth", virtualTeeth);
     }
 }

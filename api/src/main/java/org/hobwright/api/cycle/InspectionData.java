@@ -1,6 +1,7 @@
 package org.hobwright.api.cycle;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * Values for the inspector, mm.
@@ -14,6 +15,7 @@ import org.hobwright.api.Validate;
  * @param chordalThicknessMm     chordal tooth thickness at the reference circle (normal section)
  * @param chordalHeightMm        chordal height from the tip to that chord
  */
+@ApiStatus(since = "1.0")
 public record InspectionData(
         int spanTeeth,
         double spanWidthMm,
@@ -25,12 +27,12 @@ public record InspectionData(
         double chordalHeightMm) {
 
     public InspectionData {
-        Validate.atLeast("spanTeeth", spanTeeth, 1);
-        Validate.finite("spanWidthMm", spanWidthMm);
-        Validate.finite("spanContactDiameterMm", spanContactDiameterMm);
-        Validate.positive("pinDiameterMm", pinDiameterMm);
-        Validate.finite("overPinsMm", overPinsMm);
-        Validate.finite("chordalThicknessMm", chordalThicknessMm);
-        Validate.finite("chordalHeightMm", chordalHeightMm);
+        Checks.atLeast("spanTeeth", spanTeeth, 1);
+        Checks.finite("spanWidthMm", spanWidthMm);
+        Checks.finite("spanContactDiameterMm", spanContactDiameterMm);
+        Checks.positive("pinDiameterMm", pinDiameterMm);
+        Checks.finite("overPinsMm", overPinsMm);
+        Checks.finite("chordalThicknessMm", chordalThicknessMm);
+        Checks.finite("chordalHeightMm", chordalHeightMm);
     }
 }

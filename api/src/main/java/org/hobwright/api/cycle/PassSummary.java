@@ -1,6 +1,7 @@
 package org.hobwright.api.cycle;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * One axial pass.
@@ -14,16 +15,17 @@ import org.hobwright.api.Validate;
  * @param axialTravelMm     whole feed travel of the pass, mm
  * @param seconds           time of the pass including its rapids, s
  */
+@ApiStatus(since = "1.0")
 public record PassSummary(int pass, double infeedDiameterMm, double radialDepthMm, double feedMmPerRev,
                           double approachMm, double overrunMm, double axialTravelMm, double seconds) {
     public PassSummary {
-        Validate.atLeast("pass", pass, 1);
-        Validate.positive("infeedDiameterMm", infeedDiameterMm);
-        Validate.positive("radialDepthMm", radialDepthMm);
-        Validate.positive("feedMmPerRev", feedMmPerRev);
-        Validate.nonNegative("approachMm", approachMm);
-        Validate.nonNegative("overrunMm", overrunMm);
-        Validate.positive("axialTravelMm", axialTravelMm);
-        Validate.nonNegative("seconds", seconds);
+        Checks.atLeast("pass", pass, 1);
+        Checks.positive("infeedDiameterMm", infeedDiameterMm);
+        Checks.positive("radialDepthMm", radialDepthMm);
+        Checks.positive("feedMmPerRev", feedMmPerRev);
+        Checks.nonNegative("approachMm", approachMm);
+        Checks.nonNegative("overrunMm", overrunMm);
+        Checks.positive("axialTravelMm", axialTravelMm);
+        Checks.nonNegative("seconds", seconds);
     }
 }

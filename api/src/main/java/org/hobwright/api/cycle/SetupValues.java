@@ -1,6 +1,7 @@
 package org.hobwright.api.cycle;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * What the setter needs before the first part: diameters, swivel, speeds, ratio.
@@ -23,6 +24,7 @@ import org.hobwright.api.Validate;
  * @param differentialDegPerMm   helical addition, degrees of work rotation per mm of axial travel (0 for spur)
  * @param hobShiftMm             hob shift position for this part, mm
  */
+@ApiStatus(since = "1.0")
 public record SetupValues(
         double blankDiameterMm,
         double touchOffDiameterMm,
@@ -42,21 +44,21 @@ public record SetupValues(
         double hobShiftMm) {
 
     public SetupValues {
-        Validate.positive("blankDiameterMm", blankDiameterMm);
-        Validate.positive("touchOffDiameterMm", touchOffDiameterMm);
-        Validate.positive("finalInfeedDiameterMm", finalInfeedDiameterMm);
-        Validate.finite("leadAngleDeg", leadAngleDeg);
-        Validate.finite("swivelAngleDeg", swivelAngleDeg);
-        Validate.finite("swivelSettingDeg", swivelSettingDeg);
-        Validate.text("swivelSettingText", swivelSettingText);
-        Validate.text("swivelAngleDms", swivelAngleDms);
-        Validate.text("swivelDirection", swivelDirection);
-        Validate.positive("cuttingSpeedMPerMin", cuttingSpeedMPerMin);
-        Validate.positive("hobRpm", hobRpm);
-        Validate.positive("workRpm", workRpm);
-        Validate.atLeast("syncHobTurns", syncHobTurns, 1);
-        Validate.atLeast("syncWorkTurns", syncWorkTurns, 1);
-        Validate.finite("differentialDegPerMm", differentialDegPerMm);
-        Validate.nonNegative("hobShiftMm", hobShiftMm);
+        Checks.positive("blankDiameterMm", blankDiameterMm);
+        Checks.positive("touchOffDiameterMm", touchOffDiameterMm);
+        Checks.positive("finalInfeedDiameterMm", finalInfeedDiameterMm);
+        Checks.finite("leadAngleDeg", leadAngleDeg);
+        Checks.finite("swivelAngleDeg", swivelAngleDeg);
+        Checks.finite("swivelSettingDeg", swivelSettingDeg);
+        Checks.text("swivelSettingText", swivelSettingText);
+        Checks.text("swivelAngleDms", swivelAngleDms);
+        Checks.text("swivelDirection", swivelDirection);
+        Checks.positive("cuttingSpeedMPerMin", cuttingSpeedMPerMin);
+        Checks.positive("hobRpm", hobRpm);
+        Checks.positive("workRpm", workRpm);
+        Checks.atLeast("syncHobTurns", syncHobTurns, 1);
+        Checks.atLeast("syncWorkTurns", syncWorkTurns, 1);
+        Checks.finite("differentialDegPerMm", differentialDegPerMm);
+        Checks.nonNegative("hobShiftMm", hobShiftMm);
     }
 }

@@ -1,7 +1,8 @@
 package org.hobwright.api.cycle;
 
 import java.util.List;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * Result of the generating simulation of one tooth space (transverse section).
@@ -16,6 +17,7 @@ import org.hobwright.api.Validate;
  * @param nominalProfile             the true involute flanks on the same axes, mm
  * @param deviation                  deviation along the roll length: x = roll length mm, y = deviation mm
  */
+@ApiStatus(since = "1.0")
 public record SimulationData(
         double profileDeviationMaxMm,
         double envelopingDepthMm,
@@ -27,12 +29,12 @@ public record SimulationData(
         List<Point> deviation) {
 
     public SimulationData {
-        Validate.nonNegative("profileDeviationMaxMm", profileDeviationMaxMm);
-        Validate.nonNegative("envelopingDepthMm", envelopingDepthMm);
-        Validate.nonNegative("closedFormEnvelopingDepthMm", closedFormEnvelopingDepthMm);
-        Validate.nonNegative("activeInvoluteStartDiameterMm", activeInvoluteStartDiameterMm);
-        simulatedProfile = List.copyOf(Validate.present("simulatedProfile", simulatedProfile));
-        nominalProfile = List.copyOf(Validate.present("nominalProfile", nominalProfile));
-        deviation = List.copyOf(Validate.present("deviation", deviation));
+        Checks.nonNegative("profileDeviationMaxMm", profileDeviationMaxMm);
+        Checks.nonNegative("envelopingDepthMm", envelopingDepthMm);
+        Checks.nonNegative("closedFormEnvelopingDepthMm", closedFormEnvelopingDepthMm);
+        Checks.nonNegative("activeInvoluteStartDiameterMm", activeInvoluteStartDiameterMm);
+        simulatedProfile = List.copyOf(Checks.present("simulatedProfile", simulatedProfile));
+        nominalProfile = List.copyOf(Checks.present("nominalProfile", nominalProfile));
+        deviation = List.copyOf(Checks.present("deviation", deviation));
     }
 }

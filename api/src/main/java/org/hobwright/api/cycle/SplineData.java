@@ -1,7 +1,8 @@
 package org.hobwright.api.cycle;
 
 import java.util.Optional;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The limits of an external spline by its standard, its measurement over pins and, when the hob fits,
@@ -31,6 +32,7 @@ import org.hobwright.api.Validate;
  * @param overPinsMinMm         lower limit of the measurement over pins
  * @param form                  the form check, when the hob fits the spline
  */
+@ApiStatus(since = "1.1")
 public record SplineData(String standard, double pitchDiameterMm, double baseDiameterMm, double majorDiameterMaxMm,
                          double majorDiameterMinMm, double minorDiameterMaxMm, double minorDiameterMinMm,
                          double formDiameterMm, double formClearanceMm, double basicToothThicknessMm,
@@ -39,18 +41,18 @@ public record SplineData(String standard, double pitchDiameterMm, double baseDia
                          double effectiveVariationMm, double pinDiameterMm, String pinOrigin, double overPinsMaxMm,
                          double overPinsMinMm, Optional<Form> form) {
     public SplineData {
-        Validate.text("standard", standard);
+        Checks.text("standard", standard);
         for (double v : new double[] {pitchDiameterMm, baseDiameterMm, majorDiameterMaxMm, majorDiameterMinMm,
             minorDiameterMaxMm, minorDiameterMinMm, formDiameterMm, toothThicknessMaxMm, toothThicknessMinMm,
             pinDiameterMm, overPinsMaxMm, overPinsMinMm}) {
-            Validate.positive("spline value", v);
+            Checks.positive("spline value", v);
         }
         for (double v : new double[] {formClearanceMm, basicToothThicknessMm, effectiveThicknessMaxMm,
             effectiveThicknessMinMm, allowanceMm, totalToleranceMm, effectiveVariationMm}) {
-            Validate.finite("spline value", v);
+            Checks.finite("spline value", v);
         }
-        Validate.text("pinOrigin", pinOrigin);
-        Validate.present("form", form);
+        Checks.text("pinOrigin", pinOrigin);
+        Checks.present("form", form);
     }
 
     /**
@@ -62,13 +64,14 @@ public record SplineData(String standard, double pitchDiameterMm, double baseDia
      * @param rootDiameterMinMm       root diameter cut at S_min
      * @param rootDiameterMaxMm       root diameter cut at S_max
      */
+    @ApiStatus(since = "1.1")
     public record Form(boolean formReached, double involuteStartDiameterMm, double rootDiameterMm,
                        double rootDiameterMinMm, double rootDiameterMaxMm) {
         public Form {
-            Validate.positive("involuteStartDiameterMm", involuteStartDiameterMm);
-            Validate.positive("rootDiameterMm", rootDiameterMm);
-            Validate.positive("rootDiameterMinMm", rootDiameterMinMm);
-            Validate.positive("rootDiameterMaxMm", rootDiameterMaxMm);
+            Checks.positive("involuteStartDiameterMm", involuteStartDiameterMm);
+            Checks.positive("rootDiameterMm", rootDiameterMm);
+            Checks.positive("rootDiameterMinMm", rootDiameterMinMm);
+            Checks.positive("rootDiameterMaxMm", rootDiameterMaxMm);
         }
     }
 }

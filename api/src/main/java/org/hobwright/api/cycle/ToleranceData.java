@@ -1,6 +1,7 @@
 package org.hobwright.api.cycle;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * Flank tolerances of ISO 1328-1:2013 for one flank tolerance class, micrometres, rounded by the
@@ -16,6 +17,7 @@ import org.hobwright.api.Validate;
  * @param helixFormUm         f_fβT
  * @param helixTotalUm        F_βT
  */
+@ApiStatus(since = "1.0")
 public record ToleranceData(
         int flankToleranceClass,
         double singlePitchUm,
@@ -28,14 +30,14 @@ public record ToleranceData(
         double helixTotalUm) {
 
     public ToleranceData {
-        Validate.range("flankToleranceClass", flankToleranceClass, 1, 11);
-        Validate.positive("singlePitchUm", singlePitchUm);
-        Validate.positive("totalPitchUm", totalPitchUm);
-        Validate.positive("profileSlopeUm", profileSlopeUm);
-        Validate.positive("profileFormUm", profileFormUm);
-        Validate.positive("profileTotalUm", profileTotalUm);
-        Validate.positive("helixSlopeUm", helixSlopeUm);
-        Validate.positive("helixFormUm", helixFormUm);
-        Validate.positive("helixTotalUm", helixTotalUm);
+        Checks.range("flankToleranceClass", flankToleranceClass, 1, 11);
+        Checks.positive("singlePitchUm", singlePitchUm);
+        Checks.positive("totalPitchUm", totalPitchUm);
+        Checks.positive("profileSlopeUm", profileSlopeUm);
+        Checks.positive("profileFormUm", profileFormUm);
+        Checks.positive("profileTotalUm", profileTotalUm);
+        Checks.positive("helixSlopeUm", helixSlopeUm);
+        Checks.positive("helixFormUm", helixFormUm);
+        Checks.positive("helixTotalUm", helixTotalUm);
     }
 }

@@ -2,7 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * How the user wants the gear cut. Empty values are filled by the planner from the cutting-data
@@ -23,6 +24,7 @@ import org.hobwright.api.Validate;
  * @param hobShiftEveryParts  shift after this many parts, at least 1
  * @param fastest             true to let the optimiser propose the shortest cycle beside the user's plan
  */
+@ApiStatus(since = "1.0")
 public record CycleSettings(
         String workMaterial,
         OptionalDouble cuttingSpeedMPerMin,
@@ -40,21 +42,247 @@ public record CycleSettings(
         boolean fastest) {
 
     public CycleSettings {
-        Validate.text("cycle.workMaterial", workMaterial);
+        Checks.text("cycle.workMaterial", workMaterial);
         Objects.requireNonNull(cuttingSpeedMPerMin, "cuttingSpeedMPerMin");
-        Validate.positive("cycle.cuttingSpeed", cuttingSpeedMPerMin);
+        Checks.positive("cycle.cuttingSpeed", cuttingSpeedMPerMin);
         Objects.requireNonNull(roughFeedMmPerRev, "roughFeedMmPerRev");
-        Validate.positive("cycle.roughFeed", roughFeedMmPerRev);
+        Checks.positive("cycle.roughFeed", roughFeedMmPerRev);
         Objects.requireNonNull(finishFeedMmPerRev, "finishFeedMmPerRev");
-        Validate.positive("cycle.finishFeed", finishFeedMmPerRev);
+        Checks.positive("cycle.finishFeed", finishFeedMmPerRev);
         Objects.requireNonNull(roughDepthMm, "roughDepthMm");
-        Validate.positive("cycle.roughDepth", roughDepthMm);
-        Validate.nonNegative("cycle.finishStock", finishStockMm);
-        Validate.present("cycle.method", method);
-        Validate.nonNegative("cycle.axialClearance", axialClearanceMm);
-        Validate.nonNegative("cycle.radialClearance", radialClearanceMm);
-        Validate.present("cycle.targets", targets);
-        Validate.nonNegative("cycle.hobShiftPerPart", hobShiftPerPartMm);
-        Validate.atLeast("cycle.hobShiftEveryParts", hobShiftEveryParts, 1);
+        Checks.positive("cycle.roughDepth", roughDepthMm);
+        Checks.nonNegative("cycle.finishStock", finishStockMm);
+        Checks.present("cycle.method", method);
+        Checks.nonNegative("cycle.axialClearance", axialClearanceMm);
+        Checks.nonNegative("cycle.radialClearance", radialClearanceMm);
+        Checks.present("cycle.targets", targets);
+        Checks.nonNegative("cycle.hobShiftPerPart", hobShiftPerPartMm);
+        Checks.atLeast("cycle.hobShiftEveryParts", hobShiftEveryParts, 1);
+    }
+
+    /**
+     * This cycle settings with another {@code workMaterial}.
+     *
+     * @param workMaterial work material key of the cutting-data table, e.g. {@code steel-case-hardening}
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withWorkMaterial(String workMaterial) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code cuttingSpeedMPerMin}.
+     *
+     * @param cuttingSpeedMPerMin cutting speed v_c at the hob tip, m/min
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withCuttingSpeedMPerMin(OptionalDouble cuttingSpeedMPerMin) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with a {@code cuttingSpeedMPerMin} given.
+     *
+     * @param cuttingSpeedMPerMin the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withCuttingSpeedMPerMin(double cuttingSpeedMPerMin) {
+        return withCuttingSpeedMPerMin(OptionalDouble.of(cuttingSpeedMPerMin));
+    }
+
+    /**
+     * This cycle settings with another {@code roughFeedMmPerRev}.
+     *
+     * @param roughFeedMmPerRev axial feed per work revolution for roughing passes, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withRoughFeedMmPerRev(OptionalDouble roughFeedMmPerRev) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with a {@code roughFeedMmPerRev} given.
+     *
+     * @param roughFeedMmPerRev the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withRoughFeedMmPerRev(double roughFeedMmPerRev) {
+        return withRoughFeedMmPerRev(OptionalDouble.of(roughFeedMmPerRev));
+    }
+
+    /**
+     * This cycle settings with another {@code finishFeedMmPerRev}.
+     *
+     * @param finishFeedMmPerRev axial feed per work revolution for the finishing pass, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withFinishFeedMmPerRev(OptionalDouble finishFeedMmPerRev) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with a {@code finishFeedMmPerRev} given.
+     *
+     * @param finishFeedMmPerRev the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withFinishFeedMmPerRev(double finishFeedMmPerRev) {
+        return withFinishFeedMmPerRev(OptionalDouble.of(finishFeedMmPerRev));
+    }
+
+    /**
+     * This cycle settings with another {@code roughDepthMm}.
+     *
+     * @param roughDepthMm largest radial depth of one roughing pass, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withRoughDepthMm(OptionalDouble roughDepthMm) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with a {@code roughDepthMm} given.
+     *
+     * @param roughDepthMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withRoughDepthMm(double roughDepthMm) {
+        return withRoughDepthMm(OptionalDouble.of(roughDepthMm));
+    }
+
+    /**
+     * This cycle settings with another {@code finishStockMm}.
+     *
+     * @param finishStockMm radial stock left for the finishing pass, mm (0 = one pass to full depth)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withFinishStockMm(double finishStockMm) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code method}.
+     *
+     * @param method climb or conventional
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withMethod(HobbingMethod method) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code axialClearanceMm}.
+     *
+     * @param axialClearanceMm air gap before the approach and after the overrun, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withAxialClearanceMm(double axialClearanceMm) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code radialClearanceMm}.
+     *
+     * @param radialClearanceMm radial gap between the hob tip and the blank when rapid moving, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withRadialClearanceMm(double radialClearanceMm) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code coolant}.
+     *
+     * @param coolant coolant on during the cut
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withCoolant(boolean coolant) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code targets}.
+     *
+     * @param targets quality limits
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withTargets(QualityTargets targets) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code hobShiftPerPartMm}.
+     *
+     * @param hobShiftPerPartMm hob shift applied between parts, mm (0 = no shifting)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withHobShiftPerPartMm(double hobShiftPerPartMm) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code hobShiftEveryParts}.
+     *
+     * @param hobShiftEveryParts shift after this many parts, at least 1
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withHobShiftEveryParts(int hobShiftEveryParts) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+    }
+
+    /**
+     * This cycle settings with another {@code fastest}.
+     *
+     * @param fastest true to let the optimiser propose the shortest cycle beside the user's plan
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withFastest(boolean fastest) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest);
     }
 }

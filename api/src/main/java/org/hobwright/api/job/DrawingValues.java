@@ -2,6 +2,7 @@ package org.hobwright.api.job;
 
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
+import org.hobwright.api.ApiStatus;
 
 /**
  * Values printed on the gear drawing, entered so the drawing check can compare them with the
@@ -16,6 +17,7 @@ import java.util.OptionalInt;
  * @param pinDiameterMm     pin or ball diameter of the printed over-pins value
  * @param overPinsMm        measurement over two pins or balls as printed
  */
+@ApiStatus(since = "1.0")
 public record DrawingValues(
         OptionalDouble pitchDiameterMm,
         OptionalDouble outsideDiameterMm,
@@ -40,5 +42,189 @@ public record DrawingValues(
         java.util.Objects.requireNonNull(spanWidthMm, "spanWidthMm");
         java.util.Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
         java.util.Objects.requireNonNull(overPinsMm, "overPinsMm");
+    }
+
+    /**
+     * This drawing values with another {@code pitchDiameterMm}.
+     *
+     * @param pitchDiameterMm reference (pitch) diameter as printed
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withPitchDiameterMm(OptionalDouble pitchDiameterMm) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code pitchDiameterMm} given.
+     *
+     * @param pitchDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withPitchDiameterMm(double pitchDiameterMm) {
+        return withPitchDiameterMm(OptionalDouble.of(pitchDiameterMm));
+    }
+
+    /**
+     * This drawing values with another {@code outsideDiameterMm}.
+     *
+     * @param outsideDiameterMm tip (outside) diameter as printed
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withOutsideDiameterMm(OptionalDouble outsideDiameterMm) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code outsideDiameterMm} given.
+     *
+     * @param outsideDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withOutsideDiameterMm(double outsideDiameterMm) {
+        return withOutsideDiameterMm(OptionalDouble.of(outsideDiameterMm));
+    }
+
+    /**
+     * This drawing values with another {@code rootDiameterMm}.
+     *
+     * @param rootDiameterMm root diameter as printed
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withRootDiameterMm(OptionalDouble rootDiameterMm) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code rootDiameterMm} given.
+     *
+     * @param rootDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withRootDiameterMm(double rootDiameterMm) {
+        return withRootDiameterMm(OptionalDouble.of(rootDiameterMm));
+    }
+
+    /**
+     * This drawing values with another {@code wholeDepthMm}.
+     *
+     * @param wholeDepthMm whole depth (tooth depth) as printed
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withWholeDepthMm(OptionalDouble wholeDepthMm) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code wholeDepthMm} given.
+     *
+     * @param wholeDepthMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withWholeDepthMm(double wholeDepthMm) {
+        return withWholeDepthMm(OptionalDouble.of(wholeDepthMm));
+    }
+
+    /**
+     * This drawing values with another {@code spanTeeth}.
+     *
+     * @param spanTeeth number of teeth spanned for the printed span value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withSpanTeeth(OptionalInt spanTeeth) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code spanTeeth} given.
+     *
+     * @param spanTeeth the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withSpanTeeth(int spanTeeth) {
+        return withSpanTeeth(OptionalInt.of(spanTeeth));
+    }
+
+    /**
+     * This drawing values with another {@code spanWidthMm}.
+     *
+     * @param spanWidthMm span measurement (base tangent length) as printed
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withSpanWidthMm(OptionalDouble spanWidthMm) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code spanWidthMm} given.
+     *
+     * @param spanWidthMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withSpanWidthMm(double spanWidthMm) {
+        return withSpanWidthMm(OptionalDouble.of(spanWidthMm));
+    }
+
+    /**
+     * This drawing values with another {@code pinDiameterMm}.
+     *
+     * @param pinDiameterMm pin or ball diameter of the printed over-pins value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withPinDiameterMm(OptionalDouble pinDiameterMm) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code pinDiameterMm} given.
+     *
+     * @param pinDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withPinDiameterMm(double pinDiameterMm) {
+        return withPinDiameterMm(OptionalDouble.of(pinDiameterMm));
+    }
+
+    /**
+     * This drawing values with another {@code overPinsMm}.
+     *
+     * @param overPinsMm measurement over two pins or balls as printed
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withOverPinsMm(OptionalDouble overPinsMm) {
+        return new DrawingValues(pitchDiameterMm, outsideDiameterMm, rootDiameterMm, wholeDepthMm, spanTeeth,
+                spanWidthMm, pinDiameterMm, overPinsMm);
+    }
+
+    /**
+     * This drawing values with a {@code overPinsMm} given.
+     *
+     * @param overPinsMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public DrawingValues withOverPinsMm(double overPinsMm) {
+        return withOverPinsMm(OptionalDouble.of(overPinsMm));
     }
 }

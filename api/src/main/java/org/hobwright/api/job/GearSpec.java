@@ -4,7 +4,8 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The gear as the drawing specifies it, in canonical units (mm, degrees).
@@ -27,6 +28,7 @@ import org.hobwright.api.Validate;
  * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class 1 to 11, if the drawing gives one
  * @param drawing               values printed on the drawing, for the drawing check
  */
+@ApiStatus(since = "1.0")
 public record GearSpec(
         String partName,
         int teeth,
@@ -45,24 +47,24 @@ public record GearSpec(
         DrawingValues drawing) {
 
     public GearSpec {
-        Validate.text("partName", partName);
-        Validate.atLeast("teeth", teeth, 1);
-        Validate.present("pitch", pitch);
-        Validate.range("pressureAngle", pressureAngleDeg, 1, 45);
-        Validate.range("helixAngle", helixAngleDeg, 0, 60);
-        Validate.present("hand", hand);
-        Validate.positive("faceWidth", faceWidthMm);
-        Validate.range("profileShift", profileShift, -3, 3);
-        Validate.range("thicknessAllowance", thicknessAllowanceMm, -10, 10);
-        Validate.text("toothSystem", toothSystem);
+        Checks.text("partName", partName);
+        Checks.atLeast("teeth", teeth, 1);
+        Checks.present("pitch", pitch);
+        Checks.range("pressureAngle", pressureAngleDeg, 1, 45);
+        Checks.range("helixAngle", helixAngleDeg, 0, 60);
+        Checks.present("hand", hand);
+        Checks.positive("faceWidth", faceWidthMm);
+        Checks.range("profileShift", profileShift, -3, 3);
+        Checks.range("thicknessAllowance", thicknessAllowanceMm, -10, 10);
+        Checks.text("toothSystem", toothSystem);
         Objects.requireNonNull(customProportions, "customProportions");
         Objects.requireNonNull(blankDiameterMm, "blankDiameterMm");
-        Validate.positive("blankDiameter", blankDiameterMm);
+        Checks.positive("blankDiameter", blankDiameterMm);
         Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
-        Validate.positive("pinDiameter", pinDiameterMm);
+        Checks.positive("pinDiameter", pinDiameterMm);
         Objects.requireNonNull(flankToleranceClass, "flankToleranceClass");
-        Validate.range("flankToleranceClass", flankToleranceClass, 1, 11);
-        Validate.present("drawing", drawing);
+        Checks.range("flankToleranceClass", flankToleranceClass, 1, 11);
+        Checks.present("drawing", drawing);
         if (toothSystem.equals("custom") != customProportions.isPresent()) {
             throw new IllegalArgumentException(
                     "customProportions must be given exactly when toothSystem is \"custom\", toothSystem was \""
@@ -83,5 +85,244 @@ public record GearSpec(
     /** Normal module in mm. */
     public double moduleMm() {
         return pitch.moduleMm();
+    }
+
+    /**
+     * This gear spec with another {@code partName}.
+     *
+     * @param partName the part name or number, for headers and file names
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPartName(String partName) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code teeth}.
+     *
+     * @param teeth number of teeth z, at least 1 (the wizard's checks ask for far more)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withTeeth(int teeth) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code pitch}.
+     *
+     * @param pitch normal pitch as given on the drawing
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPitch(Pitch pitch) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code pressureAngleDeg}.
+     *
+     * @param pressureAngleDeg normal pressure angle α_n, degrees, 1 to 45
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPressureAngleDeg(double pressureAngleDeg) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code helixAngleDeg}.
+     *
+     * @param helixAngleDeg helix angle β at the reference cylinder, magnitude, degrees, 0 to 60 (0 = spur)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withHelixAngleDeg(double helixAngleDeg) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code hand}.
+     *
+     * @param hand helix hand (ignored for spur gears)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withHand(Hand hand) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code faceWidthMm}.
+     *
+     * @param faceWidthMm face width b, mm, greater than 0
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withFaceWidthMm(double faceWidthMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code profileShift}.
+     *
+     * @param profileShift profile shift coefficient x (in normal module), -3 to 3
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withProfileShift(double profileShift) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code thicknessAllowanceMm}.
+     *
+     * @param thicknessAllowanceMm normal tooth-thickness allowance E_sn, mm (negative thins the tooth), -10 to 10
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withThicknessAllowanceMm(double thicknessAllowanceMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code toothSystem}.
+     *
+     * @param toothSystem tooth system identifier ({@code iso53-a}, {@code iso53-b}, {@code iso53-c}, {
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withToothSystem(String toothSystem) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with another {@code customProportions}.
+     *
+     * @param customProportions basic rack factors, present exactly when the tooth system is {@code custom}
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withCustomProportions(Optional<ToothProportions> customProportions) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code customProportions} given.
+     *
+     * @param customProportions the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withCustomProportions(ToothProportions customProportions) {
+        return withCustomProportions(Optional.of(customProportions));
+    }
+
+    /**
+     * This gear spec with another {@code blankDiameterMm}.
+     *
+     * @param blankDiameterMm the diameter the blank is turned to before hobbing, if known
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withBlankDiameterMm(OptionalDouble blankDiameterMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code blankDiameterMm} given.
+     *
+     * @param blankDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withBlankDiameterMm(double blankDiameterMm) {
+        return withBlankDiameterMm(OptionalDouble.of(blankDiameterMm));
+    }
+
+    /**
+     * This gear spec with another {@code pinDiameterMm}.
+     *
+     * @param pinDiameterMm the pin or ball the inspector will use, if chosen
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPinDiameterMm(OptionalDouble pinDiameterMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code pinDiameterMm} given.
+     *
+     * @param pinDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withPinDiameterMm(double pinDiameterMm) {
+        return withPinDiameterMm(OptionalDouble.of(pinDiameterMm));
+    }
+
+    /**
+     * This gear spec with another {@code flankToleranceClass}.
+     *
+     * @param flankToleranceClass ISO 1328-1:2013 flank tolerance class 1 to 11, if the drawing gives one
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withFlankToleranceClass(OptionalInt flankToleranceClass) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
+    }
+
+    /**
+     * This gear spec with a {@code flankToleranceClass} given.
+     *
+     * @param flankToleranceClass the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withFlankToleranceClass(int flankToleranceClass) {
+        return withFlankToleranceClass(OptionalInt.of(flankToleranceClass));
+    }
+
+    /**
+     * This gear spec with another {@code drawing}.
+     *
+     * @param drawing values printed on the drawing, for the drawing check
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withDrawing(DrawingValues drawing) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing);
     }
 }

@@ -1,6 +1,9 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 /** Hand of a helix or of a hob thread. Right hand counts positive in signed angles. */
+@ApiStatus(since = "1.0")
 public enum Hand {
     /** Right hand: the helix advances away from the viewer when turned clockwise. */
     RIGHT(1),

@@ -1,7 +1,8 @@
 package org.hobwright.api.job;
 
 import java.util.Optional;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * One hobbing job: the gear, the hob, the machine and how to cut, all in canonical units, plus
@@ -15,25 +16,104 @@ import org.hobwright.api.Validate;
  * @param cycle   the cycle settings
  * @param spline  for a spline job, what makes the part a spline; the gear then is its spur-gear frame
  */
+@ApiStatus(since = "1.0")
 public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine,
-                     CycleSettings cycle, Optional<SplineSpec> spline) {
+                     CycleSettings cycle, @ApiStatus(since = "1.1") Optional<SplineSpec> spline) {
     public HobJob {
-        Validate.text("name", name);
-        Validate.present("units", units);
-        Validate.present("gear", gear);
-        Validate.present("hob", hob);
-        Validate.present("machine", machine);
-        Validate.present("cycle", cycle);
-        Validate.present("spline", spline);
+        Checks.text("name", name);
+        Checks.present("units", units);
+        Checks.present("gear", gear);
+        Checks.present("hob", hob);
+        Checks.present("machine", machine);
+        Checks.present("cycle", cycle);
+        Checks.present("spline", spline);
     }
 
-    /** A gear job. */
+    /** A gear job, as api 1.0 built it. */
     public HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine, CycleSettings cycle) {
         this(name, units, gear, hob, machine, cycle, Optional.empty());
     }
 
     /** What the job cuts: {@code gear} or {@code spline}. */
+    @ApiStatus(since = "1.1")
     public String part() {
         return spline.isPresent() ? "spline" : "gear";
+    }
+
+    /**
+     * This hob job with another {@code spline}.
+     *
+     * @param spline what makes the part a spline, or empty for a gear
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withSpline(Optional<SplineSpec> spline) {
+        return new HobJob(name, units, gear, hob, machine, cycle, spline);
+    }
+
+    /**
+     * This hob job with another {@code name}.
+     *
+     * @param name job name, used for output file names
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withName(String name) {
+        return new HobJob(name, units, gear, hob, machine, cycle, spline);
+    }
+
+    /**
+     * This hob job with another {@code units}.
+     *
+     * @param units the user's length unit
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withUnits(Units units) {
+        return new HobJob(name, units, gear, hob, machine, cycle, spline);
+    }
+
+    /**
+     * This hob job with another {@code gear}.
+     *
+     * @param gear the gear
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withGear(GearSpec gear) {
+        return new HobJob(name, units, gear, hob, machine, cycle, spline);
+    }
+
+    /**
+     * This hob job with another {@code hob}.
+     *
+     * @param hob the hob
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withHob(HobSpec hob) {
+        return new HobJob(name, units, gear, hob, machine, cycle, spline);
+    }
+
+    /**
+     * This hob job with another {@code machine}.
+     *
+     * @param machine the machine profile
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withMachine(MachineProfile machine) {
+        return new HobJob(name, units, gear, hob, machine, cycle, spline);
+    }
+
+    /**
+     * This hob job with another {@code cycle}.
+     *
+     * @param cycle the cycle settings
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobJob withCycle(CycleSettings cycle) {
+        return new HobJob(name, units, gear, hob, machine, cycle, spline);
     }
 }

@@ -3,7 +3,8 @@ package org.hobwright.api.job;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The hob, in canonical units.
@@ -22,6 +23,7 @@ import org.hobwright.api.Validate;
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
  * @param splineProfile       for a spline hob, its root form, tip radius and addendum
  */
+@ApiStatus(since = "1.0")
 public record HobSpec(
         Pitch pitch,
         double pressureAngleDeg,
@@ -34,27 +36,27 @@ public record HobSpec(
         double lengthMm,
         OptionalDouble maxRpm,
         String material,
-        Optional<SplineHobProfile> splineProfile) {
+        @ApiStatus(since = "1.1") Optional<SplineHobProfile> splineProfile) {
 
     public HobSpec {
-        Validate.present("hob.pitch", pitch);
-        Validate.range("hob.pressureAngle", pressureAngleDeg, 1, 45);
-        Validate.range("hob.starts", starts, 1, 12);
-        Validate.present("hob.hand", hand);
-        Validate.positive("hob.outsideDiameter", outsideDiameterMm);
+        Checks.present("hob.pitch", pitch);
+        Checks.range("hob.pressureAngle", pressureAngleDeg, 1, 45);
+        Checks.range("hob.starts", starts, 1, 12);
+        Checks.present("hob.hand", hand);
+        Checks.positive("hob.outsideDiameter", outsideDiameterMm);
         Objects.requireNonNull(leadAngleDeg, "leadAngleDeg");
-        Validate.range("hob.leadAngle", leadAngleDeg, 0, 45);
+        Checks.range("hob.leadAngle", leadAngleDeg, 0, 45);
         Objects.requireNonNull(referenceDiameterMm, "referenceDiameterMm");
-        Validate.positive("hob.referenceDiameter", referenceDiameterMm);
-        Validate.atLeast("hob.gashes", gashes, 1);
-        Validate.positive("hob.length", lengthMm);
+        Checks.positive("hob.referenceDiameter", referenceDiameterMm);
+        Checks.atLeast("hob.gashes", gashes, 1);
+        Checks.positive("hob.length", lengthMm);
         Objects.requireNonNull(maxRpm, "maxRpm");
-        Validate.positive("hob.maxRpm", maxRpm);
-        Validate.text("hob.material", material);
+        Checks.positive("hob.maxRpm", maxRpm);
+        Checks.text("hob.material", material);
         Objects.requireNonNull(splineProfile, "splineProfile");
     }
 
-    /** A gear hob (no spline profile). */
+    /** A gear hob (no spline profile), as api 1.0 built it. */
     public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
                    OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
                    OptionalDouble maxRpm, String material) {
@@ -62,8 +64,186 @@ public record HobSpec(
                 lengthMm, maxRpm, material, Optional.empty());
     }
 
+    /**
+     * This hob spec with another {@code splineProfile}.
+     *
+     * @param splineProfile the spline hob's root form, tip radius and addendum, or empty for a gear hob
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withSplineProfile(Optional<SplineHobProfile> splineProfile) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
     /** Normal module in mm. */
     public double moduleMm() {
         return pitch.moduleMm();
+    }
+
+    /**
+     * This hob spec with another {@code pitch}.
+     *
+     * @param pitch normal pitch of the hob (must match the gear's)
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withPitch(Pitch pitch) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code pressureAngleDeg}.
+     *
+     * @param pressureAngleDeg normal pressure angle of the hob profile, degrees, 1 to 45
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withPressureAngleDeg(double pressureAngleDeg) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code starts}.
+     *
+     * @param starts number of starts (threads) z₀, 1 to 12
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withStarts(int starts) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code hand}.
+     *
+     * @param hand thread hand
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withHand(Hand hand) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code outsideDiameterMm}.
+     *
+     * @param outsideDiameterMm outside (tip) diameter d_a0, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withOutsideDiameterMm(double outsideDiameterMm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code leadAngleDeg}.
+     *
+     * @param leadAngleDeg lead angle γ as marked on the hob, degrees (magnitude), if marked
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withLeadAngleDeg(OptionalDouble leadAngleDeg) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with a {@code leadAngleDeg} given.
+     *
+     * @param leadAngleDeg the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withLeadAngleDeg(double leadAngleDeg) {
+        return withLeadAngleDeg(OptionalDouble.of(leadAngleDeg));
+    }
+
+    /**
+     * This hob spec with another {@code referenceDiameterMm}.
+     *
+     * @param referenceDiameterMm reference (pitch) diameter d_m0, mm, if known; otherwise derived from the
+     *     outside diameter and the tooth system's hob addendum
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withReferenceDiameterMm(OptionalDouble referenceDiameterMm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with a {@code referenceDiameterMm} given.
+     *
+     * @param referenceDiameterMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withReferenceDiameterMm(double referenceDiameterMm) {
+        return withReferenceDiameterMm(OptionalDouble.of(referenceDiameterMm));
+    }
+
+    /**
+     * This hob spec with another {@code gashes}.
+     *
+     * @param gashes number of gashes (flutes), at least 1
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withGashes(int gashes) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code lengthMm}.
+     *
+     * @param lengthMm usable hob length, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withLengthMm(double lengthMm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code maxRpm}.
+     *
+     * @param maxRpm the hob maker's speed limit, rpm, if given
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withMaxRpm(OptionalDouble maxRpm) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+    }
+
+    /**
+     * This hob spec with a {@code maxRpm} given.
+     *
+     * @param maxRpm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withMaxRpm(double maxRpm) {
+        return withMaxRpm(OptionalDouble.of(maxRpm));
+    }
+
+    /**
+     * This hob spec with another {@code material}.
+     *
+     * @param material cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withMaterial(String material) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
     }
 }

@@ -2,7 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * What a machine can do and how it counts. Every machine-specific word of the NC program comes
@@ -27,6 +28,7 @@ import org.hobwright.api.Validate;
  * @param syncSettleS        dwell after switching synchronisation on, s
  * @param maxHobDiameterMm   largest hob the holder takes, mm
  */
+@ApiStatus(since = "1.0")
 public record MachineProfile(
         String name,
         String dialect,
@@ -48,12 +50,12 @@ public record MachineProfile(
         double maxHobDiameterMm) {
 
     public MachineProfile {
-        Validate.text("machine.name", name);
-        Validate.text("machine.dialect", dialect);
-        Validate.nonNegative("machine.workMinRpm", workMinRpm);
-        Validate.positive("machine.workMaxRpm", workMaxRpm);
-        Validate.nonNegative("machine.hobMinRpm", hobMinRpm);
-        Validate.positive("machine.hobMaxRpm", hobMaxRpm);
+        Checks.text("machine.name", name);
+        Checks.text("machine.dialect", dialect);
+        Checks.nonNegative("machine.workMinRpm", workMinRpm);
+        Checks.positive("machine.workMaxRpm", workMaxRpm);
+        Checks.nonNegative("machine.hobMinRpm", hobMinRpm);
+        Checks.positive("machine.hobMaxRpm", hobMaxRpm);
         if (workMinRpm > workMaxRpm) {
             throw new IllegalArgumentException("machine.workMinRpm (" + workMinRpm
                     + ") must not exceed machine.workMaxRpm (" + workMaxRpm + ")");
@@ -62,25 +64,270 @@ public record MachineProfile(
             throw new IllegalArgumentException("machine.hobMinRpm (" + hobMinRpm
                     + ") must not exceed machine.hobMaxRpm (" + hobMaxRpm + ")");
         }
-        Validate.positive("machine.maxSyncRatio", maxSyncRatio);
-        Validate.present("machine.swivel", swivel);
-        Validate.nonNegative("machine.radialMin", radialMinMm);
-        Validate.positive("machine.radialMax", radialMaxMm);
+        Checks.positive("machine.maxSyncRatio", maxSyncRatio);
+        Checks.present("machine.swivel", swivel);
+        Checks.nonNegative("machine.radialMin", radialMinMm);
+        Checks.positive("machine.radialMax", radialMaxMm);
         if (radialMinMm >= radialMaxMm) {
             throw new IllegalArgumentException("machine.radialMin (" + radialMinMm
                     + ") must be less than machine.radialMax (" + radialMaxMm + ")");
         }
-        Validate.finite("machine.axialMin", axialMinMm);
-        Validate.finite("machine.axialMax", axialMaxMm);
+        Checks.finite("machine.axialMin", axialMinMm);
+        Checks.finite("machine.axialMax", axialMaxMm);
         if (axialMinMm >= axialMaxMm) {
             throw new IllegalArgumentException("machine.axialMin (" + axialMinMm
                     + ") must be less than machine.axialMax (" + axialMaxMm + ")");
         }
         Objects.requireNonNull(hobShiftTravelMm, "hobShiftTravelMm");
-        hobShiftTravelMm.ifPresent(v -> Validate.positive("machine.hobShiftTravel", v));
-        Validate.positive("machine.rapid", rapidMmPerMin);
-        Validate.positive("machine.maxFeed", maxFeedMmPerMin);
-        Validate.nonNegative("machine.syncSettle", syncSettleS);
-        Validate.positive("machine.maxHobDiameter", maxHobDiameterMm);
+        hobShiftTravelMm.ifPresent(v -> Checks.positive("machine.hobShiftTravel", v));
+        Checks.positive("machine.rapid", rapidMmPerMin);
+        Checks.positive("machine.maxFeed", maxFeedMmPerMin);
+        Checks.nonNegative("machine.syncSettle", syncSettleS);
+        Checks.positive("machine.maxHobDiameter", maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code name}.
+     *
+     * @param name profile name (letters, digits, '.', '_', '-')
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withName(String name) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code dialect}.
+     *
+     * @param dialect name of the NC dialect file used to post for this machine
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withDialect(String dialect) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code workMinRpm}.
+     *
+     * @param workMinRpm lowest stable work-spindle speed, rpm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withWorkMinRpm(double workMinRpm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code workMaxRpm}.
+     *
+     * @param workMaxRpm highest work-spindle speed, rpm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withWorkMaxRpm(double workMaxRpm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code hobMinRpm}.
+     *
+     * @param hobMinRpm lowest hob-spindle (live tool) speed, rpm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withHobMinRpm(double hobMinRpm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code hobMaxRpm}.
+     *
+     * @param hobMaxRpm highest hob-spindle speed, rpm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withHobMaxRpm(double hobMaxRpm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code maxSyncRatio}.
+     *
+     * @param maxSyncRatio largest hob turns per work turn the synchronisation accepts
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withMaxSyncRatio(double maxSyncRatio) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code followsHelix}.
+     *
+     * @param followsHelix true when the control can add the helical (differential) work rotation
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withFollowsHelix(boolean followsHelix) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code swivel}.
+     *
+     * @param swivel the swivel holder or axis
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withSwivel(SwivelHolder swivel) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code radialMinMm}.
+     *
+     * @param radialMinMm smallest reachable diameter of the hob axis path, as a work diameter, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withRadialMinMm(double radialMinMm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code radialMaxMm}.
+     *
+     * @param radialMaxMm largest reachable work diameter for the hob, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withRadialMaxMm(double radialMaxMm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code axialMinMm}.
+     *
+     * @param axialMinMm axial travel limit toward the chuck (the far face side), mm from the entry face
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withAxialMinMm(double axialMinMm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code axialMaxMm}.
+     *
+     * @param axialMaxMm axial travel limit away from the chuck, mm from the entry face
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withAxialMaxMm(double axialMaxMm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code hobShiftTravelMm}.
+     *
+     * @param hobShiftTravelMm travel of a hob-shift axis along the hob, mm, if the machine has one
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withHobShiftTravelMm(OptionalDouble hobShiftTravelMm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with a {@code hobShiftTravelMm} given.
+     *
+     * @param hobShiftTravelMm the value
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withHobShiftTravelMm(double hobShiftTravelMm) {
+        return withHobShiftTravelMm(OptionalDouble.of(hobShiftTravelMm));
+    }
+
+    /**
+     * This machine profile with another {@code rapidMmPerMin}.
+     *
+     * @param rapidMmPerMin rapid traverse rate used for time estimates, mm/min
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withRapidMmPerMin(double rapidMmPerMin) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code maxFeedMmPerMin}.
+     *
+     * @param maxFeedMmPerMin highest programmable feed rate, mm/min
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withMaxFeedMmPerMin(double maxFeedMmPerMin) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code syncSettleS}.
+     *
+     * @param syncSettleS dwell after switching synchronisation on, s
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withSyncSettleS(double syncSettleS) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+    }
+
+    /**
+     * This machine profile with another {@code maxHobDiameterMm}.
+     *
+     * @param maxHobDiameterMm largest hob the holder takes, mm
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withMaxHobDiameterMm(double maxHobDiameterMm) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
     }
 }

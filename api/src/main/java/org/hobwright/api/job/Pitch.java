@@ -1,6 +1,7 @@
 package org.hobwright.api.job;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * The normal pitch of a gear or hob as the drawing gives it: a module in millimetres or a
@@ -9,6 +10,7 @@ import org.hobwright.api.Validate;
  *
  * <p>m = 25.4 / P (module in mm, P in 1/in), the definition of diametral pitch.
  */
+@ApiStatus(since = "1.0")
 public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
 
     /** Normal module in millimetres. */
@@ -24,9 +26,10 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
      *
      * @param mm normal module, mm, greater than 0
      */
+    @ApiStatus(since = "1.0")
     record Module(double mm) implements Pitch {
         public Module {
-            Validate.positive("module", mm);
+            Checks.positive("module", mm);
         }
 
         @Override
@@ -40,9 +43,10 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
      *
      * @param perInch normal diametral pitch, 1/in, greater than 0
      */
+    @ApiStatus(since = "1.0")
     record Diametral(double perInch) implements Pitch {
         public Diametral {
-            Validate.positive("diametralPitch", perInch);
+            Checks.positive("diametralPitch", perInch);
         }
 
         @Override

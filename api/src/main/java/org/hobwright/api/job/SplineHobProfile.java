@@ -1,7 +1,8 @@
 package org.hobwright.api.job;
 
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * What a spline hob adds to a gear hob: the root form its tip cuts, its tip radius and its addendum.
@@ -12,10 +13,11 @@ import org.hobwright.api.Validate;
  * @param addendumMm  h_a0, tip line below the datum line where the hob tooth is π m / 2 thick; empty: the
  *                    standard's
  */
+@ApiStatus(since = "1.1")
 public record SplineHobProfile(String root, double tipRadiusMm, OptionalDouble addendumMm) {
     public SplineHobProfile {
-        Validate.text("hob.root", root);
-        Validate.nonNegative("hob.tipRadius", tipRadiusMm);
-        Validate.positive("hob.addendum", java.util.Objects.requireNonNull(addendumMm, "addendumMm"));
+        Checks.text("hob.root", root);
+        Checks.nonNegative("hob.tipRadius", tipRadiusMm);
+        Checks.positive("hob.addendum", java.util.Objects.requireNonNull(addendumMm, "addendumMm"));
     }
 }

@@ -2,7 +2,8 @@ package org.hobwright.api.job;
 
 import java.util.Objects;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * What makes a job's part an external involute spline, beside the spur-gear frame its {@link GearSpec}
@@ -17,21 +18,22 @@ import org.hobwright.api.Validate;
  * @param totalToleranceMm     T + λ (DIN 5480 T_G) from the drawing
  * @param effectiveVariationMm λ (DIN 5480 T_eff) from the drawing
  */
+@ApiStatus(since = "1.1")
 public record SplineSpec(String standard, String root, int toleranceClass, String fitClass,
                          OptionalDouble referenceDiameterMm, OptionalDouble allowanceMm,
                          OptionalDouble totalToleranceMm, OptionalDouble effectiveVariationMm) {
     public SplineSpec {
-        Validate.text("spline.standard", standard);
-        Validate.text("spline.root", root);
-        Validate.range("spline.toleranceClass", toleranceClass, 1, 16);
-        Validate.text("spline.fitClass", fitClass);
+        Checks.text("spline.standard", standard);
+        Checks.text("spline.root", root);
+        Checks.range("spline.toleranceClass", toleranceClass, 1, 16);
+        Checks.text("spline.fitClass", fitClass);
         Objects.requireNonNull(referenceDiameterMm, "referenceDiameterMm");
-        Validate.positive("spline.referenceDiameter", referenceDiameterMm);
+        Checks.positive("spline.referenceDiameter", referenceDiameterMm);
         Objects.requireNonNull(allowanceMm, "allowanceMm");
-        Validate.range("spline.allowance", allowanceMm, -10, 10);
+        Checks.range("spline.allowance", allowanceMm, -10, 10);
         Objects.requireNonNull(totalToleranceMm, "totalToleranceMm");
-        Validate.positive("spline.totalTolerance", totalToleranceMm);
+        Checks.positive("spline.totalTolerance", totalToleranceMm);
         Objects.requireNonNull(effectiveVariationMm, "effectiveVariationMm");
-        Validate.range("spline.effectiveVariation", effectiveVariationMm, 0, 10);
+        Checks.range("spline.effectiveVariation", effectiveVariationMm, 0, 10);
     }
 }

@@ -1,10 +1,13 @@
 package org.hobwright.api.job;
 
+import org.hobwright.api.ApiStatus;
+
 /**
  * The length unit a job, template or report is written in. Everything inside Hobwright is in
  * millimetres; this enum is the one place where lengths cross between the user's unit and
  * millimetres.
  */
+@ApiStatus(since = "1.0")
 public enum Units {
     /** Millimetres. */
     MM("mm", 1.0),

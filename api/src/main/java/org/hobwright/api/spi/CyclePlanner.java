@@ -1,5 +1,6 @@
 package org.hobwright.api.spi;
 
+import org.hobwright.api.ApiStatus;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
 
@@ -7,12 +8,19 @@ import org.hobwright.api.job.HobJob;
  * Turns a job into a checked, planned cycle. Found with {@link java.util.ServiceLoader}; the
  * wizard module provides one.
  */
-public interface CyclePlanner {
+@ApiStatus(since = "1.0")
+public interface CyclePlanner extends Provider {
 
     /** Stable identifier, e.g. {@code hobwright}. */
+    @Override
     String id();
 
-    /** The SPI version this planner was built for ({@link Spi#VERSION}). */
+    /**
+     * The SPI generation of the first api: return {@link Spi#VERSION}. Which api the provider was
+     * built against is {@link #apiVersion()}, which the lookup reads.
+     *
+     * @return {@link Spi#VERSION}
+     */
     int spiVersion();
 
     /**
@@ -21,6 +29,7 @@ public interface CyclePlanner {
      *
      * @param job the job
      * @return the cycle, never null
+     * @throws NullPointerException naming the job when it is null (a broken contract, not a finding)
      */
     HobCycle plan(HobJob job);
 }

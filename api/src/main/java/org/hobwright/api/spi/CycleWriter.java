@@ -1,5 +1,6 @@
 package org.hobwright.api.spi;
 
+import org.hobwright.api.ApiStatus;
 import org.hobwright.api.cycle.HobCycle;
 
 /**
@@ -9,12 +10,19 @@ import org.hobwright.api.cycle.HobCycle;
  * <p>A writer formats what the cycle says; it computes no geometry. It produces texts, not files:
  * the caller writes every file of a run atomically, or none when any writer refuses.
  */
-public interface CycleWriter {
+@ApiStatus(since = "1.0")
+public interface CycleWriter extends Provider {
 
     /** Stable identifier: {@code nc}, {@code csv}, {@code sheet}, {@code report}, or a host's own. */
+    @Override
     String id();
 
-    /** The SPI version this writer was built for ({@link Spi#VERSION}). */
+    /**
+     * The SPI generation of the first api: return {@link Spi#VERSION}. Which api the provider was
+     * built against is {@link #apiVersion()}, which the lookup reads.
+     *
+     * @return {@link Spi#VERSION}
+     */
     int spiVersion();
 
     /** One line saying what this writer produces. */
@@ -35,7 +43,9 @@ public interface CycleWriter {
     }
 
     /**
-     * Formats the cycle. Must not throw for a cycle with errors: it returns a refusal instead.
+     * Formats the cycle. Must not throw for a cycle with errors: it returns a refusal instead, and
+     * so for a cycle planned for another job than {@code context.job()}
+     * ({@link HobCycle#plannedFor()}).
      *
      * @param cycle   the planned cycle
      * @param context the job and the resources the writer may need

@@ -1,6 +1,7 @@
 package org.hobwright.api.spi;
 
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * One file a writer produced, not yet on disk. The caller writes all files of a run atomically
@@ -9,12 +10,13 @@ import org.hobwright.api.Validate;
  * @param fileName plain file name (no folder part)
  * @param text     contents, written as UTF-8
  */
+@ApiStatus(since = "1.0")
 public record OutputFile(String fileName, String text) {
     public OutputFile {
-        Validate.text("fileName", fileName);
+        Checks.text("fileName", fileName);
         if (fileName.contains("/") || fileName.contains("\\") || fileName.startsWith(".")) {
             throw new IllegalArgumentException("fileName must be a plain file name, was \"" + fileName + "\"");
         }
-        Validate.present("text", text);
+        Checks.present("text", text);
     }
 }

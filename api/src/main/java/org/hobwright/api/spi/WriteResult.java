@@ -1,7 +1,8 @@
 package org.hobwright.api.spi;
 
 import java.util.List;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 import org.hobwright.api.check.Finding;
 
 /**
@@ -10,10 +11,11 @@ import org.hobwright.api.check.Finding;
  * @param files    files to write (empty when the findings hold an error)
  * @param findings problems met while writing (e.g. a dialect that does not load)
  */
+@ApiStatus(since = "1.0")
 public record WriteResult(List<OutputFile> files, List<Finding> findings) {
     public WriteResult {
-        files = List.copyOf(Validate.present("files", files));
-        findings = List.copyOf(Validate.present("findings", findings));
+        files = List.copyOf(Checks.present("files", files));
+        findings = List.copyOf(Checks.present("findings", findings));
         if (Finding.anyError(findings) && !files.isEmpty()) {
             throw new IllegalArgumentException("a write result with error findings must have no files");
         }

@@ -2,7 +2,8 @@ package org.hobwright.api.wizard;
 
 import java.util.List;
 import java.util.OptionalDouble;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 
 /**
  * One field of a wizard step, described so any host can render it.
@@ -13,23 +14,49 @@ import org.hobwright.api.Validate;
  * @param type         how the value is entered
  * @param defaultValue the default as text (empty when there is none and the field is optional)
  * @param choices      allowed values for {@link FieldType#CHOICE}, else empty
- * @param min          smallest allowed number, if any
- * @param max          largest allowed number, if any
+ * @param min          smallest allowed number, if any; allowed itself unless {@code minExclusive}
+ * @param max          largest allowed number, if any (allowed itself)
  * @param required     true when the step cannot complete without a value
  * @param help         one or two sentences of help
+ * @param minExclusive true when the number must be greater than {@code min} (e.g. a length that must
+ *                     be greater than 0), false when {@code min} itself is allowed
  */
+@ApiStatus(since = "1.0")
 public record FieldSpec(String key, String label, String unit, FieldType type, String defaultValue,
                         List<String> choices, OptionalDouble min, OptionalDouble max, boolean required,
-                        String help) {
+                        String help, @ApiStatus(since = "1.1") boolean minExclusive) {
     public FieldSpec {
-        Validate.text("key", key);
-        Validate.text("label", label);
-        Validate.present("unit", unit);
-        Validate.present("type", type);
-        Validate.present("defaultValue", defaultValue);
-        choices = List.copyOf(Validate.present("choices", choices));
-        Validate.present("min", min);
-        Validate.present("max", max);
-        Validate.text("help", help);
+        Checks.text("key", key);
+        Checks.text("label", label);
+        Checks.present("unit", unit);
+        Checks.present("type", type);
+        Checks.present("defaultValue", defaultValue);
+        choices = List.copyOf(Checks.present("choices", choices));
+        Checks.present("min", min);
+        Checks.present("max", max);
+        Checks.text("help", help);
+        if (minExclusive && min.isEmpty()) {
+            throw new IllegalArgumentException("minExclusive needs a min, field " + key);
+        }
+    }
+
+    /** A field whose {@code min}, when given, is allowed itself (as the first api had it). */
+    public FieldSpec(String key, String label, String unit, FieldType type, String defaultValue,
+                     List<String> choices, OptionalDouble min, OptionalDouble max, boolean required, String help) {
+        this(key, label, unit, type, defaultValue, choices, min, max, required, help, false);
+    }
+
+    /**
+     * True when a number is within this field's limits ({@code min}, exclusive when
+     * {@code minExclusive}, and {@code max}).
+     *
+     * @param value the number
+     * @return true when the limits allow it
+     */
+    @ApiStatus(since = "1.1")
+    public boolean allows(double value) {
+        boolean low = min.isPresent() && (minExclusive ? value <= min.getAsDouble() : value < min.getAsDouble());
+        boolean high = max.isPresent() && value > max.getAsDouble();
+        return Double.isFinite(value) && !low && !high;
     }
 }

@@ -1,6 +1,9 @@
 package org.hobwright.api.wizard;
 
+import org.hobwright.api.ApiStatus;
+
 /** How a host should let the user enter a field. */
+@ApiStatus(since = "1.0")
 public enum FieldType {
     /** A decimal number in the field's unit. */
     NUMBER,

@@ -1,6 +1,9 @@
 package org.hobwright.api.wizard;
 
+import org.hobwright.api.ApiStatus;
+
 /** The wizard's steps, in order. */
+@ApiStatus(since = "1.0")
 public enum StepId {
     /** The gear from the drawing. */
     GEAR,

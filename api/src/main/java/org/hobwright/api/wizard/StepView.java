@@ -1,7 +1,8 @@
 package org.hobwright.api.wizard;
 
 import java.util.List;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 import org.hobwright.api.check.Finding;
 
 /**
@@ -13,13 +14,14 @@ import org.hobwright.api.check.Finding;
  * @param findings open findings of this step
  * @param summary  lines to show (REVIEW: setup, inspection, cycle time, quality), else empty
  */
+@ApiStatus(since = "1.0")
 public record StepView(StepId id, String title, List<FieldSpec> fields, List<Finding> findings,
                        List<String> summary) {
     public StepView {
-        Validate.present("id", id);
-        Validate.text("title", title);
-        fields = List.copyOf(Validate.present("fields", fields));
-        findings = List.copyOf(Validate.present("findings", findings));
-        summary = List.copyOf(Validate.present("summary", summary));
+        Checks.present("id", id);
+        Checks.text("title", title);
+        fields = List.copyOf(Checks.present("fields", fields));
+        findings = List.copyOf(Checks.present("findings", findings));
+        summary = List.copyOf(Checks.present("summary", summary));
     }
 }

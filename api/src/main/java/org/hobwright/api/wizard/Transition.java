@@ -1,7 +1,8 @@
 package org.hobwright.api.wizard;
 
 import java.util.List;
-import org.hobwright.api.Validate;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
 import org.hobwright.api.check.Finding;
 
 /**
@@ -11,9 +12,10 @@ import org.hobwright.api.check.Finding;
  * @param current  the step the wizard is on now
  * @param findings findings that blocked the move, or warnings shown on the way
  */
+@ApiStatus(since = "1.0")
 public record Transition(boolean moved, StepId current, List<Finding> findings) {
     public Transition {
-        Validate.present("current", current);
-        findings = List.copyOf(Validate.present("findings", findings));
+        Checks.present("current", current);
+        findings = List.copyOf(Checks.present("findings", findings));
     }
 }

@@ -2,6 +2,7 @@ package org.hobwright.api.wizard;
 
 import java.util.List;
 import java.util.Optional;
+import org.hobwright.api.ApiStatus;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
@@ -11,6 +12,7 @@ import org.hobwright.api.job.HobJob;
  * passes the user's answers to {@link #answer}, and moves with {@link #next} and {@link #back}.
  * Nothing here prints; every problem comes back as a finding.
  */
+@ApiStatus(since = "1.0")
 public interface Wizard {
 
     /** The current step as a host should render it. */

@@ -23,7 +23,8 @@ public abstract class CyclePlannerContract {
     void declaresStableIdAndVersion() {
         assertFalse(planner().id().isBlank());
         assertEquals(planner().id(), planner().id());
-        assertEquals(Spi.VERSION, planner().spiVersion());
+        assertEquals(Spi.API_VERSION, planner().apiVersion(), "built against this api");
+        assertFalse(planner().buildVersion().isBlank());
     }
 
     @Test

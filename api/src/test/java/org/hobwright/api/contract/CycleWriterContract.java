@@ -28,7 +28,8 @@ public abstract class CycleWriterContract {
     @Test
     void declaresStableIdAndVersion() {
         assertFalse(writer().id().isBlank());
-        assertEquals(Spi.VERSION, writer().spiVersion());
+        assertEquals(Spi.API_VERSION, writer().apiVersion(), "built against this api");
+        assertFalse(writer().buildVersion().isBlank());
     }
 
     @Test

@@ -23,13 +23,23 @@ public final class CsvWriter implements CycleWriter {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
+    public String buildVersion() {
+        return PostFindings.BUILD_VERSION;
+    }
+
+    @Override
     public String description() {
         return "cycle CSV for host adapters: one row per step, mm and s";
     }
 
     @Override
     public WriteResult write(HobCycle cycle, WriteContext context) {
-        Optional<WriteResult> refusal = PostFindings.refusal(cycle, id());
+        Optional<WriteResult> refusal = PostFindings.refusal(cycle, context, id());
         return refusal.orElseGet(() -> WriteResult.of(
                 new OutputFile(context.job().name() + ".csv", CycleCsv.write(cycle.steps()))));
     }

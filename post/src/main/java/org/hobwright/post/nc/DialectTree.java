@@ -151,8 +151,10 @@ final class DialectTree {
             return v == null ? null : DialectTree.text(v);
         }
 
+        /** A whole number, also when written with a zero fraction ({@code 80.0}); others are not plain. */
         Integer integer(String key) {
-            return scalar(key, JsonNode::isInt, JsonNode::intValue);
+            return scalar(key, n -> n.isInt() || n.isFloatingPointNumber() && n.canConvertToExactIntegral()
+                    && n.canConvertToInt(), JsonNode::asInt);
         }
 
         Boolean bool(String key) {

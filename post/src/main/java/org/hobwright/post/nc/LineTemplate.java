@@ -85,4 +85,22 @@ public record LineTemplate(String source, List<Object> segments) {
         }
         return sb.toString();
     }
+
+    /**
+     * The address letters written right before a placeholder ({@code S} in {@code G97 S{workRpm} M3}),
+     * for messages that name a word; empty when the line does not use the placeholder.
+     */
+    public Optional<String> address(Placeholder p) {
+        for (int i = 0; i < segments.size(); i++) {
+            if (segments.get(i) == p) {
+                String before = i > 0 && segments.get(i - 1) instanceof String t ? t : "";
+                int start = before.length();
+                while (start > 0 && Character.isLetter(before.charAt(start - 1))) {
+                    start--;
+                }
+                return Optional.of(before.substring(start));
+            }
+        }
+        return Optional.empty();
+    }
 }

@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.Map;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
-import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
 
 /**
@@ -16,15 +15,12 @@ import org.hobwright.text.Decimal;
  */
 final class NcRenderer {
 
-
     private final Dialect d;
     private final HobJob job;
-    private final Units units;
 
     NcRenderer(Dialect dialect, HobJob job) {
         this.d = dialect;
         this.job = job;
-        this.units = job.units();
     }
 
     /**
@@ -40,7 +36,7 @@ final class NcRenderer {
     private record Block(String text, TemplateKey from) {
     }
 
-    Rendered render(NcProgram program) {
+    Rendered render(List<PostedOp> program) {
         List<Block> first = blocks(program, 100_000);
         List<Block> blocks = blocks(program, first.size());
         List<String> out = new ArrayList<>(d.prologue());
@@ -65,15 +61,16 @@ final class NcRenderer {
         return new Rendered(out, findings);
     }
 
-    private List<Block> blocks(NcProgram program, int lineCountBound) {
+    private List<Block> blocks(List<PostedOp> program, int lineCountBound) {
         int numberWidth = d.numbering().map(nb -> nb.word().length()
                 + String.valueOf(nb.start() + (long) nb.step() * lineCountBound).length() + 1).orElse(0);
         List<Block> out = new ArrayList<>();
-        for (NcOp op : program.ops()) {
+        for (PostedOp posted : program) {
+            NcOp op = posted.op();
             if (op instanceof NcOp.Remark r) {
                 comment(r.text(), numberWidth, out);
             } else {
-                Map<Placeholder, String> values = values(op);
+                Map<Placeholder, String> values = values(posted);
                 if (op instanceof NcOp.Synchronise) {
                     add(TemplateKey.WORK_SPINDLE, values, out);
                 }
@@ -118,45 +115,25 @@ final class NcRenderer {
         throw new IllegalArgumentException("no template for " + op);
     }
 
-    private Map<Placeholder, String> values(NcOp op) {
+    private Map<Placeholder, String> values(PostedOp posted) {
+        NcOp op = posted.op();
         Map<Placeholder, String> v = new EnumMap<>(Placeholder.class);
         v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(d.programNumber()));
         v.put(Placeholder.PROGRAM_NAME, CommentText.clean(job.name(), d.comments()));
+        posted.numbers().forEach((p, n) -> v.put(p, Decimal.text(n, d.trailingZeros())));
         if (op instanceof NcOp.Synchronise s) {
             v.put(Placeholder.HOB_TURNS, String.valueOf(s.sync().hobTurns()));
             v.put(Placeholder.WORK_TURNS, String.valueOf(s.sync().workTurns()));
-            v.put(Placeholder.HOB_RPM, number(s.sync().hobRpm(), d.decimals().rpm()));
-            v.put(Placeholder.WORK_RPM, number(s.sync().workRpm(), d.decimals().rpm()));
             v.put(Placeholder.HOB_DIR, d.hobWords().get(s.sync().hobRotation()));
             v.put(Placeholder.WORK_DIR, d.workWords().get(s.workRotation()));
-            v.put(Placeholder.DIFFERENTIAL, number(s.sync().differentialDegPerMm() * units.toMm(1),
-                    d.decimals().differential()));
-        } else if (op instanceof NcOp.Wait w) {
-            v.put(Placeholder.SECONDS, number(w.seconds(), d.decimals().s()));
-            v.put(Placeholder.MILLISECONDS, String.valueOf(Math.round(w.seconds() * 1000)));
-        } else if (op instanceof NcOp.SwivelTo s) {
-            Dialect.Axis a = d.swivel().orElseThrow();
-            v.put(Placeholder.SWIVEL, a.letter() + number(a.sign() * s.machineAngleDeg(), d.decimals().deg()));
-        } else if (op instanceof NcOp.ShiftTo s) {
-            Dialect.Axis a = d.shift().orElseThrow();
-            v.put(Placeholder.SHIFT, a.letter() + length(a.sign() * s.positionMm()));
-        } else if (op instanceof NcOp.Move m) {
-            Dialect.Axis r = d.radial();
-            double radial = r.diameter() ? m.diameterMm() : m.diameterMm() / 2;
-            v.put(Placeholder.RADIAL, r.letter() + length(r.sign() * radial));
-            v.put(Placeholder.AXIAL, d.axial().letter() + length(d.axial().sign() * m.axialMm()));
-            if (!m.rapid()) {
-                v.put(Placeholder.FEED, number(units.fromMm(m.feedMmPerRev()), d.decimals().feed(units)));
-            }
+        } else if (op instanceof NcOp.SwivelTo) {
+            v.put(Placeholder.SWIVEL, d.swivel().orElseThrow().letter() + v.get(Placeholder.SWIVEL));
+        } else if (op instanceof NcOp.ShiftTo) {
+            v.put(Placeholder.SHIFT, d.shift().orElseThrow().letter() + v.get(Placeholder.SHIFT));
+        } else if (op instanceof NcOp.Move) {
+            v.put(Placeholder.RADIAL, d.radial().letter() + v.get(Placeholder.RADIAL));
+            v.put(Placeholder.AXIAL, d.axial().letter() + v.get(Placeholder.AXIAL));
         }
         return v;
-    }
-
-    private String length(double mm) {
-        return number(units.fromMm(mm), d.decimals().length(units));
-    }
-
-    private String number(double value, int decimals) {
-        return Decimal.fixed(value, decimals, d.trailingZeros());
     }
 }

@@ -21,7 +21,9 @@ import org.hobwright.post.PostFindings;
 /**
  * Writes the NC program ({@code JOB.nc}) with the dialect given in the context under
  * {@link WriteContext#DIALECT}. Refuses, with findings naming the dialect line, when the dialect
- * does not load or lacks a template the cycle needs, and refuses when a safety invariant is broken.
+ * does not load or lacks a template the cycle needs, and refuses when a safety invariant is broken
+ * on the words as they would be written ({@link PostedWords} rounds them, {@link SafetyCheck}
+ * judges them, {@link NcRenderer} writes exactly those numbers).
  */
 public final class NcWriter implements CycleWriter {
     private static final int KEPT = 16;
@@ -40,13 +42,23 @@ public final class NcWriter implements CycleWriter {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
+    public String buildVersion() {
+        return PostFindings.BUILD_VERSION;
+    }
+
+    @Override
     public String description() {
         return "NC program for the machine's control, from its dialect file";
     }
 
     @Override
     public WriteResult write(HobCycle cycle, WriteContext context) {
-        Optional<WriteResult> refusal = PostFindings.refusal(cycle, id());
+        Optional<WriteResult> refusal = PostFindings.refusal(cycle, context, id());
         if (refusal.isPresent()) {
             return refusal.get();
         }
@@ -68,12 +80,14 @@ public final class NcWriter implements CycleWriter {
         }
         NcProgram program = NcProgramBuilder.build(cycle, NcHeader.lines(cycle, context, dialect),
                 context.job().units());
-        List<Finding> unsafe = SafetyCheck.check(program, cycle.setup().orElseThrow().finalInfeedDiameterMm(),
-                context.job());
+        WordUnits units = new WordUnits(dialect, context.job().units());
+        PostLimits limits = PostLimits.of(context.job(), cycle.setup().orElseThrow());
+        List<PostedOp> posted = PostedWords.of(program, dialect, units, limits);
+        List<Finding> unsafe = SafetyCheck.check(posted, dialect, units, limits);
         if (!unsafe.isEmpty()) {
             return WriteResult.refused(unsafe);
         }
-        NcRenderer.Rendered r = new NcRenderer(dialect, context.job()).render(program);
+        NcRenderer.Rendered r = new NcRenderer(dialect, context.job()).render(posted);
         if (!r.findings().isEmpty()) {
             return WriteResult.refused(r.findings());
         }

@@ -20,7 +20,7 @@ import org.hobwright.text.JsonTrees;
 public final class ReportWriter implements CycleWriter {
 
     /** Resource key: {@code true} writes the report also for a cycle with errors. */
-    public static final String WITH_ERRORS = "report.withErrors";
+    public static final String WITH_ERRORS = WriteContext.REPORT_WITH_ERRORS;
 
     private static final JsonTrees.Layout LAYOUT = new JsonTrees.Layout(true, true);
 
@@ -35,6 +35,16 @@ public final class ReportWriter implements CycleWriter {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
+    public String buildVersion() {
+        return PostFindings.BUILD_VERSION;
+    }
+
+    @Override
     public String description() {
         return "JSON report: gear data, inspection, setup, cycle, findings";
     }
@@ -42,11 +52,10 @@ public final class ReportWriter implements CycleWriter {
     @Override
     public WriteResult write(HobCycle cycle, WriteContext context) {
         boolean always = context.resource(WITH_ERRORS).map("true"::equals).orElse(false);
-        if (!always || !cycle.hasErrors()) {
-            Optional<WriteResult> refusal = PostFindings.refusal(cycle, id());
-            if (refusal.isPresent()) {
-                return refusal.get();
-            }
+        Optional<WriteResult> refusal = always && cycle.hasErrors() ? PostFindings.otherJob(cycle, context, id())
+                : PostFindings.refusal(cycle, context, id());
+        if (refusal.isPresent()) {
+            return refusal.get();
         }
         String text = JsonTrees.write(new ReportBuilder(context.job()).build(cycle, context), LAYOUT) + "\n";
         return new WriteResult(List.of(new OutputFile(context.job().name() + ".report.json", text)), List.of());

@@ -2,6 +2,8 @@ package org.hobwright.post.sheet;
 
 import static org.hobwright.text.Xml.escape;
 
+import org.hobwright.text.Decimal;
+
 /**
  * A tiny writer of well-formed XML (XHTML with inline SVG): every element is closed, every text
  * and attribute value escaped. Attributes are given as name, value pairs.
@@ -24,29 +26,14 @@ final class Markup {
     }
 
     /**
-     * A drawing coordinate: at most two decimals, rounded half away from zero on the binary value,
-     * without trailing zeros, a lone point or negative zero ({@code 12.5}, {@code 240}, {@code -0.07}).
-     * Integer arithmetic only: a drawing has hundreds of coordinates, and decimal-exact rounding of
-     * a hundredth of a pixel is invisible.
+     * A drawing coordinate: at most two decimals ({@link Decimal#plain}), without trailing zeros, a
+     * lone point or negative zero ({@code 12.5}, {@code 240}, {@code -0.07}).
      */
     static String coordinate(double v) {
         if (!Double.isFinite(v) || Math.abs(v) > 1e12) {
             throw new IllegalArgumentException("drawing coordinate out of range: " + v);
         }
-        long hundredths = Math.round(Math.abs(v) * 100);
-        StringBuilder out = new StringBuilder(12);
-        if (v < 0 && hundredths != 0) {
-            out.append('-');
-        }
-        out.append(hundredths / 100);
-        long rest = hundredths % 100;
-        if (rest != 0) {
-            out.append('.').append(rest / 10);
-            if (rest % 10 != 0) {
-                out.append(rest % 10);
-            }
-        }
-        return out.toString();
+        return Decimal.plain(v, 2);
     }
 
     /** An element with text content. */

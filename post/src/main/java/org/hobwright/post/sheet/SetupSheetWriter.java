@@ -23,13 +23,23 @@ public final class SetupSheetWriter implements CycleWriter {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
+    public String buildVersion() {
+        return PostFindings.BUILD_VERSION;
+    }
+
+    @Override
     public String description() {
         return "setup sheet (HTML with drawings) for the setter and the inspector";
     }
 
     @Override
     public WriteResult write(HobCycle cycle, WriteContext context) {
-        Optional<WriteResult> refusal = PostFindings.refusal(cycle, id());
+        Optional<WriteResult> refusal = PostFindings.refusal(cycle, context, id());
         return refusal.orElseGet(() -> WriteResult.of(
                 new OutputFile(context.job().name() + ".setup.html", SetupSheet.html(cycle, context))));
     }

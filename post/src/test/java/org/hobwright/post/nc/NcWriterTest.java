@@ -22,8 +22,9 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * The program for each shipped dialect and each fixture: byte for byte against the golden file,
- * then read back by {@link NcReader} to check the safety invariants and that every coordinate,
- * feed, speed and angle equals the cycle's value at the dialect's precision.
+ * then read back by {@link NcReader} to check the safety invariants on the words as written and
+ * that every coordinate, feed, speed and angle is the cycle's value at the dialect's precision,
+ * rounded the safe way.
  */
 class NcWriterTest {
 
@@ -55,82 +56,69 @@ class NcWriterTest {
     @MethodSource("cases")
     void safetyInvariantsHoldOnTheText(String dialect, Fixture f) {
         String text = program(dialect, f);
-        NcReader reader = new NcReader(Fixtures.dialectText(dialect));
-        List<NcReader.Block> blocks = reader.blocks(text);
-        int syncOn = index(blocks, reader.literalWords(helical(f) ? "syncOnHelix" : "syncOn", 0), true);
-        int syncOff = index(blocks, reader.literalWords("syncOff", 0), true);
-        int stop = index(blocks, reader.literalWords("spindlesStop", 0), true);
-        List<Integer> feeds = feedBlocks(blocks, reader);
-        assertFalse(feeds.isEmpty(), "the program has feed moves");
-        assertTrue(syncOn < feeds.get(0), "sync on before the first cutting move");
-        assertTrue(syncOff > feeds.get(feeds.size() - 1), "sync off after the last cutting move");
-        assertTrue(syncOff < stop, "sync off before the spindles stop");
-        double finalRadial = radialValue(reader, f.job().units().fromMm(
-                f.cycle().setup().orElseThrow().finalInfeedDiameterMm()));
-        double slack = 0.5 * Math.pow(10, -reader.decimals(lengthKey(f))) * (1 + 1e-9);
-        for (int i : feeds) {
-            double programmed = reader.sign("radial") * blocks.get(i).word(reader.letter("radial")).orElseThrow().value();
-            assertTrue(programmed >= finalRadial - slack, () -> "no cut below the final diameter (at the dialect's "
-                    + "precision): " + blocks.get(i).text());
-        }
-        int max = reader.dialect().get("maxLineLength").asInt();
-        text.lines().forEach(l -> assertTrue(l.length() <= max, () -> "line within " + max + ": " + l));
+        NcReader.assertSafe(text, Fixtures.dialectText(dialect), NcReader.Limits.of(f.job(), f.cycle()));
+        List<NcReader.Block> blocks = new NcReader(Fixtures.dialectText(dialect)).blocks(text);
+        assertTrue(blocks.stream().filter(b -> b.is("feed")).count() > 0, "the program has feed moves");
+        assertTrue(blocks.stream().allMatch(b -> b.template().isPresent()), "every block comes from a template");
         assertTrue(text.toUpperCase(java.util.Locale.ROOT).contains("GUARDS CLOSED"), "cautions in the program");
     }
 
+    /**
+     * Every number is the cycle's at the dialect's precision, rounded in its safe direction:
+     * positions within one unit of the last decimal, radial ones never closer to the work axis and
+     * axial ones never closer to the blank than planned; speeds, feeds, swivel and helical
+     * addition to the nearest (none of these fixtures sits at a limit).
+     */
     @ParameterizedTest(name = "{0} {1}")
     @MethodSource("cases")
-    void everyValueEqualsTheCycleAtTheDialectPrecision(String dialect, Fixture f) {
+    void everyValueIsTheCyclesRoundedTheSafeWay(String dialect, Fixture f) {
         NcReader reader = new NcReader(Fixtures.dialectText(dialect));
         List<NcReader.Block> blocks = reader.blocks(program(dialect, f));
         Units u = f.job().units();
         int ld = reader.decimals(lengthKey(f));
         int fd = reader.decimals(u == Units.MM ? "mmPerRev" : "inPerRev");
-        List<String> rapid = reader.literalWords("rapid", 0);
-        List<String> feed = reader.literalWords("feed", 0);
-        List<NcReader.Block> moves = blocks.stream().filter(b -> b.word(reader.letter("radial")).isPresent()
-                && (b.has(rapid) || b.has(feed))).toList();
+        List<NcReader.Block> moves = blocks.stream().filter(b -> b.is("rapid") || b.is("feed")).toList();
         List<CycleStep> steps = f.cycle().steps().stream()
                 .filter(s -> s instanceof CycleStep.Rapid || s instanceof CycleStep.Feed).toList();
         assertEquals(steps.size(), moves.size(), "one block per move");
+        double face = u.fromMm(f.job().gear().faceWidthMm());
         for (int i = 0; i < steps.size(); i++) {
             NcReader.Block b = moves.get(i);
             double dia;
             double axial;
             if (steps.get(i) instanceof CycleStep.Rapid r) {
-                assertTrue(b.has(rapid), b.text());
+                assertTrue(b.is("rapid"), b.text());
                 dia = r.diameterMm();
                 axial = r.axialMm();
             } else {
                 CycleStep.Feed fs = (CycleStep.Feed) steps.get(i);
-                assertTrue(b.has(feed), b.text());
+                assertTrue(b.is("feed"), b.text());
                 dia = fs.diameterMm();
                 axial = fs.axialMm();
-                near(u.fromMm(fs.feedMmPerRev()), b.word("F").orElseThrow().value(), fd, b);
+                near(u.fromMm(fs.feedMmPerRev()), b.number("feed"), fd, b);
             }
-            near(reader.sign("radial") * radialValue(reader, u.fromMm(dia)),
-                    b.word(reader.letter("radial")).orElseThrow().value(), ld, b);
-            near(reader.sign("axial") * u.fromMm(axial), b.word(reader.letter("axial")).orElseThrow().value(), ld, b);
+            outward(radialValue(reader, u.fromMm(dia)), reader.sign("radial") * b.number("radial"), ld, b);
+            double planned = u.fromMm(axial);
+            double read = reader.sign("axial") * b.number("axial");
+            outward(2 * planned < face ? -planned : planned, 2 * planned < face ? -read : read, ld, b);
         }
         f.cycle().steps().stream().filter(CycleStep.Swivel.class::isInstance).map(CycleStep.Swivel.class::cast)
                 .forEach(s -> {
-                    NcReader.Block b = blocks.stream().filter(x -> x.word(reader.letter("swivel")).isPresent())
-                            .findFirst().orElseThrow();
-                    near(s.machineAngleDeg(), b.word(reader.letter("swivel")).orElseThrow().value(),
-                            reader.decimals("deg"), b);
+                    NcReader.Block b = blocks.stream().filter(x -> x.is("swivel")).findFirst().orElseThrow();
+                    near(s.machineAngleDeg(), b.number("swivel"), reader.decimals("deg"), b);
                 });
         CycleStep.SyncOn on = f.cycle().steps().stream().filter(CycleStep.SyncOn.class::isInstance)
                 .map(CycleStep.SyncOn.class::cast).findFirst().orElseThrow();
-        NcReader.Block sync = blocks.get(index(blocks, reader.literalWords(helical(f) ? "syncOnHelix" : "syncOn", 0),
-                true));
-        String syncTemplate = reader.dialect().get("templates").get(helical(f) ? "syncOnHelix" : "syncOn").asString();
-        near(on.hobTurns(), sync.word(letterBefore(syncTemplate, "{hobTurns}")).orElseThrow().value(), 0, sync);
-        near(on.workTurns(), sync.word(letterBefore(syncTemplate, "{workTurns}")).orElseThrow().value(), 0, sync);
-        near(on.hobRpm(), sync.word(letterBefore(syncTemplate, "{hobRpm}")).orElseThrow().value(),
-                reader.decimals("rpm"), sync);
+        NcReader.Block sync = blocks.stream().filter(b -> b.is(helical(f) ? "syncOnHelix" : "syncOn")).findFirst()
+                .orElseThrow();
+        near(on.hobTurns(), sync.number("hobTurns"), 0, sync);
+        near(on.workTurns(), sync.number("workTurns"), 0, sync);
+        near(on.hobRpm(), sync.number("hobRpm"), reader.decimals("rpm"), sync);
+        NcReader.Block work = blocks.stream().filter(b -> b.is("workSpindle")).findFirst().orElseThrow();
+        near(on.workRpm(), work.number("workRpm"), reader.decimals("rpm"), work);
         if (helical(f)) {
-            near(on.differentialDegPerMm() * u.toMm(1), sync.word(letterBefore(syncTemplate, "{differential}"))
-                    .orElseThrow().value(), reader.decimals("deg"), sync);
+            near(on.differentialDegPerMm() * u.toMm(1), sync.number("differential"), reader.decimals("differential"),
+                    sync);
         }
     }
 
@@ -140,18 +128,9 @@ class NcWriterTest {
         NcReader reader = new NcReader(Fixtures.dialectText(dialect));
         List<NcReader.Block> blocks = reader.blocks(program(dialect, f));
         boolean inch = f.job().units() == Units.IN;
-        assertTrue(index(blocks, reader.literalWords(inch ? "unitsIn" : "unitsMm", 0), false) >= 0, "units word");
-        assertEquals(-1, index(blocks, reader.literalWords(inch ? "unitsMm" : "unitsIn", 0), false),
+        assertEquals(1, blocks.stream().filter(b -> b.is(inch ? "unitsIn" : "unitsMm")).count(), "units word");
+        assertEquals(0, blocks.stream().filter(b -> b.is(inch ? "unitsMm" : "unitsIn")).count(),
                 "no word of the other unit");
-    }
-
-    private static String letterBefore(String template, String placeholder) {
-        int i = template.indexOf(placeholder);
-        int s = i;
-        while (s > 0 && Character.isLetter(template.charAt(s - 1))) {
-            s--;
-        }
-        return template.substring(s, i);
     }
 
     private static boolean helical(Fixture f) {
@@ -174,27 +153,12 @@ class NcWriterTest {
                 + expected + " at " + decimals + " decimals, read " + actual);
     }
 
-    private static List<Integer> feedBlocks(List<NcReader.Block> blocks, NcReader reader) {
-        List<String> feed = reader.literalWords("feed", 0);
-        List<Integer> out = new ArrayList<>();
-        for (int i = 0; i < blocks.size(); i++) {
-            if (blocks.get(i).has(feed) && blocks.get(i).word("F").isPresent()) {
-                out.add(i);
-            }
-        }
-        return out;
-    }
-
-    private static int index(List<NcReader.Block> blocks, List<String> words, boolean required) {
-        for (int i = 0; i < blocks.size(); i++) {
-            if (blocks.get(i).has(words)) {
-                return i;
-            }
-        }
-        if (required) {
-            throw new AssertionError("no block with " + words);
-        }
-        return -1;
+    /** Rounded up (away from the safe side's limit): not below the value, less than one unit above it. */
+    private static void outward(double planned, double actual, int decimals, NcReader.Block b) {
+        double unit = Math.pow(10, -decimals);
+        assertTrue(actual >= planned - 1e-9 * Math.max(1, Math.abs(planned)) && actual < planned + unit,
+                () -> "line " + b.line() + " \"" + b.text() + "\": planned " + planned + ", written " + actual
+                        + ", not rounded outward at " + decimals + " decimals");
     }
 
     /** One writer keeps loaded dialects by name and text: the same text writes the same program, a changed text is read anew. */

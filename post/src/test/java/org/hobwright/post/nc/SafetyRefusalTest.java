@@ -116,7 +116,7 @@ class SafetyRefusalTest {
             assertTrue(Finding.anyError(r.findings()));
             List<String> codes = r.findings().stream().map(Finding::code).toList();
             assertTrue(codes.contains(code) && codes.stream().allMatch(x -> x.startsWith("NC_SAFETY_")),
-                    codes::toString);
+                    () -> r.findings().toString());
         }
     }
 }

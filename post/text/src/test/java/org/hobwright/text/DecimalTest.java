@@ -2,23 +2,30 @@ package org.hobwright.text;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.math.BigDecimal;
+import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.SplittableRandom;
 import org.junit.jupiter.api.Test;
 
 /**
- * {@link Decimal} against the JDK's {@link BigDecimal}: the fixed-point text is
- * {@code BigDecimal.valueOf(v).setScale(d, HALF_UP).toPlainString()} without negative zero, with
- * trailing zeros dropped on request.
+ * {@link Decimal} against the JDK's {@link BigDecimal} as the independent reference: the rule is
+ * {@code BigDecimal.valueOf(v).setScale(d, HALF_UP).toPlainString()} (the decimal text of the
+ * value, rounded half away from zero) without negative zero; the directed roundings first take
+ * the value to 12 significant digits (half to even), then use {@code CEILING} or {@code FLOOR}.
  */
 class DecimalTest {
 
     private static String reference(double v, int decimals, boolean trailingZeros) {
         BigDecimal r = BigDecimal.valueOf(v).setScale(decimals, RoundingMode.HALF_UP);
         String text = (r.signum() == 0 ? r.abs() : r).toPlainString();
-        return trailingZeros || decimals == 0 ? text : text.replaceFirst("0+$", "");
+        int end = text.length();
+        while (!trailingZeros && decimals > 0 && text.charAt(end - 1) == '0') {
+            end--;
+        }
+        return text.substring(0, end);
     }
 
     private static void same(double v) {
@@ -45,7 +52,7 @@ class DecimalTest {
     @Test
     void randomValuesOfEveryMagnitude() {
         SplittableRandom random = new SplittableRandom(20261201);
-        for (int i = 0; i < 200_000; i++) {
+        for (int i = 0; i < 20_000; i++) {
             double scale = Math.pow(10, random.nextInt(-9, 12));
             double v = (random.nextDouble() * 2 - 1) * scale;
             if (random.nextInt(4) == 0) {
@@ -59,7 +66,7 @@ class DecimalTest {
     @Test
     void sameTextAsTheJdkFormatterExceptNegativeZero() {
         SplittableRandom random = new SplittableRandom(17);
-        for (int i = 0; i < 50_000; i++) {
+        for (int i = 0; i < 20_000; i++) {
             double v = (random.nextDouble() * 2 - 1) * Math.pow(10, random.nextInt(-6, 7));
             int d = random.nextInt(0, 6);
             String formatter = String.format(java.util.Locale.ROOT, "%." + d + "f", v);
@@ -68,9 +75,126 @@ class DecimalTest {
         }
     }
 
+    /** Values of every magnitude, a quarter of them exact decimal ties at a random place. */
+    private static double[] values(long seed, int n) {
+        SplittableRandom random = new SplittableRandom(seed);
+        double[] v = new double[n];
+        for (int i = 0; i < n; i++) {
+            double x = (random.nextDouble() * 2 - 1) * Math.pow(10, random.nextInt(-9, 12));
+            if (random.nextInt(4) == 0) {
+                int d = random.nextInt(0, 7);
+                x = new BigDecimal(random.nextLong(-10_000_000, 10_000_000)).add(new BigDecimal("0.5"))
+                        .movePointLeft(d).doubleValue();
+            }
+            v[i] = x;
+        }
+        return v;
+    }
+
+    private static String text(BigDecimal r) {
+        return (r.signum() == 0 ? r.abs() : r).toPlainString();
+    }
+
+    /** Without trailing zeros or a lone point, never in exponent form. */
+    private static String trimmed(BigDecimal r) {
+        BigDecimal t = r.stripTrailingZeros();
+        return text(t.scale() < 0 ? t.setScale(0) : t);
+    }
+
+    @Test
+    void directedRoundingAgainstBigDecimal() {
+        MathContext noise = new MathContext(12, RoundingMode.HALF_EVEN);
+        for (double v : values(4156, 20_000)) {
+            for (int d = 0; d <= 6; d++) {
+                BigDecimal b = BigDecimal.valueOf(v).round(noise);
+                assertEquals(text(b.setScale(d, RoundingMode.CEILING)),
+                        Decimal.fixed(v, d, true, Decimal.Rounding.CEILING), v + " up to " + d + " decimals");
+                assertEquals(text(b.setScale(d, RoundingMode.FLOOR)),
+                        Decimal.fixed(v, d, true, Decimal.Rounding.FLOOR), v + " down to " + d + " decimals");
+                assertEquals(text(b.setScale(d, RoundingMode.UP)),
+                        Decimal.fixed(v, d, true, Decimal.Rounding.UP), v + " away from zero to " + d + " decimals");
+                assertEquals(text(b.setScale(d, RoundingMode.DOWN)),
+                        Decimal.fixed(v, d, true, Decimal.Rounding.DOWN), v + " toward zero to " + d + " decimals");
+            }
+        }
+        assertEquals("0.5", Decimal.fixed(12.7 / 25.4, 1, true, Decimal.Rounding.CEILING), "binary noise ignored");
+        assertEquals("0.501", Decimal.fixed(0.5001, 3, true, Decimal.Rounding.CEILING));
+        assertEquals("-0.501", Decimal.fixed(-0.5001, 3, true, Decimal.Rounding.FLOOR));
+        assertEquals("0.000", Decimal.fixed(-0.0001, 3, true, Decimal.Rounding.CEILING), "no negative zero");
+        assertEquals("0.001", Decimal.fixed(1e-9, 3, true, Decimal.Rounding.CEILING));
+    }
+
+    @Test
+    void plainSignificantExactAndSignedAgainstBigDecimal() {
+        for (double v : values(1328, 20_000)) {
+            for (int d = 0; d <= 6; d++) {
+                assertEquals(trimmed(BigDecimal.valueOf(v).setScale(d, RoundingMode.HALF_UP)), Decimal.plain(v, d),
+                        v + " plain to " + d);
+            }
+            for (int n = 1; n <= 12; n += 1 + n / 4) {
+                assertEquals(trimmed(BigDecimal.valueOf(v).round(new MathContext(n, RoundingMode.HALF_UP))),
+                        Decimal.significant(v, n), v + " to " + n + " significant digits");
+            }
+            assertEquals(trimmed(new BigDecimal(Double.toString(v))), Decimal.exact(v), v + " exact");
+            assertEquals(Double.doubleToLongBits(v == 0 ? 0.0 : v), Double.doubleToLongBits(
+                    Double.parseDouble(Decimal.exact(v))), v + " reads back");
+        }
+        assertEquals("+0.494", Decimal.signed(0.4943, 3));
+        assertEquals("-0.494", Decimal.signed(-0.4943, 3));
+        assertEquals("+0.000", Decimal.signed(-0.0001, 3));
+        assertEquals("0.000287041", Decimal.significant(0.000287041234, 6));
+        assertEquals("120000", Decimal.significant(123456, 2));
+        assertEquals("10", Decimal.significant(9.99, 2));
+        assertEquals("0", Decimal.significant(-0.0, 3));
+        assertEquals("24", Decimal.plain(24.0004, 3));
+        assertEquals("1.01", Decimal.plain(1.005, 2), "the decimal a person reads, not the binary value below it");
+        assertEquals("NaN", Decimal.plain(Double.NaN, 2));
+        assertEquals("0", Decimal.exact(-0.0));
+        assertEquals("0", Decimal.exact(0));
+        assertEquals("0.0001", Decimal.exact(1e-4));
+        assertEquals("1200", Decimal.exact(1.2e3));
+    }
+
     @Test
     void refusesWhatIsNotANumber() {
         assertThrows(IllegalArgumentException.class, () -> Decimal.fixed(Double.NaN, 2));
         assertThrows(IllegalArgumentException.class, () -> Decimal.fixed(Double.POSITIVE_INFINITY, 2, false));
+    }
+
+    /**
+     * Directed rounding for NC words: up never gives less than the value and less than one unit
+     * more, down the mirror of it, against the JDK's {@link BigDecimal} on the decimal the double
+     * prints; half-up gives the same digits as {@link Decimal#fixed}.
+     */
+    @Test
+    void directedRoundingStaysOnItsSideWithinOneUnit() {
+        SplittableRandom random = new SplittableRandom(4120);
+        for (int i = 0; i < 20_000; i++) {
+            double v = (random.nextDouble() * 2 - 1) * Math.pow(10, random.nextInt(-6, 7));
+            int d = random.nextInt(0, 6);
+            BigDecimal exact = new BigDecimal(Double.toString(v));
+            BigDecimal unit = BigDecimal.ONE.movePointLeft(d);
+            BigDecimal up = Decimal.rounded(v, d, RoundingMode.CEILING);
+            BigDecimal down = Decimal.rounded(v, d, RoundingMode.FLOOR);
+            BigDecimal slack = exact.abs().multiply(new BigDecimal("1e-11"));
+            assertTrue(up.compareTo(exact.subtract(slack)) >= 0 && up.compareTo(exact.add(unit)) < 0, v + " up " + up);
+            assertTrue(down.compareTo(exact.add(slack)) <= 0 && down.compareTo(exact.subtract(unit)) > 0,
+                    v + " down " + down);
+            assertEquals(d, up.scale());
+            assertEquals(Decimal.fixed(v, d), Decimal.text(Decimal.rounded(v, d, RoundingMode.HALF_UP), true));
+        }
+    }
+
+    @Test
+    void directedRoundingIgnoresTheLastBitsOfBinaryArithmetic() {
+        // 12.7 mm / 25.4 is 0.5000000000000001 in binary; as an inch word it is 0.5000, not 0.5001
+        assertEquals("0.5000", Decimal.rounded(12.7 / 25.4, 4, RoundingMode.UP).toPlainString());
+        assertEquals("0.1", Decimal.rounded(0.1, 1, RoundingMode.CEILING).toPlainString());
+        assertEquals("0.000", Decimal.rounded(-0.0004, 3, RoundingMode.CEILING).toPlainString());
+        assertEquals("-0.001", Decimal.rounded(-0.0004, 3, RoundingMode.FLOOR).toPlainString());
+        assertEquals("24.", Decimal.text(new BigDecimal("24.000"), false));
+        assertEquals("17.5", Decimal.text(new BigDecimal("17.500"), false));
+        assertEquals("0", Decimal.text(new BigDecimal("0"), false));
+        assertThrows(IllegalArgumentException.class, () -> Decimal.rounded(Double.NaN, 2, RoundingMode.UP));
     }
 }

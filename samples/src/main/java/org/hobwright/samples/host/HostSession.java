@@ -2,27 +2,27 @@ package org.hobwright.samples.host;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+import org.hobwright.api.Hobwright;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
-import org.hobwright.api.job.HobJob;
-import org.hobwright.api.spi.OutputFile;
-import org.hobwright.api.spi.WriteContext;
+import org.hobwright.api.host.PlannedJob;
+import org.hobwright.api.host.Written;
 import org.hobwright.api.wizard.Wizard;
 
 /**
- * One run of the example host: wizard → cycle → writers → files → operations imported from the
- * cycle CSV. Every step uses the api only.
+ * One run of the example host: wizard → planned job → all outputs written by the façade →
+ * operations imported from the cycle CSV. Every step uses the api only.
  *
- * @param plugin Hobwright as found on the plugin class path
- * @param out    where the host shows what happens
+ * @param hobwright the open façade
+ * @param out       where the host shows what happens
  */
-public record HostSession(HobwrightPlugin plugin, PrintWriter out) {
+public record HostSession(Hobwright hobwright, PrintWriter out) {
 
     /** What a run produced. */
     public enum Status {
@@ -51,40 +51,36 @@ public record HostSession(HobwrightPlugin plugin, PrintWriter out) {
     }
 
     /**
-     * Runs the wizard with the sheet's answers and, when the job is clean, posts it into a folder.
+     * Walks a blank wizard with the sheet's answers and, when the job is clean, writes its outputs.
      *
      * @param sheet  the answers and host settings
      * @param folder the output folder
-     * @throws IOException when the output folder cannot be written
+     * @return what the run did
+     * @throws IOException when the written cycle CSV cannot be read back
      */
     public Result run(AnswerSheet sheet, Path folder) throws IOException {
-        Map<String, String> options = new HashMap<>();
-        sheet.setting("home").ifPresent(home -> options.put("home", home));
-        Wizard wizard = plugin.wizards().start(options);
+        Wizard wizard = hobwright.wizard();
         WizardOutcome outcome = new StepRenderer(out).walk(wizard, sheet);
         if (!outcome.postable()) {
             out.println("Nothing written: the job has errors.");
             return new Result(Status.JOB_ERRORS, outcome.cycle(), List.of(), List.of(), outcome.findings());
         }
-        HobJob job = outcome.job().orElseThrow();
-        HobCycle cycle = outcome.cycle().orElseThrow();
-        DialectSource dialects = new DialectSource(sheet.setting("dialects").map(Path::of),
-                plugin.wizards().getClass().getClassLoader());
-        WriteContext context = new WriteContext(job, sheet.setting("date").orElse(LocalDate.now().toString()),
-                "example host 1", dialects.resourcesFor(job.machine()));
-        PostRun post = PostRun.of(plugin.writers(), cycle, context);
-        post.findings().forEach(f -> out.println("   ! " + f.line()));
-        if (post.files().isEmpty()) {
+        PlannedJob planned = new PlannedJob(outcome.job().orElseThrow(), outcome.cycle().orElseThrow());
+        LocalDate date = sheet.setting("date").map(LocalDate::parse).orElse(LocalDate.now());
+        Written written = hobwright.write(planned, folder, date);
+        written.findings().forEach(f -> out.println("   ! " + f.line()));
+        if (!written.ok()) {
             out.println("Nothing written: a writer refused.");
-            return new Result(Status.JOB_ERRORS, Optional.of(cycle), List.of(), List.of(), post.findings());
+            return new Result(Status.JOB_ERRORS, Optional.of(planned.cycle()), List.of(), List.of(),
+                    written.findings());
         }
-        List<Path> written = OutputFolder.write(folder, post.files());
-        written.forEach(p -> out.println("wrote " + p));
-        List<Operation> ops = post.fileEndingWith(".csv").map(OutputFile::text).map(CycleImport::operations)
-                .orElse(List.of());
+        written.files().forEach(p -> out.println("wrote " + p));
+        Optional<Path> csv = written.files().stream().filter(p -> p.toString().endsWith(".csv")).findFirst();
+        List<Operation> ops = csv.isEmpty() ? List.of()
+                : CycleImport.operations(Files.readString(csv.get(), StandardCharsets.UTF_8));
         out.println();
         out.println("Imported " + ops.size() + " operations from the cycle CSV:");
         ops.forEach(op -> out.println(op.describe()));
-        return new Result(Status.DONE, Optional.of(cycle), written, ops, cycle.findings());
+        return new Result(Status.DONE, Optional.of(planned.cycle()), written.files(), ops, planned.findings());
     }
 }

@@ -15,7 +15,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.stream.Stream;
+import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.HobJob;
+import org.hobwright.api.spi.Providers;
+import org.hobwright.post.nc.NcReader;
 import org.hobwright.wizard.cli.CliEnvironment;
+import org.hobwright.wizard.store.JobReader;
+import org.hobwright.wizard.store.Library;
 import org.hobwright.wizard.cli.HobwrightCommand;
 import picocli.CommandLine;
 import tools.jackson.databind.JsonNode;
@@ -111,6 +117,24 @@ record PlanRun(int exitCode, String stdout, String stderr, Path out, Optional<Js
         } catch (IOException e) {
             return e.toString();
         }
+    }
+
+    /**
+     * Reads the written program back with the tests' own NC reader ({@code NcReader}, post
+     * test-jar) and fails unless it keeps every safety invariant: the job is read and planned
+     * again in this JVM (planning is deterministic) for the limits the words must keep to.
+     *
+     * @param jobFile the job's file name in {@link #JOBS}
+     * @param work    the folder the run used
+     */
+    void assertProgramSafe(String jobFile, Path work) throws IOException {
+        Library library = Library.open(Optional.of(work.resolve("home")), Map.of(), work);
+        HobJob job = new JobReader(library).read(JOBS.resolve(jobFile)).value()
+                .orElseThrow(() -> new AssertionError("the job does not read"));
+        HobCycle cycle = Providers.planner(PlanRun.class.getClassLoader()).plan(job);
+        String dialect = library.dialectText(job.machine().dialect()).value()
+                .orElseThrow(() -> new AssertionError("no dialect " + job.machine().dialect()));
+        NcReader.assertSafe(Files.readString(file(".nc")), dialect, NcReader.Limits.of(job, cycle));
     }
 
     /** A text to put in assertion messages. */

@@ -69,6 +69,7 @@ class SampleJobsChainTest {
             assertTrue(Files.readString(run.file(suffix)).toLowerCase(Locale.ROOT).contains("caution"), "caution in " + suffix);
         }
         assertSafeOrder(CycleImport.operations(Files.readString(run.file(".csv"))), run.number("/cycle/cycleTime"));
+        run.assertProgramSafe(job, work);
     }
 
     /**

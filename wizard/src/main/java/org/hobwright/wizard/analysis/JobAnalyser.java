@@ -77,9 +77,6 @@ public final class JobAnalyser {
         spec.blankDiameterMm().ifPresent(b -> BlankCheck.check(g, b, words, findings));
         GearChecks.tip(g, tip, job, words, findings);
         Optional<ToleranceData> tolerances = ToleranceCheck.tolerances(spec, g, findings);
-        if (tip <= g.referenceDiameterMm()) {
-            return result(Optional.of(gear), Optional.empty(), tolerances, setup, findings);
-        }
         InspectionValues inspection = InspectionValues.of(g, tip, spec.pinDiameterMm(), shopStepMm(job.units()));
         InspectionChecks.check(g, spec.faceWidthMm(), inspection, words, findings);
         DrawingCheck.check(spec.drawing(), g, inspection.pins().pinDiameterMm(), words, findings);

@@ -123,7 +123,7 @@ public enum EngineeringCode implements FindingCode {
             Sources.DRAWING),
     INSPECTION_PIN_CONTACT(Severity.WARNING, "gear.pinDiameter",
             "pin or ball does not touch the involute or does not stand above the tip",
-            "pin contact d_c = √(d_b² + (d_b tan α_Mt − D_M / cos β_b)²), derived; common practice, no source"),
+            "pin contact d_c = √(d_b² + (d_b tan α_Mt − D_M cos β_b)²), derived; common practice, no source"),
     INSPECTION_PIN_COMPUTED(Severity.INFO, "gear.pinDiameter",
             "the 1.728 m_n pin does not fit; a computed pin is used",
             "US wire tables 1.728/P (Machinery's Handbook, from memory); contact at d + 2 x m_n (derived)"),
@@ -133,6 +133,9 @@ public enum EngineeringCode implements FindingCode {
     INSPECTION_SPAN_CONTACT(Severity.WARNING, "gear.profileShift",
             "span anvils touch outside the involute",
             "anvil contact d_c = √(d_b² + (W_k cos β_b)²), derived"),
+    INSPECTION_CHORDAL_ABOVE_TIP(Severity.WARNING, "gear.profileShift",
+            "the reference circle lies at or above the tip: no chordal thickness there",
+            "chordal thickness at the reference circle, SDP/SI Elements of Metric Gear Technology, Section 10"),
     TOLERANCE_OUT_OF_SCOPE(Severity.WARNING, "gear.toleranceClass",
             "gear outside the scope of ISO 1328-1:2013; no tolerances given",
             "ISO 1328-1:2013 clause 1 (scope)");

@@ -50,10 +50,10 @@ public final class GearChecks {
         InvoluteGear shifted = g.withProfileShift(proposed);
         boolean slight = xMin - xE <= Undercut.SLIGHT_SHORTFALL * hStar;
         String zMin = Wording.plain(Undercut.minTeeth(hStar, g), 1);
-        String msg = String.format(Locale.ROOT, "%d teeth with profile shift %s: the hob undercuts the tooth roots%s"
-                        + " (no undercut from %s teeth at zero shift; this tooth count needs a shift of at least %s)",
-                g.teeth(), words.number(g.profileShift()), slight ? " slightly, below the working flank" : "",
-                zMin, words.number(xMin + allowanceShift));
+        String msg = g.teeth() + " teeth with profile shift " + words.number(g.profileShift())
+                + ": the hob undercuts the tooth roots" + (slight ? " slightly, below the working flank" : "")
+                + " (no undercut from " + zMin + " teeth at zero shift; this tooth count needs a shift of at least "
+                + words.number(xMin + allowanceShift) + ")";
         String fix = "set gear.profileShift to " + words.number(proposed) + ": tip diameter "
                 + words.length(shifted.tipDiameterMm()) + ", root diameter " + words.length(shifted.rootDiameterMm())
                 + ", tip thickness " + words.length(shifted.normalThicknessAtMm(shifted.tipDiameterMm()))

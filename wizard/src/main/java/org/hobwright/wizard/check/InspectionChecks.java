@@ -21,7 +21,7 @@ public final class InspectionChecks {
 
     /** Checks the pins and the span of computed inspection values. */
     public static void check(InvoluteGear g, double faceWidthMm, InspectionValues v, Wording words, List<Finding> out) {
-        double form = g.rootFormDiameterMm();
+        double form = v.formDiameterMm();
         double tip = v.tipDiameterMm();
         OverPins pins = v.pins();
         String what = pins.balls() ? "ball" : "pin";
@@ -37,16 +37,24 @@ public final class InspectionChecks {
                     : pins.contactDiameterMm() > tip ? "would touch above the tip diameter " + words.length(tip)
                     : "reaches only " + words.length(2 * pins.reachRadiusMm()) + ", not above the tip diameter "
                             + words.length(tip);
+            double ideal = OverPins.idealPinMm(g, form);
             out.add(EngineeringCode.INSPECTION_PIN_CONTACT.at("gear.pinDiameter", "the " + what + " of "
-                    + words.length(pins.pinDiameterMm()) + " " + where,
-                    "use a " + what + " near " + words.length(OverPins.idealPinMm(g))));
+                    + words.length(pins.pinDiameterMm()) + " " + where, ideal > 0 && Double.isFinite(ideal)
+                            ? "use a " + what + " near " + words.length(ideal)
+                            : "no " + what + " touches this gear's flanks properly: measure the span instead"));
         }
         double w = v.span().widthMm();
         double dc = v.span().contactDiameterMm();
-        if (dc < form || dc > tip) {
+        if (!v.span().touchesBetween(form, tip)) {
             out.add(EngineeringCode.INSPECTION_SPAN_CONTACT.at("gear.profileShift", "the span anvils over "
                     + v.span().teeth() + " teeth touch at " + words.length(dc) + ", outside the involute ("
                     + words.length(form) + " to " + words.length(tip) + ")", "measure over pins or balls instead"));
+        }
+        if (tip <= g.referenceDiameterMm()) {
+            out.add(EngineeringCode.INSPECTION_CHORDAL_ABOVE_TIP.at("gear.profileShift", "the reference circle "
+                    + words.length(g.referenceDiameterMm()) + " lies at or above the tip diameter " + words.length(tip)
+                    + ": a tooth caliper cannot take the chordal thickness there, so its value is only nominal",
+                    "measure the span or over " + what + "s"));
         }
         double needed = w * Math.sin(g.baseHelixAngleRad()) + ANVIL_MARGIN_MM;
         if (!g.isSpur() && faceWidthMm < needed) {

@@ -1,9 +1,8 @@
 package org.hobwright.wizard.check;
 
-import java.math.BigDecimal;
-import java.math.RoundingMode;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 
 /**
  * Numbers in finding messages, in the job's units: lengths to 4 decimals in mm or 5 in inches,
@@ -42,13 +41,6 @@ public record Wording(Units units) {
     }
 
     static String plain(double v, int decimals) {
-        if (!Double.isFinite(v)) {
-            return String.valueOf(v);
-        }
-        BigDecimal b = BigDecimal.valueOf(v).setScale(decimals, RoundingMode.HALF_UP).stripTrailingZeros();
-        if (b.signum() == 0) {
-            return "0";
-        }
-        return b.scale() < 0 ? b.setScale(0).toPlainString() : b.toPlainString();
+        return Decimal.plain(v, decimals);
     }
 }

@@ -5,8 +5,6 @@ import org.hobwright.api.check.Severity;
 
 /** Finding codes of the terminal tool's own checks; listed in {@code wizard/FINDINGS.md}. */
 public enum CliCode implements FindingCode {
-    OUTPUT_NO_WRITERS("no output writer was found on the class path", "Hobwright SPI"),
-    OUTPUT_NAME_TWICE("two jobs of one run would write files of the same name", "common practice, no source"),
     SIMULATION_INPUT("the simulate verb cannot simulate the job (unknown tooth system, no tip flat, ...)",
             "generating simulation"),
     SAMPLE_MISSING("the built-in sample job is not bundled in this build or cannot be read", "Hobwright build");

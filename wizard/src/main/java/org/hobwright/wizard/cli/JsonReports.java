@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.text.JsonTrees;
+import org.hobwright.wizard.run.Outputs;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
 import tools.jackson.databind.node.ObjectNode;

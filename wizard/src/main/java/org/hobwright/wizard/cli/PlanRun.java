@@ -11,11 +11,12 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.CompletionException;
 import java.util.stream.Stream;
+import org.hobwright.api.host.PlannedJob;
 import org.hobwright.api.spi.CyclePlanner;
-import org.hobwright.api.spi.Providers;
-import org.hobwright.wizard.plan.CuttingDataTable;
-import org.hobwright.wizard.plan.DefaultCyclePlanner;
+import org.hobwright.wizard.run.LibraryPlanner;
+import org.hobwright.wizard.run.Outputs;
 import org.hobwright.wizard.store.JobReader;
+import org.hobwright.wizard.store.Loaded;
 
 /**
  * The batch form of the wizard, shared by {@code plan} and {@code demo}: read every job, plan it,
@@ -53,7 +54,7 @@ final class PlanRun {
         });
         try {
             CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> planner(store), background);
-            Outputs outputs = new Outputs(store, env.loader(), generatedOn, background);
+            Outputs outputs = new Outputs(store.library(), env.loader(), generatedOn, ToolVersion.VERSION, background);
             Timing.mark("library opened");
             JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
             List<JobInput> read = new ArrayList<>();
@@ -66,7 +67,7 @@ final class PlanRun {
                 }
             }
             Timing.mark("jobs read");
-            outputs.prepare(read);
+            outputs.prepare(read.stream().flatMap(in -> in.job().stream()).toList());
             List<JobInput> jobs = read.stream()
                     .map(in -> in.job().map(j -> in.planned(join(planner).plan(j))).orElse(in)).toList();
             Timing.mark("jobs planned");
@@ -77,21 +78,17 @@ final class PlanRun {
     }
 
     /**
-     * The planner: the one found through the SPI, or, when the library holds the shop's own
-     * cutting-data table ({@code cutting-data.json}), Hobwright's planner with that table.
+     * The library's planner ({@link LibraryPlanner}).
      *
-     * @throws CliFailure (exit 2) when the shop's table cannot be read
+     * @throws CliFailure (exit 2) when the shop's table cannot be used: every problem, each with its
+     *                    line, key and fix
      */
     private CyclePlanner planner(Store store) {
-        Path table = store.library().home().resolve(CuttingDataTable.FILE_NAME);
-        if (!Files.isRegularFile(table)) {
-            return Providers.planner(env.loader());
+        Loaded<CyclePlanner> planner = LibraryPlanner.of(store.library(), env.loader());
+        if (!planner.ok()) {
+            throw CliFailure.usage(LibraryPlanner.failure(planner.findings()));
         }
-        try {
-            return new DefaultCyclePlanner(CuttingDataTable.forLibrary(store.library().home()));
-        } catch (IllegalArgumentException | java.io.UncheckedIOException e) {
-            throw CliFailure.usage("the shop's cutting-data table " + table + " cannot be used: " + e.getMessage());
-        }
+        return planner.get();
     }
 
     /** The looked-up planner; a missing one is reported as the exception the look-up threw. */
@@ -119,7 +116,8 @@ final class PlanRun {
 
     /** Writes every job's outputs, or none when a writer refuses. */
     static int write(Outputs outputs, List<JobInput> jobs, Store store, Path folder, RunPrinter printer) {
-        Outputs.Produced produced = outputs.produce(jobs);
+        Outputs.Produced produced = outputs.produce(jobs.stream().map(in -> new Outputs.Named(in.source(),
+                new PlannedJob(in.job().orElseThrow(), in.cycle().orElseThrow()))).toList());
         Timing.mark("outputs formatted");
         printer.findings(produced.findings());
         if (produced.refused()) {

@@ -5,7 +5,6 @@ import java.io.InputStream;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
@@ -13,6 +12,7 @@ import java.util.function.Function;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.geometry.GearGeometry;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.hobwright.wizard.plan.DefaultCyclePlanner;
@@ -136,16 +136,21 @@ public final class SimulateCommand implements Callable<Integer> {
     }
 
     private static void summary(PrintWriter o, Units units, ToothSpaceSimulation sim, Optional<FeedMarks> marks) {
-        String u = units.symbol();
-        o.printf(Locale.ROOT, "profile deviation max   %.6g %s%n", units.fromMm(sim.profileDeviationMaxMm()), u);
-        o.printf(Locale.ROOT, "enveloping depth        %.6g %s (closed form %.6g %s)%n",
-                units.fromMm(sim.envelopingDepthMm()), u, units.fromMm(sim.closedFormEnvelopingDepthMm()), u);
-        o.printf(Locale.ROOT, "undercut                %s%n", sim.undercut()
-                ? String.format(Locale.ROOT, "yes, %.6g %s deep", units.fromMm(sim.undercutDepthMm()), u) : "no");
-        o.printf(Locale.ROOT, "active involute from    Ø %.6g %s (form circle Ø %.6g %s)%n",
-                units.fromMm(sim.activeInvoluteStartDiameterMm()), u, units.fromMm(sim.rootFormDiameterMm()), u);
-        marks.ifPresentOrElse(m -> o.printf(Locale.ROOT, "feed marks at the root  %.6g %s at %.6g %s per work turn%n",
-                units.fromMm(m.depthMm()), u, units.fromMm(m.feedMm()), u),
+        String u = " " + units.symbol();
+        o.println("profile deviation max   " + length(units, sim.profileDeviationMaxMm()) + u);
+        o.println("enveloping depth        " + length(units, sim.envelopingDepthMm()) + u + " (closed form "
+                + length(units, sim.closedFormEnvelopingDepthMm()) + u + ")");
+        o.println("undercut                " + (sim.undercut() ? "yes, " + length(units, sim.undercutDepthMm()) + u
+                + " deep" : "no"));
+        o.println("active involute from    Ø " + length(units, sim.activeInvoluteStartDiameterMm()) + u
+                + " (form circle Ø " + length(units, sim.rootFormDiameterMm()) + u + ")");
+        marks.ifPresentOrElse(m -> o.println("feed marks at the root  " + length(units, m.depthMm()) + u + " at "
+                + length(units, m.feedMm()) + u + " per work turn"),
                 () -> o.println("feed marks at the root  not drawn: the job cannot be planned (see 'hobwright plan')"));
+    }
+
+    /** A length in the job's unit to six significant digits. */
+    private static String length(Units units, double mm) {
+        return Decimal.significant(units.fromMm(mm), 6);
     }
 }

@@ -5,7 +5,7 @@ import picocli.CommandLine;
 /** Version text for {@code --version}. */
 public final class ToolVersion implements CommandLine.IVersionProvider {
     /** The version of this build. */
-    public static final String VERSION = "0.1.0";
+    public static final String VERSION = org.hobwright.wizard.run.Build.VERSION;
 
     @Override
     public String[] getVersion() {

@@ -2,6 +2,7 @@ package org.hobwright.wizard.cli;
 
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.hobwright.wizard.run.Outputs;
 import org.hobwright.wizard.steps.Answers;
 import org.hobwright.wizard.steps.LibraryServices;
 import org.hobwright.wizard.steps.StepSession;
@@ -40,7 +41,8 @@ final class WizardCommand extends Verb implements Callable<Integer> {
         Prompter prompter = new Prompter(env.in(), cl.getOut(), env.piped());
         prompter.say("Hobwright " + ToolVersion.VERSION + " wizard. Enter keeps the value in brackets, '?' explains,"
                 + " 'back' returns.");
-        WizardFinish finish = new WizardFinish(session, store, new Outputs(store, env.loader(), generatedOn),
+        WizardFinish finish = new WizardFinish(session, store, new Outputs(store.library(), env.loader(), generatedOn,
+                ToolVersion.VERSION, java.util.concurrent.ForkJoinPool.commonPool()),
                 output.folder());
         return new TerminalWizard(session, prompter).run(finish);
     }

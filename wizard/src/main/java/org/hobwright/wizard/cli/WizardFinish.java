@@ -7,6 +7,7 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.Wizard;
+import org.hobwright.wizard.run.Outputs;
 import org.hobwright.wizard.steps.StepFields;
 import org.hobwright.wizard.steps.StepSession;
 import org.hobwright.wizard.store.CycleTemplate;

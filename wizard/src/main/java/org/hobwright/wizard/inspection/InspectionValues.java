@@ -14,9 +14,10 @@ import org.hobwright.wizard.geometry.InvoluteGear;
  * @param pin      how the pin was chosen
  * @param chordal  chordal thickness and height
  * @param tipDiameterMm actual tip diameter used, mm
+ * @param formDiameterMm root form diameter d_Ff, where the usable involute begins, mm
  */
 public record InspectionValues(InspectionData data, SpanMeasurement span, OverPins pins, PinChoice pin,
-                               ChordalThickness chordal, double tipDiameterMm) {
+                               ChordalThickness chordal, double tipDiameterMm, double formDiameterMm) {
 
     /**
      * Computes the inspection values.
@@ -28,12 +29,13 @@ public record InspectionValues(InspectionData data, SpanMeasurement span, OverPi
      */
     public static InspectionValues of(InvoluteGear g, double tipDiameterMm, OptionalDouble jobPinMm,
                                       double shopStepMm) {
-        SpanMeasurement span = SpanMeasurement.of(g);
-        PinChoice pin = PinChoice.choose(g, jobPinMm, tipDiameterMm, shopStepMm);
+        double form = g.rootFormDiameterMm();
+        SpanMeasurement span = SpanMeasurement.of(g, form, tipDiameterMm);
+        PinChoice pin = PinChoice.choose(g, jobPinMm, form, tipDiameterMm, shopStepMm);
         OverPins pins = OverPins.of(g, pin.diameterMm());
         ChordalThickness chordal = ChordalThickness.of(g, tipDiameterMm);
         InspectionData data = new InspectionData(span.teeth(), span.widthMm(), span.contactDiameterMm(),
                 pins.pinDiameterMm(), pins.overPinsMm(), pins.balls(), chordal.thicknessMm(), chordal.heightMm());
-        return new InspectionValues(data, span, pins, pin, chordal, tipDiameterMm);
+        return new InspectionValues(data, span, pins, pin, chordal, tipDiameterMm, form);
     }
 }

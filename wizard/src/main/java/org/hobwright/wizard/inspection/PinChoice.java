@@ -36,14 +36,24 @@ public record PinChoice(double diameterMm, Origin origin) {
      * @param shopStepMm    rounding step for a computed pin, mm
      */
     public static PinChoice choose(InvoluteGear g, OptionalDouble jobPinMm, double tipDiameterMm, double shopStepMm) {
+        return choose(g, jobPinMm, g.rootFormDiameterMm(), tipDiameterMm, shopStepMm);
+    }
+
+    /**
+     * Chooses the pin, with the root form diameter already known.
+     *
+     * @param formDiameterMm root form diameter d_Ff, where the usable involute begins, mm
+     */
+    public static PinChoice choose(InvoluteGear g, OptionalDouble jobPinMm, double formDiameterMm, double tipDiameterMm,
+                                   double shopStepMm) {
         if (jobPinMm.isPresent()) {
             return new PinChoice(jobPinMm.getAsDouble(), Origin.JOB);
         }
         double rule = ruleDiameter(g);
-        if (OverPins.of(g, rule).fits(g.rootFormDiameterMm(), tipDiameterMm)) {
+        if (OverPins.of(g, rule).fits(formDiameterMm, tipDiameterMm)) {
             return new PinChoice(rule, Origin.WIRE_TABLE_RULE);
         }
-        double raw = OverPins.idealPinMm(g);
+        double raw = OverPins.idealPinMm(g, formDiameterMm);
         if (!(raw > 0) || !Double.isFinite(raw)) {
             return new PinChoice(rule, Origin.WIRE_TABLE_RULE);
         }

@@ -32,6 +32,38 @@ public record SpanMeasurement(int teeth, double teethCalculated, double widthMm,
         return over(g, teethFor(kCalc, g.teeth()), kCalc);
     }
 
+    /**
+     * The span over the number of teeth chosen by the rule, or, when its anvils would touch outside the
+     * usable involute (below the root form diameter, e.g. in an undercut, or above the tip), over the
+     * neighbouring number of teeth nearer k_calc whose anvils touch on it (common practice, no source).
+     * When neither neighbour does, the rule's k is kept and the inspection check reports it.
+     *
+     * @param formDiameterMm root form diameter d_Ff, where the usable involute begins, mm
+     * @param tipDiameterMm  actual tip diameter, mm
+     */
+    public static SpanMeasurement of(InvoluteGear g, double formDiameterMm, double tipDiameterMm) {
+        SpanMeasurement rule = of(g);
+        if (rule.touchesBetween(formDiameterMm, tipDiameterMm)) {
+            return rule;
+        }
+        int k = rule.teeth();
+        int first = rule.teethCalculated() >= k ? k + 1 : k - 1;
+        for (int candidate : new int[] {first, 2 * k - first}) {
+            if (candidate >= 1 && candidate <= Math.max(1, g.teeth() - 1)) {
+                SpanMeasurement other = over(g, candidate, rule.teethCalculated());
+                if (other.touchesBetween(formDiameterMm, tipDiameterMm)) {
+                    return other;
+                }
+            }
+        }
+        return rule;
+    }
+
+    /** True when the anvils touch between the two diameters (inclusive). */
+    public boolean touchesBetween(double lowestMm, double highestMm) {
+        return contactDiameterMm >= lowestMm && contactDiameterMm <= highestMm;
+    }
+
     /** The span over a given number of teeth. */
     public static SpanMeasurement over(InvoluteGear g, int k) {
         return over(g, k, teethCalculated(g));

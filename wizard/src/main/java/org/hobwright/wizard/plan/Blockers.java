@@ -1,12 +1,13 @@
 package org.hobwright.wizard.plan;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.text.Decimal;
+import org.hobwright.wizard.store.CuttingData;
 
 /**
  * The problems that stop a cycle from being planned at all; each becomes an error finding naming
@@ -29,18 +30,20 @@ final class Blockers {
         HobSpec hob = job.hob();
         MachineProfile machine = job.machine();
         if (ratio.hobTurnsPerWorkTurn() > machine.maxSyncRatio()) {
-            error(PlanCode.PLAN_SYNC_RATIO_TOO_HIGH, "gear.teeth", String.format(Locale.ROOT, "the sync ratio %d:%d is more"
-                    + " than the machine's largest ratio %.1f", ratio.hobTurns(), ratio.workTurns(),
-                    machine.maxSyncRatio()), "use a hob with more starts");
+            error(PlanCode.PLAN_SYNC_RATIO_TOO_HIGH, "gear.teeth", "the sync ratio " + ratio.hobTurns() + ":"
+                    + ratio.workTurns() + " is more than the machine's largest ratio "
+                    + Decimal.fixed(machine.maxSyncRatio(), 1), "use a hob with more starts");
         }
         double depth = (touchOff - root) / 2;
         if (!(root > 0) || !(depth > 0)) {
-            error(PlanCode.PLAN_NO_DEPTH, "gear.blankDiameter", String.format(Locale.ROOT, "the blank diameter %.4f mm must"
-                    + " be larger than the root diameter %.4f mm, which must be above 0", touchOff, root),
+            error(PlanCode.PLAN_NO_DEPTH, "gear.blankDiameter", "the blank diameter " + Decimal.fixed(touchOff, 4)
+                    + " mm must be larger than the root diameter " + Decimal.fixed(root, 4)
+                    + " mm, which must be above 0",
                     "check the blank diameter, the tooth count and the tooth system");
         } else if (depth >= hob.outsideDiameterMm() / 2) {
-            error(PlanCode.PLAN_HOB_TOO_SMALL, "hob.outsideDiameter", String.format(Locale.ROOT, "the hob radius %.3f mm is"
-                    + " not larger than the %.3f mm depth to cut", hob.outsideDiameterMm() / 2, depth),
+            error(PlanCode.PLAN_HOB_TOO_SMALL, "hob.outsideDiameter", "the hob radius "
+                    + Decimal.fixed(hob.outsideDiameterMm() / 2, 3) + " mm is not larger than the "
+                    + Decimal.fixed(depth, 3) + " mm depth to cut",
                     "use a larger hob");
         }
         if (Math.abs(swivel.machineAngleDeg()) > machine.swivel().maxAngleDeg()) {
@@ -49,9 +52,10 @@ final class Blockers {
                     "use a hob of the same hand as the gear (smaller swivel) or another holder");
         }
         if (!window.isOpen()) {
-            error(PlanCode.PLAN_SPEED_WINDOW_EMPTY, "machine", String.format(Locale.ROOT, "no hob speed satisfies both the"
-                    + " %s (%.1f rpm) and the %s (%.1f rpm)", window.minLimit(), window.minRpm(), window.maxLimit(),
-                    window.maxRpm()), "check the spindle limits of the machine profile and the hob");
+            error(PlanCode.PLAN_SPEED_WINDOW_EMPTY, "machine", "no hob speed satisfies both the " + window.minLimit()
+                    + " (" + Decimal.fixed(window.minRpm(), 1) + " rpm) and the " + window.maxLimit() + " ("
+                    + Decimal.fixed(window.maxRpm(), 1)
+                    + " rpm)", "check the spindle limits of the machine profile and the hob");
         }
         boolean open = job.cycle().cuttingSpeedMPerMin().isEmpty() || job.cycle().roughFeedMmPerRev().isEmpty()
                 || job.cycle().finishFeedMmPerRev().isEmpty();

@@ -11,6 +11,8 @@ import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.Spi;
 import org.hobwright.wizard.analysis.JobAnalyser;
 import org.hobwright.wizard.analysis.JobAnalysis;
+import org.hobwright.wizard.run.Build;
+import org.hobwright.wizard.store.CuttingDataTable;
 
 /**
  * Hobwright's planner: analyses the job (geometry, inspection, tolerances, hob setup, checks), then
@@ -31,7 +33,8 @@ public final class DefaultCyclePlanner implements CyclePlanner {
     }
 
     /**
-     * A planner with a cutting-data table, e.g. {@code CuttingDataTable.forLibrary(home)}.
+     * A planner with a cutting-data table, e.g. the one of a library folder
+     * ({@link org.hobwright.wizard.store.CuttingDataReader#forLibrary}).
      *
      * @param table the table
      */
@@ -50,7 +53,22 @@ public final class DefaultCyclePlanner implements CyclePlanner {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
+    public String buildVersion() {
+        return Build.VERSION;
+    }
+
+    @Override
     public HobCycle plan(HobJob job) {
+        java.util.Objects.requireNonNull(job, "job is required, was null");
+        return planned(job).forJob(job);
+    }
+
+    private HobCycle planned(HobJob job) {
         JobAnalysis analysis = JobAnalyser.analyse(job);
         List<Finding> findings = new ArrayList<>(analysis.findings());
         if (!analysis.hasErrors() && (analysis.gear().isEmpty() || analysis.hobSetup().isEmpty())) {
@@ -66,7 +84,7 @@ public final class DefaultCyclePlanner implements CyclePlanner {
     /** The cycle of a job that cannot be planned: analysis results and findings, no steps. */
     static HobCycle unplanned(JobAnalysis analysis, List<Finding> findings) {
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.empty(),
-                List.of(), Optional.empty(), Optional.empty(), sorted(findings), analysis.spline());
+                List.of(), Optional.empty(), Optional.empty(), sorted(findings), Optional.empty(), analysis.spline());
     }
 
     /** The findings, errors first (stable). */

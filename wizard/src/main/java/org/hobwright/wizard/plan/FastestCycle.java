@@ -5,6 +5,7 @@ import java.util.Optional;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.FastestProposal;
 import org.hobwright.api.cycle.PassSummary;
+import org.hobwright.wizard.store.CuttingData;
 
 /**
  * The shortest cycle the machine, the hob, the cutting data and the quality targets allow.

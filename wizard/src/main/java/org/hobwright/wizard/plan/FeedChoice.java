@@ -1,10 +1,12 @@
 package org.hobwright.wizard.plan;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
+import org.hobwright.text.Decimal;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.ValueRange;
 
 /**
  * Picks the feeds of the user's plan. A feed the job gives is kept (a finding says when it lies
@@ -63,9 +65,9 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
 
     private static double given(double feed, Optional<ValueRange> range, String field, List<Finding> findings) {
         if (range.isPresent() && !range.get().contains(feed)) {
-            findings.add(PlanCode.PLAN_FEED_OUTSIDE_TABLE.at(field, String.format(Locale.ROOT,
-                    "feed %.3f mm per work revolution is outside the typical %.3f to %.3f mm", feed, range.get().min(),
-                    range.get().max()), "confirm the feed with the hob supplier"));
+            findings.add(PlanCode.PLAN_FEED_OUTSIDE_TABLE.at(field, "feed " + Decimal.fixed(feed, 3)
+                    + " mm per work revolution is outside the typical " + Decimal.fixed(range.get().min(), 3) + " to "
+                    + Decimal.fixed(range.get().max(), 3) + " mm", "confirm the feed with the hob supplier"));
         }
         return feed;
     }
@@ -73,9 +75,9 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
     private static double lowered(ValueRange range, double limit, String field, String why, List<Finding> findings) {
         double feed = Math.min(range.mid(), limit);
         if (feed < range.min()) {
-            findings.add(PlanCode.PLAN_FEED_LOWERED_FOR_TARGET.at(field, String.format(Locale.ROOT,
-                    "feed set to %.4f mm per work revolution, below the typical %.3f mm, to meet the %s", feed,
-                    range.min(), why), null));
+            findings.add(PlanCode.PLAN_FEED_LOWERED_FOR_TARGET.at(field, "feed set to " + Decimal.fixed(feed, 4)
+                    + " mm per work revolution, below the typical " + Decimal.fixed(range.min(), 3)
+                    + " mm, to meet the " + why, null));
         }
         return feed;
     }
@@ -84,9 +86,10 @@ public record FeedChoice(double roughMmPerRev, double finishMmPerRev) {
         if (feed <= cap) {
             return feed;
         }
-        findings.add(PlanCode.PLAN_FEED_RATE_CAPPED.at(field, String.format(Locale.ROOT,
-                "feed %.4f mm per work revolution would exceed the machine's %.1f mm/min; lowered to %.4f mm", feed,
-                rate, cap), "accept the lower feed, or lower the cutting speed"));
+        findings.add(PlanCode.PLAN_FEED_RATE_CAPPED.at(field, "feed " + Decimal.fixed(feed, 4)
+                + " mm per work revolution would exceed the machine's " + Decimal.fixed(rate, 1)
+                + " mm/min; lowered to " + Decimal.fixed(cap, 4)
+                + " mm", "accept the lower feed, or lower the cutting speed"));
         return cap;
     }
 }

@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.text.Decimal;
 
 /**
  * The steps before the synchronisation: comment lines the setter needs beside the moves (sync ratio
@@ -30,11 +31,11 @@ public final class HeaderSteps {
                                      Drive drive, PlanSettings s, Optional<HobShiftPlan> shift) {
         List<CycleStep> out = new ArrayList<>(12);
         out.add(comment("sync: hob " + drive.ratio().hobTurns() + " : work " + drive.ratio().workTurns()
-                + " turns; hob " + Text.fixed(s.hobRpm(), 1) + " rpm " + words(drive.senses().hob())
-                + " seen from its drive end; work " + Text.fixed(drive.workRpm(s.hobRpm()), 4) + " rpm "
+                + " turns; hob " + Decimal.fixed(s.hobRpm(), 1) + " rpm " + words(drive.senses().hob())
+                + " seen from its drive end; work " + Decimal.fixed(drive.workRpm(s.hobRpm()), 4) + " rpm "
                 + words(drive.senses().work()) + " seen from the entry face"));
         if (drive.differentialDegPerMm() != 0) {
-            out.add(comment("differential: " + Text.signed(drive.differentialDegPerMm(), 6)
+            out.add(comment("differential: " + Decimal.signed(drive.differentialDegPerMm(), 6)
                     + " deg of work rotation per mm of axial feed"));
         }
         shift.ifPresent(p -> out.add(comment(p.describe(job.units()))));

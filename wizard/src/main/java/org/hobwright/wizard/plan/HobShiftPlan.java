@@ -1,14 +1,13 @@
 package org.hobwright.wizard.plan;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.HobSpec;
-
 import org.hobwright.api.job.MachineProfile;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 
 /**
  * Hob shifting between parts, so that wear spreads along the hob.
@@ -44,16 +43,17 @@ public record HobShiftPlan(double positionMm, double usableMm, double stepMm, in
         double step = cycle.hobShiftPerPartMm();
         if (usable <= 0) {
             if (step > 0) {
-                findings.add(PlanCode.PLAN_HOB_SHIFT_NO_ROOM.at("hob.length", String.format(Locale.ROOT,
-                        "the hob (%.3f mm long) has no room to shift beyond its working width of %.3f mm",
-                        hob.lengthMm(), width), "use a longer hob or set cycle.hobShift.perPart to 0"));
+                findings.add(PlanCode.PLAN_HOB_SHIFT_NO_ROOM.at("hob.length", "the hob ("
+                        + Decimal.fixed(hob.lengthMm(), 3)
+                        + " mm long) has no room to shift beyond its working width of " + Decimal.fixed(width, 3)
+                        + " mm", "use a longer hob or set cycle.hobShift.perPart to 0"));
             }
             return Optional.of(new HobShiftPlan(0, 0, 0, cycle.hobShiftEveryParts(), 1));
         }
         if (step > usable) {
             findings.add(PlanCode.PLAN_HOB_SHIFT_STEP_TOO_LARGE.at("cycle.hobShift.perPart",
-                    String.format(Locale.ROOT, "a shift of %.3f mm is more than the usable range of %.3f mm", step,
-                            usable), String.format(Locale.ROOT, "shift at most %.3f mm", usable)));
+                    "a shift of " + Decimal.fixed(step, 3) + " mm is more than the usable range of "
+                            + Decimal.fixed(usable, 3) + " mm", "shift at most " + Decimal.fixed(usable, 3) + " mm"));
             step = 0;
         }
         int positions = step > 0 ? (int) Math.floor(usable / step + 1e-9) + 1 : 1;
@@ -73,11 +73,11 @@ public record HobShiftPlan(double positionMm, double usableMm, double stepMm, in
         String u = " " + units.symbol();
         int decimals = units == Units.IN ? 4 : 3;
         if (stepMm <= 0) {
-            return "hob shift position " + Text.fixed(units.fromMm(positionMm), decimals) + u
+            return "hob shift position " + Decimal.fixed(units.fromMm(positionMm), decimals) + u
                     + " (no shifting between parts)";
         }
-        return "hob shift " + Text.fixed(units.fromMm(stepMm), decimals) + u + " every " + everyParts
+        return "hob shift " + Decimal.fixed(units.fromMm(stepMm), decimals) + u + " every " + everyParts
                 + (everyParts == 1 ? " part" : " parts") + ", from 0 to "
-                + Text.fixed(units.fromMm((positions - 1) * stepMm), decimals) + u + ", then back to 0";
+                + Decimal.fixed(units.fromMm((positions - 1) * stepMm), decimals) + u + ", then back to 0";
     }
 }

@@ -15,10 +15,13 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.analysis.JobAnalysis;
 import org.hobwright.wizard.setup.Angles;
 import org.hobwright.wizard.setup.HobSetup;
 import org.hobwright.wizard.simulate.GeneratingSimulation;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataTable;
 
 /**
  * Plans one analysed job: checks what would stop the cycle, resolves speeds, passes and feeds,
@@ -66,6 +69,7 @@ final class JobPlanning {
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
+        Clearances.check(cycle, job.units(), findings);
         if (swivel.rounded()) {
             findings.add(PlanCode.PLAN_SWIVEL_ROUNDED.at("machine.swivel.resolution",
                     "the holder's resolution rounds the swivel setting from " + Angles.dms(swivel.exactDeg()) + " to "
@@ -104,7 +108,7 @@ final class JobPlanning {
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.of(setup),
                 errors ? List.of() : path.steps(), Optional.of(summary),
                 job.spline().isPresent() ? analysis.simulation() : GeneratingSimulation.forCycle(job, gd, findings),
-                DefaultCyclePlanner.sorted(findings), analysis.spline());
+                DefaultCyclePlanner.sorted(findings), Optional.empty(), analysis.spline());
     }
 
     private Drive drive(SyncRatio ratio) {
@@ -151,11 +155,11 @@ final class JobPlanning {
             return Optional.empty();
         }
         FastestProposal p = r.get().proposal();
-        findings.add(PlanCode.PLAN_FASTEST.at("cycle.fastest", "fastest cycle " + Text.fixed(p.cycleTimeS(), 1)
-                + " s (proved lower bound " + Text.fixed(p.lowerBoundS(), 1) + " s) against "
-                + Text.fixed(userTimeS, 1) + " s planned: " + Text.fixed(p.cuttingSpeedMPerMin(), 1) + " m/min, "
-                + p.passes() + " pass(es), roughing " + Text.fixed(p.roughFeedMmPerRev(), 3) + " mm, finishing "
-                + Text.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(), null));
+        findings.add(PlanCode.PLAN_FASTEST.at("cycle.fastest", "fastest cycle " + Decimal.fixed(p.cycleTimeS(), 1)
+                + " s (proved lower bound " + Decimal.fixed(p.lowerBoundS(), 1) + " s) against "
+                + Decimal.fixed(userTimeS, 1) + " s planned: " + Decimal.fixed(p.cuttingSpeedMPerMin(), 1) + " m/min, "
+                + p.passes() + " pass(es), roughing " + Decimal.fixed(p.roughFeedMmPerRev(), 3) + " mm, finishing "
+                + Decimal.fixed(p.finishFeedMmPerRev(), 3) + " mm per work revolution; limits: " + p.bindingLimit(), null));
         return Optional.of(p);
     }
 

@@ -53,6 +53,8 @@ public enum PlanCode implements FindingCode {
             "enveloping depth, FORMULAS.md §6.2 (derived)", WARNING),
     PLAN_CHIP_OVER_LIMIT("cycle.roughFeed", "Hoffmeister chip thickness above the limit",
             "Hoffmeister 1970 (exponents from memory)", WARNING),
+    PLAN_CLEARANCE_SMALL("cycle.radialClearance, cycle.axialClearance", "a clearance below 0.5 mm",
+            PlanSources.NO_SOURCE, WARNING),
     PLAN_HOB_SHIFT_NO_ROOM("hob.length", "hob too short to shift beyond its working width",
             PlanSources.NO_SOURCE, WARNING),
     PLAN_HOB_SHIFT_STEP_TOO_LARGE("cycle.hobShift.perPart", "shift step larger than the usable range (not shifted)",

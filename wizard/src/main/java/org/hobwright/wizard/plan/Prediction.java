@@ -1,8 +1,8 @@
 package org.hobwright.wizard.plan;
 
 import java.util.List;
-import java.util.Locale;
 import org.hobwright.api.check.Finding;
+import org.hobwright.text.Decimal;
 
 /**
  * The predicted finish and chip load of a plan (formulas in {@link FinishFormulas}), and the
@@ -25,22 +25,22 @@ public record Prediction(double feedMarkFlankUm, double feedMarkRootUm, double e
     /** Adds a finding for every target this prediction exceeds. */
     public void check(QualityLimits t, CutModel model, List<Finding> findings) {
         if (feedMarkFlankUm > t.feedMarkUm() * (1 + 1e-9)) {
-            findings.add(PlanCode.PLAN_FEED_MARK_OVER_TARGET.at("cycle.finishFeed", String.format(Locale.ROOT,
-                    "predicted flank feed marks %.2f µm exceed the %.2f µm target (%s)", feedMarkFlankUm,
-                    t.feedMarkUm(), t.feedMarkSource()), String.format(Locale.ROOT,
-                    "finish at %.3f mm per work revolution or less",
-                    Math.floor(model.feedForFeedMark(t.feedMarkUm()) * 1000) / 1000)));
+            findings.add(PlanCode.PLAN_FEED_MARK_OVER_TARGET.at("cycle.finishFeed", "predicted flank feed marks "
+                    + Decimal.fixed(feedMarkFlankUm, 2) + " µm exceed the " + Decimal.fixed(t.feedMarkUm(), 2)
+                    + " µm target (" + t.feedMarkSource() + ")", "finish at "
+                    + Decimal.fixed(model.feedForFeedMark(t.feedMarkUm()), 3, true, Decimal.Rounding.FLOOR)
+                    + " mm per work revolution or less"));
         }
         if (envelopingUm > t.envelopingUm() * (1 + 1e-9)) {
-            findings.add(PlanCode.PLAN_ENVELOPING_OVER_TARGET.at("hob.gashes", String.format(Locale.ROOT,
-                    "predicted enveloping flats %.2f µm exceed the %.2f µm target (%s)", envelopingUm,
-                    t.envelopingUm(), t.envelopingSource()),
+            findings.add(PlanCode.PLAN_ENVELOPING_OVER_TARGET.at("hob.gashes", "predicted enveloping flats "
+                    + Decimal.fixed(envelopingUm, 2) + " µm exceed the " + Decimal.fixed(t.envelopingUm(), 2)
+                    + " µm target (" + t.envelopingSource() + ")",
                     "use a hob with more gashes or fewer starts"));
         }
         if (t.hasChipLimit() && maxChipMm > t.chipMm() * (1 + 1e-9)) {
-            findings.add(PlanCode.PLAN_CHIP_OVER_LIMIT.at("cycle.roughFeed", String.format(Locale.ROOT,
-                    "predicted chip thickness %.4f mm exceeds the %.4f mm limit (%s)", maxChipMm, t.chipMm(),
-                    t.chipSource()), "lower the feed or take more passes (cycle.roughDepth)"));
+            findings.add(PlanCode.PLAN_CHIP_OVER_LIMIT.at("cycle.roughFeed", "predicted chip thickness "
+                    + Decimal.fixed(maxChipMm, 4) + " mm exceeds the " + Decimal.fixed(t.chipMm(), 4) + " mm limit ("
+                    + t.chipSource() + ")", "lower the feed or take more passes (cycle.roughDepth)"));
         } else if (!t.hasChipLimit()) {
             findings.add(PlanCode.PLAN_CHIP_LIMIT_UNKNOWN.at("cycle.targets.maxChipThickness",
                     "no chip-thickness limit is known for this material and hob, so chip load is not checked", null));

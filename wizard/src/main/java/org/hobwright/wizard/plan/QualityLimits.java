@@ -4,6 +4,8 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.QualityDefaults;
 
 /**
  * The quality limits a plan is checked against, each with where it came from.

@@ -1,6 +1,7 @@
 package org.hobwright.wizard.plan;
 
 import org.hobwright.api.job.SwivelHolder;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
 
 /**
@@ -55,6 +56,6 @@ public record SwivelSetting(double machineAngleDeg, double exactDeg, String text
             return res < 1.0 / 60 - 1e-12 ? Angles.dms(deg) : Angles.degreesMinutes(deg);
         }
         int decimals = (int) Math.max(0, Math.min(6, Math.ceil(-Math.log10(res) - 1e-9)));
-        return Text.fixed(deg, decimals) + "°";
+        return Decimal.fixed(deg, decimals) + "°";
     }
 }

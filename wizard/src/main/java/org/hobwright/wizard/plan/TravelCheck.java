@@ -2,10 +2,10 @@ package org.hobwright.wizard.plan;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.text.Decimal;
 
 /**
  * Checks every position of the steps against the machine's travels: radial positions as work
@@ -45,16 +45,17 @@ public final class TravelCheck {
         if (minDia < machine.radialMinMm() - tol || maxDia > machine.radialMaxMm() + tol) {
             out.add(PlanCode.PLAN_TRAVEL_RADIAL.at(maxDia > machine.radialMaxMm() + tol
                             ? "machine.travel.radialMax" : "machine.travel.radialMin",
-                    String.format(Locale.ROOT, "the cycle needs work diameters %.3f to %.3f mm, the machine reaches"
-                            + " %.3f to %.3f mm", minDia, maxDia, machine.radialMinMm(), machine.radialMaxMm()),
+                    "the cycle needs work diameters " + Decimal.fixed(minDia, 3) + " to " + Decimal.fixed(maxDia, 3)
+                            + " mm, the machine reaches " + Decimal.fixed(machine.radialMinMm(), 3) + " to "
+                            + Decimal.fixed(machine.radialMaxMm(), 3) + " mm",
                     "reduce cycle.radialClearance or the blank diameter, or use a machine with more radial travel"));
         }
         if (minAx < machine.axialMinMm() - tol || maxAx > machine.axialMaxMm() + tol) {
             out.add(PlanCode.PLAN_TRAVEL_AXIAL.at(minAx < machine.axialMinMm() - tol
                             ? "machine.travel.axialMin" : "machine.travel.axialMax",
-                    String.format(Locale.ROOT, "the cycle needs axial positions %.3f to %.3f mm from the entry face,"
-                            + " the machine reaches %.3f to %.3f mm", minAx, maxAx, machine.axialMinMm(),
-                            machine.axialMaxMm()),
+                    "the cycle needs axial positions " + Decimal.fixed(minAx, 3) + " to " + Decimal.fixed(maxAx, 3)
+                            + " mm from the entry face, the machine reaches " + Decimal.fixed(machine.axialMinMm(), 3)
+                            + " to " + Decimal.fixed(machine.axialMaxMm(), 3) + " mm",
                     "reduce cycle.axialClearance, use a smaller hob (shorter approach) or move the part's zero"));
         }
         return out;

@@ -1,16 +1,16 @@
 package org.hobwright.wizard.simulate;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.cycle.Point;
+import org.hobwright.text.Decimal;
 import org.hobwright.text.Xml;
 
 /**
  * Draws a simulated tooth space as SVG: the profile continuous rolling would cut beside the cut
  * profile with its deviation exaggerated by a stated factor, the deviation along the roll length,
  * and (when a feed is known) the feed marks in the axial section of the root. Deterministic output
- * (fixed number format, {@link Locale#ROOT}).
+ * (numbers through {@link Decimal}, lines ending in a line feed).
  */
 public final class SimulationSvg {
     private static final int MAX_POINTS = 2500;
@@ -54,17 +54,17 @@ public final class SimulationSvg {
         double height = PANEL + 3 * MARGIN + 56;
         StringBuilder s = new StringBuilder();
         s.append("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n");
-        s.append(String.format(Locale.ROOT, "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"%.0f\" height=\"%.0f\""
-                + " viewBox=\"0 0 %.0f %.0f\" font-family=\"sans-serif\" font-size=\"11\">%n", width, height, width, height));
+        s.append("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"" + Decimal.fixed(width, 0) + "\" height=\""
+                + Decimal.fixed(height, 0) + "\" viewBox=\"0 0 " + Decimal.fixed(width, 0) + " "
+                + Decimal.fixed(height, 0) + "\" font-family=\"sans-serif\" font-size=\"11\">\n");
         s.append("<rect width=\"100%\" height=\"100%\" fill=\"white\"/>\n");
         text(s, MARGIN, 22, 14, Xml.escape(title) + " — generating simulation, one tooth space (transverse section)");
         GeneratingSetup st = sim.setup();
-        text(s, MARGIN, height - 28, 11, String.format(Locale.ROOT,
-                "z %d, m_n %s mm, β %s°, x %s (with the thickness allowance), hob %d start(s), %d gashes.",
-                st.teeth(), num(st.normalModuleMm()), num(Math.toDegrees(st.helixAngleRad())), num(st.profileShift()),
-                st.starts(), st.gashes()));
-        text(s, MARGIN, height - 12, 11, String.format(Locale.ROOT,
-                "Blue: true involute; grey: continuous rolling; red: cut profile with its deviation × %s.", num(k)));
+        text(s, MARGIN, height - 28, 11, "z " + st.teeth() + ", m_n " + num(st.normalModuleMm()) + " mm, β "
+                + num(Math.toDegrees(st.helixAngleRad())) + "°, x " + num(st.profileShift())
+                + " (with the thickness allowance), hob " + st.starts() + " start(s), " + st.gashes() + " gashes.");
+        text(s, MARGIN, height - 12, 11, "Blue: true involute; grey: continuous rolling; red: cut profile with its"
+                + " deviation × " + num(k) + ".");
         toothSpace(s, sim, k, MARGIN, 2 * MARGIN);
         deviation(s, sim, 2 * MARGIN + PANEL, 2 * MARGIN);
         marks.ifPresent(m -> feedMarks(s, m, 3 * MARGIN + 2 * PANEL, 2 * MARGIN));
@@ -78,9 +78,10 @@ public final class SimulationSvg {
         Box box = Box.of(nominal).with(cut);
         double scale = PANEL / Math.max(box.width(), box.height());
         Frame f = new Frame(ox, oy + PANEL, box.minX, box.minY, scale, scale);
-        text(s, ox, oy - 8, 12, String.format(Locale.ROOT, "Tooth space: deviation × %s", num(k)));
-        s.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"%.1f\" height=\"%.1f\" fill=\"none\""
-                + " stroke=\"#ccc\"/>%n", ox, oy, PANEL, PANEL));
+        text(s, ox, oy - 8, 12, "Tooth space: deviation × " + num(k));
+        s.append("<rect x=\"" + Decimal.fixed(ox, 1) + "\" y=\"" + Decimal.fixed(oy, 1) + "\" width=\""
+                + Decimal.fixed(PANEL, 1) + "\" height=\"" + Decimal.fixed(PANEL, 1)
+                + "\" fill=\"none\" stroke=\"#ccc\"/>\n");
         GeneratingSetup st = sim.setup();
         circle(s, f, st.baseRadiusMm(), box, "#88a", "base circle");
         circle(s, f, st.referenceRadiusMm(), box, "#8a8", "reference circle");
@@ -92,13 +93,13 @@ public final class SimulationSvg {
         polyline(s, f, cut, "#c00", 0.8);
         double y = oy + 14;
         for (String line : new String[] {
-            String.format(Locale.ROOT, "profile deviation max %s µm", num(sim.profileDeviationMaxMm() * 1000)),
-            String.format(Locale.ROOT, "enveloping depth %s µm (closed form %s µm)",
-                    num(sim.envelopingDepthMm() * 1000), num(sim.closedFormEnvelopingDepthMm() * 1000)),
-            sim.undercut() ? String.format(Locale.ROOT, "UNDERCUT, %s µm deep", num(sim.undercutDepthMm() * 1000))
+            "profile deviation max " + num(sim.profileDeviationMaxMm() * 1000) + " µm",
+            "enveloping depth " + num(sim.envelopingDepthMm() * 1000) + " µm (closed form "
+                    + num(sim.closedFormEnvelopingDepthMm() * 1000) + " µm)",
+            sim.undercut() ? "UNDERCUT, " + num(sim.undercutDepthMm() * 1000) + " µm deep"
                     : "no undercut",
-            String.format(Locale.ROOT, "active involute from Ø %s mm (form circle Ø %s mm)",
-                    num(sim.activeInvoluteStartDiameterMm()), num(sim.rootFormDiameterMm()))}) {
+            "active involute from Ø " + num(sim.activeInvoluteStartDiameterMm()) + " mm (form circle Ø "
+                    + num(sim.rootFormDiameterMm()) + " mm)"}) {
             text(s, ox + 6, y, 10, line);
             y += 13;
         }
@@ -116,29 +117,29 @@ public final class SimulationSvg {
                 0.9 * PANEL / Math.max(box.height(), 1e-12));
         polyline(s, f, dev, "#c00", 0.8);
         double ref = sim.referenceRollMm();
-        s.append(String.format(Locale.ROOT, "<line x1=\"%.2f\" y1=\"%.2f\" x2=\"%.2f\" y2=\"%.2f\" stroke=\"#8a8\""
-                + " stroke-dasharray=\"3 3\"/>%n", f.x(ref), oy, f.x(ref), oy + PANEL));
+        s.append("<line x1=\"" + Decimal.fixed(f.x(ref), 2) + "\" y1=\"" + Decimal.fixed(oy, 2) + "\" x2=\""
+                + Decimal.fixed(f.x(ref), 2) + "\" y2=\"" + Decimal.fixed(oy + PANEL, 2)
+                + "\" stroke=\"#8a8\" stroke-dasharray=\"3 3\"/>\n");
         text(s, f.x(ref) + 3, oy + 12, 10, "reference circle");
-        text(s, ox + 4, oy + PANEL - 4, 10, String.format(Locale.ROOT, "roll %s … %s mm, deviation 0 … %s µm",
-                num(box.minX), num(box.maxX), num(box.maxY)));
+        text(s, ox + 4, oy + PANEL - 4, 10, "roll " + num(box.minX) + " … " + num(box.maxX) + " mm, deviation 0 … "
+                + num(box.maxY) + " µm");
     }
 
     private static void feedMarks(StringBuilder s, FeedMarks m, double ox, double oy) {
         List<Point> pts = m.profile().stream().map(p -> new Point(p.x(), p.y() * 1000)).toList();
-        text(s, ox, oy - 8, 12, String.format(Locale.ROOT, "Root along the face: feed marks, feed %s mm",
-                num(m.feedMm())));
+        text(s, ox, oy - 8, 12, "Root along the face: feed marks, feed " + num(m.feedMm()) + " mm");
         axes(s, ox, oy);
         Box box = Box.of(pts);
         Frame f = new Frame(ox, oy + PANEL * 0.75, box.minX, box.minY, PANEL / Math.max(box.width(), 1e-12),
                 0.5 * PANEL / Math.max(box.height(), 1e-12));
         polyline(s, f, pts, "#c00", 0.8);
-        text(s, ox + 4, oy + PANEL - 4, 10, String.format(Locale.ROOT, "scallop depth %s µm",
-                num(m.depthMm() * 1000)));
+        text(s, ox + 4, oy + PANEL - 4, 10, "scallop depth " + num(m.depthMm() * 1000) + " µm");
     }
 
     private static void axes(StringBuilder s, double ox, double oy) {
-        s.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%.1f\" width=\"%.1f\" height=\"%.1f\" fill=\"none\""
-                + " stroke=\"#ccc\"/>%n", ox, oy, PANEL, PANEL));
+        s.append("<rect x=\"" + Decimal.fixed(ox, 1) + "\" y=\"" + Decimal.fixed(oy, 1) + "\" width=\""
+                + Decimal.fixed(PANEL, 1) + "\" height=\"" + Decimal.fixed(PANEL, 1)
+                + "\" fill=\"none\" stroke=\"#ccc\"/>\n");
     }
 
     private static void circle(StringBuilder s, Frame f, double radius, Box box, String colour, String label) {
@@ -150,10 +151,11 @@ public final class SimulationSvg {
         StringBuilder pts = new StringBuilder();
         for (int i = 0; i <= 64; i++) {
             double a = -half + 2 * half * i / 64;
-            pts.append(String.format(Locale.ROOT, "%.2f,%.2f ", f.x(radius * Math.sin(a)), f.y(radius * Math.cos(a))));
+            pts.append(Decimal.fixed(f.x(radius * Math.sin(a)), 2) + "," + Decimal.fixed(f.y(radius * Math.cos(a)), 2)
+                    + " ");
         }
-        s.append(String.format(Locale.ROOT, "<polyline points=\"%s\" fill=\"none\" stroke=\"%s\" stroke-width=\"0.6\""
-                + " stroke-dasharray=\"4 3\"><title>%s</title></polyline>%n", pts.toString().trim(), colour, label));
+        s.append("<polyline points=\"" + pts.toString().trim() + "\" fill=\"none\" stroke=\"" + colour
+                + "\" stroke-width=\"0.6\" stroke-dasharray=\"4 3\"><title>" + label + "</title></polyline>\n");
     }
 
     private static void polyline(StringBuilder s, Frame f, List<Point> points, String colour, double width) {
@@ -161,24 +163,25 @@ public final class SimulationSvg {
         StringBuilder pts = new StringBuilder();
         for (int i = 0; i < points.size(); i += stride) {
             Point p = points.get(i);
-            pts.append(String.format(Locale.ROOT, "%.2f,%.2f ", f.x(p.x()), f.y(p.y())));
+            pts.append(Decimal.fixed(f.x(p.x()), 2) + "," + Decimal.fixed(f.y(p.y()), 2) + " ");
         }
         Point last = points.get(points.size() - 1);
-        pts.append(String.format(Locale.ROOT, "%.2f,%.2f", f.x(last.x()), f.y(last.y())));
-        s.append(String.format(Locale.ROOT, "<polyline points=\"%s\" fill=\"none\" stroke=\"%s\" stroke-width=\"%s\"/>%n",
-                pts, colour, num(width)));
+        pts.append(Decimal.fixed(f.x(last.x()), 2) + "," + Decimal.fixed(f.y(last.y()), 2));
+        s.append("<polyline points=\"" + pts + "\" fill=\"none\" stroke=\"" + colour + "\" stroke-width=\""
+                + num(width) + "\"/>\n");
     }
 
     private static void text(StringBuilder s, double x, double y, int size, String content) {
-        s.append(String.format(Locale.ROOT, "<text x=\"%.1f\" y=\"%.1f\" font-size=\"%d\">%s</text>%n", x, y, size,
-                content));
+        s.append("<text x=\"" + Decimal.fixed(x, 1) + "\" y=\"" + Decimal.fixed(y, 1) + "\" font-size=\"" + size
+                + "\">" + content + "</text>\n");
     }
 
+    /** A number in a caption: whole numbers as they are, others to four significant digits. */
     private static String num(double v) {
         if (v == Math.rint(v) && Math.abs(v) < 1e9) {
-            return String.format(Locale.ROOT, "%.0f", v);
+            return Decimal.fixed(v, 0);
         }
-        return String.format(Locale.ROOT, "%.4g", v);
+        return Decimal.significant(v, 4);
     }
 
 

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
 
 /**
@@ -100,7 +101,7 @@ public final class FieldCheck {
 
     /** A number without a needless ".0", e.g. {@code 1}, {@code 0.25}. */
     public static String plain(double v) {
-        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+        return Decimal.exact(v);
     }
 
     private static Optional<Finding> error(WizardCode code, Field field, String message, String fix) {

@@ -7,8 +7,8 @@ import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.ProviderMissingException;
-import org.hobwright.api.spi.Providers;
 import org.hobwright.wizard.analysis.JobAnalyser;
+import org.hobwright.wizard.run.LibraryPlanner;
 import org.hobwright.wizard.store.JobReader;
 import org.hobwright.wizard.store.Library;
 import org.hobwright.wizard.store.LibraryEntry;
@@ -17,7 +17,8 @@ import tools.jackson.databind.node.ObjectNode;
 
 /**
  * The step model's services on a real library: the store's job reader, the engineering checks
- * ({@link JobAnalyser}) and the planner found through the SPI (looked up once, when first needed).
+ * ({@link JobAnalyser}) and the library's planner ({@link LibraryPlanner}: the shop's cutting data
+ * when the folder has a table), looked up once, when first needed.
  */
 public final class LibraryServices implements StepServices {
     /** Name of the answers in the reader's messages. */
@@ -53,15 +54,22 @@ public final class LibraryServices implements StepServices {
     public HobCycle plan(HobJob job) {
         try {
             if (planner == null) {
-                planner = Providers.planner(loader);
+                Loaded<CyclePlanner> found = LibraryPlanner.of(library, loader);
+                if (!found.ok()) {
+                    return unplanned(job, found.findings());
+                }
+                planner = found.get();
             }
             return planner.plan(job);
         } catch (ProviderMissingException e) {
-            return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(),
-                    Optional.empty(), List.of(), Optional.empty(), Optional.empty(),
-                    List.of(WizardCode.WIZARD_NO_PLANNER.at("job", e.getMessage(),
-                            "put hobwright-wizard on the class path")));
+            return unplanned(job, List.of(WizardCode.WIZARD_NO_PLANNER.at("job", e.getMessage(),
+                    "put hobwright-wizard on the class path")));
         }
+    }
+
+    private static HobCycle unplanned(HobJob job, List<Finding> why) {
+        return new HobCycle(Optional.empty(), Optional.empty(), Optional.empty(), Optional.empty(), List.of(),
+                Optional.empty(), Optional.empty(), why, Optional.of(job));
     }
 
     @Override

@@ -10,6 +10,8 @@ import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.Spi;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.api.wizard.WizardFactory;
+import org.hobwright.wizard.run.Build;
+import org.hobwright.wizard.run.LibraryPlanner;
 import org.hobwright.wizard.store.JobWriter;
 import org.hobwright.wizard.store.Library;
 import tools.jackson.databind.JsonNode;
@@ -17,11 +19,18 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The wizard module's {@link WizardFactory}, found with {@link java.util.ServiceLoader}. Sessions
- * start from the built-in sample job (an invented metering-pump gear) or from a given job.
+ * start blank, from the built-in sample job (an invented metering-pump gear) when asked, or from
+ * a given job. The planner at REVIEW is the library's ({@link LibraryPlanner}), with the shop's
+ * cutting data.
  */
 public final class StepWizardFactory implements WizardFactory {
     /** Resource of the built-in sample job whose values are the defaults. */
     public static final String SAMPLE = "org/hobwright/builtin/jobs/metering-pump-gear.json";
+
+    @Override
+    public String id() {
+        return "hobwright";
+    }
 
     @Override
     public int spiVersion() {
@@ -29,13 +38,27 @@ public final class StepWizardFactory implements WizardFactory {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
+    public String buildVersion() {
+        return Build.VERSION;
+    }
+
+    @Override
     public Wizard start(Map<String, String> options) {
-        return new StepSession(services(options), sampleAnswers());
+        java.util.Objects.requireNonNull(options, "options is required, was null");
+        return new StepSession(services(options), START_SAMPLE.equals(options.get(START)) ? sampleAnswers()
+                : new Answers());
     }
 
     /** {@inheritDoc} A machine the library does not hold is kept inline. */
     @Override
     public Wizard start(HobJob job, Map<String, String> options) {
+        java.util.Objects.requireNonNull(job, "job is required, was null");
+        java.util.Objects.requireNonNull(options, "options is required, was null");
         StepServices services = services(options);
         boolean known = services.machines().contains(job.machine().name());
         return new StepSession(services, Answers.fromTree(JobWriter.jobTree(job, job.units(), known)));
@@ -55,7 +78,7 @@ public final class StepWizardFactory implements WizardFactory {
     }
 
     private static StepServices services(Map<String, String> options) {
-        Library library = Library.open(Optional.ofNullable(options.get("home")).map(Path::of));
+        Library library = Library.open(Optional.ofNullable(options.get(HOME)).map(Path::of));
         return new LibraryServices(library, StepWizardFactory.class.getClassLoader());
     }
 }

@@ -1,12 +1,11 @@
 package org.hobwright.wizard.steps;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 
 /**
  * Keeps length, feed and cutting-speed answers meaning the same when the job's unit changes: a
@@ -77,7 +76,6 @@ final class UnitSwitch {
         }
         double mm = kind == UnitKind.CUTTING_SPEED ? (from == Units.IN ? v * 0.3048 : v) : from.toMm(v);
         double out = kind == UnitKind.CUTTING_SPEED ? (to == Units.IN ? mm / 0.3048 : mm) : to.fromMm(mm);
-        BigDecimal rounded = new BigDecimal(out).round(new MathContext(10)).stripTrailingZeros();
-        return Optional.of(rounded.scale() < 0 ? rounded.setScale(0).toPlainString() : rounded.toPlainString());
+        return Optional.of(Decimal.significant(out, 10));
     }
 }

@@ -3,24 +3,23 @@ package org.hobwright.wizard.store;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.net.URI;
+import java.net.JarURLConnection;
 import java.net.URISyntaxException;
 import java.net.URL;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.FileSystem;
-import java.nio.file.FileSystemNotFoundException;
 import java.nio.file.FileSystems;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.stream.Stream;
 
 /**
  * The read-only sample scenario bundled on the class path under {@value #ROOT}
  * ({@code machines/}, {@code templates/MACHINE/}, {@code dialects/}, {@code jobs/}, {@code schema/}).
+ * A listing opens the jar for itself and closes it before it returns.
  */
 final class Builtins {
     /** Class-path folder of the bundled scenario. */
@@ -57,22 +56,18 @@ final class Builtins {
             return List.of();
         }
         try {
-            URI uri = url.toURI();
-            if ("jar".equals(uri.getScheme())) {
-                FileSystem fs;
-                try {
-                    fs = FileSystems.getFileSystem(uri);
-                } catch (FileSystemNotFoundException e) {
-                    try {
-                        fs = FileSystems.newFileSystem(uri, Map.of());
-                    } catch (java.nio.file.FileSystemAlreadyExistsException raced) {
-                        fs = FileSystems.getFileSystem(uri);
-                    }
+            if ("jar".equals(url.getProtocol())) {
+                // a file system of our own on the jar, closed at once: nothing stays open or
+                // registered JVM-wide, so a host can close its loader and replace the jar
+                JarURLConnection connection = (JarURLConnection) url.openConnection();
+                Path jar = Path.of(connection.getJarFileURL().toURI());
+                try (FileSystem fs = FileSystems.newFileSystem(jar, (ClassLoader) null)) {
+                    return list(fs.getPath(connection.getEntryName()), dirs);
                 }
-                return list(fs.provider().getPath(uri), dirs);
             }
-            return list(Path.of(uri), dirs);
-        } catch (URISyntaxException | IOException | UncheckedIOException | IllegalArgumentException e) {
+            return list(Path.of(url.toURI()), dirs);
+        } catch (URISyntaxException | IOException | UncheckedIOException | IllegalArgumentException
+                 | java.nio.file.FileSystemNotFoundException | java.nio.file.ProviderNotFoundException e) {
             return List.of();
         }
     }

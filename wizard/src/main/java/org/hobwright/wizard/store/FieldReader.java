@@ -1,12 +1,12 @@
 package org.hobwright.wizard.store;
 
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.Units;
+import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ObjectNode;
@@ -279,13 +279,8 @@ final class FieldReader {
         };
     }
 
+    /** A value quoted in a message: its shortest exact text ({@link Decimal#exact}), e.g. {@code 0.0001}, {@code 24}. */
     static String format(double v) {
-        if (Double.isNaN(v) || Double.isInfinite(v)) {
-            return Double.toString(v);
-        }
-        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
-            return Long.toString((long) v);
-        }
-        return String.format(Locale.ROOT, "%s", v);
+        return Double.isFinite(v) ? Decimal.exact(v) : Double.toString(v);
     }
 }

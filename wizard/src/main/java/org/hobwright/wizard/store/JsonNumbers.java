@@ -1,7 +1,6 @@
 package org.hobwright.wizard.store;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
+import org.hobwright.text.Decimal;
 
 /**
  * Numbers as files show them: rounded to 12 significant digits, so that a value converted from
@@ -9,8 +8,6 @@ import java.math.MathContext;
  * Twelve digits keep far more than any machine can hold (1e-12 relative).
  */
 final class JsonNumbers {
-    private static final MathContext DIGITS = new MathContext(12);
-
     private JsonNumbers() {
     }
 
@@ -19,6 +16,6 @@ final class JsonNumbers {
         if (!Double.isFinite(v) || v == 0) {
             return v == 0 ? 0.0 : v;
         }
-        return new BigDecimal(v).round(DIGITS).doubleValue();
+        return Double.parseDouble(Decimal.significant(v, 12));
     }
 }

@@ -2,9 +2,8 @@ package org.hobwright.wizard.tolerance;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.math.BigDecimal;
-import java.math.MathContext;
 import org.hobwright.api.cycle.ToleranceData;
+import org.hobwright.text.Decimal;
 
 /**
  * Flank tolerances of ISO 1328-1:2013 (identical in ANSI/AGMA ISO 1328-1-B14 and DIN ISO 1328-1:2018)
@@ -111,6 +110,6 @@ public final class FlankTolerances {
     }
 
     private static String fmt(double v) {
-        return new BigDecimal(v).round(new MathContext(6)).stripTrailingZeros().toPlainString();
+        return Decimal.significant(v, 6);
     }
 }

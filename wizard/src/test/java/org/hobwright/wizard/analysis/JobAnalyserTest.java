@@ -324,6 +324,57 @@ class JobAnalyserTest {
         assertEquals(Severity.INFO, only(JobAnalyser.analyse(b.build()), "INSPECTION_PIN_COMPUTED").severity());
     }
 
+    // A ball riding on the tip edge: 16 teeth, module 2, 20°, helix 25° right hand, x 0, ball 7 mm touches the
+    // helicoid at 39.52 mm (brute-force nearest point, BruteForceCrossCheckTest), above the 39.31 mm tip.
+    @Test
+    void ballRidingOnTheTipEdgeIsReported() {
+        JobBuilder b = new JobBuilder();
+        b.teeth = 16;
+        b.pitch = new Pitch.Module(2);
+        b.helix = 25;
+        b.faceWidth = 20;
+        b.system = "iso53-a";
+        b.hobDiameter = 60;
+        b.pin = OptionalDouble.of(7);
+        Finding f = only(JobAnalyser.analyse(b.build()), "INSPECTION_PIN_CONTACT");
+        assertTrue(f.message().contains("above the tip diameter 39.3081 mm"), f.message());
+        b.pin = OptionalDouble.empty();
+        assertFalse(has(JobAnalyser.analyse(b.build()), "INSPECTION_PIN_CONTACT"), "the chosen ball fits");
+    }
+
+    // Undercut: 20 teeth, module 2, 20°, x −0.7 (ISO 53 A). The rule's span over one tooth would touch at
+    // 37.674 mm, inside the undercut (the involute starts at 37.686 mm, RootFormTest), so two teeth are spanned;
+    // their anvils touch at 38.528 mm (d_c = √(d_b² + W₂²), W₂ = 8.4590 mm).
+    @Test
+    void spanOnAnUndercutGearTouchesAboveTheUndercut() {
+        JobBuilder b = new JobBuilder();
+        b.teeth = 20;
+        b.pitch = new Pitch.Module(2);
+        b.shift = -0.7;
+        b.system = "iso53-a";
+        b.hobDiameter = 60;
+        JobAnalysis a = JobAnalyser.analyse(b.build());
+        var inspection = a.inspection().orElseThrow();
+        assertEquals(2, inspection.spanTeeth());
+        assertEquals(38.5278, inspection.spanContactDiameterMm(), 1e-4);
+        assertFalse(has(a, "INSPECTION_SPAN_CONTACT"));
+    }
+
+    // x −1 puts the tip on the reference circle (z 20, m 2: both 40 mm): the span and over-pins values are still
+    // given, and a finding says why the chordal thickness at the reference circle cannot be measured.
+    @Test
+    void tipAtTheReferenceCircleKeepsTheInspectionValues() {
+        JobBuilder b = new JobBuilder();
+        b.teeth = 20;
+        b.pitch = new Pitch.Module(2);
+        b.shift = -1;
+        b.system = "iso53-a";
+        b.hobDiameter = 60;
+        JobAnalysis a = JobAnalyser.analyse(b.build());
+        assertTrue(a.inspection().isPresent(), lines(a));
+        assertEquals("gear.profileShift", only(a, "INSPECTION_CHORDAL_ABOVE_TIP").field());
+    }
+
     // Helical span anvils need b > W_k sin β_b + 2 mm (FORMULAS.md section 3.1).
     @Test
     void narrowHelicalGearCannotTakeTheSpan() {

@@ -25,6 +25,11 @@ public final class EchoWriter implements CycleWriter {
     }
 
     @Override
+    public String apiVersion() {
+        return Spi.API_VERSION;
+    }
+
+    @Override
     public WriteResult write(HobCycle cycle, WriteContext context) {
         String setup = cycle.setup().map(s -> String.format(Locale.ROOT, "hob %.6f rpm, work %.6f rpm, swivel %s%n",
                 s.hobRpm(), s.workRpm(), s.swivelAngleDms())).orElse("no setup\n");

@@ -43,4 +43,18 @@ class ShopCuttingDataTest {
         assertEquals(1, r.err().strip().lines().count(), r::toString);
         assertTrue(Files.notExists(home.resolve("out")), "nothing written");
     }
+
+    @Test
+    void wrongValuesAreAllShownWithLineKeyAndFix(@TempDir Path home) throws IOException {
+        Files.writeString(home.resolve("cutting-data.json"), TABLE.replace("[40, 40]", "[40, 30]")
+                .replace("\"maxChipThickness\": 0.2", "\"maxChipThickness\": 0"));
+        Cli.Run r = Cli.run(home, "plan", SAMPLE, "--out", home.resolve("out").toString());
+        assertEquals(ExitCodes.USAGE, r.code(), r::toString);
+        assertTrue(r.err().startsWith("hobwright: the shop's cutting-data table cannot be used: "), r::toString);
+        assertTrue(r.err().contains("cutting-data.json:3: rows[0].cuttingSpeed starts above its end: [40, 30]"
+                + " (write [min, max])"), r::toString);
+        assertTrue(r.err().contains("cutting-data.json:4: rows[0].maxChipThickness must be greater than 0, was 0"
+                + " (give a positive value)"), r::toString);
+        assertTrue(Files.notExists(home.resolve("out")), "nothing written");
+    }
 }

@@ -1,10 +1,13 @@
 package org.hobwright.wizard.inspection;
 
 import static org.hobwright.wizard.geometry.TestGears.assertRelative;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.hobwright.wizard.geometry.InvoluteGear;
 import org.hobwright.wizard.geometry.ToothSystem;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -35,22 +38,90 @@ class BruteForceCrossCheckTest {
                                                         double allowance, double pin) {
         InvoluteGear g = gear(z, m, alpha, beta, x, allowance);
         SampledFlanks flanks = new SampledFlanks(z, m, alpha, beta, x, allowance, g.tipDiameterMm());
-        double lo = g.baseDiameterMm() / 2;
-        double hi = g.tipDiameterMm() / 2 + pin;
-        assertTrue(flanks.distanceToGapFlank(new double[] {lo, 0, 0}, 0.3) < pin / 2, "bracket low");
-        assertTrue(flanks.distanceToGapFlank(new double[] {hi, 0, 0}, 0.3) > pin / 2, "bracket high");
-        for (int i = 0; i < 60; i++) {
-            double mid = (lo + hi) / 2;
-            if (flanks.distanceToGapFlank(new double[] {mid, 0, 0}, 0.3) < pin / 2) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        double r = (lo + hi) / 2;
+        double r = centreRadius(g, flanks, pin);
         double other = z % 2 == 0 ? Math.PI : Math.PI - Math.PI / z;
         double centres = Math.hypot(r - r * Math.cos(other), r * Math.sin(other));
         assertRelative(centres + pin, OverPins.of(g, pin).overPinsMm(), 1e-8, "over pins");
+    }
+
+    /**
+     * Radius of the pin or ball centre on the gap's centre line, where it is D/2 from the flank: regula falsi
+     * (Illinois variant) on the distance, bracketed below at the base circle and above beyond the tip.
+     */
+    private static double centreRadius(InvoluteGear g, SampledFlanks flanks, double pin) {
+        double lo = g.baseDiameterMm() / 2;
+        double hi = g.tipDiameterMm() / 2 + pin;
+        double fLo = flanks.distanceToGapFlank(new double[] {lo, 0, 0}, 0.3) - pin / 2;
+        double fHi = flanks.distanceToGapFlank(new double[] {hi, 0, 0}, 0.3) - pin / 2;
+        assertTrue(fLo < 0, "bracket low");
+        assertTrue(fHi > 0, "bracket high");
+        int side = 0;
+        for (int i = 0; i < 60 && hi - lo > 1e-11; i++) {
+            double mid = (lo * fHi - hi * fLo) / (fHi - fLo);
+            double f = flanks.distanceToGapFlank(new double[] {mid, 0, 0}, 0.3) - pin / 2;
+            if (f == 0) {
+                return mid;
+            }
+            if (f < 0) {
+                lo = mid;
+                fLo = f;
+                fHi = side == -1 ? fHi / 2 : fHi;
+                side = -1;
+            } else {
+                hi = mid;
+                fHi = f;
+                fLo = side == 1 ? fLo / 2 : fLo;
+                side = 1;
+            }
+        }
+        return (lo * fHi - hi * fLo) / (fHi - fLo);
+    }
+
+    // Where the pin or ball touches: the flank point nearest to its centre (the involute helicoid, continued
+    // beyond the tip), found by minimising the distance over the roll and the turn along the helix. On a helical
+    // gear the ball's normal lies in the base tangent plane at β_b to the transverse plane, so the contact lies
+    // D cos β_b (not D / cos β_b) of roll below the ball centre's.
+    @ParameterizedTest(name = "z {0}, m {1}, β {3}°, x {4}, D {5}")
+    @CsvSource({
+        // 16 teeth, module 2, 20°, helix 25°, ball 7 mm: the ball rides on the tip edge (contact above d_a 39.31)
+        "16, 2, 20, 25, 0, 7", "16, 2, 20, 25, 0, 3.5",
+        // 12 teeth, module 2, helix 30°, x 0.8: the ball of the old rule (5.28) and the right one (4.51)
+        "12, 2, 20, 30, 0.8, 5.28", "12, 2, 20, 30, 0.8, 4.51",
+        "30, 2, 20, 15, 0.2, 3.5", "20, 2, 20, 0, 0, 3.5", "17, 1.5, 20, 40, -0.2, 2.6"})
+    void contactAgreesWithTheNearestPointOfTheSampledHelicoid(int z, double m, double alpha, double beta, double x,
+                                                              double pin) {
+        InvoluteGear g = gear(z, m, alpha, beta, x, 0);
+        SampledFlanks flanks = new SampledFlanks(z, m, alpha, beta, x, 0, g.tipDiameterMm());
+        double r = centreRadius(g, flanks, pin);
+        double contact = flanks.nearestFlankDiameter(new double[] {r, 0, 0}, 0.3);
+        assertRelative(contact, OverPins.of(g, pin).contactDiameterMm(), 1e-7, "contact diameter");
+    }
+
+    // The ball of a helical gear: 16 teeth, module 2, helix 25°, ball 7 mm touches at 39.52 mm, above the tip
+    // (39.31 mm) — it rides on the tip edge, so the measurement is not over the flanks.
+    @Test
+    void ballRidingOnTheTipEdgeIsSeen() {
+        InvoluteGear g = gear(16, 2, 20, 25, 0, 0);
+        OverPins pins = OverPins.of(g, 7);
+        assertEquals(39.52, pins.contactDiameterMm(), 0.005);
+        assertTrue(pins.contactDiameterMm() > g.tipDiameterMm());
+        assertFalse(pins.fits(g.rootFormDiameterMm(), g.tipDiameterMm()));
+    }
+
+    // The "ideal" ball touches the flank on d + 2 x m_n: checked on the sampled helicoid. β 30°, z 12, x 0.8,
+    // module 2: 4.51 mm (the old relation gave 5.28 mm, whose contact lies well above that circle).
+    @ParameterizedTest(name = "z {0}, m {1}, β {3}°, x {4}")
+    @CsvSource({"12, 2, 20, 30, 0.8", "16, 2, 20, 25, 0", "30, 2, 20, 15, 0.2", "20, 1, 20, 0, 0", "25, 1.5, 20, 40, 0.3"})
+    void idealBallTouchesOnTheShiftedReferenceCircle(int z, double m, double alpha, double beta, double x) {
+        InvoluteGear g = gear(z, m, alpha, beta, x, 0);
+        SampledFlanks flanks = new SampledFlanks(z, m, alpha, beta, x, 0, g.tipDiameterMm());
+        double ball = OverPins.idealPinMm(g);
+        double r = centreRadius(g, flanks, ball);
+        assertRelative(g.referenceDiameterMm() + 2 * x * m, flanks.nearestFlankDiameter(new double[] {r, 0, 0}, 0.3),
+                1e-7, "contact of the ideal ball");
+        if (z == 12) {
+            assertEquals(4.51, ball, 0.005);
+        }
     }
 
     // The span is the width of the k-tooth group between two parallel planes touching its outer flanks: with the

@@ -81,6 +81,20 @@ public final class SampledFlanks {
         return leadPerRad == 0 ? overPhi.applyAsDouble(0) : minimise(overPhi, -phiRange, phiRange, 40);
     }
 
+    /**
+     * Diameter of the flank point nearest to c (the lower flank of the tooth above the gap centred on +x, φ
+     * limited): where a ball centred at c touches the helicoid. The involute is continued beyond the tip, so
+     * a ball riding on the tip edge shows a contact above the tip diameter.
+     */
+    double nearestFlankDiameter(double[] c, double phiRange) {
+        double centre = Math.PI / z;
+        DoubleUnaryOperator overT = phi -> minimise(t -> dist(point(centre, false, t, phi), c), 0, tipRoll() * 1.5);
+        double phi = leadPerRad == 0 ? 0 : argmin(overT, -phiRange, phiRange, 40);
+        double t = argmin(s -> dist(point(centre, false, s, phi), c), 0, tipRoll() * 1.5, 200);
+        double[] p = point(centre, false, t, phi);
+        return 2 * Math.hypot(p[0], p[1]);
+    }
+
     /** Largest projection onto n of the upper flank of the tooth centred at {@code centre}, |z| ≤ b/2. */
     double support(double centre, double[] n, double faceWidth) {
         double phiMax = leadPerRad == 0 ? 0 : faceWidth / 2 / leadPerRad;
@@ -107,6 +121,11 @@ public final class SampledFlanks {
 
     /** Minimum of f on [lo, hi]: n samples, then golden-section search around the best. */
     static double minimise(DoubleUnaryOperator f, double lo, double hi, int n) {
+        return f.applyAsDouble(argmin(f, lo, hi, n));
+    }
+
+    /** Where f is least on [lo, hi]: n samples, then golden-section search around the best. */
+    static double argmin(DoubleUnaryOperator f, double lo, double hi, int n) {
         double step = (hi - lo) / n;
         int best = 0;
         double bestValue = Double.POSITIVE_INFINITY;
@@ -138,6 +157,7 @@ public final class SampledFlanks {
                 fd = f.applyAsDouble(d);
             }
         }
-        return Math.min(bestValue, Math.min(fc, fd));
+        double found = fc < fd ? c : d;
+        return Math.min(fc, fd) < bestValue ? found : lo + best * step;
     }
 }

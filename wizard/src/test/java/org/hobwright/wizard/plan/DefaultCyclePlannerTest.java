@@ -18,6 +18,8 @@ import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.testkit.SampleJobs;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataTable;
 import org.junit.jupiter.api.Test;
 
 /** The planner on the test kit's sample jobs and variations of them. */

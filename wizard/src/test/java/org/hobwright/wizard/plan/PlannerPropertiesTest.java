@@ -14,6 +14,8 @@ import org.hobwright.api.cycle.FastestProposal;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataTable;
 import org.junit.jupiter.api.Test;
 
 /**

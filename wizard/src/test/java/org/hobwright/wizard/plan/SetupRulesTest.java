@@ -9,16 +9,19 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
-import org.hobwright.wizard.check.EngineeringCode;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.Hand;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.QualityTargets;
-import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.SwivelHolder.SwivelScale;
+import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.testkit.SampleJobs;
+import org.hobwright.wizard.check.EngineeringCode;
+import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataTable;
+import org.hobwright.wizard.store.QualityDefaults;
 import org.junit.jupiter.api.Test;
 
 /** Swivel setting, spindle senses, pass depths, targets and hob shift. */

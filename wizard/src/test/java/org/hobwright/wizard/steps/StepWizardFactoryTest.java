@@ -1,6 +1,7 @@
 package org.hobwright.wizard.steps;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -9,6 +10,7 @@ import java.util.Map;
 import java.util.ServiceLoader;
 import org.hobwright.api.spi.Spi;
 import org.hobwright.api.testkit.SampleJobs;
+import org.hobwright.api.wizard.FieldSpec;
 import org.hobwright.api.wizard.StepId;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.api.wizard.WizardFactory;
@@ -24,16 +26,23 @@ class StepWizardFactoryTest {
         List<WizardFactory> found = ServiceLoader.load(WizardFactory.class).stream().map(ServiceLoader.Provider::get)
                 .toList();
         assertEquals(1, found.size(), found::toString);
-        assertEquals(Spi.VERSION, found.get(0).spiVersion());
+        assertEquals(Spi.API_VERSION, found.get(0).apiVersion());
         return found.get(0);
     }
 
     @Test
-    void aSessionStartsOnGearWithTheSampleJob() {
-        Wizard w = factory().start(Map.of("home", home.toString()));
-        assertEquals(StepId.GEAR, w.view().id());
-        assertEquals("metering-pump-gear", w.value("name"));
-        assertEquals("varrow-sl16", w.value("machine"));
+    void aSessionStartsBlankUnlessTheSampleIsAskedFor() {
+        Wizard blank = factory().start(Map.of(WizardFactory.HOME, home.toString()));
+        assertEquals(StepId.GEAR, blank.view().id());
+        for (FieldSpec f : blank.view().fields()) {
+            assertEquals("", f.defaultValue(), f.key() + " has no sample value");
+        }
+        assertEquals("", blank.value("gear.teeth"));
+        assertFalse(blank.next(true).moved(), "a blank gear step cannot complete");
+        Wizard sample = factory().start(Map.of(WizardFactory.HOME, home.toString(),
+                WizardFactory.START, WizardFactory.START_SAMPLE));
+        assertEquals("metering-pump-gear", sample.value("name"));
+        assertEquals("varrow-sl16", sample.value("machine"));
     }
 
     @Test
