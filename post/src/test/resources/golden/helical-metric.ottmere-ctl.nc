@@ -15,6 +15,9 @@ G90 G17
 ; Blank dia 66.917 touch-off dia 66.917 final dia 57.917 mm
 ; Cutting speed 60.0 m/min hob 272.8 rpm work 9.095 rpm
 ; Ratio hob:work 30:1 helical addition 0.494308 deg/mm
+; Hob spindle clockwise seen from its drive end
+; Work spindle counter-clockwise seen from the front face of the gear
+; Feed from the front face toward the chuck (climb hobbing)
 ; Passes 1 finish feed 1.5000 mm/rev cycle time 209.0 s
 ; Caution: rotating multi-tooth cutter and synchronised spindles.
 ; Keep the guards closed and never reach into the working area while the

@@ -14,6 +14,9 @@ G90 G17
 ; Blank dia 1.0625 touch-off dia 1.0625 final dia 0.9210 in
 ; Cutting speed 262.5 ft/min hob 802.0 rpm work 25.064 rpm
 ; Ratio hob:work 32:1
+; Hob spindle clockwise seen from its drive end
+; Work spindle clockwise seen from the front face of the gear
+; Feed from the front face toward the chuck (climb hobbing)
 ; Passes 1 finish feed 0.02000 in/rev cycle time 79.7 s
 ; Caution: rotating multi-tooth cutter and synchronised spindles.
 ; Keep the guards closed and never reach into the working area while the

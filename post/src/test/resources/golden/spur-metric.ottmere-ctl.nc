@@ -14,6 +14,9 @@ G90 G17
 ; Blank dia 44.000 touch-off dia 44.000 final dia 35.000 mm
 ; Cutting speed 60.0 m/min hob 272.8 rpm work 13.642 rpm
 ; Ratio hob:work 20:1
+; Hob spindle clockwise seen from its drive end
+; Work spindle counter-clockwise seen from the front face of the gear
+; Feed from the front face toward the chuck (climb hobbing)
 ; Passes 1 finish feed 1.5000 mm/rev cycle time 130.9 s
 ; Caution: rotating multi-tooth cutter and synchronised spindles.
 ; Keep the guards closed and never reach into the working area while the

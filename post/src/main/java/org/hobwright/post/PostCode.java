@@ -25,6 +25,8 @@ public enum PostCode implements FindingCode {
     NC_DIALECT_MISSING_TEMPLATE("a template the dialect or the cycle needs is missing", Sources.DIALECT),
     NC_DIALECT_UNKNOWN_PLACEHOLDER("a placeholder outside the fixed set", Sources.DIALECT),
     NC_DIALECT_BAD_TEMPLATE("a template that cannot be read, or a placeholder where it has no value", Sources.DIALECT),
+    NC_PROGRAM_TOO_LONG("a cycle with more steps than a program may have (20,000 operations)",
+            Sources.POST),
     NC_LINE_TOO_LONG("a block longer than the dialect's maxLineLength", Sources.DIALECT),
     NC_SAFETY_CUT_WITHOUT_SYNC("a feed move before the synchronisation is on", Sources.SAFETY),
     NC_SAFETY_SETTLE("less dwell than the machine's settle time between the synchronisation and the first feed",

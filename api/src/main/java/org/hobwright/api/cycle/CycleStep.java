@@ -6,8 +6,8 @@ import org.hobwright.api.internal.Checks;
 /**
  * One step of a hobbing cycle, in canonical units (mm, s, rpm, degrees). Steps name trade
  * quantities, not axis letters: {@code diameterMm} is the work diameter the hob tip reaches,
- * {@code axialMm} is the hob centre's position along the work axis measured from the gear's entry
- * face toward its far face (negative before the entry face). Mapping onto a machine's axes is the
+ * {@code axialMm} is the hob centre's position along the work axis measured from the gear's front
+ * face (the face away from the chuck) toward its back face (negative before the front face). Mapping onto a machine's axes is the
  * post's job, from the dialect and machine profile.
  *
  * <p>Each step says how long it takes; the cycle time is the sum of the steps' seconds.
@@ -93,7 +93,7 @@ public sealed interface CycleStep {
      * @param hobRotation          hob sense of rotation
      * @param workRotation         work sense of rotation
      * @param differentialDegPerMm additional work rotation per mm of axial hob travel toward the
-     *                             far face, degrees, signed in the work's rotation sense (0 for spur)
+     *                             back face, degrees, signed in the work's rotation sense (0 for spur)
      * @param seconds              time to start and lock, s
      */
     @ApiStatus(since = "1.0")
@@ -191,7 +191,7 @@ public sealed interface CycleStep {
      *
      * @param pass       pass number (1 = first), 0 outside the passes
      * @param diameterMm work diameter the hob tip reaches at the end of the move, mm
-     * @param axialMm    hob centre along the work axis from the entry face, mm
+     * @param axialMm    hob centre along the work axis from the front face, mm
      * @param seconds    time, s
      */
     @ApiStatus(since = "1.0")
@@ -214,7 +214,7 @@ public sealed interface CycleStep {
      *
      * @param pass          pass number (1 = first), 0 outside the passes
      * @param diameterMm    work diameter the hob tip reaches at the end of the move, mm
-     * @param axialMm       hob centre along the work axis from the entry face, mm
+     * @param axialMm       hob centre along the work axis from the front face, mm
      * @param feedMmPerRev  feed per work revolution, mm
      * @param cutting       true when the hob removes material during this move
      * @param seconds       time, s

@@ -11,7 +11,7 @@ import org.hobwright.api.internal.Checks;
  * @param radialDepthMm     depth below the blank tip reached by this pass, mm
  * @param feedMmPerRev      axial feed per work revolution, mm
  * @param approachMm        approach (run-in) length from first contact to full depth, mm
- * @param overrunMm         overrun (run-out) length past the far face, mm
+ * @param overrunMm         overrun (run-out) length past the face where the hob leaves the gear, mm
  * @param axialTravelMm     whole feed travel of the pass, mm
  * @param seconds           time of the pass including its rapids, s
  */

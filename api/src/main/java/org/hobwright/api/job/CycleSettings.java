@@ -23,6 +23,7 @@ import org.hobwright.api.internal.Checks;
  * @param hobShiftPerPartMm   hob shift applied between parts, mm (0 = no shifting)
  * @param hobShiftEveryParts  shift after this many parts, at least 1
  * @param fastest             true to let the optimiser propose the shortest cycle beside the user's plan
+ * @param run                 batch size, program number, tool station, hob mounting and hob life
  */
 @ApiStatus(since = "1.0")
 public record CycleSettings(
@@ -39,7 +40,8 @@ public record CycleSettings(
         QualityTargets targets,
         double hobShiftPerPartMm,
         int hobShiftEveryParts,
-        boolean fastest) {
+        boolean fastest,
+        @ApiStatus(since = "1.1") RunSettings run) {
 
     public CycleSettings {
         Checks.text("cycle.workMaterial", workMaterial);
@@ -58,6 +60,18 @@ public record CycleSettings(
         Checks.present("cycle.targets", targets);
         Checks.nonNegative("cycle.hobShiftPerPart", hobShiftPerPartMm);
         Checks.atLeast("cycle.hobShiftEveryParts", hobShiftEveryParts, 1);
+        Checks.present("cycle.run", run);
+    }
+
+    /** Settings for one part with the dialect's program number and tool station ({@link RunSettings#DEFAULTS}). */
+    @ApiStatus(since = "1.1")
+    public CycleSettings(String workMaterial, OptionalDouble cuttingSpeedMPerMin, OptionalDouble roughFeedMmPerRev,
+                         OptionalDouble finishFeedMmPerRev, OptionalDouble roughDepthMm, double finishStockMm,
+                         HobbingMethod method, double axialClearanceMm, double radialClearanceMm, boolean coolant,
+                         QualityTargets targets, double hobShiftPerPartMm, int hobShiftEveryParts, boolean fastest) {
+        this(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev, roughDepthMm, finishStockMm,
+                method, axialClearanceMm, radialClearanceMm, coolant, targets, hobShiftPerPartMm, hobShiftEveryParts,
+                fastest, RunSettings.DEFAULTS);
     }
 
     /**
@@ -70,7 +84,7 @@ public record CycleSettings(
     public CycleSettings withWorkMaterial(String workMaterial) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -83,7 +97,7 @@ public record CycleSettings(
     public CycleSettings withCuttingSpeedMPerMin(OptionalDouble cuttingSpeedMPerMin) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -107,7 +121,7 @@ public record CycleSettings(
     public CycleSettings withRoughFeedMmPerRev(OptionalDouble roughFeedMmPerRev) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -131,7 +145,7 @@ public record CycleSettings(
     public CycleSettings withFinishFeedMmPerRev(OptionalDouble finishFeedMmPerRev) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -155,7 +169,7 @@ public record CycleSettings(
     public CycleSettings withRoughDepthMm(OptionalDouble roughDepthMm) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -179,7 +193,7 @@ public record CycleSettings(
     public CycleSettings withFinishStockMm(double finishStockMm) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -192,7 +206,7 @@ public record CycleSettings(
     public CycleSettings withMethod(HobbingMethod method) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -205,7 +219,7 @@ public record CycleSettings(
     public CycleSettings withAxialClearanceMm(double axialClearanceMm) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -218,7 +232,7 @@ public record CycleSettings(
     public CycleSettings withRadialClearanceMm(double radialClearanceMm) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -231,7 +245,7 @@ public record CycleSettings(
     public CycleSettings withCoolant(boolean coolant) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -244,7 +258,7 @@ public record CycleSettings(
     public CycleSettings withTargets(QualityTargets targets) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -257,7 +271,7 @@ public record CycleSettings(
     public CycleSettings withHobShiftPerPartMm(double hobShiftPerPartMm) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -270,7 +284,7 @@ public record CycleSettings(
     public CycleSettings withHobShiftEveryParts(int hobShiftEveryParts) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 
     /**
@@ -283,6 +297,19 @@ public record CycleSettings(
     public CycleSettings withFastest(boolean fastest) {
         return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
                 roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
-                hobShiftPerPartMm, hobShiftEveryParts, fastest);
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
+    }
+
+    /**
+     * This cycle settings with another {@code run}.
+     *
+     * @param run batch size, program number, tool station, hob mounting and hob life
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public CycleSettings withRun(RunSettings run) {
+        return new CycleSettings(workMaterial, cuttingSpeedMPerMin, roughFeedMmPerRev, finishFeedMmPerRev,
+                roughDepthMm, finishStockMm, method, axialClearanceMm, radialClearanceMm, coolant, targets,
+                hobShiftPerPartMm, hobShiftEveryParts, fastest, run);
     }
 }

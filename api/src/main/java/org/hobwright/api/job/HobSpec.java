@@ -21,6 +21,9 @@ import org.hobwright.api.internal.Checks;
  * @param lengthMm            usable hob length, mm
  * @param maxRpm              the hob maker's speed limit, rpm, if given
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+ * @param cuttingSense        the sense the hob cuts in, seen from its drive end, if stated (the planner
+ *                            assumes clockwise otherwise and says so)
+ * @param identifier          the shop's identifier of the hob (tool number, serial), if given
  * @param splineProfile       for a spline hob, its root form, tip radius and addendum
  */
 @ApiStatus(since = "1.0")
@@ -36,6 +39,8 @@ public record HobSpec(
         double lengthMm,
         OptionalDouble maxRpm,
         String material,
+        @ApiStatus(since = "1.1") Optional<CuttingSense> cuttingSense,
+        @ApiStatus(since = "1.1") Optional<String> identifier,
         @ApiStatus(since = "1.1") Optional<SplineHobProfile> splineProfile) {
 
     public HobSpec {
@@ -53,15 +58,29 @@ public record HobSpec(
         Objects.requireNonNull(maxRpm, "maxRpm");
         Checks.positive("hob.maxRpm", maxRpm);
         Checks.text("hob.material", material);
+        Objects.requireNonNull(cuttingSense, "cuttingSense");
+        Objects.requireNonNull(identifier, "identifier");
+        identifier.ifPresent(id -> Checks.text("hob.identifier", id));
         Objects.requireNonNull(splineProfile, "splineProfile");
     }
 
-    /** A gear hob (no spline profile), as api 1.0 built it. */
+    /** A gear hob (no spline profile). */
+    @ApiStatus(since = "1.1")
+    public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
+                   OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
+                   OptionalDouble maxRpm, String material, Optional<CuttingSense> cuttingSense,
+                   Optional<String> identifier) {
+        this(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg, referenceDiameterMm, gashes,
+                lengthMm, maxRpm, material, cuttingSense, identifier, Optional.empty());
+    }
+
+    /** A hob whose cutting sense and identifier are not stated. */
+    @ApiStatus(since = "1.1")
     public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
                    OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
                    OptionalDouble maxRpm, String material) {
         this(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg, referenceDiameterMm, gashes,
-                lengthMm, maxRpm, material, Optional.empty());
+                lengthMm, maxRpm, material, Optional.empty(), Optional.empty(), Optional.empty());
     }
 
     /**
@@ -73,7 +92,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withSplineProfile(Optional<SplineHobProfile> splineProfile) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /** Normal module in mm. */
@@ -90,7 +109,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withPitch(Pitch pitch) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -102,7 +121,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withPressureAngleDeg(double pressureAngleDeg) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -114,7 +133,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withStarts(int starts) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -126,7 +145,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withHand(Hand hand) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -138,7 +157,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withOutsideDiameterMm(double outsideDiameterMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -150,7 +169,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withLeadAngleDeg(OptionalDouble leadAngleDeg) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -174,7 +193,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withReferenceDiameterMm(OptionalDouble referenceDiameterMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -197,7 +216,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withGashes(int gashes) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -209,7 +228,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withLengthMm(double lengthMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -221,7 +240,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withMaxRpm(OptionalDouble maxRpm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -244,6 +263,30 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withMaterial(String material) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, splineProfile);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code cuttingSense}.
+     *
+     * @param cuttingSense the sense the hob cuts in, seen from its drive end, if stated
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withCuttingSense(Optional<CuttingSense> cuttingSense) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
+    }
+
+    /**
+     * This hob spec with another {@code identifier}.
+     *
+     * @param identifier the shop's identifier of the hob, if given
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withIdentifier(Optional<String> identifier) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 }

@@ -20,13 +20,19 @@ import org.hobwright.api.internal.Checks;
  * @param swivel             the swivel holder or axis
  * @param radialMinMm        smallest reachable diameter of the hob axis path, as a work diameter, mm
  * @param radialMaxMm        largest reachable work diameter for the hob, mm
- * @param axialMinMm         axial travel limit toward the chuck (the far face side), mm from the entry face
- * @param axialMaxMm         axial travel limit away from the chuck, mm from the entry face
+ * @param axialMinMm         axial travel limit on the side away from the chuck, hob centre, mm from the gear's
+ *                           front face (positive toward the chuck)
+ * @param axialMaxMm         axial travel limit on the chuck side, hob centre, mm from the gear's front face
  * @param hobShiftTravelMm   travel of a hob-shift axis along the hob, mm, if the machine has one
  * @param rapidMmPerMin      rapid traverse rate used for time estimates, mm/min
  * @param maxFeedMmPerMin    highest programmable feed rate, mm/min
  * @param syncSettleS        dwell after switching synchronisation on, s
  * @param maxHobDiameterMm   largest hob the holder takes, mm
+ * @param clockwiseTeethTowardChuck how this machine's hob head is built: true when, with the hob spindle
+ *                           turning clockwise seen from its drive end, the hob teeth at the work move toward
+ *                           the chuck (the back face of the gear); false when they move away from it
+ * @param times              load, unload, swivel, hob-shift and hob-change times, as far as known
+ * @param phasedSync         true when the control can start the synchronisation at a set work-spindle angle
  */
 @ApiStatus(since = "1.0")
 public record MachineProfile(
@@ -47,7 +53,10 @@ public record MachineProfile(
         double rapidMmPerMin,
         double maxFeedMmPerMin,
         double syncSettleS,
-        double maxHobDiameterMm) {
+        double maxHobDiameterMm,
+        @ApiStatus(since = "1.1") boolean clockwiseTeethTowardChuck,
+        @ApiStatus(since = "1.1") MachineTimes times,
+        @ApiStatus(since = "1.1") boolean phasedSync) {
 
     public MachineProfile {
         Checks.text("machine.name", name);
@@ -84,6 +93,22 @@ public record MachineProfile(
         Checks.positive("machine.maxFeed", maxFeedMmPerMin);
         Checks.nonNegative("machine.syncSettle", syncSettleS);
         Checks.positive("machine.maxHobDiameter", maxHobDiameterMm);
+        Checks.present("machine.times", times);
+    }
+
+    /**
+     * A machine whose clockwise-turning hob teeth move away from the chuck at the work, with no times
+     * known and no phased synchronisation.
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile(String name, String dialect, double workMinRpm, double workMaxRpm, double hobMinRpm,
+                          double hobMaxRpm, double maxSyncRatio, boolean followsHelix, SwivelHolder swivel,
+                          double radialMinMm, double radialMaxMm, double axialMinMm, double axialMaxMm,
+                          OptionalDouble hobShiftTravelMm, double rapidMmPerMin, double maxFeedMmPerMin,
+                          double syncSettleS, double maxHobDiameterMm) {
+        this(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio, followsHelix, swivel,
+                radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm, rapidMmPerMin, maxFeedMmPerMin,
+                syncSettleS, maxHobDiameterMm, false, MachineTimes.UNKNOWN, false);
     }
 
     /**
@@ -96,7 +121,8 @@ public record MachineProfile(
     public MachineProfile withName(String name) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -109,7 +135,8 @@ public record MachineProfile(
     public MachineProfile withDialect(String dialect) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -122,7 +149,8 @@ public record MachineProfile(
     public MachineProfile withWorkMinRpm(double workMinRpm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -135,7 +163,8 @@ public record MachineProfile(
     public MachineProfile withWorkMaxRpm(double workMaxRpm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -148,7 +177,8 @@ public record MachineProfile(
     public MachineProfile withHobMinRpm(double hobMinRpm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -161,7 +191,8 @@ public record MachineProfile(
     public MachineProfile withHobMaxRpm(double hobMaxRpm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -174,7 +205,8 @@ public record MachineProfile(
     public MachineProfile withMaxSyncRatio(double maxSyncRatio) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -187,7 +219,8 @@ public record MachineProfile(
     public MachineProfile withFollowsHelix(boolean followsHelix) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -200,7 +233,8 @@ public record MachineProfile(
     public MachineProfile withSwivel(SwivelHolder swivel) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -213,7 +247,8 @@ public record MachineProfile(
     public MachineProfile withRadialMinMm(double radialMinMm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -226,33 +261,36 @@ public record MachineProfile(
     public MachineProfile withRadialMaxMm(double radialMaxMm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
      * This machine profile with another {@code axialMinMm}.
      *
-     * @param axialMinMm axial travel limit toward the chuck (the far face side), mm from the entry face
+     * @param axialMinMm axial travel limit on the side away from the chuck, mm from the front face
      * @return the copy, checked like any new one
      */
     @ApiStatus(since = "1.1")
     public MachineProfile withAxialMinMm(double axialMinMm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
      * This machine profile with another {@code axialMaxMm}.
      *
-     * @param axialMaxMm axial travel limit away from the chuck, mm from the entry face
+     * @param axialMaxMm axial travel limit on the chuck side, mm from the front face
      * @return the copy, checked like any new one
      */
     @ApiStatus(since = "1.1")
     public MachineProfile withAxialMaxMm(double axialMaxMm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -265,7 +303,8 @@ public record MachineProfile(
     public MachineProfile withHobShiftTravelMm(OptionalDouble hobShiftTravelMm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -289,7 +328,8 @@ public record MachineProfile(
     public MachineProfile withRapidMmPerMin(double rapidMmPerMin) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -302,7 +342,8 @@ public record MachineProfile(
     public MachineProfile withMaxFeedMmPerMin(double maxFeedMmPerMin) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -315,7 +356,8 @@ public record MachineProfile(
     public MachineProfile withSyncSettleS(double syncSettleS) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 
     /**
@@ -328,6 +370,49 @@ public record MachineProfile(
     public MachineProfile withMaxHobDiameterMm(double maxHobDiameterMm) {
         return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
                 followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
-                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm);
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
+    }
+
+    /**
+     * This machine profile with another {@code clockwiseTeethTowardChuck}.
+     *
+     * @param clockwiseTeethTowardChuck true when clockwise-turning hob teeth move toward the chuck at the work
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withClockwiseTeethTowardChuck(boolean clockwiseTeethTowardChuck) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
+    }
+
+    /**
+     * This machine profile with another {@code times}.
+     *
+     * @param times load, unload, swivel, hob-shift and hob-change times
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withTimes(MachineTimes times) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
+    }
+
+    /**
+     * This machine profile with another {@code phasedSync}.
+     *
+     * @param phasedSync true when the control can start the synchronisation at a set work-spindle angle
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public MachineProfile withPhasedSync(boolean phasedSync) {
+        return new MachineProfile(name, dialect, workMinRpm, workMaxRpm, hobMinRpm, hobMaxRpm, maxSyncRatio,
+                followsHelix, swivel, radialMinMm, radialMaxMm, axialMinMm, axialMaxMm, hobShiftTravelMm,
+                rapidMmPerMin, maxFeedMmPerMin, syncSettleS, maxHobDiameterMm, clockwiseTeethTowardChuck, times,
+                phasedSync);
     }
 }

@@ -16,7 +16,7 @@ public enum CsvColumn {
     PASS_NO("pass_no"),
     /** Work diameter the hob tip reaches at the end of the move (rapid, feed), mm. */
     DIAMETER_MM("diameter_mm"),
-    /** Hob centre along the work axis from the entry face (rapid, feed), mm. */
+    /** Hob centre along the work axis from the front face (rapid, feed), mm. */
     AXIAL_MM("axial_mm"),
     /** Feed per work revolution (feed), mm. */
     FEED_MM_PER_REV("feed_mm_per_rev"),

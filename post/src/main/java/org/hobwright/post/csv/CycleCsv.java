@@ -7,7 +7,6 @@ import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
@@ -133,7 +132,7 @@ public final class CycleCsv {
 
     /** {@code clockwise} or {@code counter-clockwise}. */
     static String word(Rotation r) {
-        return r.name().toLowerCase(Locale.ROOT).replace('_', '-');
+        return r.word();
     }
 
     /**

@@ -12,6 +12,7 @@ import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
+import org.hobwright.post.Senses;
 import org.hobwright.text.Decimal;
 import org.hobwright.post.JobUnits;
 
@@ -67,6 +68,11 @@ final class NcHeader {
         out.add("Ratio hob:work " + s.syncHobTurns() + ":" + s.syncWorkTurns()
                 + (s.differentialDegPerMm() == 0 ? "" : "  helical addition "
                 + Decimal.fixed(s.differentialDegPerMm() * u.units().toMm(1), 6) + " deg/" + u.lengthSymbol()));
+        Senses senses = Senses.of(cycle, job);
+        senses.turnedRound().ifPresent(out::add);
+        out.add("Hob spindle " + senses.hob());
+        out.add("Work spindle " + senses.work());
+        out.add("Feed " + senses.feed());
         out.add("Passes " + sum.passes().size() + "  finish feed " + Decimal.fixed(u.length(sum.finishFeedMmPerRev()),
                 dialect.decimals().feed(job.units())) + lu + "/rev  cycle time " + Decimal.fixed(sum.cycleTimeS(), 1)
                 + " s");

@@ -72,7 +72,7 @@ public sealed interface NcOp {
      *
      * @param rapid        true for a rapid move
      * @param diameterMm   work diameter the hob tip reaches, mm
-     * @param axialMm      hob centre along the work axis from the entry face, mm
+     * @param axialMm      hob centre along the work axis from the front face, mm
      * @param feedMmPerRev feed per work revolution, mm (0 for a rapid)
      * @param cutting      true when the hob cuts
      */

@@ -7,7 +7,6 @@ import java.util.List;
 import java.util.Map;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
-import org.hobwright.text.Decimal;
 
 /**
  * Turns the program model into blocks with the dialect's templates, words, decimals and line
@@ -120,7 +119,7 @@ final class NcRenderer {
         Map<Placeholder, String> v = new EnumMap<>(Placeholder.class);
         v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(d.programNumber()));
         v.put(Placeholder.PROGRAM_NAME, CommentText.clean(job.name(), d.comments()));
-        posted.numbers().forEach((p, n) -> v.put(p, Decimal.text(n, d.trailingZeros())));
+        posted.numbers().forEach((p, n) -> v.put(p, n.text(d.trailingZeros())));
         if (op instanceof NcOp.Synchronise s) {
             v.put(Placeholder.HOB_TURNS, String.valueOf(s.sync().hobTurns()));
             v.put(Placeholder.WORK_TURNS, String.valueOf(s.sync().workTurns()));

@@ -27,6 +27,11 @@ import org.hobwright.post.PostFindings;
  */
 public final class NcWriter implements CycleWriter {
     private static final int KEPT = 16;
+    /**
+     * Most operations a program may have: far beyond a hobbing cycle (about six a pass, and the
+     * planner makes at most 200 passes), it keeps the text bounded for a cycle from any planner.
+     */
+    static final int MAX_OPERATIONS = 20_000;
     private final Map<String, DialectLoader.Loaded> dialects = new ConcurrentHashMap<>();
 
 
@@ -80,6 +85,11 @@ public final class NcWriter implements CycleWriter {
         }
         NcProgram program = NcProgramBuilder.build(cycle, NcHeader.lines(cycle, context, dialect),
                 context.job().units());
+        if (program.ops().size() > MAX_OPERATIONS) {
+            return WriteResult.refused(List.of(PostCode.NC_PROGRAM_TOO_LONG.at("cycle.steps", "the cycle has "
+                    + cycle.steps().size() + " steps; a program may have at most " + MAX_OPERATIONS + " operations",
+                    "plan fewer passes (cycle.roughDepth)")));
+        }
         WordUnits units = new WordUnits(dialect, context.job().units());
         PostLimits limits = PostLimits.of(context.job(), cycle.setup().orElseThrow());
         List<PostedOp> posted = PostedWords.of(program, dialect, units, limits);

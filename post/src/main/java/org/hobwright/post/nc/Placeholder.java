@@ -29,7 +29,7 @@ public enum Placeholder {
     WORK_TURNS("workTurns", "work turns of the ratio hob:work, whole number"),
     /** Helical addition, degrees of work rotation per length unit of axial travel. */
     DIFFERENTIAL("differential", "helical addition, degrees of work rotation per mm (or in) of axial travel "
-            + "toward the far face, signed in the work's rotation sense, decimals.differential"),
+            + "toward the back face, signed in the work's rotation sense, decimals.differential"),
     /** Dwell time, seconds. */
     SECONDS("seconds", "dwell time, s, decimals.s"),
     /** Dwell time, whole milliseconds. */

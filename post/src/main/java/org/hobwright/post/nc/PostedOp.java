@@ -1,6 +1,6 @@
 package org.hobwright.post.nc;
 
-import java.math.BigDecimal;
+import org.hobwright.text.Scaled;
 import java.util.Map;
 
 /**
@@ -11,14 +11,14 @@ import java.util.Map;
  * @param op      the operation of the program model
  * @param numbers the posted number of each numeric placeholder the operation fills
  */
-record PostedOp(NcOp op, Map<Placeholder, BigDecimal> numbers) {
+record PostedOp(NcOp op, Map<Placeholder, Scaled> numbers) {
     PostedOp {
         numbers = Map.copyOf(numbers);
     }
 
     /** The posted number of a placeholder. */
-    BigDecimal number(Placeholder p) {
-        BigDecimal n = numbers.get(p);
+    Scaled number(Placeholder p) {
+        Scaled n = numbers.get(p);
         if (n == null) {
             throw new IllegalArgumentException("operation " + op + " posts no {" + p.key() + "}");
         }

@@ -1,12 +1,12 @@
 package org.hobwright.post.nc;
 
-import java.math.BigDecimal;
-import java.math.RoundingMode;
+import org.hobwright.text.Scaled;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import org.hobwright.text.Decimal;
+import org.hobwright.text.Decimal.Rounding;
 
 /**
  * Rounds every number of the program to the dialect's decimals, in the direction that keeps the
@@ -57,21 +57,21 @@ final class PostedWords {
         return out;
     }
 
-    private Map<Placeholder, BigDecimal> numbers(NcOp op) {
-        Map<Placeholder, BigDecimal> n = new EnumMap<>(Placeholder.class);
+    private Map<Placeholder, Scaled> numbers(NcOp op) {
+        Map<Placeholder, Scaled> n = new EnumMap<>(Placeholder.class);
         if (op instanceof NcOp.Synchronise s) {
             double ratio = (double) s.sync().hobTurns() / s.sync().workTurns();
-            BigDecimal hob = bounded(s.sync().hobRpm(), Placeholder.HOB_RPM, limits.hobRange(ratio));
-            BigDecimal work = bounded(s.sync().workRpm(), Placeholder.WORK_RPM, limits.workRange(ratio));
+            Scaled hob = bounded(s.sync().hobRpm(), Placeholder.HOB_RPM, limits.hobRange(ratio));
+            Scaled work = bounded(s.sync().workRpm(), Placeholder.WORK_RPM, limits.workRange(ratio));
             n.put(Placeholder.HOB_RPM, hob);
             n.put(Placeholder.WORK_RPM, work);
             n.put(Placeholder.DIFFERENTIAL, nearest(s.sync().differentialDegPerMm() * w.units().toMm(1),
                     Placeholder.DIFFERENTIAL));
-            workBound = Math.max(work.doubleValue(), hob.doubleValue() / ratio);
+            workBound = Math.max(work.value(), hob.value() / ratio);
             plannedWorkRpm = s.sync().workRpm();
         } else if (op instanceof NcOp.Wait wait) {
-            n.put(Placeholder.SECONDS, directed(wait.seconds(), Placeholder.SECONDS, RoundingMode.CEILING));
-            n.put(Placeholder.MILLISECONDS, directed(wait.seconds(), 3, RoundingMode.CEILING).movePointRight(3));
+            n.put(Placeholder.SECONDS, directed(wait.seconds(), Placeholder.SECONDS, Rounding.CEILING));
+            n.put(Placeholder.MILLISECONDS, new Scaled(directed(wait.seconds(), 3, Rounding.CEILING).units(), 0));
         } else if (op instanceof NcOp.SwivelTo s) {
             n.put(Placeholder.SWIVEL, signed(nearest(s.machineAngleDeg(), Placeholder.SWIVEL), d.swivel()
                     .orElseThrow().sign()));
@@ -79,9 +79,9 @@ final class PostedWords {
             n.put(Placeholder.SHIFT, signed(nearest(w.axial(s.positionMm()), Placeholder.SHIFT),
                     d.shift().orElseThrow().sign()));
         } else if (op instanceof NcOp.Move m) {
-            n.put(Placeholder.RADIAL, signed(directed(w.radial(m.diameterMm()), Placeholder.RADIAL, RoundingMode.UP),
+            n.put(Placeholder.RADIAL, signed(directed(w.radial(m.diameterMm()), Placeholder.RADIAL, Rounding.CEILING),
                     d.radial().sign()));
-            RoundingMode away = 2 * m.axialMm() < limits.faceWidthMm() ? RoundingMode.FLOOR : RoundingMode.CEILING;
+            Rounding away = 2 * m.axialMm() < limits.faceWidthMm() ? Rounding.FLOOR : Rounding.CEILING;
             n.put(Placeholder.AXIAL, signed(directed(w.axial(m.axialMm()), Placeholder.AXIAL, away),
                     d.axial().sign()));
             if (!m.rapid()) {
@@ -95,16 +95,16 @@ final class PostedWords {
      * Nearest, unless that passes the feed-rate limit a planned feed kept: then down, to the limit
      * (a feed that comes out zero is refused by the safety check).
      */
-    private BigDecimal feed(double mmPerRev) {
+    private Scaled feed(double mmPerRev) {
         double v = w.feed(mmPerRev);
-        BigDecimal near = nearest(v, Placeholder.FEED);
+        Scaled near = nearest(v, Placeholder.FEED);
         if (Double.isNaN(workBound)) {
             return near;
         }
         double cap = w.feed(limits.maxFeedMmPerMin() / workBound);
         boolean plannedWithin = mmPerRev * plannedWorkRpm <= limits.maxFeedMmPerMin() * (1 + PostLimits.REL);
-        if (near.doubleValue() > cap && plannedWithin) {
-            return directed(Math.min(v, cap), Placeholder.FEED, RoundingMode.FLOOR);
+        if (near.value() > cap && plannedWithin) {
+            return directed(Math.min(v, cap), Placeholder.FEED, Rounding.FLOOR);
         }
         return near;
     }
@@ -113,33 +113,33 @@ final class PostedWords {
      * Nearest, unless that crosses a limit the value itself keeps: then toward the inside. A speed
      * whose nearest is zero is below what the dialect can write; it stays zero, and is refused.
      */
-    private BigDecimal bounded(double v, Placeholder p, PostLimits.Range r) {
-        BigDecimal near = nearest(v, p);
+    private Scaled bounded(double v, Placeholder p, PostLimits.Range r) {
+        Scaled near = nearest(v, p);
         if (near.signum() == 0) {
             return near;
         }
-        if (near.doubleValue() > r.max() && v <= r.max() * (1 + PostLimits.REL)) {
-            return directed(Math.min(v, r.max()), p, RoundingMode.FLOOR);
+        if (near.value() > r.max() && v <= r.max() * (1 + PostLimits.REL)) {
+            return directed(Math.min(v, r.max()), p, Rounding.FLOOR);
         }
-        if (near.doubleValue() < r.min() && v >= r.min() * (1 - PostLimits.REL)) {
-            return directed(Math.max(v, r.min()), p, RoundingMode.CEILING);
+        if (near.value() < r.min() && v >= r.min() * (1 - PostLimits.REL)) {
+            return directed(Math.max(v, r.min()), p, Rounding.CEILING);
         }
         return near;
     }
 
-    private BigDecimal nearest(double v, Placeholder p) {
-        return Decimal.rounded(v, w.decimals(p), RoundingMode.HALF_UP);
+    private Scaled nearest(double v, Placeholder p) {
+        return Decimal.scaled(v, w.decimals(p), Rounding.HALF_UP);
     }
 
-    private BigDecimal directed(double v, Placeholder p, RoundingMode mode) {
+    private Scaled directed(double v, Placeholder p, Rounding mode) {
         return directed(v, w.decimals(p), mode);
     }
 
-    private static BigDecimal directed(double v, int decimals, RoundingMode mode) {
-        return Decimal.rounded(v, decimals, mode);
+    private static Scaled directed(double v, int decimals, Rounding mode) {
+        return Decimal.scaled(v, decimals, mode);
     }
 
-    private static BigDecimal signed(BigDecimal v, int sign) {
+    private static Scaled signed(Scaled v, int sign) {
         return sign < 0 ? v.negate() : v;
     }
 }

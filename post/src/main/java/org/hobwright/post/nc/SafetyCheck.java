@@ -1,6 +1,6 @@
 package org.hobwright.post.nc;
 
-import java.math.BigDecimal;
+import org.hobwright.text.Scaled;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -86,7 +86,7 @@ final class SafetyCheck {
                 error(PostCode.NC_SAFETY_SYNC_LEFT_ON, "cycle.steps", "the program ends with the spindles still synchronised",
                         "switch the synchronisation off and stop the spindles before the end");
             } else if (op instanceof NcOp.Wait && synced && !fed) {
-                settle += p.number(Placeholder.SECONDS).doubleValue();
+                settle += p.number(Placeholder.SECONDS).value();
             } else if (op instanceof NcOp.Move mv) {
                 double dia = w.diameterMm(p.number(Placeholder.RADIAL));
                 double ax = w.axialMm(p.number(Placeholder.AXIAL));
@@ -128,8 +128,8 @@ final class SafetyCheck {
                     + Decimal.fixed(limits.maxSyncRatio(), 1) + ":1", "use a multi-start hob or another machine");
         }
         TemplateKey sync = s.differentialDegPerMm() != 0 ? TemplateKey.SYNC_ON_HELIX : TemplateKey.SYNC_ON;
-        BigDecimal hob = p.number(Placeholder.HOB_RPM);
-        BigDecimal work = p.number(Placeholder.WORK_RPM);
+        Scaled hob = p.number(Placeholder.HOB_RPM);
+        Scaled work = p.number(Placeholder.WORK_RPM);
         String hobWord = postedWord(sync, Placeholder.HOB_RPM, hob);
         String workWord = postedWord(TemplateKey.WORK_SPINDLE, Placeholder.WORK_RPM, work);
         boolean hobOk = positive(hob, s.hobRpm(), Placeholder.HOB_RPM, hobWord, "hob speed", index);
@@ -137,24 +137,24 @@ final class SafetyCheck {
         if (!hobOk || !workOk) {
             return Double.NaN;
         }
-        double hobFromWork = work.doubleValue() * ratio;
-        double workFromHob = hob.doubleValue() / ratio;
+        double hobFromWork = work.value() * ratio;
+        double workFromHob = hob.value() / ratio;
         String hobText = "the hob at " + plain(hob) + " rpm (" + hobWord + "), or " + plain(hobFromWork)
                 + " rpm locked to the work spindle's " + workWord + at;
         String workText = "the work spindle at " + plain(work) + " rpm (" + workWord + "), or " + plain(workFromHob)
                 + " rpm locked to the hob's " + hobWord + at;
-        double hobLow = Math.min(hob.doubleValue(), hobFromWork);
-        double hobHigh = Math.max(hob.doubleValue(), hobFromWork);
+        double hobLow = Math.min(hob.value(), hobFromWork);
+        double hobHigh = Math.max(hob.value(), hobFromWork);
         limit(PostCode.NC_SAFETY_HOB_SPEED, "machine.hobSpindle", index, hobText, hobLow, hobHigh, s.hobRpm(),
                 new PostLimits.Range(limits.hobMinRpm(), limits.hobMaxRpm()), "the machine's hob spindle",
                 Placeholder.HOB_RPM);
         limit(PostCode.NC_SAFETY_HOB_SPEED, "hob.maxRpm", index, hobText, hobLow, hobHigh, s.hobRpm(),
                 new PostLimits.Range(0, limits.hobMakerMaxRpm()), "the hob maker's limit", Placeholder.HOB_RPM);
-        limit(PostCode.NC_SAFETY_WORK_SPEED, "machine.workSpindle", index, workText, Math.min(work.doubleValue(), workFromHob),
-                Math.max(work.doubleValue(), workFromHob), s.workRpm(),
+        limit(PostCode.NC_SAFETY_WORK_SPEED, "machine.workSpindle", index, workText, Math.min(work.value(), workFromHob),
+                Math.max(work.value(), workFromHob), s.workRpm(),
                 new PostLimits.Range(limits.workMinRpm(), limits.workMaxRpm()), "the machine's work spindle",
                 Placeholder.WORK_RPM);
-        return Math.max(work.doubleValue(), workFromHob);
+        return Math.max(work.value(), workFromHob);
     }
 
     private void limit(PostCode code, String field, int index, String text, double low, double high, double planned,
@@ -171,7 +171,7 @@ final class SafetyCheck {
     }
 
     private void feed(PostedOp p, NcOp.Move mv, int index, double workBound, double plannedWorkRpm) {
-        BigDecimal f = p.number(Placeholder.FEED);
+        Scaled f = p.number(Placeholder.FEED);
         String word = postedWord(TemplateKey.FEED_MOVE, Placeholder.FEED, f);
         String unit = w.units().symbol() + " per work revolution";
         double plannedRate = mv.feedMmPerRev() * plannedWorkRpm;
@@ -245,7 +245,7 @@ final class SafetyCheck {
     }
 
     /** False, with a finding, when a speed word is not above zero. */
-    private boolean positive(BigDecimal posted, double planned, Placeholder p, String word, String what, int index) {
+    private boolean positive(Scaled posted, double planned, Placeholder p, String word, String what, int index) {
         if (!(planned > 0)) {
             error(p == Placeholder.HOB_RPM ? PostCode.NC_SAFETY_HOB_SPEED : PostCode.NC_SAFETY_WORK_SPEED, "cycle.steps",
                     "operation " + index + " asks for a " + what + " of " + plain(planned) + " rpm; it must be above"
@@ -270,8 +270,8 @@ final class SafetyCheck {
     }
 
     /** The word as written: its address from the template and the posted number. */
-    private String postedWord(TemplateKey key, Placeholder p, BigDecimal v) {
-        return word(key, p, Decimal.text(v, d.trailingZeros()));
+    private String postedWord(TemplateKey key, Placeholder p, Scaled v) {
+        return word(key, p, v.text(d.trailingZeros()));
     }
 
     private String word(TemplateKey key, Placeholder p, String number) {
@@ -279,16 +279,17 @@ final class SafetyCheck {
                 .findFirst()).orElse("") + number;
     }
 
-    private String axisWord(Dialect.Axis axis, BigDecimal v) {
-        return axis.letter() + Decimal.text(v, d.trailingZeros());
+    private String axisWord(Dialect.Axis axis, Scaled v) {
+        return axis.letter() + v.text(d.trailingZeros());
     }
 
     private static String plain(double v) {
         return Decimal.plain(v, 6);
     }
 
-    private static String plain(BigDecimal v) {
-        return v.stripTrailingZeros().toPlainString();
+    private static String plain(Scaled v) {
+        String t = v.text(false);
+        return t.endsWith(".") ? t.substring(0, t.length() - 1) : t;
     }
 
     private void error(PostCode code, String field, String message, String fix) {

@@ -1,6 +1,6 @@
 package org.hobwright.post.nc;
 
-import java.math.BigDecimal;
+import org.hobwright.text.Scaled;
 import org.hobwright.api.job.Units;
 
 /**
@@ -28,8 +28,8 @@ final class WordUnits {
     }
 
     /** The work diameter in mm a posted radial word programs. */
-    double diameterMm(BigDecimal word) {
-        double v = word.doubleValue() * d.radial().sign();
+    double diameterMm(Scaled word) {
+        double v = word.value() * d.radial().sign();
         return units.toMm(d.radial().diameter() ? v : 2 * v);
     }
 
@@ -39,8 +39,8 @@ final class WordUnits {
     }
 
     /** The hob-centre position in mm a posted axial word programs. */
-    double axialMm(BigDecimal word) {
-        return units.toMm(word.doubleValue() * d.axial().sign());
+    double axialMm(Scaled word) {
+        return units.toMm(word.value() * d.axial().sign());
     }
 
     /** Feed word: feed per work revolution in the job's unit. */
@@ -49,8 +49,8 @@ final class WordUnits {
     }
 
     /** The feed per work revolution in mm a posted feed word programs. */
-    double feedMmPerRev(BigDecimal word) {
-        return units.toMm(word.doubleValue());
+    double feedMmPerRev(Scaled word) {
+        return units.toMm(word.value());
     }
 
     /** Decimals the dialect writes for a numeric placeholder. */

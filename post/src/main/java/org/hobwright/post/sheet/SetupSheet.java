@@ -9,6 +9,7 @@ import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Cautions;
 import org.hobwright.text.Decimal;
 import org.hobwright.post.JobUnits;
+import org.hobwright.post.Senses;
 import org.hobwright.post.TargetsGiven;
 
 /**
@@ -73,6 +74,8 @@ final class SetupSheet {
         m.open("div", "class", "cautions").leaf("strong", "Cautions").open("ul");
         Cautions.LINES.forEach(c -> m.leaf("li", c));
         m.close("ul").close("div");
+        Senses senses = Senses.of(cycle, job);
+        senses.turnedRound().ifPresent(t -> m.open("div", "class", "cautions").leaf("strong", t).close("div"));
         m.open("div", "class", "figures").nl();
         m.open("figure").raw(ToothSpaceFigure.svg(g, job.gear().teeth(), cycle.simulation(), f))
                 .leaf("figcaption", "Tooth space in the transverse section, drawn to scale"
@@ -85,7 +88,7 @@ final class SetupSheet {
                 .leaf("figcaption", swivelCaption(s, job, f)).close("figure");
         m.close("div");
         SheetTables t = new SheetTables(m, f, job);
-        t.setup(s, sum, job.cycle().coolant());
+        t.setup(s, sum, job.cycle().coolant(), senses);
         if (cycle.spline().isPresent()) {
             t.spline(cycle.spline().get());
         } else {

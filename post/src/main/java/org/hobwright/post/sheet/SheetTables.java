@@ -17,6 +17,7 @@ import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.post.Senses;
 import org.hobwright.text.Decimal;
 
 /** The tables of the setup sheet, each a {@code section} element. */
@@ -31,7 +32,7 @@ final class SheetTables {
         this.job = job;
     }
 
-    void setup(SetupValues s, CycleSummary sum, boolean coolant) {
+    void setup(SetupValues s, CycleSummary sum, boolean coolant, Senses senses) {
         section("Setup");
         row("Turn the blank to ⌀", f.lenU(s.blankDiameterMm()));
         row("Touch-off ⌀ (hob tip meets the blank)", f.lenU(s.touchOffDiameterMm()));
@@ -43,6 +44,9 @@ final class SheetTables {
         row("Hob speed", f.hobRpm(s.hobRpm()));
         row("Work speed", f.workRpm(s.workRpm()));
         row("Sync ratio hob : work", s.syncHobTurns() + " : " + s.syncWorkTurns());
+        row("Hob spindle", senses.hob());
+        row("Work spindle", senses.work());
+        row("Feed", senses.feed());
         if (s.differentialDegPerMm() != 0) {
             row("Helical addition", Decimal.fixed(s.differentialDegPerMm() * job.units().toMm(1), 6) + " °/"
                     + f.u().lengthSymbol() + " of axial travel");

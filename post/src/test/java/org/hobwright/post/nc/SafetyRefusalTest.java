@@ -119,4 +119,19 @@ class SafetyRefusalTest {
                     () -> r.findings().toString());
         }
     }
+
+    @Test
+    void aProgramBeyondTheSizeBoundIsRefused() {
+        // 20,000 comments more than any hobbing cycle has; whatever planner made it, the writer stops
+        HobCycle c = SPUR.cycle();
+        List<CycleStep> steps = new ArrayList<>(c.steps());
+        for (int i = 0; i < NcWriter.MAX_OPERATIONS; i++) {
+            steps.add(0, new CycleStep.Comment("remark " + i));
+        }
+        HobCycle big = new HobCycle(c.gear(), c.inspection(), c.tolerances(), c.setup(), steps, c.summary(),
+                c.simulation(), c.findings());
+        WriteResult r = new NcWriter().write(big, SPUR.context("varrow-ctl"));
+        assertTrue(r.files().isEmpty());
+        assertEquals(List.of("NC_PROGRAM_TOO_LONG"), r.findings().stream().map(Finding::code).toList());
+    }
 }

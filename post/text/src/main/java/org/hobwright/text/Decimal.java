@@ -24,7 +24,8 @@ import java.math.RoundingMode;
  * <p><b>Directed rounding</b> ({@link Rounding#CEILING}, {@link Rounding#FLOOR}, {@link Rounding#UP},
  * {@link Rounding#DOWN}) is for NC words whose safe side is one direction (a position that must
  * stay outside a diameter, a speed at its upper limit). It first takes the value to
- * {@value #NOISE_DIGITS} significant digits (half to even), so that the last bits of binary
+ * {@value #NOISE_DIGITS} significant digits (half to even; three decimals more than it writes when
+ * that is finer), so that the last bits of binary
  * arithmetic ({@code 0.5000000000000001} from {@code 12.7 / 25.4}) do not move a word by a whole
  * unit, then rounds in its direction. {@link #rounded} gives the same digits as an exact decimal,
  * for checks that compare the posted words with limits.
@@ -154,6 +155,27 @@ public final class Decimal {
     }
 
     /**
+     * A number rounded to a fixed count of decimals as a {@link Scaled} (a {@code long} and its
+     * decimals): the digits {@link #fixed(double, int, boolean, Rounding)} writes, for NC words that
+     * are checked against limits before they are written; no big-number arithmetic.
+     *
+     * @param value    the number (must be finite, and below 10^17 in units of its last decimal)
+     * @param decimals digits after the point, 0 to 9
+     * @param rounding HALF_UP (the rule of every text) or a direction
+     * @throws IllegalArgumentException naming the value when it is not finite or too large
+     */
+    public static Scaled scaled(double value, int decimals, Rounding rounding) {
+        String text = fixed(value, decimals, true, rounding);
+        int dot = text.indexOf('.');
+        String digits = dot < 0 ? text : text.substring(0, dot) + text.substring(dot + 1);
+        if (digits.length() > 18) {
+            throw new IllegalArgumentException("value " + value + " is too large to write with " + decimals
+                    + " decimals");
+        }
+        return new Scaled(Long.parseLong(digits), decimals);
+    }
+
+    /**
      * A number rounded to a fixed count of decimals, as an exact decimal: the digits
      * {@link #fixed(double, int, boolean, Rounding)} writes, for checks that compare a posted word
      * with a limit. Never negative zero.
@@ -243,7 +265,7 @@ public final class Decimal {
 
         /** These digits rounded to {@code decimals} places after the point (negative: before it). */
         Digits round(int decimals, Rounding rounding) {
-            Digits d = rounding == Rounding.HALF_UP ? this : toNoise();
+            Digits d = rounding == Rounding.HALF_UP ? this : toNoise(Math.max(NOISE_DIGITS, point + decimals + 3));
             int keep = d.point + decimals;
             if (keep >= d.length || d.isZero()) {
                 return d;
@@ -258,15 +280,18 @@ public final class Decimal {
             return d.cut(Math.max(keep, 0), keep, up);
         }
 
-        /** {@value #NOISE_DIGITS} significant digits, half to even. */
-        private Digits toNoise() {
-            if (length <= NOISE_DIGITS) {
+        /**
+         * {@code n} significant digits, half to even: {@value #NOISE_DIGITS}, or three decimals more
+         * than the rounding writes when that is finer (a large value written with many decimals).
+         */
+        private Digits toNoise(int n) {
+            if (length <= n) {
                 return this;
             }
-            char next = digit[NOISE_DIGITS];
-            boolean beyond = length > NOISE_DIGITS + 1;
-            boolean up = next > '5' || next == '5' && (beyond || (digit[NOISE_DIGITS - 1] - '0') % 2 == 1);
-            return cut(NOISE_DIGITS, NOISE_DIGITS, up);
+            char next = digit[n];
+            boolean beyond = length > n + 1;
+            boolean up = next > '5' || next == '5' && (beyond || (digit[n - 1] - '0') % 2 == 1);
+            return cut(n, n, up);
         }
 
         /**

@@ -103,10 +103,13 @@ class DecimalTest {
 
     @Test
     void directedRoundingAgainstBigDecimal() {
-        MathContext noise = new MathContext(12, RoundingMode.HALF_EVEN);
         for (double v : values(4156, 20_000)) {
             for (int d = 0; d <= 6; d++) {
-                BigDecimal b = BigDecimal.valueOf(v).round(noise);
+                // 12 significant digits, or three decimals more than written when that is finer
+                BigDecimal exact = BigDecimal.valueOf(v);
+                int digitsBeforePoint = exact.precision() - exact.scale();
+                BigDecimal b = exact.round(new MathContext(Math.max(12, digitsBeforePoint + d + 3),
+                        RoundingMode.HALF_EVEN));
                 assertEquals(text(b.setScale(d, RoundingMode.CEILING)),
                         Decimal.fixed(v, d, true, Decimal.Rounding.CEILING), v + " up to " + d + " decimals");
                 assertEquals(text(b.setScale(d, RoundingMode.FLOOR)),
@@ -122,6 +125,8 @@ class DecimalTest {
         assertEquals("-0.501", Decimal.fixed(-0.5001, 3, true, Decimal.Rounding.FLOOR));
         assertEquals("0.000", Decimal.fixed(-0.0001, 3, true, Decimal.Rounding.CEILING), "no negative zero");
         assertEquals("0.001", Decimal.fixed(1e-9, 3, true, Decimal.Rounding.CEILING));
+        // 12 significant digits would make this 2906244593.74, above the value: the noise cut follows the decimals
+        assertEquals("2906244593.73", Decimal.fixed(2906244593.738667, 2, true, Decimal.Rounding.FLOOR));
     }
 
     @Test
@@ -162,39 +167,45 @@ class DecimalTest {
     }
 
     /**
-     * Directed rounding for NC words: up never gives less than the value and less than one unit
-     * more, down the mirror of it, against the JDK's {@link BigDecimal} on the decimal the double
-     * prints; half-up gives the same digits as {@link Decimal#fixed}.
+     * Rounding for NC words against the JDK's {@link BigDecimal} on the decimal the double prints:
+     * half-up gives the digits of {@link Decimal#fixed}; up (ceiling) never gives less than the
+     * value and less than one unit more, down (floor) the mirror of it.
      */
     @Test
-    void directedRoundingStaysOnItsSideWithinOneUnit() {
+    void scaledRoundingStaysOnItsSideWithinOneUnit() {
         SplittableRandom random = new SplittableRandom(4120);
         for (int i = 0; i < 20_000; i++) {
-            double v = (random.nextDouble() * 2 - 1) * Math.pow(10, random.nextInt(-6, 7));
-            int d = random.nextInt(0, 6);
+            double v = (random.nextDouble() * 2 - 1) * Math.pow(10, random.nextInt(-9, 9));
+            int d = random.nextInt(0, 7);
             BigDecimal exact = new BigDecimal(Double.toString(v));
             BigDecimal unit = BigDecimal.ONE.movePointLeft(d);
-            BigDecimal up = Decimal.rounded(v, d, RoundingMode.CEILING);
-            BigDecimal down = Decimal.rounded(v, d, RoundingMode.FLOOR);
+            BigDecimal up = BigDecimal.valueOf(Decimal.scaled(v, d, Decimal.Rounding.CEILING).units(), d);
+            BigDecimal down = BigDecimal.valueOf(Decimal.scaled(v, d, Decimal.Rounding.FLOOR).units(), d);
             BigDecimal slack = exact.abs().multiply(new BigDecimal("1e-11"));
             assertTrue(up.compareTo(exact.subtract(slack)) >= 0 && up.compareTo(exact.add(unit)) < 0, v + " up " + up);
             assertTrue(down.compareTo(exact.add(slack)) <= 0 && down.compareTo(exact.subtract(unit)) > 0,
                     v + " down " + down);
-            assertEquals(d, up.scale());
-            assertEquals(Decimal.fixed(v, d), Decimal.text(Decimal.rounded(v, d, RoundingMode.HALF_UP), true));
+            Scaled near = Decimal.scaled(v, d, Decimal.Rounding.HALF_UP);
+            assertEquals(Decimal.fixed(v, d), near.text(true), v + " to " + d);
+            assertEquals(Decimal.fixed(v, d, false), near.text(false), v + " to " + d + ", trimmed");
+            assertEquals(Double.parseDouble(near.text(true)), near.value(), v + " to " + d);
         }
     }
 
     @Test
-    void directedRoundingIgnoresTheLastBitsOfBinaryArithmetic() {
+    void scaledRoundingIgnoresTheLastBitsOfBinaryArithmetic() {
         // 12.7 mm / 25.4 is 0.5000000000000001 in binary; as an inch word it is 0.5000, not 0.5001
-        assertEquals("0.5000", Decimal.rounded(12.7 / 25.4, 4, RoundingMode.UP).toPlainString());
-        assertEquals("0.1", Decimal.rounded(0.1, 1, RoundingMode.CEILING).toPlainString());
-        assertEquals("0.000", Decimal.rounded(-0.0004, 3, RoundingMode.CEILING).toPlainString());
-        assertEquals("-0.001", Decimal.rounded(-0.0004, 3, RoundingMode.FLOOR).toPlainString());
-        assertEquals("24.", Decimal.text(new BigDecimal("24.000"), false));
-        assertEquals("17.5", Decimal.text(new BigDecimal("17.500"), false));
-        assertEquals("0", Decimal.text(new BigDecimal("0"), false));
-        assertThrows(IllegalArgumentException.class, () -> Decimal.rounded(Double.NaN, 2, RoundingMode.UP));
+        assertEquals("0.5000", Decimal.scaled(12.7 / 25.4, 4, Decimal.Rounding.CEILING).text(true));
+        assertEquals("0.1", Decimal.scaled(0.1, 1, Decimal.Rounding.CEILING).text(true));
+        assertEquals("0.000", Decimal.scaled(-0.0004, 3, Decimal.Rounding.CEILING).text(true));
+        assertEquals("-0.001", Decimal.scaled(-0.0004, 3, Decimal.Rounding.FLOOR).text(true));
+        assertEquals("1.000", Decimal.scaled(0.99999999999999, 3, Decimal.Rounding.FLOOR).text(true));
+        assertEquals("0.001", Decimal.scaled(1e-300, 3, Decimal.Rounding.CEILING).text(true));
+        assertEquals("0", Decimal.scaled(1e-300, 0, Decimal.Rounding.HALF_UP).text(true));
+        assertEquals("24.", new Scaled(24000, 3).text(false));
+        assertEquals("-17.5", new Scaled(-17500, 3).text(false));
+        assertEquals("0.05", new Scaled(5, 2).text(true));
+        assertThrows(IllegalArgumentException.class, () -> Decimal.scaled(Double.NaN, 2, Decimal.Rounding.CEILING));
+        assertThrows(IllegalArgumentException.class, () -> Decimal.scaled(1e300, 3, Decimal.Rounding.HALF_UP));
     }
 }

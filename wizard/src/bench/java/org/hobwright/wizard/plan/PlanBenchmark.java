@@ -60,6 +60,29 @@ public class PlanBenchmark {
         return planner.plan(job);
     }
 
+    private final HobJob mostPasses = mostPasses();
+
+    /** The metering-pump gear split into the most passes a cycle may have ({@link PassDepths#MAX_PASSES}). */
+    private static HobJob mostPasses() {
+        HobJob j = TestJobs.meteringPumpOnVarrow();
+        CycleSettings c = j.cycle();
+        double depth = (26.0 - new DefaultCyclePlanner().plan(j).setup().orElseThrow().finalInfeedDiameterMm()) / 2;
+        return TestJobs.with(j, new CycleSettings(c.workMaterial(), c.cuttingSpeedMPerMin(), c.roughFeedMmPerRev(),
+                c.finishFeedMmPerRev(), java.util.OptionalDouble.of(depth / PassDepths.MAX_PASSES), c.finishStockMm(),
+                c.method(), c.axialClearanceMm(), c.radialClearanceMm(), c.coolant(), c.targets(),
+                c.hobShiftPerPartMm(), c.hobShiftEveryParts(), false));
+    }
+
+    /**
+     * Plans the job with the most passes: planning is linear in the steps (each step's time is
+     * added once), so this takes about {@value PassDepths#MAX_PASSES} times one pass's share.
+     */
+    @Benchmark
+    public HobCycle planMostPasses(CpuClock clock) {
+        clock.jobs++;
+        return planner.plan(mostPasses);
+    }
+
     /** Jobs done and CPU time of the benchmark thread, per iteration. */
     @State(Scope.Thread)
     @AuxCounters(AuxCounters.Type.EVENTS)

@@ -25,8 +25,8 @@ final class Blockers {
         this.findings = findings;
     }
 
-    void check(SyncRatio ratio, SwivelSetting swivel, double touchOff, double root, SpeedWindow window,
-               Optional<CuttingData> row) {
+    void check(SyncRatio ratio, SwivelSetting swivel, double touchOff, double root, double roughDepth,
+               SpeedWindow window, Optional<CuttingData> row) {
         HobSpec hob = job.hob();
         MachineProfile machine = job.machine();
         if (ratio.hobTurnsPerWorkTurn() > machine.maxSyncRatio()) {
@@ -45,6 +45,8 @@ final class Blockers {
                     + Decimal.fixed(hob.outsideDiameterMm() / 2, 3) + " mm is not larger than the "
                     + Decimal.fixed(depth, 3) + " mm depth to cut",
                     "use a larger hob");
+        } else {
+            passes(depth, roughDepth);
         }
         if (Math.abs(swivel.machineAngleDeg()) > machine.swivel().maxAngleDeg()) {
             error(PlanCode.PLAN_SWIVEL_BEYOND_HOLDER, "machine.swivel.maxAngle", "the swivel setting " + swivel.text()
@@ -64,6 +66,19 @@ final class Blockers {
                     + job.cycle().workMaterial() + " with a " + hob.material() + " hob, and the cycle leaves the"
                     + " cutting speed or a feed open", "give cycle.cuttingSpeed, roughFeed and finishFeed, or add a"
                     + " row to your cutting-data table");
+        }
+    }
+
+    private void passes(double depth, double roughDepth) {
+        double stock = job.cycle().finishStockMm();
+        double passes = PassDepths.count(depth, roughDepth, stock);
+        if (passes > PassDepths.MAX_PASSES) {
+            int roughPasses = PassDepths.MAX_PASSES - (stock > 0 ? 1 : 0);
+            double least = (depth - stock) / roughPasses;
+            error(PlanCode.PLAN_TOO_MANY_PASSES, "cycle.roughDepth", "a roughing depth of " + Decimal.exact(roughDepth)
+                    + " mm splits the " + Decimal.fixed(depth, 4) + " mm depth into " + Decimal.plain(passes, 0)
+                    + " passes; a cycle may have at most " + PassDepths.MAX_PASSES, "give a roughing depth of at least "
+                    + Decimal.fixed(least, 4, true, Decimal.Rounding.CEILING) + " mm per pass (check the unit)");
         }
     }
 

@@ -7,7 +7,7 @@ package org.hobwright.wizard.plan;
  * @param ratio                hob turns : work turns
  * @param senses               senses of rotation
  * @param differentialDegPerMm helical addition, degrees of work rotation per mm of axial travel toward the
- *                             far face, signed in the work's sense (0 for spur)
+ *                             back face, signed in the work's sense (0 for spur)
  */
 public record Drive(SyncRatio ratio, SpindleSenses senses, double differentialDegPerMm) {
 

@@ -2,15 +2,18 @@ package org.hobwright.wizard.plan;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.cycle.CycleStep;
-import org.hobwright.api.cycle.Rotation;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.HobbingMethod;
+import org.hobwright.api.job.MachineTimes;
+import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
 
 /**
  * The steps before the synchronisation: comment lines the setter needs beside the moves (sync ratio
- * and spindle senses, helical addition, hob shift), the swivel move on machines with a programmable
+ * and spindle senses, feed direction, a hob turned round on its arbor, helical addition, hob shift), the swivel move on machines with a programmable
  * swivel, and the hob-shift move on machines with a shift axis. Part, gear, hob, swivel and the
  * cautions are not repeated here: every writer prints them in its own header.
  */
@@ -30,24 +33,33 @@ public final class HeaderSteps {
     public static List<CycleStep> of(HobJob job, SwivelSetting swivel,
                                      Drive drive, PlanSettings s, Optional<HobShiftPlan> shift) {
         List<CycleStep> out = new ArrayList<>(12);
+        Units u = job.units();
         out.add(comment("sync: hob " + drive.ratio().hobTurns() + " : work " + drive.ratio().workTurns()
-                + " turns; hob " + Decimal.fixed(s.hobRpm(), 1) + " rpm " + words(drive.senses().hob())
+                + " turns; hob " + Decimal.fixed(s.hobRpm(), 1) + " rpm " + drive.senses().hob().word()
                 + " seen from its drive end; work " + Decimal.fixed(drive.workRpm(s.hobRpm()), 4) + " rpm "
-                + words(drive.senses().work()) + " seen from the entry face"));
+                + drive.senses().work().word() + " seen from the front face"));
+        out.add(comment(feedWords(drive.senses().feedSign(), job.cycle().method())));
+        if (job.cycle().run().hobTurnedRound()) {
+            out.add(comment("HOB TURNED ROUND ON ITS ARBOR: THE HOB SPINDLE RUNS "
+                    + drive.senses().hob().word().toUpperCase(Locale.ROOT) + " SEEN FROM ITS DRIVE END"));
+        }
         if (drive.differentialDegPerMm() != 0) {
-            out.add(comment("differential: " + Decimal.signed(drive.differentialDegPerMm(), 6)
-                    + " deg of work rotation per mm of axial feed"));
+            out.add(comment("differential: " + Decimal.signed(drive.differentialDegPerMm() * u.toMm(1), 6)
+                    + " deg of work rotation per " + u.symbol() + " of axial travel toward the back face"));
         }
-        shift.ifPresent(p -> out.add(comment(p.describe(job.units()))));
+        shift.ifPresent(p -> out.add(comment(p.describe(u))));
+        MachineTimes times = job.machine().times();
         if (job.machine().swivel().programmable()) {
-            out.add(new CycleStep.Swivel(swivel.machineAngleDeg(), 0));
+            out.add(new CycleStep.Swivel(swivel.machineAngleDeg(), times.swivelS().orElse(0)));
         }
-        shift.ifPresent(p -> out.add(new CycleStep.HobShift(p.positionMm(), 0)));
+        shift.ifPresent(p -> out.add(new CycleStep.HobShift(p.positionMm(), times.hobShiftS().orElse(0))));
         return out;
     }
 
-    private static String words(Rotation r) {
-        return r == Rotation.CLOCKWISE ? "clockwise" : "counter-clockwise";
+    /** The feed direction in words a setter checks at the machine. */
+    static String feedWords(int feedSign, HobbingMethod method) {
+        return "feed: " + (feedSign > 0 ? "from the front face toward the chuck" : "from the chuck side toward the "
+                + "front face") + " (" + (method == HobbingMethod.CLIMB ? "climb" : "conventional") + " hobbing)";
     }
 
     private static CycleStep.Comment comment(String text) {

@@ -10,6 +10,8 @@ import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.PassSummary;
 import org.hobwright.api.cycle.SetupValues;
+import org.hobwright.api.cycle.Rotation;
+import org.hobwright.api.job.CuttingSense;
 import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
@@ -65,7 +67,7 @@ final class JobPlanning {
         SpeedWindow window = SpeedWindow.of(machine, hob, ratio);
         Optional<CuttingData> row = table.find(cycle.workMaterial(), hob.material(), gear.moduleMm())
                 .map(r -> job.spline().isPresent() ? r.forSplines() : r);
-        new Blockers(job, findings).check(ratio, swivel, touchOff, root, window, row);
+        new Blockers(job, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
@@ -112,7 +114,22 @@ final class JobPlanning {
     }
 
     private Drive drive(SyncRatio ratio) {
-        SpindleSenses senses = SpindleSenses.of(hob.hand(), cycle.method(), gear.hand());
+        if (hob.cuttingSense().isEmpty()) {
+            findings.add(PlanCode.PLAN_HOB_SENSE_ASSUMED.at("hob.cuttingSense", "the hob's cutting sense is "
+                    + "not given; the plan takes a hob that cuts turning clockwise seen from its drive end: check "
+                    + "the hob (its cutting faces lead when it turns in its cutting sense) and give hob.cuttingSense",
+                    null));
+        }
+        Rotation spindle = SpindleSenses.hobSpindle(hob.cuttingSense().orElse(CuttingSense.CLOCKWISE),
+                cycle.run().hobTurnedRound());
+        if (cycle.run().hobTurnedRound()) {
+            findings.add(PlanCode.PLAN_HOB_TURNED_ROUND.at("cycle.hobTurnedRound", "the hob is turned "
+                    + "round on its arbor: the hob spindle runs " + spindle.word() + " seen from its drive "
+                    + "end, against the sense marked on the hob", "mount the hob as the program says before the "
+                    + "first part; the program header and the setup sheet say so in capitals"));
+        }
+        SpindleSenses senses = SpindleSenses.of(spindle, machine.clockwiseTeethTowardChuck(), cycle.method(),
+                hob.hand(), gear.hand());
         double differential = gear.isSpur() ? 0 : senses.differentialSign()
                 * Kinematics.differentialDegPerMm(gear.helixAngleDeg(), gear.teeth(), gear.moduleMm());
         return new Drive(ratio, senses, differential);
@@ -123,13 +140,17 @@ final class JobPlanning {
                                   CutModel model, Drive drive) {
         double rpm = SpeedChoice.hobRpm(boxed(cycle.cuttingSpeedMPerMin()), row, hob.outsideDiameterMm(), window,
                 findings).orElseThrow();
-        double roughDepth = cycle.roughDepthMm().orElse(gear.moduleMm() <= ONE_PASS_MODULE_MM ? depth
-                : ROUGH_DEPTH_PER_MODULE * gear.moduleMm());
-        PassDepths depths = PassDepths.of(depth, roughDepth, cycle.finishStockMm());
+        PassDepths depths = PassDepths.of(depth, roughDepth(depth), cycle.finishStockMm());
         FeedChoice feeds = FeedChoice.of(new FeedChoice.Inputs(cycle.roughFeedMmPerRev(), cycle.finishFeedMmPerRev(),
                 row, targets, model, depths, drive.workRpm(rpm), machine.maxFeedMmPerMin()), findings).orElseThrow();
         return new PlanSettings(Kinematics.cuttingSpeed(rpm, hob.outsideDiameterMm()), rpm, feeds.roughMmPerRev(),
                 feeds.finishMmPerRev(), depths);
+    }
+
+    /** The job's roughing depth, or the default for its module, mm. */
+    private double roughDepth(double depth) {
+        return cycle.roughDepthMm().orElse(gear.moduleMm() <= ONE_PASS_MODULE_MM ? depth
+                : ROUGH_DEPTH_PER_MODULE * gear.moduleMm());
     }
 
     private CycleInvariants invariants(double root) {

@@ -18,6 +18,13 @@ public record PassDepths(double[] depthsMm) {
     /** Roughing depths closer than this to a whole number of passes do not add a pass, mm. */
     private static final double SLACK = 1e-9;
 
+    /**
+     * Most passes a cycle may have. A bound of Hobwright's, not a trade rule: it keeps the program
+     * and the planning bounded (about six blocks a pass); no hobbing cycle needs as many, and a
+     * depth split finer than this is a typing error (common practice, no source).
+     */
+    public static final int MAX_PASSES = 200;
+
     public PassDepths {
         depthsMm = depthsMm.clone();
     }
@@ -30,12 +37,17 @@ public record PassDepths(double[] depthsMm) {
      * @param stockMm     finishing stock, 0 or more (at least the total depth means one finishing pass to full depth)
      */
     public static PassDepths of(double totalMm, double roughMm, double stockMm) {
+        double count = count(totalMm, roughMm, stockMm);
+        if (!(count <= MAX_PASSES)) {
+            throw new IllegalArgumentException("a roughing depth of " + roughMm + " mm splits " + totalMm + " mm into "
+                    + count + " passes, more than " + MAX_PASSES);
+        }
         if (stockMm >= totalMm) {
             return new PassDepths(new double[] {totalMm});
         }
         double stock = stockMm;
         double roughRegion = totalMm - stock;
-        int rough = (int) Math.max(1, Math.ceil(roughRegion / roughMm - SLACK));
+        int rough = (int) roughPasses(roughRegion, roughMm);
         int n = rough + (stock > 0 ? 1 : 0);
         double[] d = new double[n];
         for (int i = 0; i < rough; i++) {
@@ -43,6 +55,21 @@ public record PassDepths(double[] depthsMm) {
         }
         d[n - 1] = totalMm;
         return new PassDepths(d);
+    }
+
+    /**
+     * The number of passes {@link #of} would make, computed without making them (it may be huge:
+     * check it against {@link #MAX_PASSES} first).
+     */
+    public static double count(double totalMm, double roughMm, double stockMm) {
+        if (stockMm >= totalMm) {
+            return 1;
+        }
+        return roughPasses(totalMm - stockMm, roughMm) + (stockMm > 0 ? 1 : 0);
+    }
+
+    private static double roughPasses(double roughRegionMm, double roughMm) {
+        return Math.max(1, Math.ceil(roughRegionMm / roughMm - SLACK));
     }
 
     /** Number of passes. */

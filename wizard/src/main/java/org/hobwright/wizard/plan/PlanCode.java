@@ -34,6 +34,8 @@ public enum PlanCode implements FindingCode {
             PlanSources.MACHINE, ERROR),
     PLAN_TRAVEL_AXIAL("machine.travel.axialMin or axialMax", "a step outside the axial travel",
             PlanSources.MACHINE, ERROR),
+    PLAN_TOO_MANY_PASSES("cycle.roughDepth", "the roughing depth splits the depth into more passes than a cycle may"
+            + " have", "Hobwright limit of " + PassDepths.MAX_PASSES + " passes (bounds the program size)", ERROR),
     PLAN_INVARIANT_BROKEN("job", "a safety invariant failed inside the planner, or the analysis gave no geometry"
             + " without an error (a defect: report it)", "Hobwright safety invariants", ERROR),
     PLAN_HOB_RPM_CAPPED("cycle.cuttingSpeed", "hob speed lowered to a machine or hob limit",
@@ -67,6 +69,12 @@ public enum PlanCode implements FindingCode {
             PlanSources.TABLE, INFO),
     PLAN_SWIVEL_ROUNDED("machine.swivel.resolution", "the holder's resolution rounds the swivel",
             PlanSources.MACHINE, INFO),
+    PLAN_HOB_SENSE_ASSUMED("hob.cuttingSense",
+            "the hob's cutting sense is not given; clockwise seen from its drive end is taken", PlanSources.NO_SOURCE,
+            INFO),
+    PLAN_HOB_TURNED_ROUND("cycle.hobTurnedRound",
+            "the hob is turned round on its arbor: the spindle runs against the sense marked on the hob",
+            "hob cutting sense, FORMULAS.md §7.4", WARNING),
     PLAN_HOB_SHIFT_NO_AXIS("cycle.hobShift.perPart", "shift asked for on a machine without a shift axis",
             PlanSources.MACHINE, INFO),
     PLAN_FASTEST("cycle.fastest", "the fastest cycle, its proved lower bound and binding limits",

@@ -9,7 +9,7 @@ import org.hobwright.text.Decimal;
 
 /**
  * Checks every position of the steps against the machine's travels: radial positions as work
- * diameters within radialMin … radialMax, axial positions (hob centre from the entry face, the
+ * diameters within radialMin … radialMax, axial positions (hob centre from the front face, the
  * coordinate of the steps) within axialMin … axialMax. One error finding per axis names the worst
  * position and the travel.
  */
@@ -54,7 +54,7 @@ public final class TravelCheck {
             out.add(PlanCode.PLAN_TRAVEL_AXIAL.at(minAx < machine.axialMinMm() - tol
                             ? "machine.travel.axialMin" : "machine.travel.axialMax",
                     "the cycle needs axial positions " + Decimal.fixed(minAx, 3) + " to " + Decimal.fixed(maxAx, 3)
-                            + " mm from the entry face, the machine reaches " + Decimal.fixed(machine.axialMinMm(), 3)
+                            + " mm from the front face, the machine reaches " + Decimal.fixed(machine.axialMinMm(), 3)
                             + " to " + Decimal.fixed(machine.axialMaxMm(), 3) + " mm",
                     "reduce cycle.axialClearance, use a smaller hob (shorter approach) or move the part's zero"));
         }

@@ -121,7 +121,13 @@ public final class StepFields {
             Field.of("hob.maxRpm", "Hob speed limit", RPM, NUMBER, "The hob maker's speed limit, if given.")
                     .aboveZero().optional(),
             Field.of("hob.material", "Hob material", NONE, CHOICE, "Cutting material of the hob.")
-                    .choices(List.of("hss", "hss-coated", "carbide")));
+                    .choices(List.of("hss", "hss-coated", "carbide")),
+            Field.of("hob.cuttingSense", "Hob cutting sense", NONE, CHOICE,
+                    "The sense the hob cuts in, seen from its own drive end: its cutting faces lead. "
+                            + "Empty takes clockwise and says so.")
+                    .choices(List.of("clockwise", "counter-clockwise")).optional(),
+            Field.of("hob.identifier", "Hob identifier", NONE, TEXT,
+                    "Your tool number or serial of the hob, for the setup sheet.").optional());
 
     private static final List<Field> MACHINE_FIELDS = List.of(
             Field.of(MACHINE, "Machine", NONE, CHOICE,
@@ -164,7 +170,17 @@ public final class StepFields {
             Field.of("cycle.hobShift.everyParts", "Shift every so many parts", NONE, INTEGER,
                     "How many parts are cut between shifts.").range(1, 1_000_000).optional(),
             Field.of("cycle.fastest", "Propose the fastest cycle", NONE, BOOLEAN,
-                    "Yes to have the optimiser propose the shortest cycle beside yours.").optional());
+                    "Yes to have the optimiser propose the shortest cycle beside yours.").optional(),
+            Field.of("cycle.batchSize", "Parts in the batch", NONE, INTEGER,
+                    "How many parts to cut; the review gives the time per part, the batch time and the hob life.")
+                    .range(1, 1_000_000).optional(),
+            Field.of("cycle.programNumber", "Program number", NONE, INTEGER,
+                    "The program number; empty takes the dialect's.").range(0, 99_999_999).optional(),
+            Field.of("cycle.toolStation", "Hob tool station", NONE, INTEGER,
+                    "The tool station the hob sits in; empty takes the dialect's.").range(0, 99_999).optional(),
+            Field.of("cycle.hobTurnedRound", "Hob turned round on its arbor", NONE, BOOLEAN,
+                    "Yes only when the hob is mounted the other way round: the hob spindle then runs against "
+                            + "the hob's marked sense.").optional());
 
     private static final Map<StepId, List<Field>> BY_STEP = Map.of(StepId.GEAR, GEAR, StepId.CUTTER, CUTTER,
             StepId.MACHINE, MACHINE_FIELDS, StepId.CYCLE, CYCLE, StepId.REVIEW, List.of());

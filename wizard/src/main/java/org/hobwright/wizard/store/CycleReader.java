@@ -4,9 +4,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.OptionalInt;
 import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.api.job.RunSettings;
 import org.hobwright.api.job.Units;
 import org.hobwright.wizard.store.FieldReader.Kind;
 import tools.jackson.databind.JsonNode;
@@ -31,9 +33,14 @@ final class CycleReader {
             Map.entry("finishStock", Kind.LENGTH), Map.entry("axialClearance", Kind.LENGTH),
             Map.entry("radialClearance", Kind.LENGTH), Map.entry("targets.feedMarkDepth", Kind.PLAIN),
             Map.entry("targets.envelopingDepth", Kind.PLAIN), Map.entry("targets.maxChipThickness", Kind.LENGTH),
-            Map.entry("hobShift.perPart", Kind.LENGTH), Map.entry("hobShift.everyParts", Kind.PLAIN));
+            Map.entry("hobShift.perPart", Kind.LENGTH), Map.entry("hobShift.everyParts", Kind.PLAIN),
+            Map.entry("batchSize", Kind.PLAIN), Map.entry("programNumber", Kind.PLAIN),
+            Map.entry("toolStation", Kind.PLAIN), Map.entry("hobLife.lengthPerTooth", Kind.PLAIN));
 
     static final List<String> METHODS = List.of("climb", "conventional");
+
+    /** Largest batch one plan covers. */
+    static final int MAX_BATCH = 1_000_000;
 
     private CycleReader() {
     }
@@ -42,12 +49,12 @@ final class CycleReader {
     record Values(Optional<String> workMaterial, OptionalDouble cuttingSpeed, OptionalDouble roughFeed,
                   OptionalDouble finishFeed, OptionalDouble roughDepth, double finishStock, HobbingMethod method,
                   double axialClearance, double radialClearance, boolean coolant, QualityTargets targets,
-                  double shiftPerPart, int shiftEvery, boolean fastest) {
+                  double shiftPerPart, int shiftEvery, boolean fastest, RunSettings run) {
 
         CycleSettings settings() {
             return new CycleSettings(workMaterial.orElseThrow(), cuttingSpeed, roughFeed, finishFeed, roughDepth,
                     finishStock, method, axialClearance, radialClearance, coolant, targets, shiftPerPart, shiftEvery,
-                    fastest);
+                    fastest, run);
         }
     }
 
@@ -76,8 +83,14 @@ final class CycleReader {
         double perPart = s.number("perPart", Kind.LENGTH, Limit.NON_NEGATIVE, 0);
         int every = s.integer("everyParts", 1, Integer.MAX_VALUE, 1);
         boolean fastest = f.bool("fastest", false);
+        int batch = f.integer("batchSize", 1, MAX_BATCH, 1);
+        OptionalInt program = f.integer("programNumber", 0, 99_999_999);
+        OptionalInt station = f.integer("toolStation", 0, 99_999);
+        boolean turnedRound = f.bool("hobTurnedRound", false);
+        OptionalDouble life = f.child("hobLife").number("lengthPerTooth", Kind.PLAIN, Limit.POSITIVE);
         return new Values(material, speed, rough, finish, depth, stock, method, axial, radial, coolant,
-                new QualityTargets(mark, env, chip), perPart, every, fastest);
+                new QualityTargets(mark, env, chip), perPart, every, fastest,
+                new RunSettings(batch, program, station, turnedRound, life));
     }
 
     /**

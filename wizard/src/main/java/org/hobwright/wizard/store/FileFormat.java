@@ -31,21 +31,28 @@ public enum FileFormat {
             "targets", Shape.object("feedMarkDepth", Shape.NUMBER, "envelopingDepth", Shape.NUMBER,
                     "maxChipThickness", Shape.NUMBER),
             "hobShift", Shape.object("perPart", Shape.NUMBER, "everyParts", Shape.INTEGER),
-            "fastest", Shape.BOOLEAN);
+            "fastest", Shape.BOOLEAN, "batchSize", Shape.INTEGER, "programNumber", Shape.INTEGER,
+            "toolStation", Shape.INTEGER, "hobTurnedRound", Shape.BOOLEAN,
+            "hobLife", Shape.object("lengthPerTooth", Shape.NUMBER));
 
-    private static final Shape SPINDLE = Shape.object("minRpm", Shape.NUMBER, "maxRpm", Shape.NUMBER);
+    private static final Shape WORK_SPINDLE = Shape.object("minRpm", Shape.NUMBER, "maxRpm", Shape.NUMBER,
+            "phasedSync", Shape.BOOLEAN);
+    private static final Shape HOB_SPINDLE = Shape.object("minRpm", Shape.NUMBER, "maxRpm", Shape.NUMBER,
+            "clockwiseTeethMove", Shape.TEXT);
 
     /** The keys of a machine profile other than format and version (an inline machine of a job). */
     static final Shape MACHINE_BODY = Shape.object(
             "units", Shape.TEXT, "name", Shape.TEXT, "description", Shape.TEXT, "dialect", Shape.TEXT,
-            "workSpindle", SPINDLE, "hobSpindle", SPINDLE, "maxSyncRatio", Shape.NUMBER,
+            "workSpindle", WORK_SPINDLE, "hobSpindle", HOB_SPINDLE, "maxSyncRatio", Shape.NUMBER,
             "followsHelix", Shape.BOOLEAN,
             "swivel", Shape.object("scale", Shape.TEXT, "resolution", Shape.ANGLE, "programmable", Shape.BOOLEAN,
                     "maxAngle", Shape.ANGLE, "positiveSense", Shape.TEXT, "positiveIsRight", Shape.BOOLEAN),
             "travel", Shape.object("radialMin", Shape.NUMBER, "radialMax", Shape.NUMBER, "axialMin", Shape.NUMBER,
                     "axialMax", Shape.NUMBER, "hobShift", Shape.NUMBER),
             "rapid", Shape.NUMBER, "maxFeed", Shape.NUMBER, "syncSettle", Shape.NUMBER,
-            "maxHobDiameter", Shape.NUMBER);
+            "maxHobDiameter", Shape.NUMBER,
+            "times", Shape.object("load", Shape.NUMBER, "unload", Shape.NUMBER, "swivel", Shape.NUMBER,
+                    "hobShift", Shape.NUMBER, "hobChange", Shape.NUMBER));
 
     private static final Map<String, Shape> HEADER = header();
 
@@ -80,7 +87,8 @@ public enum FileFormat {
                     "pressureAngle", Shape.ANGLE, "starts", Shape.INTEGER, "hand", Shape.TEXT,
                     "outsideDiameter", Shape.NUMBER, "leadAngle", Shape.ANGLE, "referenceDiameter", Shape.NUMBER,
                     "gashes", Shape.INTEGER, "length", Shape.NUMBER, "maxRpm", Shape.NUMBER,
-                    "material", Shape.TEXT, "root", Shape.TEXT, "tipRadius", Shape.NUMBER, "addendum", Shape.NUMBER),
+                    "material", Shape.TEXT, "cuttingSense", Shape.TEXT, "identifier", Shape.TEXT,
+                    "root", Shape.TEXT, "tipRadius", Shape.NUMBER, "addendum", Shape.NUMBER),
             "spline", SPLINE_KEYS,
             "machine", Shape.nameOr(MACHINE_BODY),
             "cycle", CYCLE_KEYS.with(Map.of("template", Shape.TEXT), Set.of()))

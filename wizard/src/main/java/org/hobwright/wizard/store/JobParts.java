@@ -5,6 +5,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.CuttingSense;
 import org.hobwright.api.job.DrawingValues;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
@@ -23,6 +24,7 @@ import org.hobwright.wizard.store.FieldReader.Kind;
 final class JobParts {
     static final List<String> HANDS = List.of("right", "left");
     static final List<String> HOB_MATERIALS = List.of("hss", "hss-coated", "carbide");
+    static final List<String> SENSES = List.of(CuttingSense.CLOCKWISE.word(), CuttingSense.COUNTER_CLOCKWISE.word());
 
     private JobParts() {
     }
@@ -129,12 +131,15 @@ final class JobParts {
         OptionalDouble maxRpm = f.number("maxRpm", Kind.PLAIN, Limit.POSITIVE);
         Optional<String> material = f.has("material") ? f.choice("material", HOB_MATERIALS)
                 : f.requiredText("material", "use one of " + String.join(", ", HOB_MATERIALS));
+        Optional<CuttingSense> sense = f.choice("cuttingSense", SENSES)
+                .map(w -> w.equals(CuttingSense.CLOCKWISE.word()) ? CuttingSense.CLOCKWISE : CuttingSense.COUNTER_CLOCKWISE);
+        Optional<String> identifier = f.text("identifier");
         Optional<SplineHobProfile> profile = SplineParts.hobProfile(f);
         if (errors(out) > before) {
             return Optional.empty();
         }
         return Optional.of(new HobSpec(pitch.orElseThrow(), alpha, starts, Hand.fromWord(hand.orElseThrow()), outside,
-                lead, reference, gashes, length, maxRpm, material.orElseThrow(), profile));
+                lead, reference, gashes, length, maxRpm, material.orElseThrow(), sense, identifier, profile));
     }
 
     static int errors(List<Finding> out) {

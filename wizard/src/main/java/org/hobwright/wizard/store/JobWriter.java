@@ -9,9 +9,11 @@ import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.api.job.RunSettings;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.JsonTrees;
@@ -111,6 +113,14 @@ public final class JobWriter {
         number(shift, "perPart", units.fromMm(c.hobShiftPerPartMm()));
         shift.put("everyParts", c.hobShiftEveryParts());
         n.put("fastest", c.fastest());
+        RunSettings r = c.run();
+        n.put("batchSize", r.batchSize());
+        r.programNumber().ifPresent(v -> n.put("programNumber", v));
+        r.toolStation().ifPresent(v -> n.put("toolStation", v));
+        n.put("hobTurnedRound", r.hobTurnedRound());
+        if (r.hobLifePerToothM().isPresent()) {
+            number(n.putObject("hobLife"), "lengthPerTooth", r.hobLifePerToothM().getAsDouble());
+        }
         return n;
     }
 
@@ -212,6 +222,8 @@ public final class JobWriter {
         number(n, "length", units.fromMm(h.lengthMm()));
         optional(n, "maxRpm", h.maxRpm(), v -> v);
         n.put("material", h.material());
+        h.cuttingSense().ifPresent(v -> n.put("cuttingSense", v.word()));
+        h.identifier().ifPresent(v -> n.put("identifier", v));
         h.splineProfile().ifPresent(p -> {
             n.put("root", p.root());
             number(n, "tipRadius", units.fromMm(p.tipRadiusMm()));
@@ -230,9 +242,12 @@ public final class JobWriter {
         ObjectNode work = n.putObject("workSpindle");
         number(work, "minRpm", m.workMinRpm());
         number(work, "maxRpm", m.workMaxRpm());
+        work.put("phasedSync", m.phasedSync());
         ObjectNode hob = n.putObject("hobSpindle");
         number(hob, "minRpm", m.hobMinRpm());
         number(hob, "maxRpm", m.hobMaxRpm());
+        hob.put("clockwiseTeethMove", m.clockwiseTeethTowardChuck() ? MachineReader.TOWARD_CHUCK
+                : MachineReader.AWAY_FROM_CHUCK);
         number(n, "maxSyncRatio", m.maxSyncRatio());
         n.put("followsHelix", m.followsHelix());
         SwivelHolder s = m.swivel();
@@ -254,6 +269,16 @@ public final class JobWriter {
         number(n, "maxFeed", units.fromMm(m.maxFeedMmPerMin()));
         number(n, "syncSettle", m.syncSettleS());
         number(n, "maxHobDiameter", units.fromMm(m.maxHobDiameterMm()));
+        MachineTimes t = m.times();
+        ObjectNode times = NODES.objectNode();
+        optional(times, "load", t.loadS(), v -> v);
+        optional(times, "unload", t.unloadS(), v -> v);
+        optional(times, "swivel", t.swivelS(), v -> v);
+        optional(times, "hobShift", t.hobShiftS(), v -> v);
+        optional(times, "hobChange", t.hobChangeS(), v -> v);
+        if (!times.isEmpty()) {
+            n.set("times", times);
+        }
         return n;
     }
 

@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
 import org.hobwright.wizard.store.FieldReader.Kind;
@@ -14,6 +15,11 @@ import org.hobwright.wizard.store.FieldReader.Kind;
 final class MachineReader {
     static final String SCALE_DM = "degrees-minutes";
     static final String SCALE_DEC = "decimal-degrees";
+    /** Clockwise-turning hob teeth move toward the chuck at the work. */
+    static final String TOWARD_CHUCK = "toward-chuck";
+    /** Clockwise-turning hob teeth move away from the chuck at the work (the default). */
+    static final String AWAY_FROM_CHUCK = "away-from-chuck";
+    static final List<String> TEETH_MOVES = List.of(AWAY_FROM_CHUCK, TOWARD_CHUCK);
 
     private MachineReader() {
     }
@@ -77,6 +83,13 @@ final class MachineReader {
         double maxFeed = f.required("maxFeed", Kind.LENGTH_PER_MIN, Limit.POSITIVE, null);
         double settle = f.number("syncSettle", Kind.PLAIN, Limit.NON_NEGATIVE, 0);
         double maxHob = f.required("maxHobDiameter", Kind.LENGTH, Limit.POSITIVE, null);
+        boolean towardChuck = hobSp.choice("clockwiseTeethMove", TEETH_MOVES).map(TOWARD_CHUCK::equals).orElse(false);
+        boolean phased = work.bool("phasedSync", false);
+        FieldReader t = f.child("times");
+        MachineTimes times = new MachineTimes(t.number("load", Kind.PLAIN, Limit.NON_NEGATIVE),
+                t.number("unload", Kind.PLAIN, Limit.NON_NEGATIVE), t.number("swivel", Kind.PLAIN, Limit.NON_NEGATIVE),
+                t.number("hobShift", Kind.PLAIN, Limit.NON_NEGATIVE),
+                t.number("hobChange", Kind.PLAIN, Limit.NON_NEGATIVE));
         if (out.stream().filter(Finding::isError).count() > errorsBefore) {
             return Optional.empty();
         }
@@ -86,7 +99,7 @@ final class MachineReader {
                         positiveIsRight),
                 radialMin, radialMax, axialMin, axialMax,
                 shift.isPresent() && shift.getAsDouble() > 0 ? shift : OptionalDouble.empty(),
-                rapid, maxFeed, settle, maxHob);
+                rapid, maxFeed, settle, maxHob, towardChuck, times, phased);
         return Optional.of(new MachineFile(p, f.units(), description));
     }
 

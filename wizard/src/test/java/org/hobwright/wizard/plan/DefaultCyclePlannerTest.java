@@ -83,8 +83,8 @@ class DefaultCyclePlannerTest {
     void stepsComeInTheSafeOrder() {
         HobCycle c = planner.plan(SampleJobs.helicalMetric());
         List<String> kinds = c.steps().stream().map(CycleStep::kind).filter(k -> !k.equals("comment")).toList();
-        assertEquals(List.of("swivel", "hob-shift", "sync-on", "dwell", "coolant", "rapid", "rapid", "feed", "feed",
-                "rapid", "rapid", "coolant", "sync-off", "spindles-stop"), kinds);
+        assertEquals(List.of("swivel", "hob-shift", "sync-on", "dwell", "coolant", "rapid", "rapid", "rapid", "feed",
+                "feed", "rapid", "rapid", "rapid", "coolant", "sync-off", "spindles-stop"), kinds);
         assertInstanceOf(CycleStep.Comment.class, c.steps().get(0));
         assertTrue(c.steps().stream().anyMatch(s -> s instanceof CycleStep.Comment m && m.text().startsWith("sync: hob 30 : work 1")),
                 "the sync comment names the ratio and the senses beside the moves");

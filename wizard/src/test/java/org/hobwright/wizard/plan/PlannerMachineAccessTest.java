@@ -12,6 +12,7 @@ import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.testkit.SampleJobs;
 import org.junit.jupiter.api.Test;
 
@@ -40,6 +41,9 @@ class PlannerMachineAccessTest {
         when(m.maxFeedMmPerMin()).thenReturn(2000.0);
         when(m.syncSettleS()).thenReturn(2.5);
         when(m.maxHobDiameterMm()).thenReturn(120.0);
+        when(m.clockwiseTeethTowardChuck()).thenReturn(true);
+        when(m.times()).thenReturn(new MachineTimes(OptionalDouble.of(7), OptionalDouble.of(5), OptionalDouble.of(3.5),
+                OptionalDouble.of(1.25), OptionalDouble.empty()));
         HobJob job = TestJobs.with(SampleJobs.helicalMetric(), m);
 
         HobCycle c = new DefaultCyclePlanner().plan(job);
@@ -63,5 +67,9 @@ class PlannerMachineAccessTest {
         verify(m, atLeastOnce()).maxFeedMmPerMin();
         verify(m, atLeastOnce()).syncSettleS();
         verify(m, atLeastOnce()).maxHobDiameterMm();
+        verify(m, atLeastOnce()).clockwiseTeethTowardChuck();
+        verify(m, atLeastOnce()).times();
+        assertEquals(3.5, c.steps().stream().filter(s -> s instanceof CycleStep.Swivel).findFirst().orElseThrow()
+                .seconds(), "the mocked swivel time");
     }
 }

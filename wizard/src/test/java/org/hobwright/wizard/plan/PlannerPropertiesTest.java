@@ -48,7 +48,7 @@ class PlannerPropertiesTest {
             } catch (RuntimeException e) {
                 throw new AssertionError(id, e);
             }
-            assertTrue(c.findings().stream().noneMatch(f -> f.code().equals(PlanCode.PLAN_INVARIANT_BROKEN.code())), id);
+            assertTrue(c.findings().stream().noneMatch(f -> f.code().equals(PlanCode.PLAN_INVARIANT_BROKEN.code())), () -> id + c.findings());
             assertEquals(c.hasErrors(), c.steps().isEmpty(), id);
             c.summary().ifPresent(s -> finite(s, id));
             if (c.hasErrors()) {

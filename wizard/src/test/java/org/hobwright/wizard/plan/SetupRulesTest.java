@@ -12,6 +12,7 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.Rotation;
 import org.hobwright.api.cycle.ToleranceData;
+import org.hobwright.api.job.CuttingSense;
 import org.hobwright.api.job.Hand;
 import org.hobwright.api.job.HobbingMethod;
 import org.hobwright.api.job.QualityTargets;
@@ -57,48 +58,28 @@ class SetupRulesTest {
 
     @Test
     void spindleSensesFollowTheDerivedRule() {
-        // derived rule (SpindleSenses): climb = hob clockwise from its drive end; the work turns with the
-        // hob for a right-hand hob and against it for a left-hand hob
-        SpindleSenses rhClimb = SpindleSenses.of(Hand.RIGHT, HobbingMethod.CLIMB, Hand.RIGHT);
+        // derived rule (SpindleSenses, FORMULAS.md §7.4): the hob spindle keeps the hob's cutting sense and the
+        // method picks the feed; on a machine whose clockwise teeth move away from the chuck, a clockwise hob
+        // feeds toward the chuck for climb and away from it for conventional
+        SpindleSenses rhClimb = SpindleSenses.of(Rotation.CLOCKWISE, false, HobbingMethod.CLIMB, Hand.RIGHT, Hand.RIGHT);
         assertEquals(Rotation.CLOCKWISE, rhClimb.hob());
         assertEquals(Rotation.CLOCKWISE, rhClimb.work());
-        SpindleSenses lhClimb = SpindleSenses.of(Hand.LEFT, HobbingMethod.CLIMB, Hand.RIGHT);
+        assertEquals(1, rhClimb.feedSign());
+        SpindleSenses lhClimb = SpindleSenses.of(Rotation.CLOCKWISE, false, HobbingMethod.CLIMB, Hand.LEFT, Hand.RIGHT);
         assertEquals(Rotation.CLOCKWISE, lhClimb.hob());
         assertEquals(Rotation.COUNTER_CLOCKWISE, lhClimb.work());
-        SpindleSenses rhConv = SpindleSenses.of(Hand.RIGHT, HobbingMethod.CONVENTIONAL, Hand.RIGHT);
-        assertEquals(Rotation.COUNTER_CLOCKWISE, rhConv.hob());
-        assertEquals(Rotation.COUNTER_CLOCKWISE, rhConv.work());
-        // RH gear: extra rotation counter-clockwise seen from the entry face (FORMULAS.md §5.2)
+        SpindleSenses rhConv = SpindleSenses.of(Rotation.CLOCKWISE, false, HobbingMethod.CONVENTIONAL, Hand.RIGHT,
+                Hand.RIGHT);
+        assertEquals(Rotation.CLOCKWISE, rhConv.hob(), "conventional hobbing never reverses the hob");
+        assertEquals(Rotation.CLOCKWISE, rhConv.work());
+        assertEquals(-1, rhConv.feedSign(), "conventional hobbing feeds the other way");
+        // RH gear: extra rotation counter-clockwise seen from the front face (FORMULAS.md §5.2)
         assertEquals(-1, rhClimb.differentialSign());
-        assertEquals(1, rhConv.differentialSign());
-        assertEquals(1, SpindleSenses.of(Hand.RIGHT, HobbingMethod.CLIMB, Hand.LEFT).differentialSign());
-    }
-
-    @Test
-    void spindleSensesAgreeWithAVectorModelOfTheContact() {
-        // independent check with vectors: hob centre at +X, hob axis +Y, work axis +Z (out of the entry
-        // face), feed along −Z. ω_hob = s·Y; the hob tooth at contact r = −X·R moves ω × r.
-        for (HobbingMethod method : HobbingMethod.values()) {
-            for (Hand hobHand : Hand.values()) {
-                SpindleSenses senses = SpindleSenses.of(hobHand, method, Hand.RIGHT);
-                // clockwise seen from the drive end (looking along +Y) is ω along +Y
-                double omegaY = senses.hob() == Rotation.CLOCKWISE ? 1 : -1;
-                double toothVz = cross(new double[] {0, omegaY, 0}, new double[] {-1, 0, 0})[2];
-                boolean againstFeed = toothVz > 0; // feed is −Z
-                assertEquals(method == HobbingMethod.CLIMB, againstFeed, "climb means teeth against the feed (Phillips, FORMULAS.md §7.4)");
-                // a thread of hand h turned by ω_y carries its pattern along −h·sign(ω_y)·Y (screw rule);
-                // the gear point at +X·r must move with it: v = ω_z Z × X r = ω_z r Y
-                double patternVy = -hobHand.sign() * omegaY;
-                double omegaZ = patternVy; // ω_z r Y = pattern → sign of ω_z
-                // clockwise seen from the entry face (looking along −Z) is ω along −Z
-                Rotation work = omegaZ < 0 ? Rotation.CLOCKWISE : Rotation.COUNTER_CLOCKWISE;
-                assertEquals(work, senses.work(), method + " " + hobHand);
-            }
-        }
-    }
-
-    private static double[] cross(double[] a, double[] b) {
-        return new double[] {a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]};
+        assertEquals(-1, rhConv.differentialSign());
+        assertEquals(1, SpindleSenses.of(Rotation.CLOCKWISE, false, HobbingMethod.CLIMB, Hand.RIGHT, Hand.LEFT)
+                .differentialSign());
+        assertEquals(Rotation.COUNTER_CLOCKWISE, SpindleSenses.hobSpindle(CuttingSense.CLOCKWISE, true),
+                "a hob turned round on its arbor runs the spindle the other way");
     }
 
     @Test

@@ -1,0 +1,40 @@
+package org.hobwright.api.job;
+
+import java.util.Objects;
+import java.util.OptionalDouble;
+import org.hobwright.api.ApiStatus;
+import org.hobwright.api.internal.Checks;
+
+/**
+ * The times a machine takes for the steps around the cut, seconds, as the shop measured them.
+ * An absent time is unknown: the planner counts it as 0 s and says so in a finding.
+ *
+ * @param loadS       putting a blank in and clamping it
+ * @param unloadS     taking the finished part out
+ * @param swivelS     one programmed swivel positioning, clamping included
+ * @param hobShiftS   one programmed hob-shift move
+ * @param hobChangeS  taking a worn hob off and setting a sharp one
+ */
+@ApiStatus(since = "1.1")
+public record MachineTimes(OptionalDouble loadS, OptionalDouble unloadS, OptionalDouble swivelS,
+                           OptionalDouble hobShiftS, OptionalDouble hobChangeS) {
+
+    /** No time known. */
+    public static final MachineTimes UNKNOWN = new MachineTimes(OptionalDouble.empty(), OptionalDouble.empty(),
+            OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty());
+
+    public MachineTimes {
+        check("machine.times.load", loadS);
+        check("machine.times.unload", unloadS);
+        check("machine.times.swivel", swivelS);
+        check("machine.times.hobShift", hobShiftS);
+        check("machine.times.hobChange", hobChangeS);
+    }
+
+    private static void check(String field, OptionalDouble v) {
+        Objects.requireNonNull(v, field);
+        if (v.isPresent()) {
+            Checks.nonNegative(field, v.getAsDouble());
+        }
+    }
+}
