@@ -7,8 +7,10 @@ import org.hobwright.api.internal.Checks;
  * One step of a hobbing cycle, in canonical units (mm, s, rpm, degrees). Steps name trade
  * quantities, not axis letters: {@code diameterMm} is the work diameter the hob tip reaches,
  * {@code axialMm} is the hob centre's position along the work axis measured from the gear's front
- * face (the face away from the chuck) toward its back face (negative before the front face). Mapping onto a machine's axes is the
- * post's job, from the dialect and machine profile.
+ * face (the face away from the chuck) toward its back face (negative before the front face). Moves
+ * also carry the hob's tip (outside) diameter, so that the hob centre's distance from the work axis
+ * is known ({@link Rapid#hobCentreRadiusMm()}). Mapping onto a machine's axes is the post's job,
+ * from the dialect and machine profile (the cycle CSV gives both).
  *
  * <p>Each step says how long it takes; the cycle time is the sum of the steps' seconds.
  */
@@ -65,16 +67,30 @@ public sealed interface CycleStep {
     }
 
     /**
-     * Turn the swivel axis to a setting (only on machines with a programmable swivel).
+     * The swivel setting: a move of the swivel axis on a machine with a programmable swivel, or the
+     * setting the setter makes by hand on a manual holder (no block in the program, a row in the
+     * cycle CSV).
      *
      * @param machineAngleDeg the setting in the machine's own sign convention, degrees
      * @param seconds         time allowed, s
+     * @param programmable    true when the control turns the swivel axis; false for a manual holder
      */
     @ApiStatus(since = "1.0")
-    record Swivel(double machineAngleDeg, double seconds) implements CycleStep {
+    record Swivel(double machineAngleDeg, double seconds, @ApiStatus(since = "1.1") boolean programmable)
+            implements CycleStep {
         public Swivel {
             Checks.range("machineAngleDeg", machineAngleDeg, -90, 90);
             Checks.nonNegative("seconds", seconds);
+        }
+
+        /**
+         * A move of a programmable swivel axis (as the first api had it).
+         *
+         * @param machineAngleDeg the setting in the machine's own sign convention, degrees
+         * @param seconds         time allowed, s
+         */
+        public Swivel(double machineAngleDeg, double seconds) {
+            this(machineAngleDeg, seconds, true);
         }
 
         @Override
@@ -189,18 +205,46 @@ public sealed interface CycleStep {
     /**
      * Rapid move (no cutting) to a position.
      *
-     * @param pass       pass number (1 = first), 0 outside the passes
-     * @param diameterMm work diameter the hob tip reaches at the end of the move, mm
-     * @param axialMm    hob centre along the work axis from the front face, mm
-     * @param seconds    time, s
+     * @param pass             pass number (1 = first), 0 outside the passes
+     * @param diameterMm       work diameter the hob tip reaches at the end of the move, mm
+     * @param axialMm          hob centre along the work axis from the front face, mm
+     * @param seconds          time, s
+     * @param hobTipDiameterMm the hob's tip (outside) diameter d_a0, mm; 0 when not given
      */
     @ApiStatus(since = "1.0")
-    record Rapid(int pass, double diameterMm, double axialMm, double seconds) implements CycleStep {
+    record Rapid(int pass, double diameterMm, double axialMm, double seconds,
+                 @ApiStatus(since = "1.1") double hobTipDiameterMm) implements CycleStep {
         public Rapid {
             Checks.atLeast("pass", pass, 0);
             Checks.nonNegative("diameterMm", diameterMm);
             Checks.finite("axialMm", axialMm);
             Checks.nonNegative("seconds", seconds);
+            Checks.nonNegative("hobTipDiameterMm", hobTipDiameterMm);
+        }
+
+        /**
+         * A rapid move without the hob's tip diameter (as the first api had it).
+         *
+         * @param pass       pass number, 0 outside the passes
+         * @param diameterMm work diameter the hob tip reaches, mm
+         * @param axialMm    hob centre along the work axis, mm
+         * @param seconds    time, s
+         */
+        public Rapid(int pass, double diameterMm, double axialMm, double seconds) {
+            this(pass, diameterMm, axialMm, seconds, 0);
+        }
+
+        /**
+         * The hob centre's distance from the work axis at the end of the move, mm: half the work
+         * diameter the tip reaches plus half the hob's tip diameter (the common perpendicular of
+         * the crossed axes, whatever the swivel). Empty when the step does not carry the tip diameter.
+         *
+         * @return the centre distance, mm
+         */
+        @ApiStatus(since = "1.1")
+        public java.util.OptionalDouble hobCentreRadiusMm() {
+            return hobTipDiameterMm == 0 ? java.util.OptionalDouble.empty()
+                    : java.util.OptionalDouble.of((diameterMm + hobTipDiameterMm) / 2);
         }
 
         @Override
@@ -218,16 +262,46 @@ public sealed interface CycleStep {
      * @param feedMmPerRev  feed per work revolution, mm
      * @param cutting       true when the hob removes material during this move
      * @param seconds       time, s
+     * @param hobTipDiameterMm the hob's tip (outside) diameter d_a0, mm; 0 when not given
      */
     @ApiStatus(since = "1.0")
     record Feed(int pass, double diameterMm, double axialMm, double feedMmPerRev, boolean cutting,
-                double seconds) implements CycleStep {
+                double seconds, @ApiStatus(since = "1.1") double hobTipDiameterMm) implements CycleStep {
         public Feed {
             Checks.atLeast("pass", pass, 0);
             Checks.nonNegative("diameterMm", diameterMm);
             Checks.finite("axialMm", axialMm);
             Checks.positive("feedMmPerRev", feedMmPerRev);
             Checks.nonNegative("seconds", seconds);
+            Checks.nonNegative("hobTipDiameterMm", hobTipDiameterMm);
+        }
+
+        /**
+         * A feed move without the hob's tip diameter (as the first api had it).
+         *
+         * @param pass         pass number, 0 outside the passes
+         * @param diameterMm   work diameter the hob tip reaches, mm
+         * @param axialMm      hob centre along the work axis, mm
+         * @param feedMmPerRev feed per work revolution, mm
+         * @param cutting      true when the hob removes material
+         * @param seconds      time, s
+         */
+        public Feed(int pass, double diameterMm, double axialMm, double feedMmPerRev, boolean cutting,
+                    double seconds) {
+            this(pass, diameterMm, axialMm, feedMmPerRev, cutting, seconds, 0);
+        }
+
+        /**
+         * The hob centre's distance from the work axis at the end of the move, mm: half the work
+         * diameter the tip reaches plus half the hob's tip diameter (the common perpendicular of
+         * the crossed axes, whatever the swivel). Empty when the step does not carry the tip diameter.
+         *
+         * @return the centre distance, mm
+         */
+        @ApiStatus(since = "1.1")
+        public java.util.OptionalDouble hobCentreRadiusMm() {
+            return hobTipDiameterMm == 0 ? java.util.OptionalDouble.empty()
+                    : java.util.OptionalDouble.of((diameterMm + hobTipDiameterMm) / 2);
         }
 
         @Override

@@ -18,6 +18,21 @@ public enum CsvColumn {
     DIAMETER_MM("diameter_mm"),
     /** Hob centre along the work axis from the front face (rapid, feed), mm. */
     AXIAL_MM("axial_mm"),
+    /** The hob's tip (outside) diameter d_a0 (rapid, feed), mm. */
+    HOB_TIP_DIAMETER_MM("hob_tip_diameter_mm"),
+    /** The hob centre's distance from the work axis at the end of the move (rapid, feed), mm. */
+    HOB_CENTRE_RADIUS_MM("hob_centre_radius_mm"),
+    /** The dialect's letter of the radial axis (rapid, feed; empty without a dialect). */
+    RADIAL_AXIS("radial_axis"),
+    /**
+     * The hob centre on the radial axis as the dialect counts it: the centre distance, doubled for
+     * diameter programming, times the axis sign (rapid, feed), mm.
+     */
+    RADIAL_VALUE_MM("radial_value_mm"),
+    /** The dialect's letter of the axial axis (rapid, feed; empty without a dialect). */
+    AXIAL_AXIS("axial_axis"),
+    /** The hob centre on the axial axis as the dialect counts it: axial_mm times the axis sign (rapid, feed), mm. */
+    AXIAL_VALUE_MM("axial_value_mm"),
     /** Feed per work revolution (feed), mm. */
     FEED_MM_PER_REV("feed_mm_per_rev"),
     /** true when the hob cuts (feed). */
@@ -38,6 +53,10 @@ public enum CsvColumn {
     DIFFERENTIAL_DEG_PER_MM("differential_deg_per_mm"),
     /** Swivel setting in the machine's sign convention (swivel), degrees. */
     SWIVEL_DEG("swivel_deg"),
+    /** true when the control turns the swivel axis, false for a manual holder the setter sets (swivel). */
+    SWIVEL_PROGRAMMABLE("swivel_programmable"),
+    /** The dialect's letter of the swivel axis (swivel, programmable, when the dialect has one). */
+    SWIVEL_AXIS("swivel_axis"),
     /** Hob shift position (hob-shift), mm. */
     HOB_SHIFT_MM("hob_shift_mm"),
     /** true for coolant on, false for off (coolant). */

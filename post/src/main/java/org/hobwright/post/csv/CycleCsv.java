@@ -8,9 +8,11 @@ import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.Rotation;
+import org.hobwright.post.nc.Dialect;
 import org.hobwright.text.Decimal;
 import tools.jackson.core.FormatSchema;
 import tools.jackson.core.JacksonException;
@@ -32,7 +34,7 @@ import tools.jackson.dataformat.csv.CsvWriteFeature;
 public final class CycleCsv {
 
     /** The column-set version written in every row. */
-    public static final int VERSION = 1;
+    public static final int VERSION = 2;
 
 
     /** Writing takes the generator alone: an object mapper is only built to read. */
@@ -54,12 +56,23 @@ public final class CycleCsv {
     }
 
     /**
-     * Writes the steps.
+     * Writes the steps without a dialect: the machine-axis columns stay empty.
      *
      * @param steps the cycle's steps
      * @return the CSV text, header first, CRLF line ends
      */
     public static String write(List<CycleStep> steps) {
+        return write(steps, Optional.empty());
+    }
+
+    /**
+     * Writes the steps, with the hob centre on the dialect's axes when a dialect is given.
+     *
+     * @param steps   the cycle's steps
+     * @param dialect the machine's dialect, whose axes name the machine-axis columns
+     * @return the CSV text, header first, CRLF line ends
+     */
+    public static String write(List<CycleStep> steps, Optional<Dialect> dialect) {
         List<Map<CsvColumn, String>> rows = new ArrayList<>();
         for (int i = 0; i < steps.size(); i++) {
             Map<CsvColumn, String> row = new EnumMap<>(CsvColumn.class);
@@ -67,7 +80,7 @@ public final class CycleCsv {
             row.put(CsvColumn.STEP_NO, String.valueOf(i + 1));
             row.put(CsvColumn.KIND, steps.get(i).kind());
             row.put(CsvColumn.TIME_S, Decimal.exact(steps.get(i).seconds()));
-            fill(steps.get(i), row);
+            fill(steps.get(i), row, dialect);
             rows.add(row);
         }
         if (rows.isEmpty()) {
@@ -97,13 +110,17 @@ public final class CycleCsv {
         }
     }
 
-    private static void fill(CycleStep step, Map<CsvColumn, String> row) {
+    private static void fill(CycleStep step, Map<CsvColumn, String> row, Optional<Dialect> dialect) {
         if (step instanceof CycleStep.Comment c) {
             row.put(CsvColumn.TEXT, c.text());
         } else if (step instanceof CycleStep.Coolant c) {
             row.put(CsvColumn.COOLANT, String.valueOf(c.on()));
         } else if (step instanceof CycleStep.Swivel s) {
             row.put(CsvColumn.SWIVEL_DEG, Decimal.exact(s.machineAngleDeg()));
+            row.put(CsvColumn.SWIVEL_PROGRAMMABLE, String.valueOf(s.programmable()));
+            if (s.programmable()) {
+                dialect.flatMap(Dialect::swivel).ifPresent(a -> row.put(CsvColumn.SWIVEL_AXIS, a.letter()));
+            }
         } else if (step instanceof CycleStep.SyncOn s) {
             row.put(CsvColumn.HOB_TURNS, String.valueOf(s.hobTurns()));
             row.put(CsvColumn.WORK_TURNS, String.valueOf(s.workTurns()));
@@ -115,19 +132,33 @@ public final class CycleCsv {
         } else if (step instanceof CycleStep.HobShift h) {
             row.put(CsvColumn.HOB_SHIFT_MM, Decimal.exact(h.positionMm()));
         } else if (step instanceof CycleStep.Rapid r) {
-            move(row, r.pass(), r.diameterMm(), r.axialMm());
+            move(row, r.pass(), r.diameterMm(), r.axialMm(), r.hobTipDiameterMm(), dialect);
         } else if (step instanceof CycleStep.Feed f) {
-            move(row, f.pass(), f.diameterMm(), f.axialMm());
+            move(row, f.pass(), f.diameterMm(), f.axialMm(), f.hobTipDiameterMm(), dialect);
             row.put(CsvColumn.FEED_MM_PER_REV, Decimal.exact(f.feedMmPerRev()));
             row.put(CsvColumn.CUTTING, String.valueOf(f.cutting()));
         }
         // sync-off, spindles-stop and dwell carry only their time
     }
 
-    private static void move(Map<CsvColumn, String> row, int pass, double diameterMm, double axialMm) {
+    private static void move(Map<CsvColumn, String> row, int pass, double diameterMm, double axialMm,
+                             double hobTipDiameterMm, Optional<Dialect> dialect) {
         row.put(CsvColumn.PASS_NO, String.valueOf(pass));
         row.put(CsvColumn.DIAMETER_MM, Decimal.exact(diameterMm));
         row.put(CsvColumn.AXIAL_MM, Decimal.exact(axialMm));
+        row.put(CsvColumn.HOB_TIP_DIAMETER_MM, Decimal.exact(hobTipDiameterMm));
+        if (hobTipDiameterMm == 0) {
+            return;     // a step that does not carry the hob's size: no centre position
+        }
+        double centre = (diameterMm + hobTipDiameterMm) / 2;
+        row.put(CsvColumn.HOB_CENTRE_RADIUS_MM, Decimal.exact(centre));
+        dialect.ifPresent(d -> {
+            row.put(CsvColumn.RADIAL_AXIS, d.radial().letter());
+            row.put(CsvColumn.RADIAL_VALUE_MM, Decimal.exact(d.radial().sign() * (d.radial().diameter() ? 2 * centre
+                    : centre)));
+            row.put(CsvColumn.AXIAL_AXIS, d.axial().letter());
+            row.put(CsvColumn.AXIAL_VALUE_MM, Decimal.exact(d.axial().sign() * axialMm));
+        });
     }
 
     /** {@code clockwise} or {@code counter-clockwise}. */

@@ -30,7 +30,7 @@ final class RowReader {
         return switch (kind) {
             case "comment" -> new CycleStep.Comment(text(CsvColumn.TEXT));
             case "coolant" -> new CycleStep.Coolant(flag(CsvColumn.COOLANT));
-            case "swivel" -> new CycleStep.Swivel(number(CsvColumn.SWIVEL_DEG), s);
+            case "swivel" -> new CycleStep.Swivel(number(CsvColumn.SWIVEL_DEG), s, flag(CsvColumn.SWIVEL_PROGRAMMABLE));
             case "sync-on" -> new CycleStep.SyncOn(integer(CsvColumn.HOB_TURNS), integer(CsvColumn.WORK_TURNS),
                     number(CsvColumn.HOB_RPM), number(CsvColumn.WORK_RPM), rotation(CsvColumn.HOB_ROTATION),
                     rotation(CsvColumn.WORK_ROTATION), number(CsvColumn.DIFFERENTIAL_DEG_PER_MM), s);
@@ -39,9 +39,10 @@ final class RowReader {
             case "dwell" -> new CycleStep.Dwell(s);
             case "hob-shift" -> new CycleStep.HobShift(number(CsvColumn.HOB_SHIFT_MM), s);
             case "rapid" -> new CycleStep.Rapid(integer(CsvColumn.PASS_NO), number(CsvColumn.DIAMETER_MM),
-                    number(CsvColumn.AXIAL_MM), s);
+                    number(CsvColumn.AXIAL_MM), s, number(CsvColumn.HOB_TIP_DIAMETER_MM));
             case "feed" -> new CycleStep.Feed(integer(CsvColumn.PASS_NO), number(CsvColumn.DIAMETER_MM),
-                    number(CsvColumn.AXIAL_MM), number(CsvColumn.FEED_MM_PER_REV), flag(CsvColumn.CUTTING), s);
+                    number(CsvColumn.AXIAL_MM), number(CsvColumn.FEED_MM_PER_REV), flag(CsvColumn.CUTTING), s,
+                    number(CsvColumn.HOB_TIP_DIAMETER_MM));
             default -> throw new IllegalArgumentException("column kind: unknown step kind \"" + kind + "\"");
         };
     }

@@ -26,6 +26,9 @@ final class NcProgramBuilder {
         ops.add(new NcOp.Fixed(TemplateKey.FEED_PER_REV));
         ops.add(new NcOp.Fixed(TemplateKey.TOOL_CALL));
         for (CycleStep step : cycle.steps()) {
+            if (step instanceof CycleStep.Swivel s && !s.programmable()) {
+                continue;       // a manual holder: the setter sets it (header and setup sheet), no block
+            }
             ops.add(op(step));
         }
         ops.add(new NcOp.Fixed(TemplateKey.PROGRAM_END));

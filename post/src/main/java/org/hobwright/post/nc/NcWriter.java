@@ -140,7 +140,7 @@ public final class NcWriter implements CycleWriter {
         for (CycleStep s : cycle.steps()) {
             if (s instanceof CycleStep.SyncOn on && on.differentialDegPerMm() != 0) {
                 needed.add(TemplateKey.SYNC_ON_HELIX);
-            } else if (s instanceof CycleStep.Swivel) {
+            } else if (s instanceof CycleStep.Swivel sw && sw.programmable()) {
                 needed.add(TemplateKey.SWIVEL_TO);
             } else if (s instanceof CycleStep.HobShift) {
                 needed.add(TemplateKey.HOB_SHIFT);

@@ -20,7 +20,7 @@ public final class CycleImport {
     /** Column holding the step's time in seconds. */
     public static final String SECONDS_COLUMN = "time_s";
     /** The CSV format version this host understands. */
-    public static final String SUPPORTED_VERSION = "1";
+    public static final String SUPPORTED_VERSION = "2";
 
     private CycleImport() {
     }

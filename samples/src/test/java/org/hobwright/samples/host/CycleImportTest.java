@@ -14,7 +14,7 @@ class CycleImportTest {
 
     @Test
     void readsColumnsByNameAndKeepsEveryValue() {
-        List<Operation> ops = CycleImport.operations(HEADER + "1,rapid,0.5,-3.25,x\n1,feed,12.75,20,\n");
+        List<Operation> ops = CycleImport.operations(HEADER + "2,rapid,0.5,-3.25,x\n2,feed,12.75,20,\n");
         assertEquals(2, ops.size());
         assertEquals("rapid", ops.get(0).kind());
         assertEquals(1, ops.get(0).sequence());
@@ -27,8 +27,8 @@ class CycleImportTest {
     @Test
     void refusesAnotherFormatVersionNamingTheLine() {
         var e = assertThrows(IllegalArgumentException.class,
-                () -> CycleImport.operations(HEADER + "1,rapid,0.5,0,\n2,feed,1,2,\n"));
-        assertTrue(e.getMessage().contains("line 3") && e.getMessage().contains("\"2\""), e.getMessage());
+                () -> CycleImport.operations(HEADER + "2,rapid,0.5,0,\n1,feed,1,2,\n"));
+        assertTrue(e.getMessage().contains("line 3") && e.getMessage().contains("\"1\""), e.getMessage());
     }
 
     @Test

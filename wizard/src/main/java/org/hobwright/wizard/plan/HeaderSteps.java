@@ -13,8 +13,9 @@ import org.hobwright.text.Decimal;
 
 /**
  * The steps before the synchronisation: comment lines the setter needs beside the moves (sync ratio
- * and spindle senses, feed direction, a hob turned round on its arbor, helical addition, hob shift), the swivel move on machines with a programmable
- * swivel, and the hob-shift move on machines with a shift axis. Part, gear, hob, swivel and the
+ * and spindle senses, feed direction, a hob turned round on its arbor, helical addition, hob shift),
+ * the swivel setting (a move on machines with a programmable swivel, the setter's setting on a manual
+ * holder), and the hob-shift move on machines with a shift axis. Part, gear, hob, swivel and the
  * cautions are not repeated here: every writer prints them in its own header.
  */
 public final class HeaderSteps {
@@ -49,9 +50,9 @@ public final class HeaderSteps {
         }
         shift.ifPresent(p -> out.add(comment(p.describe(u))));
         MachineTimes times = job.machine().times();
-        if (job.machine().swivel().programmable()) {
-            out.add(new CycleStep.Swivel(swivel.machineAngleDeg(), times.swivelS().orElse(0)));
-        }
+        boolean programmable = job.machine().swivel().programmable();
+        out.add(new CycleStep.Swivel(swivel.machineAngleDeg(), programmable ? times.swivelS().orElse(0) : 0,
+                programmable));
         shift.ifPresent(p -> out.add(new CycleStep.HobShift(p.positionMm(), times.hobShiftS().orElse(0))));
         return out;
     }

@@ -86,9 +86,9 @@ public final class ToolpathBuilder {
             }
             steps.add(rapid(g, pass, retract, start, passDia + 2 * g.radialClearanceMm(), start));
             steps.add(new CycleStep.Feed(pass, passDia, start, feed, false,
-                    Kinematics.feedSeconds(g.radialClearanceMm(), feed, workRpm)));
+                    Kinematics.feedSeconds(g.radialClearanceMm(), feed, workRpm), g.hobOutsideDiameterMm()));
             steps.add(new CycleStep.Feed(pass, passDia, end, feed, true,
-                    Kinematics.feedSeconds(Math.abs(end - start), feed, workRpm)));
+                    Kinematics.feedSeconds(Math.abs(end - start), feed, workRpm), g.hobOutsideDiameterMm()));
             steps.add(rapid(g, pass, passDia, end, retract, end));
             steps.add(rapid(g, pass, retract, end, retract, start));
             ax = start;
@@ -114,7 +114,7 @@ public final class ToolpathBuilder {
     private static CycleStep.Rapid rapid(CycleGeometry g, int pass, double fromDia, double fromAx, double toDia,
                                          double toAx) {
         double move = Math.max(Math.abs(fromDia - toDia) / 2, Math.abs(fromAx - toAx));
-        return new CycleStep.Rapid(pass, toDia, toAx, 60.0 * move / g.rapidMmPerMin());
+        return new CycleStep.Rapid(pass, toDia, toAx, 60.0 * move / g.rapidMmPerMin(), g.hobOutsideDiameterMm());
     }
 
     /** {@code before} plus the seconds of the steps from {@code from} on. */

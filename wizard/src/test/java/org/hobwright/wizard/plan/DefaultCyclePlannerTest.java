@@ -282,7 +282,15 @@ class DefaultCyclePlannerTest {
         assertEquals("-1° 55′", s.swivelSettingText());
         assertTrue(s.swivelDirection().contains("in the negative direction"), s.swivelDirection());
         assertTrue(has(c, PlanCode.PLAN_SWIVEL_ROUNDED.code()));
-        assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.Swivel), "manual holder");
+        // a manual holder: the setting is a step (a row of the cycle CSV), not a move of the control
+        List<CycleStep> swivels = c.steps().stream().filter(x -> x instanceof CycleStep.Swivel).toList();
+        assertEquals(1, swivels.size(), "manual holder: one swivel step");
+        CycleStep.Swivel manual = (CycleStep.Swivel) swivels.get(0);
+        assertFalse(manual.programmable(), "manual holder");
+        assertEquals(-23.0 / 12, manual.machineAngleDeg(), 1e-12);
+        // every move carries the hob's 32 mm tip diameter (metering-pump-gear.json)
+        assertTrue(c.steps().stream().filter(x -> x instanceof CycleStep.Feed).allMatch(x ->
+                ((CycleStep.Feed) x).hobTipDiameterMm() == 32), "hob tip diameter on the feeds");
         assertTrue(c.steps().stream().noneMatch(x -> x instanceof CycleStep.HobShift), "no shift axis");
         assertTrue(c.summary().orElseThrow().fastest().isPresent());
     }
