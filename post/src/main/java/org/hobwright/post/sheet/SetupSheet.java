@@ -23,19 +23,20 @@ final class SetupSheet {
             body { font-family: "DejaVu Sans", Arial, Helvetica, sans-serif; font-size: 10pt; color: #111;
                    max-width: 186mm; margin: 0 auto; }
             h1 { font-size: 16pt; margin: 0 0 2mm 0; }
-            h2 { font-size: 11.5pt; margin: 4mm 0 1.5mm 0; border-bottom: 0.4mm solid #444; }
+            h2 { font-size: 11.5pt; margin: 4mm 0 1.5mm 0; border-bottom: 0.4mm solid #444;
+                 break-after: avoid; page-break-after: avoid; }
             p.meta { margin: 0 0 2mm 0; color: #333; }
             .cautions { border: 0.6mm solid #b00000; background: #fff3f0; padding: 1.5mm 3mm; margin: 2mm 0; }
             .cautions ul { margin: 1mm 0; padding-left: 5mm; }
-            .figures { display: flex; gap: 4mm; }
+            .figures { display: flex; gap: 4mm; break-inside: avoid; page-break-inside: avoid; }
             figure { flex: 1 1 0; margin: 0; break-inside: avoid; page-break-inside: avoid; }
             figcaption { font-size: 8.5pt; color: #222; margin-top: 1mm; }
-            table { border-collapse: collapse; width: 100%; margin: 1mm 0; break-inside: avoid;
-                    page-break-inside: avoid; }
+            table { border-collapse: collapse; width: 100%; margin: 1mm 0; }
+            thead { display: table-header-group; }
+            tr, li, p, .cautions, .keep { break-inside: avoid; page-break-inside: avoid; }
             th, td { border: 0.2mm solid #999; padding: 0.8mm 1.5mm; text-align: left; vertical-align: top; }
             th[scope=row] { width: 45%; font-weight: normal; background: #f2f2f2; }
             thead th { background: #e4e4e4; }
-            section { break-inside: avoid; page-break-inside: avoid; }
             td.ok { color: #0a5d00; } td.bad { color: #b00000; font-weight: bold; }
             svg text { font-family: inherit; } svg { overflow: visible; display: block; }
             .frame { fill: #fff; stroke: #bbb; }
@@ -49,7 +50,8 @@ final class SetupSheet {
             .tooth { stroke: #6b7f99; stroke-width: 1.4; } .hob { fill: #f7e3c0; fill-opacity: 0.9; stroke: #7a4b00; }
             .thread { stroke: #7a4b00; stroke-width: 1.3; } .sweep { fill: none; stroke: #b00000; stroke-width: 2; }
             .arrowhead { fill: #b00000; }
-            @media print { body { font-size: 9pt; } .figures { gap: 3mm; } }
+            @media print { body { font-size: 9pt; max-width: none; } .figures { gap: 3mm; }
+                           .figures svg { max-height: 62mm; } }
             """;
 
     private SetupSheet() {

@@ -25,6 +25,9 @@ final class SheetTables {
     private final Markup m;
     private final SheetFormat f;
     private final HobJob job;
+    /** Tables of up to this many rows are not split across pages. */
+    static final int KEEP_ROWS = 14;
+    private final List<String[]> pending = new java.util.ArrayList<>();
 
     SheetTables(Markup m, SheetFormat f, HobJob job) {
         this.m = m;
@@ -57,7 +60,7 @@ final class SheetTables {
         row("Hob shift position", f.lenU(s.hobShiftMm()));
         row("Coolant", coolant ? "on" : "off");
         row("Cycle time", f.seconds(sum.cycleTimeS()) + " (" + Decimal.fixed(sum.cycleTimeS() / 60, 2) + " min)");
-        m.close("tbody").close("table");
+        rows();
         passes(sum.passes());
         m.close("section");
     }
@@ -199,15 +202,32 @@ final class SheetTables {
         m.close("section");
     }
 
+    /**
+     * Opens a section with its heading; its rows follow ({@link #row}) and {@link #end} closes it. The
+     * heading never ends a page; a table of up to {@value #KEEP_ROWS} rows is kept on one page, a longer
+     * one may break between rows, so no section leaves a large part of a page empty.
+     */
     private void section(String title) {
-        m.open("section").leaf("h2", title).nl().open("table").open("tbody");
+        m.open("section").leaf("h2", title).nl();
+        pending.clear();
     }
 
     private void row(String name, String value) {
-        m.open("tr").leaf("th", name, "scope", "row").leaf("td", value).close("tr");
+        pending.add(new String[] {name, value});
+    }
+
+    /** Writes the rows given since the heading as one table. */
+    private void rows() {
+        m.open("table", "class", pending.size() <= KEEP_ROWS ? "rows keep" : "rows").open("tbody");
+        for (String[] r : pending) {
+            m.open("tr").leaf("th", r[0], "scope", "row").leaf("td", r[1]).close("tr");
+        }
+        m.close("tbody").close("table");
+        pending.clear();
     }
 
     private void end() {
-        m.close("tbody").close("table").close("section");
+        rows();
+        m.close("section");
     }
 }
