@@ -6,14 +6,11 @@ import org.hobwright.api.job.Units;
  * The job's units for everything the writers print: lengths in millimetres or inches, cutting
  * speed in m/min or ft/min. Canonical values (mm, m/min) come in; the job's values go out.
  *
- * <p>1 in = 25.4 mm and 1 ft = 0.3048 m exactly (1959 international yard and pound agreement).
+ * <p>Every conversion goes through {@link Units}, where the unit facts live.
  *
  * @param units the job's length unit
  */
 public record JobUnits(Units units) {
-
-    /** Metres per foot, exact by definition. */
-    private static final double M_PER_FT = 0.3048;
 
     /** A length in the job's unit. */
     public double length(double mm) {
@@ -22,7 +19,7 @@ public record JobUnits(Units units) {
 
     /** Cutting speed in the job's speed unit (m/min for mm jobs, ft/min for inch jobs). */
     public double cuttingSpeed(double metresPerMinute) {
-        return units == Units.MM ? metresPerMinute : metresPerMinute / M_PER_FT;
+        return units.cuttingSpeedFromMPerMin(metresPerMinute);
     }
 
     /** Symbol of lengths: {@code mm} or {@code in}. */
@@ -32,7 +29,7 @@ public record JobUnits(Units units) {
 
     /** Symbol of cutting speed: {@code m/min} or {@code ft/min}. */
     public String speedSymbol() {
-        return units == Units.MM ? "m/min" : "ft/min";
+        return org.hobwright.api.job.UnitKind.CUTTING_SPEED.symbol(units);
     }
 
     /** True for an inch job. */

@@ -77,6 +77,48 @@ public final class Checks {
         return value;
     }
 
+    /** Requires a finite number inside the field's range (job, machine or template table), naming the field's key. */
+    public static double field(org.hobwright.api.job.FieldDef f, double value) {
+        org.hobwright.api.job.FieldRange r = f.range();
+        if (!r.contains(value)) {
+            finite(f.key(), value);
+            throw new IllegalArgumentException(f.key() + " must be " + words(r) + ", was " + value);
+        }
+        return value;
+    }
+
+    /** Requires an absent value or a number inside the field's range. */
+    public static OptionalDouble field(org.hobwright.api.job.FieldDef f, OptionalDouble value) {
+        if (present(f.key(), value).isPresent()) {
+            field(f, value.getAsDouble());
+        }
+        return value;
+    }
+
+    /** Requires a whole number inside the field's range. */
+    public static int field(org.hobwright.api.job.FieldDef f, int value) {
+        field(f, (double) value);
+        return value;
+    }
+
+    /** Requires an absent value or a whole number inside the field's range. */
+    public static OptionalInt field(org.hobwright.api.job.FieldDef f, OptionalInt value) {
+        if (present(f.key(), value).isPresent()) {
+            field(f, (double) value.getAsInt());
+        }
+        return value;
+    }
+
+    private static String words(org.hobwright.api.job.FieldRange r) {
+        if (!r.hasMax()) {
+            return r.minOpen() ? "greater than " + r.min() : "at least " + r.min();
+        }
+        if (!r.hasMin()) {
+            return "at most " + r.max();
+        }
+        return (r.minOpen() ? "greater than " + r.min() + " and at most " : "between " + r.min() + " and ") + r.max();
+    }
+
     /** Requires a whole number of at least {@code min}. */
     public static int atLeast(String field, int value, int min) {
         if (value < min) {

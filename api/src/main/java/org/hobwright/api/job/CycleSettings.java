@@ -46,20 +46,20 @@ public record CycleSettings(
     public CycleSettings {
         Checks.text("cycle.workMaterial", workMaterial);
         Objects.requireNonNull(cuttingSpeedMPerMin, "cuttingSpeedMPerMin");
-        Checks.positive("cycle.cuttingSpeed", cuttingSpeedMPerMin);
+        Checks.field(JobFields.CYCLE_CUTTING_SPEED, cuttingSpeedMPerMin);
         Objects.requireNonNull(roughFeedMmPerRev, "roughFeedMmPerRev");
-        Checks.positive("cycle.roughFeed", roughFeedMmPerRev);
+        Checks.field(JobFields.CYCLE_ROUGH_FEED, roughFeedMmPerRev);
         Objects.requireNonNull(finishFeedMmPerRev, "finishFeedMmPerRev");
-        Checks.positive("cycle.finishFeed", finishFeedMmPerRev);
+        Checks.field(JobFields.CYCLE_FINISH_FEED, finishFeedMmPerRev);
         Objects.requireNonNull(roughDepthMm, "roughDepthMm");
-        Checks.positive("cycle.roughDepth", roughDepthMm);
-        Checks.nonNegative("cycle.finishStock", finishStockMm);
+        Checks.field(JobFields.CYCLE_ROUGH_DEPTH, roughDepthMm);
+        Checks.field(JobFields.CYCLE_FINISH_STOCK, finishStockMm);
         Checks.present("cycle.method", method);
-        Checks.nonNegative("cycle.axialClearance", axialClearanceMm);
-        Checks.nonNegative("cycle.radialClearance", radialClearanceMm);
+        Checks.field(JobFields.CYCLE_AXIAL_CLEARANCE, axialClearanceMm);
+        Checks.field(JobFields.CYCLE_RADIAL_CLEARANCE, radialClearanceMm);
         Checks.present("cycle.targets", targets);
-        Checks.nonNegative("cycle.hobShiftPerPart", hobShiftPerPartMm);
-        Checks.atLeast("cycle.hobShiftEveryParts", hobShiftEveryParts, 1);
+        Checks.field(JobFields.HOB_SHIFT_PER_PART, hobShiftPerPartMm);
+        Checks.field(JobFields.HOB_SHIFT_EVERY_PARTS, hobShiftEveryParts);
         Checks.present("cycle.run", run);
     }
 

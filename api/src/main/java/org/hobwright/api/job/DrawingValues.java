@@ -42,6 +42,14 @@ public record DrawingValues(
         java.util.Objects.requireNonNull(spanWidthMm, "spanWidthMm");
         java.util.Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
         java.util.Objects.requireNonNull(overPinsMm, "overPinsMm");
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_PITCH_DIAMETER, pitchDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_OUTSIDE_DIAMETER, outsideDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_ROOT_DIAMETER, rootDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_WHOLE_DEPTH, wholeDepthMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_SPAN_TEETH, spanTeeth);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_SPAN, spanWidthMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_PIN_DIAMETER, pinDiameterMm);
+        org.hobwright.api.internal.Checks.field(JobFields.DRAWING_OVER_PINS, overPinsMm);
     }
 
     /**

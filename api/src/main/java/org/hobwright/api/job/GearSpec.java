@@ -8,24 +8,25 @@ import org.hobwright.api.ApiStatus;
 import org.hobwright.api.internal.Checks;
 
 /**
- * The gear as the drawing specifies it, in canonical units (mm, degrees).
+ * The gear as the drawing specifies it, in canonical units (mm, degrees). Every number must lie in
+ * the range of its field in {@link JobFields} (the constructor refuses others).
  *
  * @param partName              the part name or number, for headers and file names
- * @param teeth                 number of teeth z, at least 1 (the wizard's checks ask for far more)
+ * @param teeth                 number of teeth z
  * @param pitch                 normal pitch as given on the drawing
- * @param pressureAngleDeg      normal pressure angle α_n, degrees, 1 to 45
- * @param helixAngleDeg         helix angle β at the reference cylinder, magnitude, degrees, 0 to 60 (0 = spur)
+ * @param pressureAngleDeg      normal pressure angle α_n, degrees
+ * @param helixAngleDeg         helix angle β at the reference cylinder, magnitude, degrees (0 = spur)
  * @param hand                  helix hand (ignored for spur gears)
- * @param faceWidthMm           face width b, mm, greater than 0
- * @param profileShift          profile shift coefficient x (in normal module), -3 to 3
- * @param thicknessAllowanceMm  normal tooth-thickness allowance E_sn, mm (negative thins the tooth), -10 to 10
+ * @param faceWidthMm           face width b, mm
+ * @param profileShift          profile shift coefficient x (in normal module)
+ * @param thicknessAllowanceMm  normal tooth-thickness allowance E_sn, mm (negative thins the tooth)
  * @param toothSystem           tooth system identifier ({@code iso53-a}, {@code iso53-b}, {@code iso53-c},
  *                              {@code iso53-d}, {@code agma-coarse}, {@code agma-fine},
  *                              {@code full-depth-14.5}, {@code custom})
  * @param customProportions     basic rack factors, present exactly when the tooth system is {@code custom}
  * @param blankDiameterMm       the diameter the blank is turned to before hobbing, if known
  * @param pinDiameterMm         the pin or ball the inspector will use, if chosen
- * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class 1 to 11, if the drawing gives one
+ * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class, if the drawing gives one
  * @param drawing               values printed on the drawing, for the drawing check
  */
 @ApiStatus(since = "1.0")
@@ -48,22 +49,22 @@ public record GearSpec(
 
     public GearSpec {
         Checks.text("partName", partName);
-        Checks.atLeast("teeth", teeth, 1);
+        Checks.field(JobFields.GEAR_TEETH, teeth);
         Checks.present("pitch", pitch);
-        Checks.range("pressureAngle", pressureAngleDeg, 1, 45);
-        Checks.range("helixAngle", helixAngleDeg, 0, 60);
+        Checks.field(JobFields.GEAR_PRESSURE_ANGLE, pressureAngleDeg);
+        Checks.field(JobFields.GEAR_HELIX_ANGLE, helixAngleDeg);
         Checks.present("hand", hand);
-        Checks.positive("faceWidth", faceWidthMm);
-        Checks.range("profileShift", profileShift, -3, 3);
-        Checks.range("thicknessAllowance", thicknessAllowanceMm, -10, 10);
+        Checks.field(JobFields.GEAR_FACE_WIDTH, faceWidthMm);
+        Checks.field(JobFields.GEAR_PROFILE_SHIFT, profileShift);
+        Checks.field(JobFields.GEAR_THICKNESS_ALLOWANCE, thicknessAllowanceMm);
         Checks.text("toothSystem", toothSystem);
         Objects.requireNonNull(customProportions, "customProportions");
         Objects.requireNonNull(blankDiameterMm, "blankDiameterMm");
-        Checks.positive("blankDiameter", blankDiameterMm);
+        Checks.field(JobFields.GEAR_BLANK_DIAMETER, blankDiameterMm);
         Objects.requireNonNull(pinDiameterMm, "pinDiameterMm");
-        Checks.positive("pinDiameter", pinDiameterMm);
+        Checks.field(JobFields.GEAR_PIN_DIAMETER, pinDiameterMm);
         Objects.requireNonNull(flankToleranceClass, "flankToleranceClass");
-        Checks.range("flankToleranceClass", flankToleranceClass, 1, 11);
+        Checks.field(JobFields.GEAR_TOLERANCE_CLASS, flankToleranceClass);
         Checks.present("drawing", drawing);
         if (toothSystem.equals("custom") != customProportions.isPresent()) {
             throw new IllegalArgumentException(

@@ -7,17 +7,17 @@ import org.hobwright.api.ApiStatus;
 import org.hobwright.api.internal.Checks;
 
 /**
- * The hob, in canonical units.
+ * The hob, in canonical units. Every number must lie in the range of its field in {@link JobFields}.
  *
  * @param pitch               normal pitch of the hob (must match the gear's)
- * @param pressureAngleDeg    normal pressure angle of the hob profile, degrees, 1 to 45
- * @param starts              number of starts (threads) z₀, 1 to 12
+ * @param pressureAngleDeg    normal pressure angle of the hob profile, degrees
+ * @param starts              number of starts (threads) z₀
  * @param hand                thread hand
  * @param outsideDiameterMm   outside (tip) diameter d_a0, mm
  * @param leadAngleDeg        lead angle γ as marked on the hob, degrees (magnitude), if marked
  * @param referenceDiameterMm reference (pitch) diameter d_m0, mm, if known; otherwise derived from
  *                            the outside diameter and the tooth system's hob addendum
- * @param gashes              number of gashes (flutes), at least 1
+ * @param gashes              number of gashes (flutes)
  * @param lengthMm            usable hob length, mm
  * @param maxRpm              the hob maker's speed limit, rpm, if given
  * @param material            cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
@@ -45,18 +45,18 @@ public record HobSpec(
 
     public HobSpec {
         Checks.present("hob.pitch", pitch);
-        Checks.range("hob.pressureAngle", pressureAngleDeg, 1, 45);
-        Checks.range("hob.starts", starts, 1, 12);
+        Checks.field(JobFields.HOB_PRESSURE_ANGLE, pressureAngleDeg);
+        Checks.field(JobFields.HOB_STARTS, starts);
         Checks.present("hob.hand", hand);
-        Checks.positive("hob.outsideDiameter", outsideDiameterMm);
+        Checks.field(JobFields.HOB_OUTSIDE_DIAMETER, outsideDiameterMm);
         Objects.requireNonNull(leadAngleDeg, "leadAngleDeg");
-        Checks.range("hob.leadAngle", leadAngleDeg, 0, 45);
+        Checks.field(JobFields.HOB_LEAD_ANGLE, leadAngleDeg);
         Objects.requireNonNull(referenceDiameterMm, "referenceDiameterMm");
-        Checks.positive("hob.referenceDiameter", referenceDiameterMm);
-        Checks.atLeast("hob.gashes", gashes, 1);
-        Checks.positive("hob.length", lengthMm);
+        Checks.field(JobFields.HOB_REFERENCE_DIAMETER, referenceDiameterMm);
+        Checks.field(JobFields.HOB_GASHES, gashes);
+        Checks.field(JobFields.HOB_LENGTH, lengthMm);
         Objects.requireNonNull(maxRpm, "maxRpm");
-        Checks.positive("hob.maxRpm", maxRpm);
+        Checks.field(JobFields.HOB_MAX_RPM, maxRpm);
         Checks.text("hob.material", material);
         Objects.requireNonNull(cuttingSense, "cuttingSense");
         Objects.requireNonNull(identifier, "identifier");

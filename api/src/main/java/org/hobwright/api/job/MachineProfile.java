@@ -61,10 +61,10 @@ public record MachineProfile(
     public MachineProfile {
         Checks.text("machine.name", name);
         Checks.text("machine.dialect", dialect);
-        Checks.nonNegative("machine.workMinRpm", workMinRpm);
-        Checks.positive("machine.workMaxRpm", workMaxRpm);
-        Checks.nonNegative("machine.hobMinRpm", hobMinRpm);
-        Checks.positive("machine.hobMaxRpm", hobMaxRpm);
+        Checks.field(MachineFields.WORK_MIN_RPM, workMinRpm);
+        Checks.field(MachineFields.WORK_MAX_RPM, workMaxRpm);
+        Checks.field(MachineFields.HOB_MIN_RPM, hobMinRpm);
+        Checks.field(MachineFields.HOB_MAX_RPM, hobMaxRpm);
         if (workMinRpm > workMaxRpm) {
             throw new IllegalArgumentException("machine.workMinRpm (" + workMinRpm
                     + ") must not exceed machine.workMaxRpm (" + workMaxRpm + ")");
@@ -73,26 +73,26 @@ public record MachineProfile(
             throw new IllegalArgumentException("machine.hobMinRpm (" + hobMinRpm
                     + ") must not exceed machine.hobMaxRpm (" + hobMaxRpm + ")");
         }
-        Checks.positive("machine.maxSyncRatio", maxSyncRatio);
+        Checks.field(MachineFields.MAX_SYNC_RATIO, maxSyncRatio);
         Checks.present("machine.swivel", swivel);
-        Checks.nonNegative("machine.radialMin", radialMinMm);
-        Checks.positive("machine.radialMax", radialMaxMm);
+        Checks.field(MachineFields.RADIAL_MIN, radialMinMm);
+        Checks.field(MachineFields.RADIAL_MAX, radialMaxMm);
         if (radialMinMm >= radialMaxMm) {
             throw new IllegalArgumentException("machine.radialMin (" + radialMinMm
                     + ") must be less than machine.radialMax (" + radialMaxMm + ")");
         }
-        Checks.finite("machine.axialMin", axialMinMm);
-        Checks.finite("machine.axialMax", axialMaxMm);
+        Checks.field(MachineFields.AXIAL_MIN, axialMinMm);
+        Checks.field(MachineFields.AXIAL_MAX, axialMaxMm);
         if (axialMinMm >= axialMaxMm) {
             throw new IllegalArgumentException("machine.axialMin (" + axialMinMm
                     + ") must be less than machine.axialMax (" + axialMaxMm + ")");
         }
         Objects.requireNonNull(hobShiftTravelMm, "hobShiftTravelMm");
         hobShiftTravelMm.ifPresent(v -> Checks.positive("machine.hobShiftTravel", v));
-        Checks.positive("machine.rapid", rapidMmPerMin);
-        Checks.positive("machine.maxFeed", maxFeedMmPerMin);
-        Checks.nonNegative("machine.syncSettle", syncSettleS);
-        Checks.positive("machine.maxHobDiameter", maxHobDiameterMm);
+        Checks.field(MachineFields.RAPID, rapidMmPerMin);
+        Checks.field(MachineFields.MAX_FEED, maxFeedMmPerMin);
+        Checks.field(MachineFields.SYNC_SETTLE, syncSettleS);
+        Checks.field(MachineFields.MAX_HOB_DIAMETER, maxHobDiameterMm);
         Checks.present("machine.times", times);
     }
 

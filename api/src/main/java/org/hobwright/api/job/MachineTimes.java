@@ -1,6 +1,5 @@
 package org.hobwright.api.job;
 
-import java.util.Objects;
 import java.util.OptionalDouble;
 import org.hobwright.api.ApiStatus;
 import org.hobwright.api.internal.Checks;
@@ -24,17 +23,10 @@ public record MachineTimes(OptionalDouble loadS, OptionalDouble unloadS, Optiona
             OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty());
 
     public MachineTimes {
-        check("machine.times.load", loadS);
-        check("machine.times.unload", unloadS);
-        check("machine.times.swivel", swivelS);
-        check("machine.times.hobShift", hobShiftS);
-        check("machine.times.hobChange", hobChangeS);
-    }
-
-    private static void check(String field, OptionalDouble v) {
-        Objects.requireNonNull(v, field);
-        if (v.isPresent()) {
-            Checks.nonNegative(field, v.getAsDouble());
-        }
+        Checks.field(MachineFields.TIME_LOAD, loadS);
+        Checks.field(MachineFields.TIME_UNLOAD, unloadS);
+        Checks.field(MachineFields.TIME_SWIVEL, swivelS);
+        Checks.field(MachineFields.TIME_HOB_SHIFT, hobShiftS);
+        Checks.field(MachineFields.TIME_HOB_CHANGE, hobChangeS);
     }
 }

@@ -18,18 +18,18 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
 
     /** Normal diametral pitch in 1/in. */
     default double diametralPitch() {
-        return 25.4 / moduleMm();
+        return Units.IN.toMm(1.0) / moduleMm();
     }
 
     /**
      * A pitch given as a module.
      *
-     * @param mm normal module, mm, greater than 0
+     * @param mm normal module, mm, in the range of {@link JobFields#GEAR_MODULE}
      */
     @ApiStatus(since = "1.0")
     record Module(double mm) implements Pitch {
         public Module {
-            Checks.positive("module", mm);
+            Checks.range("module", mm, JobFields.GEAR_MODULE.range().min(), JobFields.GEAR_MODULE.range().max());
         }
 
         @Override
@@ -41,17 +41,18 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
     /**
      * A pitch given as a diametral pitch.
      *
-     * @param perInch normal diametral pitch, 1/in, greater than 0
+     * @param perInch normal diametral pitch, 1/in, in the range of {@link JobFields#GEAR_DIAMETRAL_PITCH}
      */
     @ApiStatus(since = "1.0")
     record Diametral(double perInch) implements Pitch {
         public Diametral {
-            Checks.positive("diametralPitch", perInch);
+            Checks.range("diametralPitch", perInch, JobFields.GEAR_DIAMETRAL_PITCH.range().min(),
+                    JobFields.GEAR_DIAMETRAL_PITCH.range().max());
         }
 
         @Override
         public double moduleMm() {
-            return 25.4 / perInch;
+            return Units.IN.toMm(1.0) / perInch;
         }
 
         @Override

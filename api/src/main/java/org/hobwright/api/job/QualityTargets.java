@@ -27,74 +27,8 @@ public record QualityTargets(
         Objects.requireNonNull(feedMarkDepthUm, "feedMarkDepthUm");
         Objects.requireNonNull(envelopingDepthUm, "envelopingDepthUm");
         Objects.requireNonNull(maxChipThicknessMm, "maxChipThicknessMm");
-        Checks.positive("targets.feedMarkDepth", feedMarkDepthUm);
-        Checks.positive("targets.envelopingDepth", envelopingDepthUm);
-        Checks.positive("targets.maxChipThickness", maxChipThicknessMm);
-    }
-
-    /**
-     * This quality targets with another {@code feedMarkDepthUm}.
-     *
-     * @param feedMarkDepthUm largest feed-mark depth on the flank, micrometres
-     * @return the copy, checked like any new one
-     */
-    @ApiStatus(since = "1.1")
-    public QualityTargets withFeedMarkDepthUm(OptionalDouble feedMarkDepthUm) {
-        return new QualityTargets(feedMarkDepthUm, envelopingDepthUm, maxChipThicknessMm);
-    }
-
-    /**
-     * This quality targets with a {@code feedMarkDepthUm} given.
-     *
-     * @param feedMarkDepthUm the value
-     * @return the copy, checked like any new one
-     */
-    @ApiStatus(since = "1.1")
-    public QualityTargets withFeedMarkDepthUm(double feedMarkDepthUm) {
-        return withFeedMarkDepthUm(OptionalDouble.of(feedMarkDepthUm));
-    }
-
-    /**
-     * This quality targets with another {@code envelopingDepthUm}.
-     *
-     * @param envelopingDepthUm largest enveloping-cut (generating flat) depth, micrometres
-     * @return the copy, checked like any new one
-     */
-    @ApiStatus(since = "1.1")
-    public QualityTargets withEnvelopingDepthUm(OptionalDouble envelopingDepthUm) {
-        return new QualityTargets(feedMarkDepthUm, envelopingDepthUm, maxChipThicknessMm);
-    }
-
-    /**
-     * This quality targets with a {@code envelopingDepthUm} given.
-     *
-     * @param envelopingDepthUm the value
-     * @return the copy, checked like any new one
-     */
-    @ApiStatus(since = "1.1")
-    public QualityTargets withEnvelopingDepthUm(double envelopingDepthUm) {
-        return withEnvelopingDepthUm(OptionalDouble.of(envelopingDepthUm));
-    }
-
-    /**
-     * This quality targets with another {@code maxChipThicknessMm}.
-     *
-     * @param maxChipThicknessMm largest undeformed chip thickness, mm
-     * @return the copy, checked like any new one
-     */
-    @ApiStatus(since = "1.1")
-    public QualityTargets withMaxChipThicknessMm(OptionalDouble maxChipThicknessMm) {
-        return new QualityTargets(feedMarkDepthUm, envelopingDepthUm, maxChipThicknessMm);
-    }
-
-    /**
-     * This quality targets with a {@code maxChipThicknessMm} given.
-     *
-     * @param maxChipThicknessMm the value
-     * @return the copy, checked like any new one
-     */
-    @ApiStatus(since = "1.1")
-    public QualityTargets withMaxChipThicknessMm(double maxChipThicknessMm) {
-        return withMaxChipThicknessMm(OptionalDouble.of(maxChipThicknessMm));
+        Checks.field(JobFields.TARGET_FEED_MARK_DEPTH, feedMarkDepthUm);
+        Checks.field(JobFields.TARGET_ENVELOPING_DEPTH, envelopingDepthUm);
+        Checks.field(JobFields.TARGET_MAX_CHIP_THICKNESS, maxChipThicknessMm);
     }
 }

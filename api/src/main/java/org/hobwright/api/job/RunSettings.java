@@ -27,12 +27,12 @@ public record RunSettings(int batchSize, OptionalInt programNumber, OptionalInt 
             OptionalDouble.empty());
 
     public RunSettings {
-        Checks.atLeast("cycle.batchSize", batchSize, 1);
+        Checks.field(JobFields.CYCLE_BATCH_SIZE, batchSize);
         Objects.requireNonNull(programNumber, "programNumber");
-        Checks.range("cycle.programNumber", programNumber, 0, 99_999_999);
+        Checks.field(JobFields.CYCLE_PROGRAM_NUMBER, programNumber);
         Objects.requireNonNull(toolStation, "toolStation");
-        Checks.range("cycle.toolStation", toolStation, 0, 99_999);
+        Checks.field(JobFields.CYCLE_TOOL_STATION, toolStation);
         Objects.requireNonNull(hobLifePerToothM, "hobLifePerToothM");
-        Checks.positive("cycle.hobLife.lengthPerTooth", hobLifePerToothM);
+        Checks.field(JobFields.HOB_LIFE_PER_TOOTH, hobLifePerToothM);
     }
 }

@@ -26,8 +26,8 @@ public record SwivelHolder(
 
     public SwivelHolder {
         Checks.present("swivel.scale", scale);
-        Checks.range("swivel.resolution", resolutionDeg, 1e-6, 1);
-        Checks.range("swivel.maxAngle", maxAngleDeg, 0, 90);
+        Checks.field(MachineFields.SWIVEL_RESOLUTION, resolutionDeg);
+        Checks.field(MachineFields.SWIVEL_MAX_ANGLE, maxAngleDeg);
         Checks.text("swivel.positiveSense", positiveSense);
     }
 

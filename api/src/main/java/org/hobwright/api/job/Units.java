@@ -9,17 +9,22 @@ import org.hobwright.api.ApiStatus;
  */
 @ApiStatus(since = "1.0")
 public enum Units {
-    /** Millimetres. */
-    MM("mm", 1.0),
-    /** Inches (exactly 25.4 mm, by the 1959 international yard and pound agreement). */
-    IN("in", 25.4);
+    /** Millimetres; cutting speeds in metres per minute. */
+    MM("mm", 1.0, 1.0),
+    /**
+     * Inches (exactly 25.4 mm); cutting speeds in feet per minute (1 ft = 0.3048 m exactly). Both
+     * by the international yard and pound agreement of 1959.
+     */
+    IN("in", 25.4, 0.3048);
 
     private final String symbol;
     private final double mmPerUnit;
+    private final double metresPerSpeedLength;
 
-    Units(String symbol, double mmPerUnit) {
+    Units(String symbol, double mmPerUnit, double metresPerSpeedLength) {
         this.symbol = symbol;
         this.mmPerUnit = mmPerUnit;
+        this.metresPerSpeedLength = metresPerSpeedLength;
     }
 
     /** The symbol used in files and on screen: {@code mm} or {@code in}. */
@@ -35,6 +40,18 @@ public enum Units {
     /** Converts a length in millimetres to this unit. */
     public double fromMm(double mm) {
         return mm / mmPerUnit;
+    }
+
+    /** Converts a cutting speed in this unit system (m/min or ft/min) to metres per minute. */
+    @ApiStatus(since = "1.1")
+    public double cuttingSpeedToMPerMin(double value) {
+        return value * metresPerSpeedLength;
+    }
+
+    /** Converts a cutting speed in metres per minute to this unit system's (m/min or ft/min). */
+    @ApiStatus(since = "1.1")
+    public double cuttingSpeedFromMPerMin(double metresPerMinute) {
+        return metresPerMinute / metresPerSpeedLength;
     }
 
     /**

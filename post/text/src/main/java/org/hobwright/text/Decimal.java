@@ -339,4 +339,37 @@ public final class Decimal {
             return out.toString();
         }
     }
+
+    /**
+     * A number for a message, readable at every magnitude: six significant digits with trailing
+     * zeros dropped, plain from 0.0001 to below 10⁹ ({@code 0.000976198}, {@code 2000},
+     * {@code 1234.57}), else four significant digits and a power of ten ({@code 1e300},
+     * {@code 1.5e-9}). Not a number and the infinities are named in words.
+     */
+    public static String readable(double value) {
+        if (Double.isNaN(value)) {
+            return "not a number";
+        }
+        if (Double.isInfinite(value)) {
+            return value > 0 ? "infinity" : "minus infinity";
+        }
+        if (value == 0) {
+            return "0";
+        }
+        double a = Math.abs(value);
+        int exponent = (int) Math.floor(Math.log10(a));
+        if (a >= 1e-4 && a < 1e9) {
+            return withoutPoint(fixed(value, Math.max(0, 5 - exponent), false));
+        }
+        String mantissa = withoutPoint(fixed(value / Math.pow(10, exponent), 3, false));
+        if (mantissa.equals("10") || mantissa.equals("-10")) {
+            mantissa = mantissa.substring(0, mantissa.length() - 1);
+            exponent++;
+        }
+        return mantissa + "e" + exponent;
+    }
+
+    private static String withoutPoint(String text) {
+        return text.endsWith(".") ? text.substring(0, text.length() - 1) : text;
+    }
 }

@@ -7,21 +7,15 @@ import org.hobwright.api.check.Severity;
  * The stable finding codes of the engineering checks (run by
  * {@link org.hobwright.wizard.analysis.JobAnalyser}), each with its severity, the field it names,
  * its meaning and its source; listed in {@code wizard/FINDINGS.md}. Codes are never reused for
- * another meaning.
+ * another meaning. Retired: {@code GEAR_TEETH_RANGE}, {@code GEAR_MODULE_RANGE} and
+ * {@code GEAR_PRESSURE_ANGLE_RANGE}; the ranges of teeth, pitch and pressure angle are those of the
+ * field table ({@code org.hobwright.api.job.JobFields}), which the job reader reports
+ * ({@code INPUT_VALUE}) and the api records enforce.
  */
 public enum EngineeringCode implements FindingCode {
     GEAR_TOOTH_SYSTEM_UNKNOWN(Severity.ERROR, "gear.toothSystem",
             "the tooth system identifier is not known",
             "Hobwright tooth-system table"),
-    GEAR_TEETH_RANGE(Severity.ERROR, "gear.teeth",
-            "number of teeth outside the range Hobwright hobs",
-            Sources.RANGE),
-    GEAR_MODULE_RANGE(Severity.ERROR, "gear.module / gear.diametralPitch",
-            "module or diametral pitch outside the plausible range",
-            Sources.RANGE),
-    GEAR_PRESSURE_ANGLE_RANGE(Severity.ERROR, "gear.pressureAngle",
-            "pressure angle outside the plausible range",
-            Sources.RANGE),
     GEAR_HELIX_ANGLE_RANGE(Severity.WARNING, "gear.helixAngle",
             "helix angle above 45°",
             "ISO 1328-1:2013 scope; common practice, no source"),

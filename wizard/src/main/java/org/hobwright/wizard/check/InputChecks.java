@@ -4,30 +4,16 @@ import java.util.ArrayList;
 import java.util.List;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.GearSpec;
-import org.hobwright.api.job.Pitch;
 import org.hobwright.wizard.geometry.GearGeometry;
 
 /**
- * Plausibility ranges of the gear's own numbers (the api records already refuse impossible ones such
- * as a module of 0 or a pressure angle of 89°). Error ranges: teeth 5 … 2000, module 0.05 … 100 mm
- * (diametral pitch 0.254 … 508 /in), pressure angle 10° … 45°. Warnings: helix above 45°, face width
- * below one module, profile shift outside −1 … +1.5, thickness allowance beyond 0.25 m_n. All
- * common practice, no source (ISO 1328-1:2013 also starts at 5 teeth and stops at 45° helix).
+ * Warnings about the gear's own numbers, inside the ranges the field table allows
+ * ({@code org.hobwright.api.job.JobFields}; the reader and the api records refuse values outside
+ * them): helix above 45°, face width below one module, profile shift outside −1 … +1.5, thickness
+ * allowance beyond 0.25 m_n, and the error of an allowance that leaves no tooth. All common practice,
+ * no source (ISO 1328-1:2013 also stops at 45° helix).
  */
 public final class InputChecks {
-    /** Fewest teeth Hobwright accepts. */
-    public static final int MIN_TEETH = 5;
-    /** Most teeth Hobwright accepts. */
-    public static final int MAX_TEETH = 2000;
-    /** Smallest module, mm. */
-    public static final double MIN_MODULE_MM = 0.05;
-    /** Largest module, mm. */
-    public static final double MAX_MODULE_MM = 100;
-    /** Smallest pressure angle, degrees. */
-    public static final double MIN_PRESSURE_ANGLE_DEG = 10;
-    /** Largest pressure angle, degrees. */
-    public static final double MAX_PRESSURE_ANGLE_DEG = 45;
-
     private InputChecks() {
     }
 
@@ -40,27 +26,7 @@ public final class InputChecks {
      */
     public static List<Finding> gear(GearSpec gear, Wording words) {
         List<Finding> out = new ArrayList<>();
-        if (gear.teeth() < MIN_TEETH || gear.teeth() > MAX_TEETH) {
-            out.add(EngineeringCode.GEAR_TEETH_RANGE.at("gear.teeth", "number of teeth " + gear.teeth()
-                    + " is outside the allowed range " + MIN_TEETH + " to " + MAX_TEETH,
-                    "enter the tooth count from the drawing (" + MIN_TEETH + " to " + MAX_TEETH + ")"));
-        }
         double m = gear.moduleMm();
-        if (m < MIN_MODULE_MM || m > MAX_MODULE_MM) {
-            String field = Wording.pitchField("gear", gear.pitch());
-            String range = gear.pitch() instanceof Pitch.Diametral
-                    ? "diametral pitch " + Wording.plain(25.4 / MAX_MODULE_MM, 4) + " to "
-                            + Wording.plain(25.4 / MIN_MODULE_MM, 4) + " /in"
-                    : "module " + Wording.plain(MIN_MODULE_MM, 4) + " to " + Wording.plain(MAX_MODULE_MM, 4) + " mm";
-            out.add(EngineeringCode.GEAR_MODULE_RANGE.at(field, words.pitch(gear.pitch())
-                    + " is outside the allowed range " + range, "enter the pitch from the drawing (" + range + ")"));
-        }
-        double a = gear.pressureAngleDeg();
-        if (a < MIN_PRESSURE_ANGLE_DEG || a > MAX_PRESSURE_ANGLE_DEG) {
-            out.add(EngineeringCode.GEAR_PRESSURE_ANGLE_RANGE.at("gear.pressureAngle", "pressure angle "
-                    + words.angle(a) + " is outside the allowed range " + words.angle(MIN_PRESSURE_ANGLE_DEG) + " to "
-                    + words.angle(MAX_PRESSURE_ANGLE_DEG), "use the drawing's pressure angle, usually 20° or 14.5°"));
-        }
         if (gear.helixAngleDeg() > 45) {
             out.add(EngineeringCode.GEAR_HELIX_ANGLE_RANGE.at("gear.helixAngle", "helix angle "
                     + words.angle(gear.helixAngleDeg()) + " is above 45°, beyond the usual range for hobbing",

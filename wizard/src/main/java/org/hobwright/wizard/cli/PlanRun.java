@@ -55,6 +55,7 @@ final class PlanRun {
         try {
             CompletableFuture<CyclePlanner> planner = CompletableFuture.supplyAsync(() -> planner(store), background);
             Outputs outputs = new Outputs(store.library(), env.loader(), generatedOn, ToolVersion.VERSION, background);
+            request.out().ifPresent(OutputFolder::check);
             Timing.mark("library opened");
             JobReader.Overrides overrides = new JobReader.Overrides(request.machine(), request.template());
             List<JobInput> read = new ArrayList<>();
@@ -119,14 +120,20 @@ final class PlanRun {
         Outputs.Produced produced = outputs.produce(jobs.stream().map(in -> new Outputs.Named(in.source(),
                 new PlannedJob(in.job().orElseThrow(), in.cycle().orElseThrow()))).toList());
         Timing.mark("outputs formatted");
+        return write(produced, store, folder, printer);
+    }
+
+    /** Writes produced files, or none when a writer refused; names the older files replaced. */
+    static int write(Outputs.Produced produced, Store store, Path folder, RunPrinter printer) {
         printer.findings(produced.findings());
         if (produced.refused()) {
             printer.nothingWritten("a writer refused");
             return ExitCodes.JOB_ERRORS;
         }
+        List<String> replaced = OutputFolder.existing(folder, produced.files().keySet());
         store.writeAll(folder, produced.files());
         Timing.mark("outputs written");
-        printer.written(folder, produced.files().keySet());
+        printer.written(folder, produced.files().keySet(), replaced);
         return ExitCodes.OK;
     }
 

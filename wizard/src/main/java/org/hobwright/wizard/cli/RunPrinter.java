@@ -39,10 +39,14 @@ final class RunPrinter {
         }
     }
 
-    /** What was written where. */
-    void written(Path folder, Collection<String> names) {
+    /** What was written where, and which older files of the same names it replaced. */
+    void written(Path folder, Collection<String> names, Collection<String> replaced) {
         out.println("Wrote " + names.size() + " file" + (names.size() == 1 ? "" : "s") + " to " + folder + ": "
                 + String.join(", ", names));
+        if (!replaced.isEmpty()) {
+            out.println("Replaced " + replaced.size() + " older file" + (replaced.size() == 1 ? "" : "s")
+                    + " of the same name" + (replaced.size() == 1 ? "" : "s") + ": " + String.join(", ", replaced));
+        }
         out.println("Caution: prove out the program at reduced override with the guards closed, following the"
                 + " machine builder's manual.");
     }

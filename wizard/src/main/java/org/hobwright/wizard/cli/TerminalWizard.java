@@ -7,6 +7,10 @@ import java.util.Optional;
 import java.util.Set;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.check.Severity;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.job.FieldDefault;
+import org.hobwright.api.job.JobFields;
+import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.FieldSpec;
 import org.hobwright.api.wizard.FieldType;
 import org.hobwright.api.wizard.StepId;
@@ -14,6 +18,7 @@ import org.hobwright.api.wizard.StepView;
 import org.hobwright.api.wizard.Transition;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.wizard.steps.FieldCheck;
+import org.hobwright.wizard.steps.StepFields;
 
 /**
  * Walks a {@link Wizard} field by field on a terminal or piped input. Enter takes the value shown
@@ -98,7 +103,7 @@ final class TerminalWizard {
                 continue;
             }
             step = 1;
-            String line = read(prompt(f, wizard.value(f.key())));
+            String line = read(prompt(f, wizard.value(f.key()), defaultSource(f)));
             if (line.equals("?")) {
                 help(f);
             } else if (line.equalsIgnoreCase("back")) {
@@ -119,16 +124,20 @@ final class TerminalWizard {
                 }
                 if (!Finding.anyError(said)) {
                     i++;                                 // taken; remarks were shown
-                    fields = sameFieldsAnew(fields);     // an answer may change others (a unit, a default)
+                    // an answer may change others (a unit, a default) or, the part kind, the questions
+                    fields = subset ? sameFieldsAnew(fields) : wizard.view().fields();
                 }
             }
         }
         return true;
     }
 
-    /** True when a question applies: the custom rack factors only for the custom tooth system. */
+    /**
+     * True when a question applies ({@link StepFields#applies}): the gear's or the spline's questions
+     * by the part kind, the custom rack factors only for the custom tooth system.
+     */
     static boolean applies(FieldSpec f, Wizard wizard) {
-        return !f.key().startsWith("gear.custom.") || "custom".equals(wizard.value("gear.toothSystem"));
+        return StepFields.applies(f.key(), wizard::value);
     }
 
     /** True for a value printed on the drawing. */
@@ -212,7 +221,19 @@ final class TerminalWizard {
                 + ", 'back' returns to the previous question.");
     }
 
-    private static String prompt(FieldSpec f, String current) {
+    /**
+     * Where the value shown comes from, when it is still the table's default of a standard or of the
+     * trade's convention (so Enter through a blank start says what it takes for granted).
+     */
+    private String defaultSource(FieldSpec f) {
+        Units units = "in".equals(wizard.value(StepFields.UNITS)) ? Units.IN : Units.MM;
+        return JobFields.find(f.key()).map(FieldDef::dflt)
+                .filter(d -> d.origin() == FieldDefault.Origin.STANDARD || d.origin() == FieldDefault.Origin.CONVENTION)
+                .filter(d -> d.hasValue() && d.value(units).equals(wizard.value(f.key())))
+                .map(FieldDefault::source).orElse("");
+    }
+
+    private static String prompt(FieldSpec f, String current, String source) {
         StringBuilder sb = new StringBuilder("  ").append(f.label());
         if (!f.unit().isEmpty()) {
             sb.append(" (").append(f.unit()).append(')');
@@ -220,7 +241,11 @@ final class TerminalWizard {
         if (f.type() == FieldType.CHOICE && !f.choices().isEmpty() && f.choices().size() <= 8) {
             sb.append(" {").append(String.join("|", f.choices())).append('}');
         }
-        return sb.append(" [").append(current).append("] > ").toString();
+        sb.append(" [").append(current).append(']');
+        if (!source.isEmpty()) {
+            sb.append(" (").append(source).append(')');
+        }
+        return sb.append(" > ").toString();
     }
 
     /** Reads one answer. */

@@ -1,24 +1,32 @@
 package org.hobwright.wizard.cli;
 
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.host.PlannedJob;
 import org.hobwright.api.job.HobJob;
-import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.Wizard;
 import org.hobwright.wizard.run.Outputs;
 import org.hobwright.wizard.steps.StepFields;
 import org.hobwright.wizard.steps.StepSession;
+import org.hobwright.wizard.steps.UsedCycle;
 import org.hobwright.wizard.store.CycleTemplate;
+import org.hobwright.wizard.store.JobWriter;
 import org.hobwright.wizard.store.Loaded;
 import org.hobwright.wizard.store.Names;
-import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.node.JsonNodeFactory;
-import tools.jackson.databind.node.ObjectNode;
 
-/** The end of a terminal wizard: write the outputs, then offer to save the cycle answers as a template. */
+/**
+ * The end of a terminal wizard: write the outputs with the job file of the answers
+ * ({@code NAME.job.json}, the format {@code plan} reads), then offer to save the cycle actually
+ * used as a template of the machine.
+ */
 final class WizardFinish implements TerminalWizard.Finish {
+    /** Ending of the job file written beside the outputs. */
+    static final String JOB_FILE = ".job.json";
+
     private final StepSession session;
     private final Store store;
     private final Outputs outputs;
@@ -34,27 +42,33 @@ final class WizardFinish implements TerminalWizard.Finish {
     @Override
     public boolean offer(Wizard wizard, Prompter prompter) {
         TerminalWizard asker = new TerminalWizard(wizard, prompter);
-        String line = asker.read("Write the program, CSV, setup sheet and report to " + folder
+        HobJob job = wizard.job().orElseThrow();
+        Outputs.Produced written = outputs.produce(List.of(new Outputs.Named("wizard answers",
+                new PlannedJob(job, wizard.cycle().orElseThrow()))));
+        Map<String, String> files = new LinkedHashMap<>(written.files());
+        files.put(job.name() + JOB_FILE, JobWriter.text(session.answers().toTree()));
+        Outputs.Produced produced = new Outputs.Produced(files, written.findings());
+        List<String> replaced = OutputFolder.existing(folder, produced.files().keySet());
+        String line = asker.read("Write the program, CSV, setup sheet, report and job file to " + folder
+                + (replaced.isEmpty() ? "" : " (replacing " + String.join(", ", replaced) + ")")
                 + "? (yes, no, back) [yes] > ");
         if (line.equalsIgnoreCase("back")) {
             return false;
         }
         if (TerminalWizard.yes(line, true)) {
-            HobJob job = wizard.job().orElseThrow();
-            JobInput in = new JobInput("wizard answers", Optional.of(job), List.of(), wizard.cycle());
             RunPrinter printer = new RunPrinter(prompter.writer());
-            if (PlanRun.write(outputs, List.of(in), store, folder, printer) != ExitCodes.OK) {
+            if (PlanRun.write(produced, store, folder, printer) != ExitCodes.OK) {
                 return true;
             }
         }
-        saveTemplate(asker, prompter);
+        saveTemplate(asker, prompter, job);
         return true;
     }
 
-    private void saveTemplate(TerminalWizard asker, Prompter prompter) {
+    private void saveTemplate(TerminalWizard asker, Prompter prompter, HobJob job) {
         String machine = session.value(StepFields.MACHINE);
         while (true) {
-            String name = asker.read("Save the cycle answers as a template of " + machine
+            String name = asker.read("Save the cycle used (speed, feeds, stock, passes) as a template of " + machine
                     + "? Name, or Enter for none [] > ");
             if (name.isEmpty()) {
                 return;
@@ -64,7 +78,8 @@ final class WizardFinish implements TerminalWizard.Finish {
                 prompter.say("  ! " + bad.get().message());
                 continue;
             }
-            CycleTemplate template = new CycleTemplate(name, machine, "saved by the wizard", units(), cycleTree());
+            CycleTemplate template = CycleTemplate.of(name, machine, "saved by the wizard from job " + job.name(),
+                    UsedCycle.of(job, session.cycle().orElseThrow()), job.units());
             Loaded<Path> saved = store.library().saveTemplate(template, false);
             if (saved.hasErrors() && saved.findings().stream().anyMatch(f -> f.code().equals("LIBRARY_EXISTS"))
                     && TerminalWizard.yes(asker.read("  Template " + name + " exists. Replace it? [no] > "), false)) {
@@ -75,17 +90,5 @@ final class WizardFinish implements TerminalWizard.Finish {
                 return;
             }
         }
-    }
-
-    /** The cycle answers as a template's {@code cycle} object (without the template choice itself). */
-    private ObjectNode cycleTree() {
-        JsonNode cycle = session.answers().toTree().get("cycle");
-        ObjectNode c = cycle instanceof ObjectNode o ? o.deepCopy() : JsonNodeFactory.instance.objectNode();
-        c.remove("template");
-        return c;
-    }
-
-    private Units units() {
-        return "in".equals(session.value(StepFields.UNITS)) ? Units.IN : Units.MM;
     }
 }

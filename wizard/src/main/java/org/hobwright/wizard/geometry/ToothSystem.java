@@ -56,6 +56,26 @@ public record ToothSystem(String id, double addendumFactor, double dedendumFacto
         return Stream.concat(BUILT_IN.stream().map(ToothSystem::id), Stream.of(CUSTOM)).toList();
     }
 
+    /** Diametral pitch (1/in) from which the fine-pitch system applies (AGMA 207.04 range, from memory). */
+    public static final double FINE_PITCH_FROM = 20;
+
+    /**
+     * The tooth system a drawing means when it names none, by its pitch: ISO 53:1998 profile A for a
+     * module, the AGMA coarse-pitch system below 20 diametral pitch and the fine-pitch one from 20
+     * (the ranges of AGMA 201.02 and 207.04, from memory). The table of job fields gives the same rule.
+     */
+    public static String forPitch(org.hobwright.api.job.Pitch pitch) {
+        return pitch instanceof org.hobwright.api.job.Pitch.Diametral d ? forDiametralPitch(d.perInch()) : FOR_MODULE;
+    }
+
+    /** The tooth system of a gear given by its module when the drawing names none. */
+    public static final String FOR_MODULE = "iso53-a";
+
+    /** The tooth system of a gear given by its diametral pitch (1/in) when the drawing names none. */
+    public static String forDiametralPitch(double perInch) {
+        return perInch < FINE_PITCH_FROM ? "agma-coarse" : "agma-fine";
+    }
+
     /** The built-in system with this id. */
     public static Optional<ToothSystem> builtIn(String id) {
         return BUILT_IN.stream().filter(t -> t.id.equals(id)).findFirst();

@@ -4,6 +4,9 @@ import java.math.BigDecimal;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.job.FieldDefault;
+import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.FieldType;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.JsonNodeFactory;
@@ -19,10 +22,23 @@ public final class Answers {
     private final Map<String, String> values = new LinkedHashMap<>();
     private Optional<ObjectNode> inlineMachine = Optional.empty();
 
-    /** Answers taken from a job file's tree (keys without a field are ignored). */
+    /**
+     * A blank start: only the fields with a default from a standard or the trade's convention are
+     * filled ({@link FieldDefault}), in millimetres; everything the drawing must give is empty.
+     */
+    public static Answers blank() {
+        Answers a = new Answers();
+        a.fillDefaults(Units.MM);
+        return a;
+    }
+
+    /**
+     * Answers taken from a job file's tree (keys without a field are ignored); keys the job leaves
+     * out take the table's default, as the job reader would.
+     */
     public static Answers fromTree(JsonNode job) {
         Answers a = new Answers();
-        for (Field f : StepFields.all()) {
+        for (FieldDef f : StepFields.all()) {
             JsonNode node = at(job, f.key());
             if (node == null || node.isNull() || node.isMissingNode()) {
                 continue;
@@ -30,15 +46,32 @@ public final class Answers {
             if (f.key().equals(StepFields.MACHINE) && node.isObject()) {
                 a.inlineMachine = Optional.of((ObjectNode) node.deepCopy());
                 a.values.put(f.key(), node.path("name").asString(""));
-            } else if (node.isBoolean()) {
-                a.values.put(f.key(), node.booleanValue() ? "yes" : "no");
-            } else if (node.isNumber()) {
-                a.values.put(f.key(), node.decimalValue().toPlainString());
-            } else if (node.isString()) {
-                a.values.put(f.key(), node.stringValue());
+            } else if (!text(node).isEmpty()) {
+                a.values.put(f.key(), text(node));
             }
         }
+        a.fillDefaults("in".equals(a.get(StepFields.UNITS)) ? Units.IN : Units.MM);
         return a;
+    }
+
+    /** Fills every unanswered field that has a default value with it, in {@code units}. */
+    private void fillDefaults(Units units) {
+        for (FieldDef f : StepFields.all()) {
+            if (!values.containsKey(f.key()) && f.dflt().hasValue()) {
+                values.put(f.key(), f.dflt().value(units));
+            }
+        }
+    }
+
+    /** A file's value as an answer: yes or no, a plain number, a text; empty for objects and lists. */
+    static String text(JsonNode node) {
+        if (node.isBoolean()) {
+            return node.booleanValue() ? "yes" : "no";
+        }
+        if (node.isNumber()) {
+            return node.decimalValue().toPlainString();
+        }
+        return node.isString() ? node.stringValue() : "";
     }
 
     /** The answer of a key, or empty text. */
@@ -63,9 +96,9 @@ public final class Answers {
         ObjectNode root = NODES.objectNode();
         root.put("format", "hobwright-job");
         root.put("version", 1);
-        for (Field f : StepFields.all()) {
+        for (FieldDef f : StepFields.all()) {
             String text = get(f.key());
-            if (text.isEmpty()) {
+            if (text.isEmpty() || !StepFields.applies(f.key(), this)) {
                 continue;
             }
             ObjectNode parent = parentOf(root, f.key());
@@ -88,7 +121,7 @@ public final class Answers {
     private static JsonNode value(FieldType type, String text) {
         return switch (type) {
             case NUMBER -> NODES.numberNode(new BigDecimal(text));
-            case INTEGER -> NODES.numberNode(Integer.parseInt(text));
+            case INTEGER -> NODES.numberNode(new BigDecimal(text.strip()));
             case ANGLE -> FieldCheck.number(text).isPresent() ? NODES.numberNode(new BigDecimal(text))
                     : NODES.stringNode(text);
             case BOOLEAN -> NODES.booleanNode(FieldCheck.yesNo(text).orElse(false));

@@ -5,12 +5,16 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
+import org.hobwright.wizard.store.RangeWords;
 
 /**
- * Checks one answer as soon as it is typed: its type, its range, its choice. Whether the values
- * fit together is left to the job checks.
+ * Checks one answer as soon as it is typed: its type, its range, its choice, all from the field
+ * table ({@link FieldDef}), so the wizard allows what the job reader and the schema allow. Whether
+ * the values fit together is left to the job checks.
  */
 public final class FieldCheck {
     private FieldCheck() {
@@ -22,22 +26,23 @@ public final class FieldCheck {
      * @param field   the field
      * @param text    the answer, stripped; empty means no value
      * @param choices the choices allowed now (for a choice field)
+     * @param units   the job's length unit, which the answer is typed in
      * @return an error finding naming the field, or empty when the answer is fine
      */
-    public static Optional<Finding> check(Field field, String text, List<String> choices) {
+    public static Optional<Finding> check(FieldDef field, String text, List<String> choices, Units units) {
         if (text.isEmpty()) {
             return field.required()
                     ? error(WizardCode.WIZARD_VALUE_MISSING, field, "a value is needed", "enter a value")
                     : Optional.empty();
         }
         return switch (field.type()) {
-            case NUMBER -> number(text).map(v -> range(field, v))
+            case NUMBER -> number(text).map(v -> range(field, v, units))
                     .orElseGet(() -> error(WizardCode.WIZARD_NOT_A_NUMBER, field, "\"" + text + "\" is not a number",
                             "enter a number with a point as the decimal mark, e.g. 1.25"));
-            case INTEGER -> integer(text).map(v -> range(field, v))
+            case INTEGER -> integer(text).map(v -> range(field, v, units))
                     .orElseGet(() -> error(WizardCode.WIZARD_NOT_A_WHOLE_NUMBER, field,
                             "\"" + text + "\" is not a whole number", "enter a whole number, e.g. 24"));
-            case ANGLE -> Angles.parse(text).map(v -> range(field, v))
+            case ANGLE -> Angles.parse(text).map(v -> range(field, v, units))
                     .orElseGet(() -> error(WizardCode.WIZARD_NOT_AN_ANGLE, field, "\"" + text + "\" is not an angle",
                             "enter decimal degrees (13.2368) or degrees, minutes, seconds (13°14'12\" or 13 14 12)"));
             case CHOICE -> choices.contains(text) ? Optional.empty()
@@ -60,13 +65,19 @@ public final class FieldCheck {
         }
     }
 
-    /** Reads a whole number, or empty. */
+    /** Reads a whole number written with digits only (and a sign), or empty. */
     public static Optional<Double> integer(String text) {
-        try {
-            return Optional.of((double) Integer.parseInt(text.strip()));
-        } catch (NumberFormatException e) {
+        String t = text.strip();
+        int start = t.startsWith("-") || t.startsWith("+") ? 1 : 0;
+        if (t.length() == start) {
             return Optional.empty();
         }
+        for (int i = start; i < t.length(); i++) {
+            if (t.charAt(i) < '0' || t.charAt(i) > '9') {
+                return Optional.empty();
+            }
+        }
+        return number(t);
     }
 
     /** Reads yes/no, y/n, true/false in any case, or empty. */
@@ -78,33 +89,21 @@ public final class FieldCheck {
         };
     }
 
-    private static Optional<Finding> range(Field field, double v) {
-        if (field.positive() && v <= 0) {
-            return error(WizardCode.WIZARD_OUT_OF_RANGE, field, "must be greater than 0, was " + plain(v),
-                    "enter a number greater than 0");
+    private static Optional<Finding> range(FieldDef field, double v, Units units) {
+        if (field.range().contains(field.unit().toCanonical(v, units))) {
+            return Optional.empty();
         }
-        boolean low = field.min().isPresent() && v < field.min().getAsDouble();
-        boolean high = field.max().isPresent() && v > field.max().getAsDouble();
-        if (low || high) {
-            return error(WizardCode.WIZARD_OUT_OF_RANGE, field, "must be " + limits(field) + ", was " + plain(v),
-                    "enter a value " + limits(field));
-        }
-        return Optional.empty();
+        String allowed = RangeWords.of(field, units);
+        return error(WizardCode.WIZARD_OUT_OF_RANGE, field, "must be " + allowed + ", was " + plain(v)
+                + RangeWords.suffix(field.unit().symbol(units)), "enter a value " + allowed);
     }
 
-    private static String limits(Field field) {
-        if (field.max().isEmpty()) {
-            return "at least " + plain(field.min().orElse(0));
-        }
-        return "from " + plain(field.min().orElse(0)) + " to " + plain(field.max().getAsDouble());
-    }
-
-    /** A number without a needless ".0", e.g. {@code 1}, {@code 0.25}. */
+    /** A number as messages show it, readable at every magnitude, e.g. {@code 1}, {@code 0.25}, {@code 1e300}. */
     public static String plain(double v) {
-        return Decimal.exact(v);
+        return Decimal.readable(v);
     }
 
-    private static Optional<Finding> error(WizardCode code, Field field, String message, String fix) {
+    private static Optional<Finding> error(WizardCode code, FieldDef field, String message, String fix) {
         return Optional.of(code.at(field.key(), field.label() + ": " + message, fix));
     }
 }

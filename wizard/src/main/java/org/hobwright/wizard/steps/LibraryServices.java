@@ -5,6 +5,7 @@ import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.Units;
 import org.hobwright.api.spi.CyclePlanner;
 import org.hobwright.api.spi.ProviderMissingException;
 import org.hobwright.wizard.analysis.JobAnalyser;
@@ -80,5 +81,10 @@ public final class LibraryServices implements StepServices {
     @Override
     public List<String> templates(String machine) {
         return library.templates(machine).stream().map(LibraryEntry::name).toList();
+    }
+
+    @Override
+    public Optional<ObjectNode> templateCycle(String machine, String name, Units units) {
+        return library.template(machine, name).value().map(t -> t.cycleIn(units));
     }
 }

@@ -7,6 +7,7 @@ import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.ToleranceData;
+import org.hobwright.api.job.UnitKind;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
 
@@ -77,7 +78,7 @@ public final class ReviewLines {
     }
 
     private String speed(double mPerMin) {
-        return units == Units.IN ? num(mPerMin / 0.3048, 0) + " ft/min" : num(mPerMin, 0) + " m/min";
+        return num(units.cuttingSpeedFromMPerMin(mPerMin), 0) + " " + UnitKind.CUTTING_SPEED.symbol(units);
     }
 
     private static String deg(double d) {

@@ -5,6 +5,7 @@ import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.Units;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
@@ -40,4 +41,12 @@ public interface StepServices {
 
     /** Names of the saved and built-in cycle templates of a machine. */
     List<String> templates(String machine);
+
+    /**
+     * The cycle keys of a template of a machine, converted to {@code units}; empty when there is
+     * no such template (a session without a library has none).
+     */
+    default Optional<ObjectNode> templateCycle(String machine, String name, Units units) {
+        return Optional.empty();
+    }
 }

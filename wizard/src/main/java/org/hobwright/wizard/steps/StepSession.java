@@ -4,9 +4,12 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.check.Severity;
 import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.job.FieldRange;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.FieldSpec;
@@ -23,23 +26,27 @@ import org.hobwright.api.wizard.Wizard;
  * again, then builds the job tree from every answer, reads it and runs the job checks, and keeps
  * the findings whose field belongs to this step: errors block, warnings block unless accepted.
  * Going back keeps every answer; each step is checked afresh whenever it is completed. A field's
- * {@link FieldSpec#defaultValue()} is its current answer, which starts as the default of the
- * sample or of the given job. Nothing here prints.
+ * {@link FieldSpec#defaultValue()} is its current answer, which starts as the table's default (a
+ * blank start) or the given job's value. Nothing here prints.
  */
 public final class StepSession implements Wizard {
     private static final StepId[] ORDER = StepId.values();
     /**
-     * The hob's pitch and pressure angle follow the gear's while they are equal to it, so a gear
-     * answered with a new module gets a matching hob proposed (a hob must match the gear's normal
-     * module and pressure angle).
+     * The hob's pitch and pressure angle follow the gear's (or the spline's) while they are equal to
+     * it or still the table's default, so a part answered with a new module gets a matching hob
+     * proposed (a hob must match the part's normal module and pressure angle; a spline hob also its
+     * root form).
      */
     private static final java.util.Map<String, String> HOB_FOLLOWS = java.util.Map.of(
             "gear.module", "hob.module", "gear.diametralPitch", "hob.diametralPitch",
-            "gear.pressureAngle", "hob.pressureAngle");
+            "gear.pressureAngle", "hob.pressureAngle", "gear.hand", "hob.hand",
+            "spline.module", "hob.module", "spline.diametralPitch", "hob.diametralPitch",
+            "spline.pressureAngle", "hob.pressureAngle", "spline.root", "hob.root");
 
     private final StepServices services;
     private final Answers answers;
     private final UnitSwitch unitSwitch = new UnitSwitch();
+    private final Proposals proposals = new Proposals();
     private int index;
     private List<Finding> shown = List.of();
     private Optional<HobJob> job = Optional.empty();
@@ -74,19 +81,20 @@ public final class StepSession implements Wizard {
             List<String> summary = cycle.map(c -> ReviewLines.of(c, units())).orElse(List.of());
             return new StepView(id, StepFields.title(id), List.of(), review, summary);
         }
-        List<FieldSpec> specs = StepFields.of(id).stream().map(this::spec).toList();
+        List<FieldSpec> specs = StepFields.of(id).stream().filter(f -> StepFields.ofThePart(f.key(), answers::get))
+                .map(this::spec).toList();
         return new StepView(id, StepFields.title(id), specs, shown, List.of());
     }
 
     @Override
     public List<Finding> answer(String key, String text) {
-        Optional<Field> field = StepFields.of(current()).stream().filter(f -> f.key().equals(key)).findFirst();
+        Optional<FieldDef> field = StepFields.of(current()).stream().filter(f -> f.key().equals(key)).findFirst();
         if (field.isEmpty()) {
             return List.of(WizardCode.WIZARD_UNKNOWN_FIELD.at(key, "step " + current() + " has no field \""
                     + key + "\"", "answer one of the fields of the current step"));
         }
         String value = text == null ? "" : text.strip();
-        Optional<Finding> problem = FieldCheck.check(field.get(), value, choices(field.get()));
+        Optional<Finding> problem = FieldCheck.check(field.get(), value, choices(field.get()), units());
         if (problem.isPresent()) {
             return List.of(problem.get());
         }
@@ -94,19 +102,37 @@ public final class StepSession implements Wizard {
             value = FieldCheck.yesNo(value).orElseThrow() ? "yes" : "no";
         }
         String hobKey = HOB_FOLLOWS.get(key);
-        if (hobKey != null && answers.get(hobKey).equals(answers.get(key))) {
-            answers.put(hobKey, value);
+        if (hobKey != null && follows(hobKey, key)) {
+            answers.put(hobKey, hobValue(key, value));
         }
         Units before = units();
         answers.put(key, value);
         unitSwitch.typed(field.get(), value, before);
+        proposals.followPitch(answers);
         if (key.equals(StepFields.MACHINE) && !services.templates(value).contains(answers.get(StepFields.TEMPLATE))) {
             answers.put(StepFields.TEMPLATE, "");
+        }
+        if (key.equals(StepFields.TEMPLATE) && !value.isEmpty()) {
+            services.templateCycle(answers.get(StepFields.MACHINE), value, units())
+                    .ifPresent(cycle -> Proposals.applyTemplate(answers, cycle, units()));
         }
         if (key.equals(StepFields.UNITS)) {
             return unitSwitch.switchUnits(answers, before, units()).map(List::of).orElse(List.of());
         }
         return List.of();
+    }
+
+    /** True while the hob's answer is the part's, or empty, or the table's default: it may be proposed anew. */
+    private boolean follows(String hobKey, String partKey) {
+        String hob = answers.get(hobKey);
+        return hob.isEmpty() || hob.equals(hobValue(partKey, answers.get(partKey)))
+                || StepFields.find(hobKey).map(f -> hob.equals(f.dflt().value(units()))).orElse(false);
+    }
+
+    /** The hob's value for a part's answer: a spline's diametral pitch "16/32" is the hob's 16. */
+    private static String hobValue(String partKey, String value) {
+        int slash = value.indexOf('/');
+        return partKey.equals("spline.diametralPitch") && slash > 0 ? value.substring(0, slash).strip() : value;
     }
 
     @Override
@@ -161,8 +187,10 @@ public final class StepSession implements Wizard {
     /** Every finding of a step: its fields again, then the reader's and the checks' on the whole job. */
     private List<Finding> check(StepId step) {
         List<Finding> out = new ArrayList<>();
-        for (Field f : StepFields.of(step)) {
-            FieldCheck.check(f, answers.get(f.key()), choices(f)).ifPresent(out::add);
+        for (FieldDef f : StepFields.of(step)) {
+            if (StepFields.applies(f.key(), answers)) {
+                FieldCheck.check(f, answers.get(f.key()), choices(f), units()).ifPresent(out::add);
+            }
         }
         StepServices.JobRead read = services.read(answers.toTree());
         List<Finding> all = new ArrayList<>(read.findings());
@@ -185,13 +213,17 @@ public final class StepSession implements Wizard {
         review = List.copyOf(sorted);
     }
 
-    private FieldSpec spec(Field f) {
-        return new FieldSpec(f.key(), f.label(), f.unit().symbol(units()), f.type(), answers.get(f.key()),
-                choices(f), f.min(), f.max(), f.required(), f.help());
+    private FieldSpec spec(FieldDef f) {
+        Units u = units();
+        FieldRange r = f.range();
+        OptionalDouble min = r.hasMin() ? OptionalDouble.of(f.unit().fromCanonical(r.min(), u)) : OptionalDouble.empty();
+        OptionalDouble max = r.hasMax() ? OptionalDouble.of(f.unit().fromCanonical(r.max(), u)) : OptionalDouble.empty();
+        return new FieldSpec(f.key(), f.label(), f.unit().symbol(u), f.type(), answers.get(f.key()),
+                choices(f), min, max, f.required(), f.help() + " Default: " + f.dflt().describe() + ".");
     }
 
     /** The choices of a field now: fixed ones, or the library's machines and templates. */
-    private List<String> choices(Field f) {
+    private List<String> choices(FieldDef f) {
         if (f.key().equals(StepFields.MACHINE)) {
             List<String> names = new ArrayList<>(services.machines());
             answers.inlineMachineName().filter(n -> !names.contains(n)).ifPresent(names::add);

@@ -19,9 +19,10 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * The wizard module's {@link WizardFactory}, found with {@link java.util.ServiceLoader}. Sessions
- * start blank, from the built-in sample job (an invented metering-pump gear) when asked, or from
- * a given job. The planner at REVIEW is the library's ({@link LibraryPlanner}), with the shop's
- * cutting data.
+ * start blank (only the defaults of a standard or the trade's convention filled in, see
+ * {@link Answers#blank()}), from the built-in sample job (an invented metering-pump gear) when
+ * asked, or from a given job. The planner at REVIEW is the library's ({@link LibraryPlanner}),
+ * with the shop's cutting data.
  */
 public final class StepWizardFactory implements WizardFactory {
     /** Resource of the built-in sample job whose values are the defaults. */
@@ -51,7 +52,7 @@ public final class StepWizardFactory implements WizardFactory {
     public Wizard start(Map<String, String> options) {
         java.util.Objects.requireNonNull(options, "options is required, was null");
         return new StepSession(services(options), START_SAMPLE.equals(options.get(START)) ? sampleAnswers()
-                : new Answers());
+                : Answers.blank());
     }
 
     /** {@inheritDoc} A machine the library does not hold is kept inline. */
@@ -64,7 +65,7 @@ public final class StepWizardFactory implements WizardFactory {
         return new StepSession(services, Answers.fromTree(JobWriter.jobTree(job, job.units(), known)));
     }
 
-    /** The answers of the built-in sample job. */
+    /** The answers of the built-in sample job (an invented metering-pump gear). */
     public static Answers sampleAnswers() {
         try (InputStream in = StepWizardFactory.class.getClassLoader().getResourceAsStream(SAMPLE)) {
             if (in == null) {

@@ -4,6 +4,8 @@ import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.job.UnitKind;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
 
@@ -11,8 +13,8 @@ import org.hobwright.text.Decimal;
  * Keeps length, feed and cutting-speed answers meaning the same when the job's unit changes: a
  * face width answered as 20 mm becomes 0.787401575 in, not 20 in. Each answer is converted from
  * the text as it was typed, in the unit it was typed in, so switching back restores that text
- * exactly. Conversions: 25.4 mm to the inch and 0.3048 m to the foot, exact by the international
- * definition of the inch and the foot (1959); converted values keep 10 significant digits.
+ * exactly. Conversions through {@link Units} (25.4 mm to the inch, 0.3048 m to the foot); converted
+ * values keep 10 significant digits.
  */
 final class UnitSwitch {
     private record Typed(String text, Units units) {
@@ -21,7 +23,7 @@ final class UnitSwitch {
     private final Map<String, Typed> typed = new HashMap<>();
 
     /** Remembers an answer as typed, in the unit of the job at that moment. */
-    void typed(Field field, String text, Units units) {
+    void typed(FieldDef field, String text, Units units) {
         if (converts(field.unit())) {
             typed.put(field.key(), new Typed(text, units));
         }
@@ -37,7 +39,7 @@ final class UnitSwitch {
             return Optional.empty();
         }
         int converted = 0;
-        for (Field f : StepFields.all()) {
+        for (FieldDef f : StepFields.all()) {
             String now = answers.get(f.key());
             if (!converts(f.unit()) || now.isEmpty()) {
                 continue;
@@ -60,7 +62,7 @@ final class UnitSwitch {
     }
 
     private static boolean converts(UnitKind kind) {
-        return kind == UnitKind.LENGTH || kind == UnitKind.FEED || kind == UnitKind.CUTTING_SPEED;
+        return kind.followsUnits();
     }
 
     /** The text of a number in another unit; empty when the text is not a number. */
@@ -74,8 +76,7 @@ final class UnitSwitch {
         if (!Double.isFinite(v)) {
             return Optional.empty();
         }
-        double mm = kind == UnitKind.CUTTING_SPEED ? (from == Units.IN ? v * 0.3048 : v) : from.toMm(v);
-        double out = kind == UnitKind.CUTTING_SPEED ? (to == Units.IN ? mm / 0.3048 : mm) : to.fromMm(mm);
+        double out = kind.fromCanonical(kind.toCanonical(v, from), to);
         return Optional.of(Decimal.significant(out, 10));
     }
 }

@@ -33,8 +33,6 @@ public final class CuttingDataReader {
             "finishFeed", "maxChipThickness", "status");
     private static final List<String> QUALITY_KEYS = List.of("feedMarkDepth", "envelopingDepth", "toleranceShare");
     private static final List<String> FINE_KEYS = List.of("below", "roughFeed", "finishFeed");
-    /** Metres per foot: 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959). */
-    private static final double M_PER_FT = 0.3048;
 
     private final JsonDocument doc;
     /** Fills what a file leaves out; null while the built-in table itself is read. */
@@ -98,7 +96,7 @@ public final class CuttingDataReader {
         }
         boolean inch = units.stringValue().equals("in");
         mmPerUnit = inch ? Units.IN.toMm(1) : 1;
-        speedFactor = inch ? M_PER_FT : 1;
+        speedFactor = inch ? Units.IN.cuttingSpeedToMPerMin(1) : 1;
         QualityDefaults quality = fallback == null ? null : fallback.qualityDefaults();
         if (root.has("qualityDefaults") || fallback == null) {
             quality = quality(object(root, "qualityDefaults", QUALITY_KEYS));

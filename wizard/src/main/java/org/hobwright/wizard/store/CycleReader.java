@@ -1,47 +1,26 @@
 package org.hobwright.wizard.store;
 
-import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.hobwright.api.job.CycleSettings;
+import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.HobbingMethod;
+import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.RunSettings;
 import org.hobwright.api.job.Units;
-import org.hobwright.wizard.store.FieldReader.Kind;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
- * Reads the cycle keys of a job or template, and converts a template's cycle keys into another
- * unit so that they can fill a job's missing keys.
- *
- * <p>Defaults for keys left out (common practice, no source): finish stock 0 (one pass to full
- * depth), climb hobbing, 1 mm axial and radial clearance, coolant on, no hob shift, no
- * optimiser proposal. Speeds, feeds and depths left out are chosen by the planner.
+ * Reads the cycle keys of a job or template by the field table ({@link JobFields#cycle()}), and
+ * converts a template's cycle keys into another unit so that they can fill a job's missing keys.
+ * Defaults for keys left out and where they come from are the table's; speeds, feeds and depths
+ * left out are chosen by the planner.
  */
 final class CycleReader {
-    /** Default axial and radial clearance, mm (common practice, no source). */
-    static final double DEFAULT_CLEARANCE_MM = 1.0;
-
-    /** Numeric cycle keys (dotted below the cycle object) and how their values convert between units. */
-    static final Map<String, Kind> NUMERIC_KEYS = Map.ofEntries(
-            Map.entry("cuttingSpeed", Kind.CUTTING_SPEED), Map.entry("roughFeed", Kind.LENGTH),
-            Map.entry("finishFeed", Kind.LENGTH), Map.entry("roughDepth", Kind.LENGTH),
-            Map.entry("finishStock", Kind.LENGTH), Map.entry("axialClearance", Kind.LENGTH),
-            Map.entry("radialClearance", Kind.LENGTH), Map.entry("targets.feedMarkDepth", Kind.PLAIN),
-            Map.entry("targets.envelopingDepth", Kind.PLAIN), Map.entry("targets.maxChipThickness", Kind.LENGTH),
-            Map.entry("hobShift.perPart", Kind.LENGTH), Map.entry("hobShift.everyParts", Kind.PLAIN),
-            Map.entry("batchSize", Kind.PLAIN), Map.entry("programNumber", Kind.PLAIN),
-            Map.entry("toolStation", Kind.PLAIN), Map.entry("hobLife.lengthPerTooth", Kind.PLAIN));
-
-    static final List<String> METHODS = List.of("climb", "conventional");
-
-    /** Largest batch one plan covers. */
-    static final int MAX_BATCH = 1_000_000;
-
     private CycleReader() {
     }
 
@@ -60,76 +39,62 @@ final class CycleReader {
 
     /** Reads the cycle keys of {@code f}; when {@code needMaterial}, a missing work material is an error. */
     static Values read(FieldReader f, boolean needMaterial) {
-        Optional<String> material = needMaterial
-                ? f.requiredText("workMaterial", "name the work material, e.g. steel-free-machining or brass, in the"
-                        + " job's cycle or in its template")
-                : f.text("workMaterial");
-        OptionalDouble speed = f.number("cuttingSpeed", Kind.CUTTING_SPEED, Limit.POSITIVE);
-        OptionalDouble rough = f.number("roughFeed", Kind.LENGTH, Limit.POSITIVE);
-        OptionalDouble finish = f.number("finishFeed", Kind.LENGTH, Limit.POSITIVE);
-        OptionalDouble depth = f.number("roughDepth", Kind.LENGTH, Limit.POSITIVE);
-        double stock = f.number("finishStock", Kind.LENGTH, Limit.NON_NEGATIVE, 0);
-        HobbingMethod method = f.choice("method", METHODS)
-                .map(m -> m.equals("climb") ? HobbingMethod.CLIMB : HobbingMethod.CONVENTIONAL)
-                .orElse(HobbingMethod.CLIMB);
-        double axial = f.number("axialClearance", Kind.LENGTH, Limit.NON_NEGATIVE, DEFAULT_CLEARANCE_MM);
-        double radial = f.number("radialClearance", Kind.LENGTH, Limit.NON_NEGATIVE, DEFAULT_CLEARANCE_MM);
-        boolean coolant = f.bool("coolant", true);
+        Optional<String> material = f.text(JobFields.CYCLE_WORK_MATERIAL);
+        if (needMaterial && !f.has(JobFields.CYCLE_WORK_MATERIAL)) {
+            f.missing("workMaterial", "name the work material, e.g. steel-free-machining or brass, in the"
+                    + " job's cycle or in its template");
+        }
+        OptionalDouble speed = f.number(JobFields.CYCLE_CUTTING_SPEED);
+        OptionalDouble rough = f.number(JobFields.CYCLE_ROUGH_FEED);
+        OptionalDouble finish = f.number(JobFields.CYCLE_FINISH_FEED);
+        OptionalDouble depth = f.number(JobFields.CYCLE_ROUGH_DEPTH);
+        double stock = f.value(JobFields.CYCLE_FINISH_STOCK);
+        HobbingMethod method = f.word(JobFields.CYCLE_METHOD).filter("conventional"::equals).isPresent()
+                ? HobbingMethod.CONVENTIONAL : HobbingMethod.CLIMB;
+        double axial = f.value(JobFields.CYCLE_AXIAL_CLEARANCE);
+        double radial = f.value(JobFields.CYCLE_RADIAL_CLEARANCE);
+        boolean coolant = f.bool(JobFields.CYCLE_COOLANT);
         FieldReader t = f.child("targets");
-        OptionalDouble mark = t.number("feedMarkDepth", Kind.PLAIN, Limit.POSITIVE);
-        OptionalDouble env = t.number("envelopingDepth", Kind.PLAIN, Limit.POSITIVE);
-        OptionalDouble chip = t.number("maxChipThickness", Kind.LENGTH, Limit.POSITIVE);
+        OptionalDouble mark = t.number(JobFields.TARGET_FEED_MARK_DEPTH);
+        OptionalDouble env = t.number(JobFields.TARGET_ENVELOPING_DEPTH);
+        OptionalDouble chip = t.number(JobFields.TARGET_MAX_CHIP_THICKNESS);
         FieldReader s = f.child("hobShift");
-        double perPart = s.number("perPart", Kind.LENGTH, Limit.NON_NEGATIVE, 0);
-        int every = s.integer("everyParts", 1, Integer.MAX_VALUE, 1);
-        boolean fastest = f.bool("fastest", false);
-        int batch = f.integer("batchSize", 1, MAX_BATCH, 1);
-        OptionalInt program = f.integer("programNumber", 0, 99_999_999);
-        OptionalInt station = f.integer("toolStation", 0, 99_999);
-        boolean turnedRound = f.bool("hobTurnedRound", false);
-        OptionalDouble life = f.child("hobLife").number("lengthPerTooth", Kind.PLAIN, Limit.POSITIVE);
+        double perPart = s.value(JobFields.HOB_SHIFT_PER_PART);
+        int every = s.integer(JobFields.HOB_SHIFT_EVERY_PARTS).orElse(1);
+        boolean fastest = f.bool(JobFields.CYCLE_FASTEST);
+        int batch = f.integer(JobFields.CYCLE_BATCH_SIZE).orElse(1);
+        OptionalInt program = f.integer(JobFields.CYCLE_PROGRAM_NUMBER);
+        OptionalInt station = f.integer(JobFields.CYCLE_TOOL_STATION);
+        boolean turnedRound = f.bool(JobFields.CYCLE_HOB_TURNED_ROUND);
+        OptionalDouble life = f.child("hobLife").number(JobFields.HOB_LIFE_PER_TOOTH);
         return new Values(material, speed, rough, finish, depth, stock, method, axial, radial, coolant,
                 new QualityTargets(mark, env, chip), perPart, every, fastest,
                 new RunSettings(batch, program, station, turnedRound, life));
     }
 
     /**
-     * A copy of a cycle tree with its numbers converted from one unit to another (lengths, and
-     * cutting speed between m/min and ft/min). Non-numeric values are copied as they are.
+     * A copy of a cycle tree with its numbers converted from one unit to another (lengths, feeds,
+     * and cutting speed between m/min and ft/min, as the table's unit kinds say). Other values are
+     * copied as they are.
      */
     static ObjectNode convert(ObjectNode cycle, Units from, Units to) {
         ObjectNode copy = cycle.deepCopy();
         if (from == to) {
             return copy;
         }
-        NUMERIC_KEYS.forEach((key, kind) -> {
-            String[] parts = key.split("\\.");
-            JsonNode parent = parts.length == 1 ? copy : copy.get(parts[0]);
-            String leaf = parts[parts.length - 1];
-            if (parent instanceof ObjectNode p && p.has(leaf) && p.get(leaf).isNumber()) {
-                double v = p.get(leaf).doubleValue();
-                double out = switch (kind) {
-                    case PLAIN -> v;
-                    case LENGTH, LENGTH_PER_MIN -> to.fromMm(from.toMm(v));
-                    case CUTTING_SPEED -> speedTo(to, speedToMPerMin(from, v));
-                };
-                if (kind == Kind.PLAIN) {
-                    return;
-                }
-                p.put(leaf, JsonNumbers.tidy(out));
+        for (FieldDef f : JobFields.cycle()) {
+            String[] parts = f.key().split("\\.");
+            JsonNode parent = copy;
+            for (int i = 1; i < parts.length - 1 && parent != null; i++) {
+                parent = parent.get(parts[i]);
             }
-        });
+            String leaf = f.leaf();
+            if (f.unit().followsUnits() && parent instanceof ObjectNode p && p.has(leaf) && p.get(leaf).isNumber()) {
+                double canonical = f.unit().toCanonical(p.get(leaf).doubleValue(), from);
+                p.put(leaf, JsonNumbers.tidy(f.unit().fromCanonical(canonical, to)));
+            }
+        }
         return copy;
-    }
-
-    /** m/min from a cutting speed in a file's speed unit (ft/min in inch files; 1 ft = 0.3048 m). */
-    static double speedToMPerMin(Units units, double v) {
-        return units == Units.IN ? v * FieldReader.M_PER_FT : v;
-    }
-
-    /** A cutting speed in m/min, in a file's speed unit. */
-    static double speedTo(Units units, double mPerMin) {
-        return units == Units.IN ? mPerMin / FieldReader.M_PER_FT : mPerMin;
     }
 
     /** Fills the keys {@code job} leaves out with the values of {@code template} (one level of objects deep). */

@@ -5,21 +5,24 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.job.FieldDefault;
 import org.hobwright.api.job.Units;
+import org.hobwright.api.wizard.FieldType;
 import org.hobwright.text.Decimal;
 import org.hobwright.wizard.setup.Angles;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ObjectNode;
 
 /**
- * Reads the values of one object of a structurally checked document, converting units once and
- * turning every bad value into a finding (never an exception). Missing optional objects read as
- * empty, so their keys take their defaults.
+ * Reads the values of one object of a document by the field table ({@code JobFields},
+ * {@code MachineFields}, {@code TemplateFields}): the JSON type, the range, the choices and the
+ * default of each value come from its {@link FieldDef}. Units are converted once, here; every bad
+ * value is a finding (never an exception). A value of the wrong JSON type, out of its range or not
+ * one of its choices is an error of a readable file (exit code 1), like a missing required key.
+ * Missing optional objects read as empty, so their keys take their defaults.
  */
 final class FieldReader {
-    /** Metres per foot: 1 ft = 0.3048 m exactly (international yard and pound agreement, 1959). */
-    static final double M_PER_FT = 0.3048;
-
     private final JsonDocument doc;
     private final JsonNode node;
     private final String path;
@@ -39,7 +42,7 @@ final class FieldReader {
         return new FieldReader(doc, doc.root(), "", out, units);
     }
 
-    /** The fields of a child object (empty when absent). */
+    /** The fields of a child object (empty when absent or not an object: the structure check reports that). */
     FieldReader child(String key) {
         JsonNode c = node.get(key);
         return new FieldReader(doc, c != null && c.isObject() ? c : null, path(key), out, units);
@@ -56,6 +59,10 @@ final class FieldReader {
 
     boolean has(String key) {
         return node.has(key);
+    }
+
+    boolean has(FieldDef f) {
+        return node.has(f.leaf());
     }
 
     JsonNode raw(String key) {
@@ -86,6 +93,12 @@ final class FieldReader {
         out.add(InputCode.INPUT_MISSING.at(path(key), where + ": " + path(key) + " is required", fix));
     }
 
+    /** Reports a missing required field, with the table's label and proposal as the fix. */
+    void missing(FieldDef f) {
+        String example = f.dflt().hasValue() ? ", e.g. " + f.dflt().value(units) : "";
+        missing(f.leaf(), "add \"" + f.leaf() + "\" (" + f.label().toLowerCase(java.util.Locale.ROOT) + ")" + example);
+    }
+
     /** Checks that a text is a library name (it names a file); an error finding when not. */
     boolean checkName(String key, String name) {
         Optional<Finding> bad = Names.check(path(key), name);
@@ -100,187 +113,141 @@ final class FieldReader {
      */
     Optional<Units> units(String key) {
         JsonNode v = node.get(key);
-        if (v != null && (v.stringValue().equals("mm") || v.stringValue().equals("in"))) {
+        if (v != null && v.isString() && (v.stringValue().equals("mm") || v.stringValue().equals("in"))) {
             return Optional.of(Units.fromSymbol(v.stringValue()));
         }
         String where = v == null ? (path.isEmpty() ? doc.source() : doc.at(path)) : doc.at(path(key));
         out.add(InputCode.INPUT_UNITS.at(path(key), where + ": " + path(key)
-                + (v == null ? " is missing" : " is \"" + v.stringValue() + "\"") + "; it must be \"mm\" or \"in\"",
+                + (v == null ? " is missing" : " is " + Shape.describe(v)) + "; it must be \"mm\" or \"in\"",
                 "add \"units\": \"mm\" or \"units\": \"in\""));
         return Optional.empty();
     }
 
-    // ---- texts ----
+    // ---- texts and words ----
 
-    Optional<String> text(String key) {
-        JsonNode v = node.get(key);
+    /**
+     * A text or choice field: empty when absent (with a finding when required), not a text, blank,
+     * not one of the choices or not a library name.
+     */
+    Optional<String> text(FieldDef f) {
+        JsonNode v = node.get(f.leaf());
         if (v == null) {
+            if (f.required()) {
+                missing(f);
+            }
             return Optional.empty();
         }
-        if (v.stringValue().isBlank()) {
-            error(InputCode.INPUT_VALUE, key, "must not be empty", null);
+        if (!v.isString()) {
+            wrongType(f, v);
             return Optional.empty();
         }
-        return Optional.of(v.stringValue().strip());
+        String t = v.stringValue().strip();
+        if (t.isEmpty()) {
+            error(InputCode.INPUT_VALUE, f.leaf(), "must not be empty", "add " + f.label().toLowerCase(
+                    java.util.Locale.ROOT) + " or leave the key out");
+            return Optional.empty();
+        }
+        if (!f.choices().isEmpty() && !f.choices().contains(t)) {
+            error(InputCode.INPUT_CHOICE, f.leaf(), "\"" + t + "\" is not one of " + String.join(", ", f.choices()),
+                    "use one of " + String.join(", ", f.choices()));
+            return Optional.empty();
+        }
+        if (f.libraryName() && !checkName(f.leaf(), t)) {
+            return Optional.empty();
+        }
+        return Optional.of(t);
     }
 
-    Optional<String> requiredText(String key, String fix) {
-        if (!has(key)) {
-            missing(key, fix);
-            return Optional.empty();
-        }
-        return text(key);
+    /** A choice field with a default: the word given, else the default (empty when the word is bad). */
+    Optional<String> word(FieldDef f) {
+        return has(f) ? text(f) : Optional.of(f.dflt().value(units)).filter(s -> !s.isEmpty());
     }
 
-    /** A word from a list of choices; reports the choices when it is none of them. */
-    Optional<String> choice(String key, List<String> choices) {
-        Optional<String> t = text(key);
-        if (t.isPresent() && !choices.contains(t.get())) {
-            error(InputCode.INPUT_CHOICE, key, "\"" + t.get() + "\" is not one of " + String.join(", ", choices),
-                    "use one of " + String.join(", ", choices));
-            return Optional.empty();
+    /** A yes/no field: the value given, else the table's default. */
+    boolean bool(FieldDef f) {
+        JsonNode v = node.get(f.leaf());
+        if (v == null) {
+            return f.dflt().value(units).equals("yes");
         }
-        return t;
-    }
-
-    boolean bool(String key, boolean dflt) {
-        JsonNode v = node.get(key);
-        return v == null ? dflt : v.booleanValue();
+        if (!v.isBoolean()) {
+            wrongType(f, v);
+            return false;
+        }
+        return v.booleanValue();
     }
 
     // ---- numbers ----
 
-    /** What a value is converted with. */
-    enum Kind {
-        /** A plain number (rpm, ratio, factor, seconds, micrometres). */
-        PLAIN,
-        /** A length in the file's units, read as mm. */
-        LENGTH,
-        /** A speed in the file's length units per minute, read as mm/min. */
-        LENGTH_PER_MIN,
-        /** A cutting speed: m/min in mm files, ft/min in inch files, read as m/min. */
-        CUTTING_SPEED
-    }
-
-    double toCanonical(Kind kind, double v) {
-        return switch (kind) {
-            case PLAIN -> v;
-            case LENGTH, LENGTH_PER_MIN -> units.toMm(v);
-            case CUTTING_SPEED -> units == Units.IN ? v * M_PER_FT : v;
-        };
-    }
-
-    /** An optional number, converted and checked against {@code limit}; empty when absent or bad. */
-    OptionalDouble number(String key, Kind kind, Limit limit) {
-        JsonNode v = node.get(key);
+    /**
+     * A number, angle or whole-number field in canonical units: the value given (converted and
+     * checked against the field's range), else the table's default; empty when absent without a
+     * default (with a finding when required) or when the value is bad (with a finding).
+     */
+    OptionalDouble number(FieldDef f) {
+        JsonNode v = node.get(f.leaf());
         if (v == null) {
-            return OptionalDouble.empty();
+            if (f.required()) {
+                missing(f);
+                return OptionalDouble.empty();
+            }
+            return defaultOf(f);
         }
-        double raw = v.doubleValue();
-        return checked(key, raw, toCanonical(kind, raw), kind, limit);
-    }
-
-    /** A required number; NaN (never used further: an error finding is recorded) when absent or bad. */
-    double required(String key, Kind kind, Limit limit, String fix) {
-        if (!has(key)) {
-            missing(key, fix);
-            return Double.NaN;
-        }
-        return number(key, kind, limit).orElse(Double.NaN);
-    }
-
-    /** A number with a default (canonical units) when absent. */
-    double number(String key, Kind kind, Limit limit, double dflt) {
-        return has(key) ? number(key, kind, limit).orElse(Double.NaN) : dflt;
-    }
-
-    /** An optional angle: a number of degrees or a degrees-minutes-seconds text. */
-    OptionalDouble angle(String key, Limit limit) {
-        JsonNode v = node.get(key);
-        if (v == null) {
-            return OptionalDouble.empty();
-        }
-        if (v.isString()) {
+        double raw;
+        if (f.type() == FieldType.ANGLE && v.isString()) {
             Optional<Double> deg = Angles.parse(v.stringValue());
             if (deg.isEmpty()) {
-                error(InputCode.INPUT_ANGLE, key, "\"" + v.stringValue() + "\" is not an angle",
+                error(InputCode.INPUT_ANGLE, f.leaf(), "\"" + v.stringValue() + "\" is not an angle",
                         "write degrees as 13.2368 or degrees-minutes-seconds as 13°14'12\" or \"13 14 12\"");
                 return OptionalDouble.empty();
             }
-            return checked(key, deg.get(), deg.get(), Kind.PLAIN, limit);
+            raw = deg.get();
+        } else if (!v.isNumber() || f.type() == FieldType.INTEGER && v.doubleValue() != Math.rint(v.doubleValue())) {
+            wrongType(f, v);
+            return OptionalDouble.empty();
+        } else {
+            raw = v.doubleValue();
         }
-        return checked(key, v.doubleValue(), v.doubleValue(), Kind.PLAIN, limit);
-    }
-
-    double requiredAngle(String key, Limit limit, String fix) {
-        if (!has(key)) {
-            missing(key, fix);
-            return Double.NaN;
+        double canonical = f.unit().toCanonical(raw, units);
+        if (!Double.isFinite(raw)) {
+            error(InputCode.INPUT_VALUE, f.leaf(), "must be a finite number, was " + Decimal.readable(raw),
+                    "enter " + RangeWords.of(f, units));
+            return OptionalDouble.empty();
         }
-        return angle(key, limit).orElse(Double.NaN);
-    }
-
-    double angle(String key, Limit limit, double dflt) {
-        return has(key) ? angle(key, limit).orElse(Double.NaN) : dflt;
-    }
-
-    OptionalInt integer(String key, int min, int max) {
-        JsonNode v = node.get(key);
-        if (v == null) {
-            return OptionalInt.empty();
-        }
-        double d = v.doubleValue();
-        if (d < min || d > max) {
-            error(InputCode.INPUT_VALUE, key, "must be " + (max == Integer.MAX_VALUE ? "at least " + min
-                    : "between " + min + " and " + max) + ", was " + format(d), null);
-            return OptionalInt.empty();
-        }
-        return OptionalInt.of((int) d);
-    }
-
-    int requiredInt(String key, int min, int max, String fix) {
-        if (!has(key)) {
-            missing(key, fix);
-            return min;
-        }
-        return integer(key, min, max).orElse(min);
-    }
-
-    int integer(String key, int min, int max, int dflt) {
-        return has(key) ? integer(key, min, max).orElse(dflt) : dflt;
-    }
-
-    private OptionalDouble checked(String key, double raw, double canonical, Kind kind, Limit limit) {
-        Optional<String> why = limit.violation(canonical, kind == Kind.PLAIN ? "" : unitWord(kind));
-        if (why.isPresent()) {
-            boolean sameUnit = kind == Kind.PLAIN || units == Units.MM && kind != Kind.CUTTING_SPEED;
-            error(InputCode.INPUT_VALUE, key, why.get() + ", was " + format(raw)
-                    + (sameUnit ? "" : " " + fileUnitWord(kind)), null);
+        if (!f.range().contains(canonical)) {
+            String unit = f.unit().symbol(units);
+            error(InputCode.INPUT_VALUE, f.leaf(), "must be " + RangeWords.of(f, units) + ", was "
+                    + Decimal.readable(raw) + RangeWords.suffix(unit), "enter " + RangeWords.of(f, units));
             return OptionalDouble.empty();
         }
         return OptionalDouble.of(canonical);
     }
 
-    private static String unitWord(Kind kind) {
-        return switch (kind) {
-            case LENGTH -> " mm";
-            case LENGTH_PER_MIN -> " mm/min";
-            case CUTTING_SPEED -> " m/min";
-            case PLAIN -> "";
-        };
+    /** A number field that is required or has a default: NaN (an error finding is recorded) when bad. */
+    double value(FieldDef f) {
+        return number(f).orElse(Double.NaN);
     }
 
-    private String fileUnitWord(Kind kind) {
-        return switch (kind) {
-            case LENGTH -> units.symbol();
-            case LENGTH_PER_MIN -> units.symbol() + "/min";
-            case CUTTING_SPEED -> units == Units.IN ? "ft/min" : "m/min";
-            case PLAIN -> "";
-        };
+    /** A whole-number field: the value given or the default; empty when absent without one or bad. */
+    OptionalInt integer(FieldDef f) {
+        OptionalDouble d = number(f);
+        return d.isPresent() ? OptionalInt.of((int) d.getAsDouble()) : OptionalInt.empty();
     }
 
-    /** A value quoted in a message: its shortest exact text ({@link Decimal#exact}), e.g. {@code 0.0001}, {@code 24}. */
+    private OptionalDouble defaultOf(FieldDef f) {
+        FieldDefault d = f.dflt();
+        if (!d.hasValue()) {
+            return OptionalDouble.empty();
+        }
+        return OptionalDouble.of(f.unit().toCanonical(Double.parseDouble(d.value(units)), units));
+    }
+
+    private void wrongType(FieldDef f, JsonNode v) {
+        out.add(InputCode.INPUT_WRONG_TYPE.at(path(f.leaf()), doc.at(path(f.leaf())) + ": " + path(f.leaf())
+                + " must be " + Shape.words(f.type()) + ", was " + Shape.describe(v), null));
+    }
+
+    /** A number for messages, readable at every magnitude. */
     static String format(double v) {
-        return Double.isFinite(v) ? Decimal.exact(v) : Double.toString(v);
+        return Decimal.readable(v);
     }
 }

@@ -2,9 +2,10 @@ package org.hobwright.wizard.store;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
-import java.util.Set;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.JobFields;
+import org.hobwright.api.job.MachineFields;
+import org.hobwright.api.job.TemplateFields;
 import tools.jackson.databind.JsonNode;
 
 /**
@@ -23,82 +24,16 @@ public enum FileFormat {
     /** The version this program writes and the newest it reads. */
     public static final int VERSION = 1;
 
-    private static final Shape CYCLE_KEYS = Shape.object(
-            "workMaterial", Shape.TEXT, "cuttingSpeed", Shape.NUMBER, "roughFeed", Shape.NUMBER,
-            "finishFeed", Shape.NUMBER, "roughDepth", Shape.NUMBER, "finishStock", Shape.NUMBER,
-            "method", Shape.TEXT, "axialClearance", Shape.NUMBER, "radialClearance", Shape.NUMBER,
-            "coolant", Shape.BOOLEAN,
-            "targets", Shape.object("feedMarkDepth", Shape.NUMBER, "envelopingDepth", Shape.NUMBER,
-                    "maxChipThickness", Shape.NUMBER),
-            "hobShift", Shape.object("perPart", Shape.NUMBER, "everyParts", Shape.INTEGER),
-            "fastest", Shape.BOOLEAN, "batchSize", Shape.INTEGER, "programNumber", Shape.INTEGER,
-            "toolStation", Shape.INTEGER, "hobTurnedRound", Shape.BOOLEAN,
-            "hobLife", Shape.object("lengthPerTooth", Shape.NUMBER));
+    private static final List<String> HEADER = List.of("$schema", "format", "version");
 
-    private static final Shape WORK_SPINDLE = Shape.object("minRpm", Shape.NUMBER, "maxRpm", Shape.NUMBER,
-            "phasedSync", Shape.BOOLEAN);
-    private static final Shape HOB_SPINDLE = Shape.object("minRpm", Shape.NUMBER, "maxRpm", Shape.NUMBER,
-            "clockwiseTeethMove", Shape.TEXT);
+    /** The keys of a machine profile other than the header (also a job's inline machine). */
+    private static final Shape MACHINE_BODY = Shape.of(List.of(), MachineFields.all());
 
-    /** The keys of a machine profile other than format and version (an inline machine of a job). */
-    static final Shape MACHINE_BODY = Shape.object(
-            "units", Shape.TEXT, "name", Shape.TEXT, "description", Shape.TEXT, "dialect", Shape.TEXT,
-            "workSpindle", WORK_SPINDLE, "hobSpindle", HOB_SPINDLE, "maxSyncRatio", Shape.NUMBER,
-            "followsHelix", Shape.BOOLEAN,
-            "swivel", Shape.object("scale", Shape.TEXT, "resolution", Shape.ANGLE, "programmable", Shape.BOOLEAN,
-                    "maxAngle", Shape.ANGLE, "positiveSense", Shape.TEXT, "positiveIsRight", Shape.BOOLEAN),
-            "travel", Shape.object("radialMin", Shape.NUMBER, "radialMax", Shape.NUMBER, "axialMin", Shape.NUMBER,
-                    "axialMax", Shape.NUMBER, "hobShift", Shape.NUMBER),
-            "rapid", Shape.NUMBER, "maxFeed", Shape.NUMBER, "syncSettle", Shape.NUMBER,
-            "maxHobDiameter", Shape.NUMBER,
-            "times", Shape.object("load", Shape.NUMBER, "unload", Shape.NUMBER, "swivel", Shape.NUMBER,
-                    "hobShift", Shape.NUMBER, "hobChange", Shape.NUMBER));
+    private static final Shape JOB_SHAPE = Shape.of(HEADER, JobFields.all()).withNameOr("machine", MACHINE_BODY);
 
-    private static final Map<String, Shape> HEADER = header();
+    private static final Shape MACHINE_SHAPE = Shape.of(HEADER, MachineFields.all());
 
-    private static Map<String, Shape> header() {
-        Map<String, Shape> m = new java.util.LinkedHashMap<>();
-        m.put("$schema", Shape.TEXT);
-        m.put("format", Shape.TEXT);
-        m.put("version", Shape.INTEGER);
-        return m;
-    }
-
-    private static final Shape SPLINE_KEYS = Shape.object(
-            "partName", Shape.TEXT, "standard", Shape.TEXT, "teeth", Shape.INTEGER, "module", Shape.NUMBER,
-            "diametralPitch", Shape.NUMBER_OR_TEXT, "pressureAngle", Shape.ANGLE, "root", Shape.TEXT,
-            "toleranceClass", Shape.INTEGER, "fitClass", Shape.TEXT, "referenceDiameter", Shape.NUMBER,
-            "faceWidth", Shape.NUMBER, "pinDiameter", Shape.NUMBER, "blankDiameter", Shape.NUMBER,
-            "allowance", Shape.NUMBER, "totalTolerance", Shape.NUMBER, "effectiveVariation", Shape.NUMBER);
-
-    private static final Shape JOB_SHAPE = Shape.object(
-            "name", Shape.TEXT, "units", Shape.TEXT, "part", Shape.TEXT,
-            "gear", Shape.object("partName", Shape.TEXT, "teeth", Shape.INTEGER, "module", Shape.NUMBER,
-                    "diametralPitch", Shape.NUMBER, "pressureAngle", Shape.ANGLE, "helixAngle", Shape.ANGLE,
-                    "hand", Shape.TEXT, "faceWidth", Shape.NUMBER, "profileShift", Shape.NUMBER,
-                    "thicknessAllowance", Shape.NUMBER, "toothSystem", Shape.TEXT, "blankDiameter", Shape.NUMBER,
-                    "pinDiameter", Shape.NUMBER, "toleranceClass", Shape.INTEGER,
-                    "custom", Shape.object("addendum", Shape.NUMBER, "dedendum", Shape.NUMBER,
-                            "rootRadius", Shape.NUMBER),
-                    "drawing", Shape.object("pitchDiameter", Shape.NUMBER, "outsideDiameter", Shape.NUMBER,
-                            "rootDiameter", Shape.NUMBER, "wholeDepth", Shape.NUMBER, "spanTeeth", Shape.INTEGER,
-                            "span", Shape.NUMBER, "pinDiameter", Shape.NUMBER, "overPins", Shape.NUMBER)),
-            "hob", Shape.object("module", Shape.NUMBER, "diametralPitch", Shape.NUMBER,
-                    "pressureAngle", Shape.ANGLE, "starts", Shape.INTEGER, "hand", Shape.TEXT,
-                    "outsideDiameter", Shape.NUMBER, "leadAngle", Shape.ANGLE, "referenceDiameter", Shape.NUMBER,
-                    "gashes", Shape.INTEGER, "length", Shape.NUMBER, "maxRpm", Shape.NUMBER,
-                    "material", Shape.TEXT, "cuttingSense", Shape.TEXT, "identifier", Shape.TEXT,
-                    "root", Shape.TEXT, "tipRadius", Shape.NUMBER, "addendum", Shape.NUMBER),
-            "spline", SPLINE_KEYS,
-            "machine", Shape.nameOr(MACHINE_BODY),
-            "cycle", CYCLE_KEYS.with(Map.of("template", Shape.TEXT), Set.of()))
-            .with(HEADER, Set.of());
-
-    private static final Shape MACHINE_SHAPE = MACHINE_BODY.with(HEADER, Set.of());
-
-    private static final Shape TEMPLATE_SHAPE = Shape.object(
-            "units", Shape.TEXT, "machine", Shape.TEXT, "name", Shape.TEXT, "description", Shape.TEXT,
-            "cycle", CYCLE_KEYS).with(HEADER, Set.of());
+    private static final Shape TEMPLATE_SHAPE = Shape.of(HEADER, TemplateFields.all());
 
     private final String word;
 
@@ -111,6 +46,14 @@ public enum FileFormat {
         return word;
     }
 
+    /**
+     * The structure problems of a document of this format: unknown keys and plain values where
+     * objects belong (errors of a readable file, like wrong values).
+     */
+    List<Finding> structure(JsonDocument doc) {
+        return shape().check(doc);
+    }
+
     Shape shape() {
         return switch (this) {
             case JOB -> JOB_SHAPE;
@@ -120,10 +63,11 @@ public enum FileFormat {
     }
 
     /**
-     * Checks format and version, migrates an older version, and checks the structure.
+     * Checks format and version and migrates an older version; the keys are checked by
+     * {@link #structure} when the document is read.
      *
      * @return the (migrated) document, with an info finding when it was migrated; unreadable
-     *         when the format, the version or the structure is wrong
+     *         when the format or the version is wrong
      */
     Loaded<JsonDocument> open(JsonDocument doc) {
         JsonNode format = doc.root().get("format");
@@ -158,11 +102,6 @@ public enum FileFormat {
             findings.add(InputCode.INPUT_MIGRATED.at("version",
                     doc.source() + ": version " + v + " read and migrated to version " + VERSION,
                     "save the file again to store it as version " + VERSION));
-        }
-        List<Finding> structure = shape().check(current);
-        if (!structure.isEmpty()) {
-            findings.addAll(structure);
-            return Loaded.unreadable(findings);
         }
         return Loaded.of(current, findings);
     }

@@ -20,9 +20,9 @@ public enum InputCode implements FindingCode {
     /** Not well-formed JSON, a repeated key, or not a JSON object at the top. */
     INPUT_MALFORMED(Severity.ERROR, true, "not well-formed JSON, a repeated key, or no object at the top"),
     /** A key the format does not define. */
-    INPUT_UNKNOWN_KEY(Severity.ERROR, true, "a key the format does not define"),
+    INPUT_UNKNOWN_KEY(Severity.ERROR, false, "a key the format does not define"),
     /** A value of the wrong JSON type (text where a number belongs, ...). */
-    INPUT_WRONG_TYPE(Severity.ERROR, true, "a value of the wrong JSON type"),
+    INPUT_WRONG_TYPE(Severity.ERROR, false, "a value of the wrong JSON type"),
     /** {@code format} missing or not the expected one. */
     INPUT_FORMAT(Severity.ERROR, true, "\"format\" missing or not the expected one"),
     /** {@code version} missing, not a whole number, or newer than this program reads. */

@@ -11,6 +11,7 @@ import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
+import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.Units;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.node.ObjectNode;
@@ -93,7 +94,7 @@ public final class JobReader {
 
     private Loaded<HobJob> read(JsonDocument raw, Overrides overrides) {
         return FileFormat.JOB.open(raw).then(doc -> {
-            List<Finding> out = new ArrayList<>();
+            List<Finding> out = new ArrayList<>(FileFormat.JOB.structure(doc));
             Optional<Units> units = FieldReader.root(doc, out, Units.MM).units("units");
             if (units.isEmpty()) {
                 return Loaded.unreadable(out);
@@ -108,11 +109,8 @@ public final class JobReader {
             if (cycleFields == null) {
                 return Loaded.unreadable(out);
             }
-            String name = root.requiredText("name", "give the job a name; it names the output files").orElse("job");
-            if (root.has("name")) {
-                root.checkName("name", name);
-            }
-            boolean spline = root.choice("part", SplineParts.PARTS).orElse("gear").equals("spline");
+            String name = root.text(JobFields.NAME).orElse("job");
+            boolean spline = root.word(JobFields.PART).orElse("gear").equals("spline");
             String partKey = spline ? "spline" : "gear";
             if (!root.has(partKey)) {
                 root.missing(partKey, spline ? "describe the spline: standard, teeth, module or diametralPitch,"
@@ -206,7 +204,7 @@ public final class JobReader {
     private FieldReader cycleWithTemplate(JsonDocument doc, FieldReader root, Optional<MachineFile> machine,
                                      Overrides overrides, List<Finding> out) {
         FieldReader cycle = root.child("cycle");
-        Optional<String> templateName = overrides.template().or(() -> cycle.text("template"));
+        Optional<String> templateName = overrides.template().or(() -> cycle.text(JobFields.CYCLE_TEMPLATE));
         if (templateName.isEmpty()) {
             return cycle;
         }

@@ -4,16 +4,19 @@ import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.DrawingValues;
+import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.HobbingMethod;
+import org.hobwright.api.job.JobFields;
+import org.hobwright.api.job.MachineFields;
 import org.hobwright.api.job.MachineProfile;
 import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.job.Pitch;
-import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.RunSettings;
+import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.JsonTrees;
@@ -47,7 +50,7 @@ public final class JobWriter {
         root.put("name", job.name());
         root.put("units", units.symbol());
         if (job.spline().isPresent()) {
-            root.put("part", "spline");
+            root.put(JobFields.PART.leaf(), "spline");
             root.set("spline", splineTree(job.gear(), job.spline().get(), units));
         } else {
             root.set("gear", gearTree(job.gear(), units));
@@ -91,35 +94,35 @@ public final class JobWriter {
     /** The cycle keys of a job or template (without {@code template}), in {@code units}. */
     public static ObjectNode cycleTree(CycleSettings c, Units units) {
         ObjectNode n = NODES.objectNode();
-        n.put("workMaterial", c.workMaterial());
-        optional(n, "cuttingSpeed", c.cuttingSpeedMPerMin(), v -> CycleReader.speedTo(units, v));
-        optional(n, "roughFeed", c.roughFeedMmPerRev(), units::fromMm);
-        optional(n, "finishFeed", c.finishFeedMmPerRev(), units::fromMm);
-        optional(n, "roughDepth", c.roughDepthMm(), units::fromMm);
-        number(n, "finishStock", units.fromMm(c.finishStockMm()));
-        n.put("method", c.method() == HobbingMethod.CLIMB ? "climb" : "conventional");
-        number(n, "axialClearance", units.fromMm(c.axialClearanceMm()));
-        number(n, "radialClearance", units.fromMm(c.radialClearanceMm()));
-        n.put("coolant", c.coolant());
+        n.put(JobFields.CYCLE_WORK_MATERIAL.leaf(), c.workMaterial());
+        put(n, JobFields.CYCLE_CUTTING_SPEED, c.cuttingSpeedMPerMin(), units);
+        put(n, JobFields.CYCLE_ROUGH_FEED, c.roughFeedMmPerRev(), units);
+        put(n, JobFields.CYCLE_FINISH_FEED, c.finishFeedMmPerRev(), units);
+        put(n, JobFields.CYCLE_ROUGH_DEPTH, c.roughDepthMm(), units);
+        put(n, JobFields.CYCLE_FINISH_STOCK, c.finishStockMm(), units);
+        n.put(JobFields.CYCLE_METHOD.leaf(), c.method() == HobbingMethod.CLIMB ? "climb" : "conventional");
+        put(n, JobFields.CYCLE_AXIAL_CLEARANCE, c.axialClearanceMm(), units);
+        put(n, JobFields.CYCLE_RADIAL_CLEARANCE, c.radialClearanceMm(), units);
+        n.put(JobFields.CYCLE_COOLANT.leaf(), c.coolant());
         QualityTargets t = c.targets();
         ObjectNode targets = NODES.objectNode();
-        optional(targets, "feedMarkDepth", t.feedMarkDepthUm(), v -> v);
-        optional(targets, "envelopingDepth", t.envelopingDepthUm(), v -> v);
-        optional(targets, "maxChipThickness", t.maxChipThicknessMm(), units::fromMm);
+        put(targets, JobFields.TARGET_FEED_MARK_DEPTH, t.feedMarkDepthUm(), units);
+        put(targets, JobFields.TARGET_ENVELOPING_DEPTH, t.envelopingDepthUm(), units);
+        put(targets, JobFields.TARGET_MAX_CHIP_THICKNESS, t.maxChipThicknessMm(), units);
         if (!targets.isEmpty()) {
             n.set("targets", targets);
         }
         ObjectNode shift = n.putObject("hobShift");
-        number(shift, "perPart", units.fromMm(c.hobShiftPerPartMm()));
-        shift.put("everyParts", c.hobShiftEveryParts());
-        n.put("fastest", c.fastest());
+        put(shift, JobFields.HOB_SHIFT_PER_PART, c.hobShiftPerPartMm(), units);
+        shift.put(JobFields.HOB_SHIFT_EVERY_PARTS.leaf(), c.hobShiftEveryParts());
+        n.put(JobFields.CYCLE_FASTEST.leaf(), c.fastest());
         RunSettings r = c.run();
-        n.put("batchSize", r.batchSize());
-        r.programNumber().ifPresent(v -> n.put("programNumber", v));
-        r.toolStation().ifPresent(v -> n.put("toolStation", v));
-        n.put("hobTurnedRound", r.hobTurnedRound());
+        n.put(JobFields.CYCLE_BATCH_SIZE.leaf(), r.batchSize());
+        r.programNumber().ifPresent(v -> n.put(JobFields.CYCLE_PROGRAM_NUMBER.leaf(), v));
+        r.toolStation().ifPresent(v -> n.put(JobFields.CYCLE_TOOL_STATION.leaf(), v));
+        n.put(JobFields.CYCLE_HOB_TURNED_ROUND.leaf(), r.hobTurnedRound());
         if (r.hobLifePerToothM().isPresent()) {
-            number(n.putObject("hobLife"), "lengthPerTooth", r.hobLifePerToothM().getAsDouble());
+            put(n.putObject("hobLife"), JobFields.HOB_LIFE_PER_TOOTH, r.hobLifePerToothM(), units);
         }
         return n;
     }
@@ -138,25 +141,25 @@ public final class JobWriter {
 
     private static ObjectNode gearTree(GearSpec g, Units units) {
         ObjectNode n = NODES.objectNode();
-        n.put("partName", g.partName());
-        n.put("teeth", g.teeth());
+        n.put(JobFields.GEAR_PART_NAME.leaf(), g.partName());
+        n.put(JobFields.GEAR_TEETH.leaf(), g.teeth());
         pitch(n, g.pitch());
-        number(n, "pressureAngle", g.pressureAngleDeg());
-        number(n, "helixAngle", g.helixAngleDeg());
-        n.put("hand", g.hand().word());
-        number(n, "faceWidth", units.fromMm(g.faceWidthMm()));
-        number(n, "profileShift", g.profileShift());
-        number(n, "thicknessAllowance", units.fromMm(g.thicknessAllowanceMm()));
-        n.put("toothSystem", g.toothSystem());
+        put(n, JobFields.GEAR_PRESSURE_ANGLE, g.pressureAngleDeg(), units);
+        put(n, JobFields.GEAR_HELIX_ANGLE, g.helixAngleDeg(), units);
+        n.put(JobFields.GEAR_HAND.leaf(), g.hand().word());
+        put(n, JobFields.GEAR_FACE_WIDTH, g.faceWidthMm(), units);
+        put(n, JobFields.GEAR_PROFILE_SHIFT, g.profileShift(), units);
+        put(n, JobFields.GEAR_THICKNESS_ALLOWANCE, g.thicknessAllowanceMm(), units);
+        n.put(JobFields.GEAR_TOOTH_SYSTEM.leaf(), g.toothSystem());
         g.customProportions().ifPresent(p -> {
             ObjectNode c = n.putObject("custom");
-            number(c, "addendum", p.addendumFactor());
-            number(c, "dedendum", p.dedendumFactor());
-            number(c, "rootRadius", p.rootRadiusFactor());
+            put(c, JobFields.GEAR_CUSTOM_ADDENDUM, p.addendumFactor(), units);
+            put(c, JobFields.GEAR_CUSTOM_DEDENDUM, p.dedendumFactor(), units);
+            put(c, JobFields.GEAR_CUSTOM_ROOT_RADIUS, p.rootRadiusFactor(), units);
         });
-        optional(n, "blankDiameter", g.blankDiameterMm(), units::fromMm);
-        optional(n, "pinDiameter", g.pinDiameterMm(), units::fromMm);
-        g.flankToleranceClass().ifPresent(v -> n.put("toleranceClass", v));
+        put(n, JobFields.GEAR_BLANK_DIAMETER, g.blankDiameterMm(), units);
+        put(n, JobFields.GEAR_PIN_DIAMETER, g.pinDiameterMm(), units);
+        g.flankToleranceClass().ifPresent(v -> n.put(JobFields.GEAR_TOLERANCE_CLASS.leaf(), v));
         ObjectNode d = drawingTree(g.drawing(), units);
         if (!d.isEmpty()) {
             n.set("drawing", d);
@@ -167,25 +170,25 @@ public final class JobWriter {
     /** A spline job's {@code spline} object: its gear frame's keys and what makes it a spline. */
     private static ObjectNode splineTree(GearSpec g, SplineSpec s, Units units) {
         ObjectNode n = NODES.objectNode();
-        n.put("partName", g.partName());
-        n.put("standard", s.standard());
-        n.put("teeth", g.teeth());
+        n.put(JobFields.SPLINE_PART_NAME.leaf(), g.partName());
+        n.put(JobFields.SPLINE_STANDARD.leaf(), s.standard());
+        n.put(JobFields.SPLINE_TEETH.leaf(), g.teeth());
         if (g.pitch() instanceof Pitch.Diametral d) {
-            n.put("diametralPitch", plain(d.perInch()) + "/" + plain(2 * d.perInch()));
+            n.put(JobFields.SPLINE_DIAMETRAL_PITCH.leaf(), plain(d.perInch()) + "/" + plain(2 * d.perInch()));
         } else {
-            pitch(n, g.pitch());
+            put(n, JobFields.SPLINE_MODULE, g.moduleMm(), units);
         }
-        number(n, "pressureAngle", g.pressureAngleDeg());
-        n.put("root", s.root());
-        n.put("toleranceClass", s.toleranceClass());
-        n.put("fitClass", s.fitClass());
-        optional(n, "referenceDiameter", s.referenceDiameterMm(), units::fromMm);
-        number(n, "faceWidth", units.fromMm(g.faceWidthMm()));
-        optional(n, "pinDiameter", g.pinDiameterMm(), units::fromMm);
-        optional(n, "blankDiameter", g.blankDiameterMm(), units::fromMm);
-        optional(n, "allowance", s.allowanceMm(), units::fromMm);
-        optional(n, "totalTolerance", s.totalToleranceMm(), units::fromMm);
-        optional(n, "effectiveVariation", s.effectiveVariationMm(), units::fromMm);
+        put(n, JobFields.SPLINE_PRESSURE_ANGLE, g.pressureAngleDeg(), units);
+        n.put(JobFields.SPLINE_ROOT.leaf(), s.root());
+        n.put(JobFields.SPLINE_TOLERANCE_CLASS.leaf(), s.toleranceClass());
+        n.put(JobFields.SPLINE_FIT_CLASS.leaf(), s.fitClass());
+        put(n, JobFields.SPLINE_REFERENCE_DIAMETER, s.referenceDiameterMm(), units);
+        put(n, JobFields.SPLINE_FACE_WIDTH, g.faceWidthMm(), units);
+        put(n, JobFields.SPLINE_PIN_DIAMETER, g.pinDiameterMm(), units);
+        put(n, JobFields.SPLINE_BLANK_DIAMETER, g.blankDiameterMm(), units);
+        put(n, JobFields.SPLINE_ALLOWANCE, s.allowanceMm(), units);
+        put(n, JobFields.SPLINE_TOTAL_TOLERANCE, s.totalToleranceMm(), units);
+        put(n, JobFields.SPLINE_EFFECTIVE_VARIATION, s.effectiveVariationMm(), units);
         return n;
     }
 
@@ -197,85 +200,85 @@ public final class JobWriter {
 
     private static ObjectNode drawingTree(DrawingValues d, Units units) {
         ObjectNode n = NODES.objectNode();
-        optional(n, "pitchDiameter", d.pitchDiameterMm(), units::fromMm);
-        optional(n, "outsideDiameter", d.outsideDiameterMm(), units::fromMm);
-        optional(n, "rootDiameter", d.rootDiameterMm(), units::fromMm);
-        optional(n, "wholeDepth", d.wholeDepthMm(), units::fromMm);
+        put(n, JobFields.DRAWING_PITCH_DIAMETER, d.pitchDiameterMm(), units);
+        put(n, JobFields.DRAWING_OUTSIDE_DIAMETER, d.outsideDiameterMm(), units);
+        put(n, JobFields.DRAWING_ROOT_DIAMETER, d.rootDiameterMm(), units);
+        put(n, JobFields.DRAWING_WHOLE_DEPTH, d.wholeDepthMm(), units);
         OptionalInt span = d.spanTeeth();
-        span.ifPresent(v -> n.put("spanTeeth", v));
-        optional(n, "span", d.spanWidthMm(), units::fromMm);
-        optional(n, "pinDiameter", d.pinDiameterMm(), units::fromMm);
-        optional(n, "overPins", d.overPinsMm(), units::fromMm);
+        span.ifPresent(v -> n.put(JobFields.DRAWING_SPAN_TEETH.leaf(), v));
+        put(n, JobFields.DRAWING_SPAN, d.spanWidthMm(), units);
+        put(n, JobFields.DRAWING_PIN_DIAMETER, d.pinDiameterMm(), units);
+        put(n, JobFields.DRAWING_OVER_PINS, d.overPinsMm(), units);
         return n;
     }
 
     private static ObjectNode hobTree(HobSpec h, Units units) {
         ObjectNode n = NODES.objectNode();
         pitch(n, h.pitch());
-        number(n, "pressureAngle", h.pressureAngleDeg());
-        n.put("starts", h.starts());
-        n.put("hand", h.hand().word());
-        number(n, "outsideDiameter", units.fromMm(h.outsideDiameterMm()));
-        optional(n, "leadAngle", h.leadAngleDeg(), v -> v);
-        optional(n, "referenceDiameter", h.referenceDiameterMm(), units::fromMm);
-        n.put("gashes", h.gashes());
-        number(n, "length", units.fromMm(h.lengthMm()));
-        optional(n, "maxRpm", h.maxRpm(), v -> v);
-        n.put("material", h.material());
-        h.cuttingSense().ifPresent(v -> n.put("cuttingSense", v.word()));
-        h.identifier().ifPresent(v -> n.put("identifier", v));
+        put(n, JobFields.HOB_PRESSURE_ANGLE, h.pressureAngleDeg(), units);
+        n.put(JobFields.HOB_STARTS.leaf(), h.starts());
+        n.put(JobFields.HOB_HAND.leaf(), h.hand().word());
+        put(n, JobFields.HOB_OUTSIDE_DIAMETER, h.outsideDiameterMm(), units);
+        put(n, JobFields.HOB_LEAD_ANGLE, h.leadAngleDeg(), units);
+        put(n, JobFields.HOB_REFERENCE_DIAMETER, h.referenceDiameterMm(), units);
+        n.put(JobFields.HOB_GASHES.leaf(), h.gashes());
+        put(n, JobFields.HOB_LENGTH, h.lengthMm(), units);
+        put(n, JobFields.HOB_MAX_RPM, h.maxRpm(), units);
+        n.put(JobFields.HOB_MATERIAL.leaf(), h.material());
+        h.cuttingSense().ifPresent(v -> n.put(JobFields.HOB_CUTTING_SENSE.leaf(), v.word()));
+        h.identifier().ifPresent(v -> n.put(JobFields.HOB_IDENTIFIER.leaf(), v));
         h.splineProfile().ifPresent(p -> {
-            n.put("root", p.root());
-            number(n, "tipRadius", units.fromMm(p.tipRadiusMm()));
-            optional(n, "addendum", p.addendumMm(), units::fromMm);
+            n.put(JobFields.HOB_ROOT.leaf(), p.root());
+            put(n, JobFields.HOB_TIP_RADIUS, p.tipRadiusMm(), units);
+            put(n, JobFields.HOB_ADDENDUM, p.addendumMm(), units);
         });
         return n;
     }
 
     private static ObjectNode machineBody(MachineProfile m, Units units, String description) {
         ObjectNode n = NODES.objectNode();
-        n.put("name", m.name());
+        n.put(MachineFields.NAME.leaf(), m.name());
         if (!description.isEmpty()) {
-            n.put("description", description);
+            n.put(MachineFields.DESCRIPTION.leaf(), description);
         }
-        n.put("dialect", m.dialect());
+        n.put(MachineFields.DIALECT.leaf(), m.dialect());
         ObjectNode work = n.putObject("workSpindle");
-        number(work, "minRpm", m.workMinRpm());
-        number(work, "maxRpm", m.workMaxRpm());
-        work.put("phasedSync", m.phasedSync());
+        put(work, MachineFields.WORK_MIN_RPM, m.workMinRpm(), units);
+        put(work, MachineFields.WORK_MAX_RPM, m.workMaxRpm(), units);
+        work.put(MachineFields.WORK_PHASED_SYNC.leaf(), m.phasedSync());
         ObjectNode hob = n.putObject("hobSpindle");
-        number(hob, "minRpm", m.hobMinRpm());
-        number(hob, "maxRpm", m.hobMaxRpm());
-        hob.put("clockwiseTeethMove", m.clockwiseTeethTowardChuck() ? MachineReader.TOWARD_CHUCK
+        put(hob, MachineFields.HOB_MIN_RPM, m.hobMinRpm(), units);
+        put(hob, MachineFields.HOB_MAX_RPM, m.hobMaxRpm(), units);
+        hob.put(MachineFields.HOB_CLOCKWISE_TEETH_MOVE.leaf(), m.clockwiseTeethTowardChuck() ? MachineReader.TOWARD_CHUCK
                 : MachineReader.AWAY_FROM_CHUCK);
-        number(n, "maxSyncRatio", m.maxSyncRatio());
-        n.put("followsHelix", m.followsHelix());
+        put(n, MachineFields.MAX_SYNC_RATIO, m.maxSyncRatio(), units);
+        n.put(MachineFields.FOLLOWS_HELIX.leaf(), m.followsHelix());
         SwivelHolder s = m.swivel();
         ObjectNode sw = n.putObject("swivel");
-        sw.put("scale", s.scale() == SwivelHolder.SwivelScale.DEGREES_MINUTES ? MachineReader.SCALE_DM
-                : MachineReader.SCALE_DEC);
-        number(sw, "resolution", s.resolutionDeg());
-        sw.put("programmable", s.programmable());
-        number(sw, "maxAngle", s.maxAngleDeg());
-        sw.put("positiveSense", s.positiveSense());
-        sw.put("positiveIsRight", s.positiveIsRight());
+        sw.put(MachineFields.SWIVEL_SCALE.leaf(), s.scale() == SwivelHolder.SwivelScale.DEGREES_MINUTES
+                ? MachineReader.SCALE_DM : MachineReader.SCALE_DEC);
+        put(sw, MachineFields.SWIVEL_RESOLUTION, s.resolutionDeg(), units);
+        sw.put(MachineFields.SWIVEL_PROGRAMMABLE.leaf(), s.programmable());
+        put(sw, MachineFields.SWIVEL_MAX_ANGLE, s.maxAngleDeg(), units);
+        sw.put(MachineFields.SWIVEL_POSITIVE_SENSE.leaf(), s.positiveSense());
+        sw.put(MachineFields.SWIVEL_POSITIVE_IS_RIGHT.leaf(), s.positiveIsRight());
         ObjectNode tr = n.putObject("travel");
-        number(tr, "radialMin", units.fromMm(m.radialMinMm()));
-        number(tr, "radialMax", units.fromMm(m.radialMaxMm()));
-        number(tr, "axialMin", units.fromMm(m.axialMinMm()));
-        number(tr, "axialMax", units.fromMm(m.axialMaxMm()));
-        number(tr, "hobShift", units.fromMm(m.hobShiftTravelMm().orElse(0)));
-        number(n, "rapid", units.fromMm(m.rapidMmPerMin()));
-        number(n, "maxFeed", units.fromMm(m.maxFeedMmPerMin()));
-        number(n, "syncSettle", m.syncSettleS());
-        number(n, "maxHobDiameter", units.fromMm(m.maxHobDiameterMm()));
+        put(tr, MachineFields.RADIAL_MIN, m.radialMinMm(), units);
+        put(tr, MachineFields.RADIAL_MAX, m.radialMaxMm(), units);
+        put(tr, MachineFields.AXIAL_MIN, m.axialMinMm(), units);
+        put(tr, MachineFields.AXIAL_MAX, m.axialMaxMm(), units);
+        put(tr, MachineFields.SHIFT_TRAVEL, m.hobShiftTravelMm().orElse(0), units);
+        put(n, MachineFields.RAPID, m.rapidMmPerMin(), units);
+        put(n, MachineFields.MAX_FEED, m.maxFeedMmPerMin(), units);
+        put(n, MachineFields.SYNC_SETTLE, m.syncSettleS(), units);
+        put(n, MachineFields.MAX_HOB_DIAMETER, m.maxHobDiameterMm(), units);
         MachineTimes t = m.times();
         ObjectNode times = NODES.objectNode();
-        optional(times, "load", t.loadS(), v -> v);
-        optional(times, "unload", t.unloadS(), v -> v);
-        optional(times, "swivel", t.swivelS(), v -> v);
-        optional(times, "hobShift", t.hobShiftS(), v -> v);
-        optional(times, "hobChange", t.hobChangeS(), v -> v);
+        put(times, MachineFields.TIME_LOAD, t.loadS(), units);
+        put(times, MachineFields.TIME_UNLOAD, t.unloadS(), units);
+        put(times, MachineFields.TIME_SWIVEL, t.swivelS(), units);
+        put(times, MachineFields.TIME_HOB_SHIFT, t.hobShiftS(), units);
+        put(times, MachineFields.TIME_HOB_CHANGE, t.hobChangeS(), units);
         if (!times.isEmpty()) {
             n.set("times", times);
         }
@@ -284,16 +287,21 @@ public final class JobWriter {
 
     private static void pitch(ObjectNode n, Pitch p) {
         if (p instanceof Pitch.Diametral d) {
-            number(n, "diametralPitch", d.perInch());
+            number(n, JobFields.GEAR_DIAMETRAL_PITCH.leaf(), d.perInch());
         } else {
-            number(n, "module", p.moduleMm());
+            number(n, JobFields.GEAR_MODULE.leaf(), p.moduleMm());
         }
     }
 
-    private static void optional(ObjectNode n, String key, OptionalDouble v,
-                                 java.util.function.DoubleUnaryOperator convert) {
-        if (v.isPresent()) {
-            number(n, key, convert.applyAsDouble(v.getAsDouble()));
+    /** Writes a field's canonical value in {@code units}. */
+    private static void put(ObjectNode n, FieldDef f, double canonical, Units units) {
+        number(n, f.leaf(), f.unit().fromCanonical(canonical, units));
+    }
+
+    /** Writes a field's canonical value in {@code units} when present. */
+    private static void put(ObjectNode n, FieldDef f, OptionalDouble canonical, Units units) {
+        if (canonical.isPresent()) {
+            put(n, f, canonical.getAsDouble(), units);
         }
     }
 

@@ -5,40 +5,26 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.wizard.FieldType;
 import tools.jackson.databind.JsonNode;
 
 /**
- * The structure of a file format: which keys an object may hold and the JSON type of each value.
- * Checking a tree against its shape finds unknown keys and wrong types, the problems that make a
- * file unreadable; values are checked later, when the records are built.
+ * The keys a file format allows, built from its field table: which keys an object may hold and
+ * which of them are objects. Checking a tree finds unknown keys and objects given as plain values
+ * (or the other way round); the values themselves are checked when they are read
+ * ({@link FieldReader}).
  */
 final class Shape {
-    /** JSON types of values. */
+    /** What a key holds. */
     enum Type {
-        /** A number. */
-        NUMBER("a number"),
-        /** A whole number (a number with no fraction). */
-        INTEGER("a whole number"),
-        /** A text. */
-        TEXT("a text"),
-        /** true or false. */
-        BOOLEAN("true or false"),
-        /** Degrees as a number or a degrees-minutes-seconds text. */
-        ANGLE("an angle (a number of degrees or a text like \"13°14'12\\\"\")"),
-        /** A number, or a text such as a pitch written "16/32". */
-        NUMBER_OR_TEXT("a number or a text like \"16/32\""),
+        /** A value (number, text, true or false). */
+        VALUE,
         /** An object with the keys of the shape. */
-        OBJECT("an object { ... }"),
+        OBJECT,
         /** The name of a library entry, or an object with the keys of the shape. */
-        NAME_OR_OBJECT("a name or an object { ... }");
-
-        final String words;
-
-        Type(String words) {
-            this.words = words;
-        }
+        NAME_OR_OBJECT
     }
 
     final Type type;
@@ -49,46 +35,61 @@ final class Shape {
         this.keys = Collections.unmodifiableMap(keys);
     }
 
-    static final Shape NUMBER = new Shape(Type.NUMBER, Map.of());
-    static final Shape INTEGER = new Shape(Type.INTEGER, Map.of());
-    static final Shape TEXT = new Shape(Type.TEXT, Map.of());
-    static final Shape BOOLEAN = new Shape(Type.BOOLEAN, Map.of());
-    static final Shape ANGLE = new Shape(Type.ANGLE, Map.of());
-    static final Shape NUMBER_OR_TEXT = new Shape(Type.NUMBER_OR_TEXT, Map.of());
+    private static final Shape VALUE = new Shape(Type.VALUE, Map.of());
 
-    /** An object; {@code pairs} alternates key names and shapes, in the order files write them. */
-    static Shape object(Object... pairs) {
-        return new Shape(Type.OBJECT, pairsToMap(pairs));
+    /**
+     * The object shape of a table's fields (dotted keys become nested objects), with {@code first}
+     * keys ahead of them (e.g. the header keys).
+     */
+    static Shape of(List<String> first, List<FieldDef> fields) {
+        Map<String, Object> tree = new LinkedHashMap<>();
+        for (String k : first) {
+            tree.put(k, VALUE);
+        }
+        for (FieldDef f : fields) {
+            put(tree, f.key().split("\\."), 0);
+        }
+        return build(tree);
     }
 
-    /** A name or an object of the given shape. */
-    static Shape nameOr(Shape object) {
-        return new Shape(Type.NAME_OR_OBJECT, object.keys);
+    @SuppressWarnings("unchecked")
+    private static void put(Map<String, Object> tree, String[] parts, int i) {
+        if (i == parts.length - 1) {
+            tree.putIfAbsent(parts[i], VALUE);
+            return;
+        }
+        Object child = tree.get(parts[i]);
+        if (!(child instanceof Map)) {
+            child = new LinkedHashMap<String, Object>();
+            tree.put(parts[i], child);
+        }
+        put((Map<String, Object>) child, parts, i + 1);
     }
 
-    /** This object shape with more keys (first) or some keys left out. */
-    Shape with(Map<String, Shape> extraFirst, Set<String> without) {
-        Map<String, Shape> m = new LinkedHashMap<>(extraFirst);
-        keys.forEach((k, v) -> {
-            if (!without.contains(k)) {
-                m.put(k, v);
-            }
-        });
+    @SuppressWarnings("unchecked")
+    private static Shape build(Map<String, Object> tree) {
+        Map<String, Shape> keys = new LinkedHashMap<>();
+        tree.forEach((k, v) -> keys.put(k, v instanceof Map ? build((Map<String, Object>) v) : (Shape) v));
+        return new Shape(Type.OBJECT, keys);
+    }
+
+    /** This shape with {@code key} holding a name or an object of {@code body}'s keys. */
+    Shape withNameOr(String key, Shape body) {
+        Map<String, Shape> m = new LinkedHashMap<>(keys);
+        m.put(key, new Shape(Type.NAME_OR_OBJECT, body.keys));
         return new Shape(type, m);
     }
 
-    private static Map<String, Shape> pairsToMap(Object... pairs) {
-        Map<String, Shape> m = new LinkedHashMap<>();
-        for (int i = 0; i < pairs.length; i += 2) {
-            m.put((String) pairs[i], (Shape) pairs[i + 1]);
-        }
-        return m;
+    /** The keys allowed at the top, in order. */
+    List<String> topKeys() {
+        return List.copyOf(keys.keySet());
     }
 
     /**
      * Checks a document's tree against this (object) shape.
      *
-     * @return one unreadable finding per unknown key or wrong type; empty when the structure is right
+     * @return one error finding per unknown key and per plain value where an object belongs (or
+     *         the other way round); empty when the structure is right
      */
     List<Finding> check(JsonDocument doc) {
         List<Finding> out = new ArrayList<>();
@@ -113,24 +114,36 @@ final class Shape {
 
     private void checkValue(JsonDocument doc, JsonNode v, String path, List<Finding> out) {
         boolean ok = switch (type) {
-            case NUMBER -> v.isNumber();
-            case INTEGER -> v.isIntegralNumber() || v.isNumber() && v.doubleValue() == Math.rint(v.doubleValue())
-                    && Math.abs(v.doubleValue()) < 1e9;
-            case TEXT -> v.isString();
-            case BOOLEAN -> v.isBoolean();
-            case ANGLE, NUMBER_OR_TEXT -> v.isNumber() || v.isString();
+            case VALUE -> !v.isObject() && !v.isArray() && !v.isNull();
             case OBJECT -> v.isObject();
             case NAME_OR_OBJECT -> v.isString() || v.isObject();
         };
         if (!ok) {
+            String words = switch (type) {
+                case VALUE -> "a single value";
+                case OBJECT -> "an object { ... }";
+                case NAME_OR_OBJECT -> "a name or an object { ... }";
+            };
             out.add(InputCode.INPUT_WRONG_TYPE.at(path,
-                    doc.at(path) + ": " + path + " must be " + type.words + ", was " + describe(v), null));
+                    doc.at(path) + ": " + path + " must be " + words + ", was " + describe(v), null));
         } else if (v.isObject()) {
             checkObject(doc, v, path, out);
         }
     }
 
-    private static String describe(JsonNode v) {
+    /** What a value of this type is, in words. */
+    static String words(FieldType type) {
+        return switch (type) {
+            case NUMBER -> "a number";
+            case INTEGER -> "a whole number";
+            case TEXT, CHOICE -> "a text";
+            case BOOLEAN -> "true or false";
+            case ANGLE -> "an angle (a number of degrees or a text like \"13°14'12\\\"\")";
+        };
+    }
+
+    /** A JSON value in words, for messages. */
+    static String describe(JsonNode v) {
         if (v.isNull()) {
             return "null";
         }
@@ -143,6 +156,9 @@ final class Shape {
         }
         if (v.isArray()) {
             return "a list";
+        }
+        if (v.isNumber()) {
+            return org.hobwright.text.Decimal.readable(v.doubleValue());
         }
         return v.toString();
     }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.TemplateFields;
 import org.hobwright.api.job.Units;
 import tools.jackson.databind.node.ObjectNode;
 
@@ -14,20 +15,18 @@ final class TemplateReader {
 
     static Loaded<CycleTemplate> read(JsonDocument doc) {
         return FileFormat.TEMPLATE.open(doc).then(d -> {
-            List<Finding> out = new ArrayList<>();
+            List<Finding> out = new ArrayList<>(FileFormat.TEMPLATE.structure(d));
             FieldReader f = FieldReader.root(d, out, Units.MM);
             Optional<Units> units = f.units("units");
             if (units.isEmpty()) {
                 return Loaded.unreadable(out);
             }
             f = f.withUnits(units.get());
-            String machine = f.requiredText("machine", "name the machine profile this template belongs to").orElse("");
-            String name = f.requiredText("name", "give the template a name").orElse("");
-            boolean namesOk = !machine.isEmpty() && f.checkName("machine", machine)
-                    & !name.isEmpty() && f.checkName("name", name);
-            String description = f.text("description").orElse("");
+            String machine = f.text(TemplateFields.MACHINE).orElse("");
+            String name = f.text(TemplateFields.NAME).orElse("");
+            String description = f.text(TemplateFields.DESCRIPTION).orElse("");
             CycleReader.read(f.child("cycle"), false);
-            if (!namesOk || Finding.anyError(out)) {
+            if (Finding.anyError(out)) {
                 return Loaded.failed(out);
             }
             ObjectNode cycle = d.root().get("cycle") instanceof ObjectNode c ? c : d.root().objectNode();

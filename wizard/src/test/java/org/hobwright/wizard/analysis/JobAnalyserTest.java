@@ -158,33 +158,6 @@ class JobAnalyserTest {
         assertTrue(f.message().contains("it would fit a profile shift of"), f.message());
     }
 
-    // Plausibility ranges: the error names the field and the allowed range (common practice, no source).
-    @ParameterizedTest
-    @CsvSource(delimiter = '|', value = {
-        "teeth|2|GEAR_TEETH_RANGE|gear.teeth|5 to 2000",
-        "module|0.01|GEAR_MODULE_RANGE|gear.module|module 0.05 to 100 mm",
-        "dp|1000|GEAR_MODULE_RANGE|gear.diametralPitch|diametral pitch 0.254 to 508 /in",
-        "pressureAngle|5|GEAR_PRESSURE_ANGLE_RANGE|gear.pressureAngle|10° to 45°"})
-    void outOfRangeInputIsAnErrorNamingFieldAndRange(String what, double value, String code, String field,
-                                                     String range) {
-        JobBuilder b = new JobBuilder();
-        switch (what) {
-            case "teeth" -> b.teeth = (int) value;
-            case "module" -> b.pitch = new Pitch.Module(value);
-            case "dp" -> b.pitch = new Pitch.Diametral(value);
-            default -> b.pressureAngle = value;
-        }
-        b.hobPitch = new Pitch.Module(1);
-        b.hobPressureAngle = 20;
-        JobAnalysis a = JobAnalyser.analyse(b.build());
-        Finding f = only(a, code);
-        assertEquals(Severity.ERROR, f.severity());
-        assertEquals(field, f.field());
-        assertTrue(f.message().contains(range), f.message());
-        assertTrue(a.gear().isEmpty());
-        assertTrue(a.inspection().isEmpty());
-    }
-
     @Test
     void hobThatDoesNotMatchTheGear() {
         JobBuilder b = new JobBuilder();

@@ -64,8 +64,8 @@ class PropertyTest {
         }
     }
 
-    // Random jobs anywhere inside the api records' limits, most of them absurd: the analysis never throws, never
-    // yields NaN or infinity, and a gear outside the plausibility ranges always gets an error finding.
+    // Random jobs anywhere inside the api records' limits (the field table's ranges), many of them absurd: the
+    // analysis never throws, never yields NaN or infinity, and an unknown tooth system always gets an error.
     @Test
     void randomInvalidJobsGiveFindingsNeverExceptions() {
         SplittableRandom r = new SplittableRandom(53);
@@ -74,11 +74,11 @@ class PropertyTest {
         int[] reached = new int[3];
         for (int i = 0; i < CASES; i++) {
             JobBuilder b = new JobBuilder();
-            b.teeth = sane(r) ? r.nextInt(6, 201) : r.nextInt(1, 5001);
+            b.teeth = sane(r) ? r.nextInt(6, 201) : r.nextInt(5, 2001);
             double m = sane(r) ? Math.exp(r.nextDouble(Math.log(0.2), Math.log(10)))
-                    : Math.exp(r.nextDouble(Math.log(1e-4), Math.log(1e3)));
+                    : Math.exp(r.nextDouble(Math.log(0.0501), Math.log(99.9)));
             b.pitch = r.nextBoolean() ? new Pitch.Module(m) : new Pitch.Diametral(25.4 / m);
-            b.pressureAngle = sane(r) ? 20 : r.nextDouble(1, 45);
+            b.pressureAngle = sane(r) ? 20 : r.nextDouble(10, 45);
             b.helix = r.nextInt(3) == 0 ? 0 : sane(r) ? r.nextDouble(0, 40) : r.nextDouble(0, 60);
             b.hand = r.nextBoolean() ? Hand.RIGHT : Hand.LEFT;
             b.faceWidth = sane(r) ? r.nextDouble(2, 50) * m : Math.exp(r.nextDouble(Math.log(1e-3), Math.log(1e4)));
@@ -96,8 +96,8 @@ class PropertyTest {
                     : OptionalDouble.of(sane(r) ? r.nextDouble(1.2, 2.5) * m : Math.exp(r.nextDouble(-5, 5)));
             b.toleranceClass = r.nextBoolean() ? OptionalInt.empty() : OptionalInt.of(r.nextInt(1, 12));
             b.drawing = r.nextBoolean() ? DrawingValues.NONE : randomDrawing(r, tip);
-            b.hobPitch = sane(r) ? b.pitch : new Pitch.Module(Math.exp(r.nextDouble(-5, 5)));
-            b.hobPressureAngle = sane(r) ? b.pressureAngle : r.nextDouble(1, 45);
+            b.hobPitch = sane(r) ? b.pitch : new Pitch.Module(Math.exp(r.nextDouble(Math.log(0.0501), Math.log(99.9))));
+            b.hobPressureAngle = sane(r) ? b.pressureAngle : r.nextDouble(10, 45);
             b.starts = r.nextInt(1, 13);
             b.hobHand = r.nextBoolean() ? Hand.RIGHT : Hand.LEFT;
             b.hobDiameter = sane(r) ? r.nextDouble(10, 40) * m : Math.exp(r.nextDouble(-3, 7));
@@ -116,8 +116,7 @@ class PropertyTest {
             reached[0] += a.gear().isPresent() ? 1 : 0;
             reached[1] += a.inspection().isPresent() ? 1 : 0;
             reached[2] += a.hobSetup().isPresent() ? 1 : 0;
-            boolean implausible = b.teeth < 5 || b.teeth > 2000 || m < 0.05 || m > 100 || b.pressureAngle < 10
-                    || b.system.equals("no-such-system");
+            boolean implausible = b.system.equals("no-such-system");
             if (implausible) {
                 assertTrue(a.hasErrors(), c + " has no error");
                 assertTrue(a.gear().isEmpty(), c);
@@ -138,7 +137,7 @@ class PropertyTest {
 
     private static DrawingValues randomDrawing(SplittableRandom r, double scale) {
         return new DrawingValues(od(r, scale), od(r, scale), od(r, scale), od(r, scale / 10),
-                r.nextBoolean() ? OptionalInt.empty() : OptionalInt.of(r.nextInt(-3, 50)), od(r, scale / 5),
+                r.nextBoolean() ? OptionalInt.empty() : OptionalInt.of(r.nextInt(1, 50)), od(r, scale / 5),
                 od(r, scale / 20), od(r, scale));
     }
 

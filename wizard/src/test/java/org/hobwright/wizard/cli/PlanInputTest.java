@@ -9,6 +9,8 @@ import java.io.OutputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 import org.junit.jupiter.api.io.TempDir;
 
 /** Inputs that cannot be read end with one line and exit 2; a job with errors exits 1; nothing is written. */
@@ -71,10 +73,30 @@ class PlanInputTest {
     }
 
     @Test
-    void unknownKeyNamesTheKey() throws IOException {
+    void unknownKeyIsAJobErrorNamingTheKey() throws IOException {
         String text = Store.builtinText("jobs/metering-pump-gear.json").replace("\"teeth\"", "\"teeht\"");
         Path job = Files.writeString(dir.resolve("typo.json"), text);
-        assertUnreadable(Cli.run(dir, "plan", job.toString(), "--out", out().toString()), "teeht");
+        Cli.Run r = Cli.run(dir, "plan", job.toString(), "--out", out().toString());
+        assertEquals(ExitCodes.JOB_ERRORS, r.code(), r::toString);
+        assertTrue(r.out().contains("unknown key \"teeht\""), r::toString);
+        assertTrue(r.out().contains("gear.teeth is required"), r::toString);
+        assertFalse(Files.exists(out()), "nothing may be written");
+    }
+
+    /**
+     * One rule for wrong values: a number out of the field's range and a value of the wrong type are
+     * both errors of a readable job (exit 1, every finding printed), with the limits of the field table.
+     */
+    @ParameterizedTest
+    @ValueSource(strings = {"-3", "\"forty\"", "3", "2001", "24.5", "1e300"})
+    void everyWrongTeethValueIsAJobError(String teeth) throws IOException {
+        String text = Store.builtinText("jobs/metering-pump-gear.json").replace("\"teeth\": 24", "\"teeth\": " + teeth);
+        Path job = Files.writeString(dir.resolve("teeth.json"), text);
+        Cli.Run r = Cli.run(dir, "plan", job.toString(), "--out", out().toString());
+        assertEquals(ExitCodes.JOB_ERRORS, r.code(), r::toString);
+        assertTrue(r.out().contains("gear.teeth must be"), r::toString);
+        assertTrue(r.out().length() < 2000, "a short message: " + r);
+        assertFalse(Files.exists(out()), "nothing may be written");
     }
 
     @Test

@@ -14,7 +14,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 import org.hobwright.api.wizard.StepId;
-import org.hobwright.wizard.steps.Field;
+import org.hobwright.api.job.FieldDef;
 import org.hobwright.wizard.steps.StepFields;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -38,6 +38,18 @@ class WizardEndToEndTest {
         loader = new URLClassLoader(new URL[] {dir.resolve("extra").toUri().toURL()}, getClass().getClassLoader());
     }
 
+    /** The built-in sample job as a file, to start the wizard from with {@code --job}. */
+    private Path sample() throws IOException {
+        return Files.writeString(dir.resolve("sample.json"), Store.builtinText("jobs/metering-pump-gear.json"));
+    }
+
+    /** The wizard started from the sample job, with piped answers and more arguments. */
+    private Cli.Run wizardOnSample(List<String> in, String... more) throws IOException {
+        List<String> args = new ArrayList<>(List.of("wizard", "--job", sample().toString()));
+        args.addAll(List.of(more));
+        return Cli.run(dir.resolve("home"), String.join("\n", in) + "\n", loader, args.toArray(String[]::new));
+    }
+
     /**
      * Enter for every question of a step, except the answers given. The custom rack factors are not
      * asked (the sample's tooth system is not custom), and the drawing's values are declined with
@@ -46,8 +58,8 @@ class WizardEndToEndTest {
     private static List<String> step(StepId id, java.util.Map<String, List<String>> answers) {
         List<String> lines = new ArrayList<>();
         boolean drawingAsked = false;
-        for (Field f : StepFields.of(id)) {
-            if (f.key().startsWith("gear.custom.")) {
+        for (FieldDef f : StepFields.of(id)) {
+            if (f.key().startsWith("gear.custom.") || StepFields.splineOnly(f.key())) {
                 continue;
             }
             if (f.key().startsWith("gear.drawing.")) {
@@ -78,8 +90,7 @@ class WizardEndToEndTest {
         in.add("yes");                                        // write the outputs
         in.add("");                                           // no template
         Path wizardOut = dir.resolve("wizard-out");
-        Cli.Run wizard = Cli.run(dir.resolve("home"), String.join("\n", in) + "\n", loader,
-                "wizard", "--out", wizardOut.toString(), "--date", "2026-12-01");
+        Cli.Run wizard = wizardOnSample(in, "--out", wizardOut.toString(), "--date", "2026-12-01");
         assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
         assertTrue(wizard.out().contains("is not a whole number"), "a wrong answer is asked again with the reason");
         assertTrue(wizard.out().contains("Tooth count z from the drawing."), "'?' prints the help");
@@ -96,7 +107,10 @@ class WizardEndToEndTest {
 
         List<String> names = names(planOut);
         assertFalse(names.isEmpty());
-        assertEquals(names, names(wizardOut));
+        List<String> wizardNames = new ArrayList<>(names);
+        wizardNames.add("metering-pump-gear.job.json");
+        wizardNames.sort(null);
+        assertEquals(wizardNames, names(wizardOut), "the outputs and the job file of the answers");
         for (String name : names) {
             assertArrayEquals(Files.readAllBytes(planOut.resolve(name)), Files.readAllBytes(wizardOut.resolve(name)),
                     name);
@@ -104,10 +118,13 @@ class WizardEndToEndTest {
     }
 
     @Test
-    void customFactorsAndDrawingValuesAreAskedOnlyWhenTheyApply() {
+    void customFactorsAndDrawingValuesAreAskedOnlyWhenTheyApply() throws IOException {
         List<String> in = new ArrayList<>();
         boolean drawingAsked = false;
-        for (Field f : StepFields.of(StepId.GEAR)) {
+        for (FieldDef f : StepFields.of(StepId.GEAR)) {
+            if (StepFields.splineOnly(f.key())) {
+                continue;                                              // not asked for a gear
+            }
             switch (f.key()) {
                 case "gear.toothSystem" -> in.add("custom");
                 case "gear.custom.addendum" -> in.add("1");
@@ -125,16 +142,15 @@ class WizardEndToEndTest {
                 }
             }
         }
-        Cli.Run r = Cli.run(dir.resolve("home"), String.join("\n", in) + "\n", loader, "wizard");
+        Cli.Run r = wizardOnSample(in);
         assertTrue(r.out().contains("Custom addendum factor"), r::toString);
         assertTrue(r.out().contains("Compare with values printed on the drawing?"), r::toString);
         assertTrue(r.out().contains("DRAWING_OUTSIDE_DIAMETER"), r::toString);
     }
 
     @Test
-    void theSampleIsNotAskedForCustomFactorsNorDrawingValues() {
-        Cli.Run r = Cli.run(dir.resolve("home"), String.join("\n", step(StepId.GEAR, java.util.Map.of())) + "\n",
-                loader, "wizard");
+    void theSampleIsNotAskedForCustomFactorsNorDrawingValues() throws IOException {
+        Cli.Run r = wizardOnSample(step(StepId.GEAR, java.util.Map.of()));
         assertFalse(r.out().contains("Custom addendum factor"), r::toString);
         assertFalse(r.out().contains("Drawing: outside diameter"), r::toString);
         assertTrue(r.out().contains("Step 2 of 5"), r::toString);
@@ -142,8 +158,8 @@ class WizardEndToEndTest {
 
     /** A change of unit shows the remark and asks the later fields in the new unit, their values converted. */
     @Test
-    void aChangeOfUnitIsShownOnTheFollowingQuestions() {
-        Cli.Run r = Cli.run(dir.resolve("home"), "\nin\n\n\n\n\n\n\n\n\n", loader, "wizard");
+    void aChangeOfUnitIsShownOnTheFollowingQuestions() throws IOException {
+        Cli.Run r = wizardOnSample(List.of("", "in", "", "", "", "", "", "", "", ""));
         assertTrue(r.out().contains("converted to inch units"), r::toString);
         // the sample's face width of 8 mm, over 25.4 mm to the inch, to 10 significant digits
         assertTrue(r.out().contains("Face width (in) [0.3149606299]"), r::toString);
@@ -160,13 +176,17 @@ class WizardEndToEndTest {
         in.add("../x");                                       // a name that would leave the folder
         in.add("fine-finish");
         Path home = dir.resolve("home");
-        Cli.Run wizard = Cli.run(home, String.join("\n", in) + "\n", loader, "wizard", "--out",
-                dir.resolve("out").toString());
+        Cli.Run wizard = wizardOnSample(in, "--out", dir.resolve("out").toString());
         assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
         assertFalse(Files.exists(dir.resolve("out")));
         assertTrue(wizard.out().contains("Saved template fine-finish"), wizard::toString);
         Path saved = home.resolve("templates/varrow-sl16/fine-finish.json");
-        assertTrue(Files.readString(saved).contains("\"finishFeed\""), Files.readString(saved));
+        var cycle = tools.jackson.databind.json.JsonMapper.shared().readTree(Files.readString(saved)).path("cycle");
+        // the values the plan used, not only the answers typed: speed and feeds the planner chose too
+        for (String key : List.of("workMaterial", "cuttingSpeed", "finishFeed", "finishStock", "method", "coolant")) {
+            assertTrue(cycle.has(key), key + " in " + cycle);
+        }
+        assertEquals(0.4, cycle.path("finishFeed").doubleValue(), 1e-12);
 
         Path job = Files.writeString(dir.resolve("job.json"), Store.builtinText("jobs/metering-pump-gear.json"));
         Cli.Run plan = Cli.run(home, "", loader, "plan", job.toString(), "--template", "fine-finish", "--json");

@@ -6,19 +6,21 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.job.FieldDef;
+import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.StepId;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 class FieldCheckTest {
-    private static Field field(String key) {
+    private static FieldDef field(String key) {
         return StepFields.find(key).orElseThrow();
     }
 
     private static Optional<String> code(String key, String text) {
-        Field f = field(key);
-        return FieldCheck.check(f, text, f.choices()).map(Finding::code);
+        FieldDef f = field(key);
+        return FieldCheck.check(f, text, f.choices(), Units.MM).map(Finding::code);
     }
 
     @ParameterizedTest(name = "{0} = \"{1}\" -> {2}")
@@ -47,9 +49,9 @@ class FieldCheckTest {
 
     @Test
     void anOutOfRangeMessageNamesTheLimits() {
-        Finding f = FieldCheck.check(field("gear.pressureAngle"), "50", List.of()).orElseThrow();
+        Finding f = FieldCheck.check(field("gear.pressureAngle"), "50", List.of(), Units.MM).orElseThrow();
         assertEquals("gear.pressureAngle", f.field());
-        assertTrue(f.message().contains("from 1 to 45"), f.message());
+        assertTrue(f.message().contains("between 10 and 45°"), f.message());
     }
 
     @Test

@@ -156,7 +156,8 @@ class JobReaderTest {
     void unknownKeyNamesKeyFileAndLine() throws Exception {
         String json = sampleJob().replace("\"teeth\": 24,", "\"teeth\": 24,\n    \"colour\": \"blue\",");
         Loaded<HobJob> loaded = reader.read(json, "pump.json");
-        assertTrue(loaded.unreadable());
+        assertFalse(loaded.unreadable(), "a wrong key is an error of a readable job (exit 1)");
+        assertTrue(loaded.value().isEmpty());
         Finding f = loaded.findings().get(0);
         assertEquals("INPUT_UNKNOWN_KEY", f.code());
         assertEquals("gear.colour", f.field());

@@ -10,6 +10,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Optional;
+import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.HobJob;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -105,10 +106,22 @@ class UnreadableInputTest {
                 "INPUT_UNITS", "\"cm\"");
     }
 
+    /**
+     * A value of the wrong type is a wrong value of a readable file, like a value out of its range:
+     * the file is read on and every problem is listed (exit code 1), naming the path and line.
+     */
     @Test
-    void wrongTypeNamesThePathAndLine() {
+    void wrongTypeIsAWrongValueNamingThePathAndLine() {
         String json = "{\"format\": \"hobwright-job\", \"version\": 1,\n \"units\": \"mm\",\n \"gear\": {\"teeth\": \"24\"}}";
-        assertUnreadable(reader.read(json, "t.json"), "INPUT_WRONG_TYPE", "t.json:3:", "gear.teeth must be a whole number",
-                "\"24\"");
+        Loaded<HobJob> loaded = reader.read(json, "t.json");
+        assertFalse(loaded.unreadable(), loaded.findings().toString());
+        assertTrue(loaded.value().isEmpty());
+        Finding wrong = loaded.findings().stream().filter(f -> f.code().equals("INPUT_WRONG_TYPE")).findFirst()
+                .orElseThrow();
+        assertEquals("gear.teeth", wrong.field());
+        assertTrue(wrong.message().startsWith("t.json:3: gear.teeth must be a whole number, was the text \"24\""),
+                wrong.message());
+        assertTrue(loaded.findings().stream().anyMatch(f -> f.field().equals("gear.faceWidth")),
+                "the rest of the file is still read: " + loaded.findings());
     }
 }
