@@ -21,10 +21,10 @@ import java.lang.annotation.Target;
 @ApiStatus(since = "1.1")
 public @interface ApiStatus {
 
-    /** The api version ({@code major.minor}) this type appeared in. */
+    /** {@return the api version ({@code major.minor}) this type appeared in} */
     String since();
 
-    /** How far a host may rely on the type. */
+    /** {@return how far a host may rely on the type} */
     Stability stability() default Stability.STABLE;
 
     /** How far a host may rely on a type. */

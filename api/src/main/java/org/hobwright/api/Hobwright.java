@@ -189,17 +189,17 @@ public final class Hobwright implements AutoCloseable {
         return open().outputs(List.of(planned), date);
     }
 
-    /** The planner, with the library's cutting data and defaults. */
+    /** {@return the planner, with the library's cutting data and defaults} */
     public CyclePlanner planner() {
         return open().planner();
     }
 
-    /** The usable output writers. */
+    /** {@return the usable output writers} */
     public List<CycleWriter> writers() {
         return open().writers();
     }
 
-    /** A wizard session with no answers yet (no sample values), on this library. */
+    /** {@return A wizard session with no answers yet (no sample values), on this library} */
     public Wizard wizard() {
         return open().wizard(Optional.empty());
     }
@@ -215,17 +215,17 @@ public final class Hobwright implements AutoCloseable {
         return open().wizard(Optional.of(start));
     }
 
-    /** The machines, templates, dialects and cutting data. */
+    /** {@return the machines, templates, dialects and cutting data} */
     public HostLibrary library() {
         return open().library();
     }
 
-    /** Providers that were skipped while opening, one finding each (show them to the user). */
+    /** {@return providers that were skipped while opening, one finding each (show them to the user)} */
     public List<Finding> problems() {
         return problems;
     }
 
-    /** True once {@link #close()} was called. */
+    /** {@return true once {@link #close()} was called} */
     public boolean isClosed() {
         return closed;
     }

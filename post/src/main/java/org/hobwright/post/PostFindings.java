@@ -56,7 +56,9 @@ public final class PostFindings {
      * @return a refusal, or empty when the cycle was planned for that job or does not say
      */
     public static Optional<WriteResult> otherJob(HobCycle cycle, WriteContext context, String writer) {
-        if (cycle.plannedFor().isEmpty() || cycle.plannedFor().get().equals(context.job())) {
+        // the same instance needs no comparison (a record's equals is bootstrapped at its first call)
+        if (cycle.plannedFor().isEmpty() || cycle.plannedFor().get() == context.job()
+                || cycle.plannedFor().get().equals(context.job())) {
             return Optional.empty();
         }
         return Optional.of(WriteResult.refused(List.of(PostCode.POST_CYCLE_OTHER_JOB.at("job",

@@ -23,6 +23,18 @@ import org.hobwright.api.internal.Checks;
 public record Finding(Severity severity, String code, String field, String message, Optional<String> fix,
                       String source) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param severity how much it matters
+     * @param code stable code, never reused for another meaning (e.g. {@code GEAR_UNDERCUT})
+     * @param field path of the input field concerned, e.g. {@code gear.profileShift}; {@code job} when none fits
+     * @param message what is wrong, in plain words, with the numbers
+     * @param fix what would fix it, when there is a suggestion
+     * @param source the standard, handbook or rule the check rests on ("common practice, no source" for a rule of
+     *     thumb)
+     */
     public Finding {
         Checks.present("severity", severity);
         Checks.text("code", code);
@@ -32,32 +44,66 @@ public record Finding(Severity severity, String code, String field, String messa
         Checks.text("source", source);
     }
 
-    /** An error finding. */
+    /**
+     * An error finding.
+     *
+     * @param code stable code, never reused for another meaning (e.g. {@code GEAR_UNDERCUT})
+     * @param field path of the input field concerned, e.g. {@code gear.profileShift}; {@code job} when none fits
+     * @param message what is wrong, in plain words, with the numbers
+     * @param fix what would fix it, when there is a suggestion
+     * @param source the standard, handbook or rule the check rests on ("common practice, no source" for a rule of
+     *     thumb)
+     * @return an error finding
+     */
     public static Finding error(String code, String field, String message, String fix, String source) {
         return new Finding(Severity.ERROR, code, field, message, Optional.ofNullable(fix), source);
     }
 
-    /** A warning finding. */
+    /**
+     * A warning finding.
+     *
+     * @param code stable code, never reused for another meaning (e.g. {@code GEAR_UNDERCUT})
+     * @param field path of the input field concerned, e.g. {@code gear.profileShift}; {@code job} when none fits
+     * @param message what is wrong, in plain words, with the numbers
+     * @param fix what would fix it, when there is a suggestion
+     * @param source the standard, handbook or rule the check rests on ("common practice, no source" for a rule of
+     *     thumb)
+     * @return A warning finding
+     */
     public static Finding warning(String code, String field, String message, String fix, String source) {
         return new Finding(Severity.WARNING, code, field, message, Optional.ofNullable(fix), source);
     }
 
-    /** An info finding. */
+    /**
+     * An info finding.
+     *
+     * @param code stable code, never reused for another meaning (e.g. {@code GEAR_UNDERCUT})
+     * @param field path of the input field concerned, e.g. {@code gear.profileShift}; {@code job} when none fits
+     * @param message what is wrong, in plain words, with the numbers
+     * @param source the standard, handbook or rule the check rests on ("common practice, no source" for a rule of
+     *     thumb)
+     * @return an info finding
+     */
     public static Finding info(String code, String field, String message, String source) {
         return new Finding(Severity.INFO, code, field, message, Optional.empty(), source);
     }
 
-    /** True when this finding is an error. */
+    /** {@return true when this finding is an error} */
     public boolean isError() {
         return severity == Severity.ERROR;
     }
 
-    /** True when any of the findings is an error. */
+    /**
+     * True when any of the findings is an error.
+     *
+     * @param findings the findings
+     * @return true when any of the findings is an error
+     */
     public static boolean anyError(Collection<Finding> findings) {
         return findings.stream().anyMatch(Finding::isError);
     }
 
-    /** One line for a terminal: {@code error GEAR_UNDERCUT gear.teeth: message (fix: ...)}. */
+    /** {@return one line for a terminal: {@code error GEAR_UNDERCUT gear.teeth: message (fix: ...)}} */
     public String line() {
         return severity.word() + " " + code + " " + field + ": " + message
                 + fix.map(f -> " (fix: " + f + ")").orElse("");

@@ -13,21 +13,21 @@ import org.hobwright.api.ApiStatus;
 @ApiStatus(since = "1.1")
 public interface FindingCode {
 
-    /** The code as it appears in findings, e.g. {@code GEAR_UNDERCUT}. */
+    /** {@return the code as it appears in findings, e.g. {@code GEAR_UNDERCUT}} */
     String code();
 
-    /** The severity findings of this code have unless the case calls for another of {@link #severities()}. */
+    /** {@return the severity findings of this code have unless the case calls for another of {@link #severities()}} */
     Severity severity();
 
-    /** Every severity findings of this code may take; by default only {@link #severity()}. */
+    /** {@return every severity findings of this code may take; by default only {@link #severity()}} */
     default Set<Severity> severities() {
         return Set.of(severity());
     }
 
-    /** What the code means, one line. */
+    /** {@return what the code means, one line} */
     String meaning();
 
-    /** The standard, handbook or rule it rests on ("common practice, no source" for a rule of thumb). */
+    /** {@return the standard, handbook or rule it rests on ("common practice, no source" for a rule of thumb)} */
     String source();
 
     /**

@@ -12,7 +12,7 @@ public enum Severity {
     /** Worth knowing; no action needed. */
     INFO;
 
-    /** Lower-case word used in reports: {@code error}, {@code warning}, {@code info}. */
+    /** {@return lower-case word used in reports: {@code error}, {@code warning}, {@code info}} */
     public String word() {
         return name().toLowerCase(java.util.Locale.ROOT);
     }

@@ -17,10 +17,10 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.0")
 public sealed interface CycleStep {
 
-    /** Duration of this step, s. */
+    /** {@return duration of this step, s} */
     double seconds();
 
-    /** Short lower-case kind used in the cycle CSV, e.g. {@code rapid}. */
+    /** {@return short lower-case kind used in the cycle CSV, e.g. {@code rapid}} */
     String kind();
 
     /**
@@ -30,6 +30,12 @@ public sealed interface CycleStep {
      */
     @ApiStatus(since = "1.0")
     record Comment(String text) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param text the remark, one line
+         */
         public Comment {
             Checks.present("text", text);
             if (text.contains("\n") || text.contains("\r")) {
@@ -78,6 +84,14 @@ public sealed interface CycleStep {
     @ApiStatus(since = "1.0")
     record Swivel(double machineAngleDeg, double seconds, @ApiStatus(since = "1.1") boolean programmable)
             implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param machineAngleDeg the setting in the machine's own sign convention, degrees
+         * @param seconds time, s
+         * @param programmable true when the control turns the swivel axis; false for a manual holder
+         */
         public Swivel {
             Checks.range("machineAngleDeg", machineAngleDeg, -90, 90);
             Checks.nonNegative("seconds", seconds);
@@ -115,6 +129,19 @@ public sealed interface CycleStep {
     @ApiStatus(since = "1.0")
     record SyncOn(int hobTurns, int workTurns, double hobRpm, double workRpm, Rotation hobRotation,
                   Rotation workRotation, double differentialDegPerMm, double seconds) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param hobTurns hob turns of the ratio (whole number)
+         * @param workTurns work turns of the ratio (whole number)
+         * @param hobRpm hob speed, rpm
+         * @param workRpm work speed from the ratio, rpm (without the helical addition)
+         * @param hobRotation hob sense of rotation
+         * @param workRotation work sense of rotation
+         * @param differentialDegPerMm additional work rotation per mm of axial hob travel toward the
+         * @param seconds time, s
+         */
         public SyncOn {
             Checks.atLeast("hobTurns", hobTurns, 1);
             Checks.atLeast("workTurns", workTurns, 1);
@@ -139,6 +166,12 @@ public sealed interface CycleStep {
      */
     @ApiStatus(since = "1.0")
     record SyncOff(double seconds) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param seconds time, s
+         */
         public SyncOff {
             Checks.nonNegative("seconds", seconds);
         }
@@ -156,6 +189,12 @@ public sealed interface CycleStep {
      */
     @ApiStatus(since = "1.0")
     record SpindlesStop(double seconds) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param seconds time, s
+         */
         public SpindlesStop {
             Checks.nonNegative("seconds", seconds);
         }
@@ -173,6 +212,12 @@ public sealed interface CycleStep {
      */
     @ApiStatus(since = "1.0")
     record Dwell(double seconds) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param seconds time, s
+         */
         public Dwell {
             Checks.nonNegative("seconds", seconds);
         }
@@ -191,6 +236,13 @@ public sealed interface CycleStep {
      */
     @ApiStatus(since = "1.0")
     record HobShift(double positionMm, double seconds) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param positionMm shift position from the hob's start end, mm
+         * @param seconds time, s
+         */
         public HobShift {
             Checks.nonNegative("positionMm", positionMm);
             Checks.nonNegative("seconds", seconds);
@@ -214,6 +266,16 @@ public sealed interface CycleStep {
     @ApiStatus(since = "1.0")
     record Rapid(int pass, double diameterMm, double axialMm, double seconds,
                  @ApiStatus(since = "1.1") double hobTipDiameterMm) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param pass pass number (1 = first), 0 outside the passes
+         * @param diameterMm work diameter the hob tip reaches at the end of the move, mm
+         * @param axialMm hob centre along the work axis from the front face, mm
+         * @param seconds time, s
+         * @param hobTipDiameterMm the hob's tip (outside) diameter d_a0, mm; 0 when not given
+         */
         public Rapid {
             Checks.atLeast("pass", pass, 0);
             Checks.nonNegative("diameterMm", diameterMm);
@@ -267,6 +329,18 @@ public sealed interface CycleStep {
     @ApiStatus(since = "1.0")
     record Feed(int pass, double diameterMm, double axialMm, double feedMmPerRev, boolean cutting,
                 double seconds, @ApiStatus(since = "1.1") double hobTipDiameterMm) implements CycleStep {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param pass pass number, 0 outside the passes
+         * @param diameterMm work diameter the hob tip reaches, mm
+         * @param axialMm hob centre along the work axis, mm
+         * @param feedMmPerRev feed per work revolution, mm
+         * @param cutting true when the hob removes material
+         * @param seconds time, s
+         * @param hobTipDiameterMm the hob's tip (outside) diameter d_a0, mm; 0 when not given
+         */
         public Feed {
             Checks.atLeast("pass", pass, 0);
             Checks.nonNegative("diameterMm", diameterMm);

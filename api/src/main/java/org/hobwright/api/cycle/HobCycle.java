@@ -38,6 +38,22 @@ public record HobCycle(
         @ApiStatus(since = "1.1") Optional<HobJob> plannedFor,
         @ApiStatus(since = "1.1") Optional<SplineData> spline) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param gear computed gear geometry
+     * @param inspection inspection values
+     * @param tolerances ISO 1328-1 flank tolerances, when a class is known
+     * @param setup setup values
+     * @param steps the ordered steps (empty when the job has errors)
+     * @param summary time and predicted quality
+     * @param simulation generating simulation, when run
+     * @param findings every finding, errors first
+     * @param plannedFor the job the cycle was planned for (empty from a planner built against api 1.0); writers
+     *     refuse to write the cycle with another job
+     * @param spline for a spline job, the spline's limits, pins and form check
+     */
     public HobCycle {
         Checks.present("gear", gear);
         Checks.present("inspection", inspection);
@@ -55,7 +71,18 @@ public record HobCycle(
         }
     }
 
-    /** A cycle that does not say which job it was planned for (as planners built against api 1.0 make). */
+    /**
+     * A cycle that does not say which job it was planned for (as planners built against api 1.0 make).
+     *
+     * @param gear computed gear geometry
+     * @param inspection inspection values
+     * @param tolerances ISO 1328-1 flank tolerances, when a class is known
+     * @param setup setup values
+     * @param steps the ordered steps (empty when the job has errors)
+     * @param summary time and predicted quality
+     * @param simulation generating simulation, when run
+     * @param findings every finding, errors first
+     */
     public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
                     Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
                     Optional<SimulationData> simulation, List<Finding> findings) {
@@ -63,7 +90,19 @@ public record HobCycle(
                 Optional.empty());
     }
 
-    /** A cycle with the job it was planned for, without spline data (a gear job's). */
+    /**
+     * A cycle with the job it was planned for, without spline data (a gear job's).
+     *
+     * @param gear computed gear geometry
+     * @param inspection inspection values
+     * @param tolerances ISO 1328-1 flank tolerances, when a class is known
+     * @param setup setup values
+     * @param steps the ordered steps (empty when the job has errors)
+     * @param summary time and predicted quality
+     * @param simulation generating simulation, when run
+     * @param findings every finding, errors first
+     * @param plannedFor the job the cycle was planned for; writers refuse to write the cycle with another job
+     */
     public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
                     Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
                     Optional<SimulationData> simulation, List<Finding> findings, Optional<HobJob> plannedFor) {
@@ -94,12 +133,12 @@ public record HobCycle(
                 Optional.of(Checks.present("job", job)), spline);
     }
 
-    /** True when any finding is an error: nothing may be posted. */
+    /** {@return true when any finding is an error: nothing may be posted} */
     public boolean hasErrors() {
         return Finding.anyError(findings);
     }
 
-    /** Sum of the steps' seconds, s. */
+    /** {@return sum of the steps' seconds, s} */
     public double stepSeconds() {
         return steps.stream().mapToDouble(CycleStep::seconds).sum();
     }

@@ -11,6 +11,13 @@ import org.hobwright.api.internal.Checks;
  */
 @ApiStatus(since = "1.0")
 public record Point(double x, double y) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param x first coordinate
+     * @param y second coordinate
+     */
     public Point {
         Checks.finite("x", x);
         Checks.finite("y", y);

@@ -14,13 +14,13 @@ public enum Rotation {
     /** Counter-clockwise, seen as defined above. */
     COUNTER_CLOCKWISE;
 
-    /** {@code clockwise} or {@code counter-clockwise}, the word the cycle CSV and the texts use. */
+    /** {@return {@code clockwise} or {@code counter-clockwise}, the word the cycle CSV and the texts use} */
     @ApiStatus(since = "1.1")
     public String word() {
         return this == CLOCKWISE ? "clockwise" : "counter-clockwise";
     }
 
-    /** The other sense. */
+    /** {@return the other sense} */
     public Rotation reversed() {
         return this == CLOCKWISE ? COUNTER_CLOCKWISE : CLOCKWISE;
     }

@@ -43,6 +43,27 @@ public record SetupValues(
         double differentialDegPerMm,
         double hobShiftMm) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param blankDiameterMm diameter to turn the blank to, mm
+     * @param touchOffDiameterMm diameter at which the hob tip touches the blank, mm
+     * @param finalInfeedDiameterMm final work diameter of the hob tip (the root diameter), mm
+     * @param leadAngleDeg hob lead angle γ (magnitude), degrees
+     * @param swivelAngleDeg swivel angle η = β − γ (signed: right hand positive), degrees
+     * @param swivelSettingDeg the setting in the machine's sign convention, rounded to the holder's resolution, degrees
+     * @param swivelSettingText the setting as the holder's scale reads it (decimal or degrees-minutes)
+     * @param swivelAngleDms η as degrees-minutes-seconds, e.g. {@code 13° 14′ 12.4″}
+     * @param swivelDirection the direction in words for this machine
+     * @param cuttingSpeedMPerMin cutting speed at the hob tip actually used, m/min
+     * @param hobRpm hob speed, rpm
+     * @param workRpm work speed (from the ratio), rpm
+     * @param syncHobTurns hob turns of the sync ratio
+     * @param syncWorkTurns work turns of the sync ratio
+     * @param differentialDegPerMm helical addition, degrees of work rotation per mm of axial travel (0 for spur)
+     * @param hobShiftMm hob shift position for this part, mm
+     */
     public SetupValues {
         Checks.positive("blankDiameterMm", blankDiameterMm);
         Checks.positive("touchOffDiameterMm", touchOffDiameterMm);

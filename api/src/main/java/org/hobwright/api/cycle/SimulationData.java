@@ -28,6 +28,20 @@ public record SimulationData(
         List<Point> nominalProfile,
         List<Point> deviation) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param profileDeviationMaxMm largest deviation of the simulated flank from the true involute, mm
+     * @param envelopingDepthMm enveloping-cut depth measured on the simulated flank, mm
+     * @param closedFormEnvelopingDepthMm the same estimated by the closed-form formula, mm
+     * @param undercut true when the simulated root cuts into the involute (undercut)
+     * @param activeInvoluteStartDiameterMm diameter where the simulated flank becomes involute, mm
+     * @param simulatedProfile the simulated tooth space outline, root to tip on both flanks, gear centre at the
+     *     origin, tooth space centred on +y, mm
+     * @param nominalProfile the true involute flanks on the same axes, mm
+     * @param deviation deviation along the roll length: x = roll length mm, y = deviation mm
+     */
     public SimulationData {
         Checks.nonNegative("profileDeviationMaxMm", profileDeviationMaxMm);
         Checks.nonNegative("envelopingDepthMm", envelopingDepthMm);

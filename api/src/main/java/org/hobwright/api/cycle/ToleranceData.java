@@ -29,6 +29,20 @@ public record ToleranceData(
         double helixFormUm,
         double helixTotalUm) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param flankToleranceClass class A, 1 to 11
+     * @param singlePitchUm f_pT
+     * @param totalPitchUm F_pT
+     * @param profileSlopeUm f_HαT
+     * @param profileFormUm f_fαT
+     * @param profileTotalUm F_αT
+     * @param helixSlopeUm f_HβT
+     * @param helixFormUm f_fβT
+     * @param helixTotalUm F_βT
+     */
     public ToleranceData {
         Checks.range("flankToleranceClass", flankToleranceClass, 1, 11);
         Checks.positive("singlePitchUm", singlePitchUm);

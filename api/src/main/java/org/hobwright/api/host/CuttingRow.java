@@ -20,6 +20,19 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.1")
 public record CuttingRow(String workMaterial, String hobMaterial, Range cuttingSpeedMPerMin, Range roughFeedMmPerRev,
                          Range finishFeedMmPerRev, double maxChipThicknessMm, String status) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param workMaterial work material key, e.g. {@code steel-case-hardening}
+     * @param hobMaterial hob material key: {@code hss}, {@code hss-coated}, {@code carbide}
+     * @param cuttingSpeedMPerMin cutting speed range at the hob tip, m/min
+     * @param roughFeedMmPerRev axial feed range for roughing, mm per work revolution (modules from the fine-module
+     *     limit on)
+     * @param finishFeedMmPerRev axial feed range for finishing, mm per work revolution (as above)
+     * @param maxChipThicknessMm largest chip thickness, mm
+     * @param status how sure the row is, e.g. "typical, confirm with the hob supplier"
+     */
     public CuttingRow {
         Checks.text("workMaterial", workMaterial);
         Checks.text("hobMaterial", hobMaterial);

@@ -15,10 +15,10 @@ import org.hobwright.api.job.MachineProfile;
 @ApiStatus(since = "1.1")
 public interface HostLibrary {
 
-    /** The library folder. */
+    /** {@return the library folder} */
     Path home();
 
-    /** Names of every machine profile, sorted. */
+    /** {@return names of every machine profile, sorted} */
     List<String> machines();
 
     /**
@@ -46,7 +46,7 @@ public interface HostLibrary {
      */
     Outcome<String> template(String machine, String name);
 
-    /** Names of every NC dialect, sorted. */
+    /** {@return names of every NC dialect, sorted} */
     List<String> dialects();
 
     /**

@@ -17,6 +17,13 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.1")
 public record Outcome<T>(Optional<T> value, List<Finding> findings) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param value the value
+     * @param findings the findings
+     */
     public Outcome {
         Checks.present("value", value);
         findings = Finding.errorsFirst(Checks.present("findings", findings));
@@ -50,7 +57,7 @@ public record Outcome<T>(Optional<T> value, List<Finding> findings) {
         return new Outcome<>(Optional.empty(), findings);
     }
 
-    /** True when there is a value. */
+    /** {@return true when there is a value} */
     public boolean ok() {
         return value.isPresent();
     }

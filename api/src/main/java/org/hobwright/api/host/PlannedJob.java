@@ -17,21 +17,29 @@ import org.hobwright.api.job.HobJob;
 @ApiStatus(since = "1.1")
 public record PlannedJob(HobJob job, HobCycle cycle) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param job the job
+     * @param cycle the cycle planned for it
+     */
     public PlannedJob {
         Checks.present("job", job);
         Checks.present("cycle", cycle);
-        if (cycle.plannedFor().isPresent() && !cycle.plannedFor().get().equals(job)) {
+        // the same instance needs no comparison (a record's equals is bootstrapped at its first call)
+        if (cycle.plannedFor().isPresent() && cycle.plannedFor().get() != job && !cycle.plannedFor().get().equals(job)) {
             throw new IllegalArgumentException("the cycle was planned for job \"" + cycle.plannedFor().get().name()
                     + "\", not for job \"" + job.name() + "\" as given");
         }
     }
 
-    /** True when the cycle has an error finding: nothing may be written. */
+    /** {@return true when the cycle has an error finding: nothing may be written} */
     public boolean hasErrors() {
         return cycle.hasErrors();
     }
 
-    /** The cycle's findings, errors first. */
+    /** {@return the cycle's findings, errors first} */
     public List<Finding> findings() {
         return cycle.findings();
     }

@@ -11,6 +11,13 @@ import org.hobwright.api.internal.Checks;
  */
 @ApiStatus(since = "1.1")
 public record Range(double min, double max) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param min lower end
+     * @param max upper end
+     */
     public Range {
         Checks.positive("min", min);
         Checks.finite("max", max);

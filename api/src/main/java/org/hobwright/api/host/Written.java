@@ -16,6 +16,14 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.1")
 public record Written(Path folder, List<Path> files, List<Finding> findings) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param folder the output folder
+     * @param files the files written, in the order the writers gave them (empty when nothing was written)
+     * @param findings the writers' findings; an error means nothing was written
+     */
     public Written {
         Checks.present("folder", folder);
         files = List.copyOf(Checks.present("files", files));
@@ -25,7 +33,7 @@ public record Written(Path folder, List<Path> files, List<Finding> findings) {
         }
     }
 
-    /** True when the files were written. */
+    /** {@return true when the files were written} */
     public boolean ok() {
         return !Finding.anyError(findings);
     }

@@ -14,7 +14,7 @@ public enum CuttingSense {
     /** Cuts turning counter-clockwise, seen from its drive end. */
     COUNTER_CLOCKWISE;
 
-    /** The word used in job files: {@code clockwise} or {@code counter-clockwise}. */
+    /** {@return the word used in job files: {@code clockwise} or {@code counter-clockwise}} */
     public String word() {
         return this == CLOCKWISE ? "clockwise" : "counter-clockwise";
     }

@@ -43,6 +43,26 @@ public record CycleSettings(
         boolean fastest,
         @ApiStatus(since = "1.1") RunSettings run) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param workMaterial work material key of the cutting-data table, e.g. {@code steel-case-hardening}
+     * @param cuttingSpeedMPerMin the value
+     * @param roughFeedMmPerRev the value
+     * @param finishFeedMmPerRev the value
+     * @param roughDepthMm the value
+     * @param finishStockMm radial stock left for the finishing pass, mm (0 = one pass to full depth)
+     * @param method climb or conventional
+     * @param axialClearanceMm air gap before the approach and after the overrun, mm
+     * @param radialClearanceMm radial gap between the hob tip and the blank when rapid moving, mm
+     * @param coolant coolant on during the cut
+     * @param targets quality limits
+     * @param hobShiftPerPartMm hob shift applied between parts, mm (0 = no shifting)
+     * @param hobShiftEveryParts shift after this many parts, at least 1
+     * @param fastest true to let the optimiser propose the shortest cycle beside the user's plan
+     * @param run batch size, program number, tool station, hob mounting and hob life
+     */
     public CycleSettings {
         Checks.text("cycle.workMaterial", workMaterial);
         Objects.requireNonNull(cuttingSpeedMPerMin, "cuttingSpeedMPerMin");
@@ -63,7 +83,24 @@ public record CycleSettings(
         Checks.present("cycle.run", run);
     }
 
-    /** Settings for one part with the dialect's program number and tool station ({@link RunSettings#DEFAULTS}). */
+    /**
+     * Settings for one part with the dialect's program number and tool station ({@link RunSettings#DEFAULTS}).
+     *
+     * @param workMaterial work material key of the cutting-data table, e.g. {@code steel-case-hardening}
+     * @param cuttingSpeedMPerMin the value
+     * @param roughFeedMmPerRev the value
+     * @param finishFeedMmPerRev the value
+     * @param roughDepthMm the value
+     * @param finishStockMm radial stock left for the finishing pass, mm (0 = one pass to full depth)
+     * @param method climb or conventional
+     * @param axialClearanceMm air gap before the approach and after the overrun, mm
+     * @param radialClearanceMm radial gap between the hob tip and the blank when rapid moving, mm
+     * @param coolant coolant on during the cut
+     * @param targets quality limits
+     * @param hobShiftPerPartMm hob shift applied between parts, mm (0 = no shifting)
+     * @param hobShiftEveryParts shift after this many parts, at least 1
+     * @param fastest true to let the optimiser propose the shortest cycle beside the user's plan
+     */
     @ApiStatus(since = "1.1")
     public CycleSettings(String workMaterial, OptionalDouble cuttingSpeedMPerMin, OptionalDouble roughFeedMmPerRev,
                          OptionalDouble finishFeedMmPerRev, OptionalDouble roughDepthMm, double finishStockMm,

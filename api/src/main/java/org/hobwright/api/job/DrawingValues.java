@@ -33,6 +33,19 @@ public record DrawingValues(
             OptionalDouble.empty(), OptionalDouble.empty(), OptionalInt.empty(), OptionalDouble.empty(),
             OptionalDouble.empty(), OptionalDouble.empty());
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param pitchDiameterMm the value
+     * @param outsideDiameterMm the value
+     * @param rootDiameterMm the value
+     * @param wholeDepthMm the value
+     * @param spanTeeth the value
+     * @param spanWidthMm the value
+     * @param pinDiameterMm the value
+     * @param overPinsMm the value
+     */
     public DrawingValues {
         java.util.Objects.requireNonNull(pitchDiameterMm, "pitchDiameterMm");
         java.util.Objects.requireNonNull(outsideDiameterMm, "outsideDiameterMm");

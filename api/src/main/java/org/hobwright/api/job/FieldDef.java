@@ -27,6 +27,22 @@ import org.hobwright.api.wizard.FieldType;
 @ApiStatus(since = "1.1")
 public record FieldDef(String key, FieldType type, UnitKind unit, FieldRange range, List<String> choices,
                        boolean required, FieldDefault dflt, boolean libraryName, String label, String help) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param key path of the value in its file, e.g. {@code gear.teeth} or {@code travel.radialMax}
+     * @param type how the value is written and entered
+     * @param unit what a number measures (its unit follows the file's units)
+     * @param range the allowed numbers, canonical units ({@link FieldRange#ANY} for other types)
+     * @param choices the allowed words of a {@link FieldType#CHOICE} field (empty when the library supplies them,
+     *     e.g. the machine names)
+     * @param required true when a file must state the value (a default is then only the wizard's proposal)
+     * @param dflt the default and where it comes from
+     * @param libraryName true when the text names a library entry or a file (letters, digits, '.', '_', '-')
+     * @param label short label in plain words
+     * @param help one or two sentences of help
+     */
     public FieldDef {
         Objects.requireNonNull(key, "key");
         Objects.requireNonNull(type, "type");
@@ -54,12 +70,12 @@ public record FieldDef(String key, FieldType type, UnitKind unit, FieldRange ran
         return Optional.empty();
     }
 
-    /** The last part of the key, as written in its object, e.g. {@code teeth}. */
+    /** {@return the last part of the key, as written in its object, e.g. {@code teeth}} */
     public String leaf() {
         return key.substring(key.lastIndexOf('.') + 1);
     }
 
-    /** True for the numeric types (number, whole number, angle). */
+    /** {@return true for the numeric types (number, whole number, angle)} */
     public boolean numeric() {
         return type == FieldType.NUMBER || type == FieldType.INTEGER || type == FieldType.ANGLE;
     }

@@ -34,6 +34,15 @@ public record FieldDefault(String metric, String inch, Origin origin, String sou
     /** "None: must be given". */
     public static final FieldDefault NONE = new FieldDefault("", "", Origin.NONE, "none: must be given");
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param metric the value in a millimetre file, as written there (empty when there is none)
+     * @param inch the value in an inch file (empty when there is none)
+     * @param origin where the default comes from
+     * @param source the standard, the convention, or what Hobwright computes instead, in words
+     */
     public FieldDefault {
         Objects.requireNonNull(metric, "metric");
         Objects.requireNonNull(inch, "inch");
@@ -44,37 +53,64 @@ public record FieldDefault(String metric, String inch, Origin origin, String sou
         }
     }
 
-    /** A default from a published standard, the same in both units. */
+    /**
+     * A default from a published standard, the same in both units.
+     *
+     * @param value value
+     * @param standard standard
+     * @return A default from a published standard, the same in both units
+     */
     public static FieldDefault standard(String value, String standard) {
         return new FieldDefault(value, value, Origin.STANDARD, standard);
     }
 
-    /** The trade's convention, the same in both units. */
+    /**
+     * The trade's convention, the same in both units.
+     *
+     * @param value value
+     * @param why why
+     * @return the trade's convention, the same in both units
+     */
     public static FieldDefault convention(String value, String why) {
         return new FieldDefault(value, value, Origin.CONVENTION, why);
     }
 
-    /** A value Hobwright works out when the field is left out. */
+    /**
+     * A value Hobwright works out when the field is left out.
+     *
+     * @param how how
+     * @return A value Hobwright works out when the field is left out
+     */
     public static FieldDefault computed(String how) {
         return new FieldDefault("", "", Origin.COMPUTED, how);
     }
 
-    /** Nothing is used when the field is left out. */
+    /**
+     * Nothing is used when the field is left out.
+     *
+     * @param what what
+     * @return nothing is used when the field is left out
+     */
     public static FieldDefault unused(String what) {
         return new FieldDefault("", "", Origin.UNUSED, what);
     }
 
-    /** True when there is a value (in either unit). */
+    /** {@return true when there is a value (in either unit)} */
     public boolean hasValue() {
         return !metric.isEmpty();
     }
 
-    /** The value as written in a file of the given units (empty when there is none). */
+    /**
+     * The value as written in a file of the given units (empty when there is none).
+     *
+     * @param units units
+     * @return the value as written in a file of the given units (empty when there is none)
+     */
     public String value(Units units) {
         return units == Units.IN ? inch : metric;
     }
 
-    /** Where the default comes from, in a few words, e.g. {@code ISO 53:1998 standard basic rack}. */
+    /** {@return where the default comes from, in a few words, e.g. {@code ISO 53:1998 standard basic rack}} */
     public String describe() {
         return switch (origin) {
             case NONE -> source;

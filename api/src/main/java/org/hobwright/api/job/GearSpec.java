@@ -47,6 +47,26 @@ public record GearSpec(
         OptionalInt flankToleranceClass,
         DrawingValues drawing) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param partName the part name or number, for headers and file names
+     * @param teeth number of teeth z, at least 1 (the wizard's checks ask for far more)
+     * @param pitch normal pitch as given on the drawing
+     * @param pressureAngleDeg normal pressure angle α_n, degrees, 1 to 45
+     * @param helixAngleDeg helix angle β at the reference cylinder, magnitude, degrees, 0 to 60 (0 = spur)
+     * @param hand helix hand (ignored for spur gears)
+     * @param faceWidthMm face width b, mm, greater than 0
+     * @param profileShift profile shift coefficient x (in normal module), -3 to 3
+     * @param thicknessAllowanceMm normal tooth-thickness allowance E_sn, mm (negative thins the tooth), -10 to 10
+     * @param toothSystem tooth system identifier ({@code iso53-a}, {@code iso53-b}, {@code iso53-c}, {
+     * @param customProportions the value
+     * @param blankDiameterMm the value
+     * @param pinDiameterMm the value
+     * @param flankToleranceClass the value
+     * @param drawing values printed on the drawing, for the drawing check
+     */
     public GearSpec {
         Checks.text("partName", partName);
         Checks.field(JobFields.GEAR_TEETH, teeth);
@@ -73,17 +93,17 @@ public record GearSpec(
         }
     }
 
-    /** True for a spur gear (helix angle 0). */
+    /** {@return true for a spur gear (helix angle 0)} */
     public boolean isSpur() {
         return helixAngleDeg == 0.0;
     }
 
-    /** Helix angle with sign: positive right hand, negative left hand, 0 for spur. */
+    /** {@return helix angle with sign: positive right hand, negative left hand, 0 for spur} */
     public double signedHelixAngleDeg() {
         return isSpur() ? 0.0 : hand.sign() * helixAngleDeg;
     }
 
-    /** Normal module in mm. */
+    /** {@return normal module in mm} */
     public double moduleMm() {
         return pitch.moduleMm();
     }

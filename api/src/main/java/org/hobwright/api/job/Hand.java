@@ -16,17 +16,17 @@ public enum Hand {
         this.sign = sign;
     }
 
-    /** +1 for right hand, -1 for left hand. */
+    /** {@return +1 for right hand, -1 for left hand} */
     public int sign() {
         return sign;
     }
 
-    /** The word used in job files: {@code right} or {@code left}. */
+    /** {@return the word used in job files: {@code right} or {@code left}} */
     public String word() {
         return name().toLowerCase(java.util.Locale.ROOT);
     }
 
-    /** The opposite hand. */
+    /** {@return the opposite hand} */
     public Hand opposite() {
         return this == RIGHT ? LEFT : RIGHT;
     }
@@ -35,6 +35,8 @@ public enum Hand {
      * Reads {@code right} or {@code left}.
      *
      * @throws IllegalArgumentException naming the word otherwise
+     * @param word word
+     * @return reads {@code right} or {@code left}
      */
     public static Hand fromWord(String word) {
         for (Hand h : values()) {

@@ -19,6 +19,18 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.0")
 public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine,
                      CycleSettings cycle, @ApiStatus(since = "1.1") Optional<SplineSpec> spline) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param name job name, used for output file names
+     * @param units the user's length unit
+     * @param gear the gear (for a spline, its spur-gear frame)
+     * @param hob the hob
+     * @param machine the machine profile
+     * @param cycle the cycle settings
+     * @param spline for a spline job, what makes the part a spline; empty for a gear
+     */
     public HobJob {
         Checks.text("name", name);
         Checks.present("units", units);
@@ -29,12 +41,21 @@ public record HobJob(String name, Units units, GearSpec gear, HobSpec hob, Machi
         Checks.present("spline", spline);
     }
 
-    /** A gear job, as api 1.0 built it. */
+    /**
+     * A gear job, as api 1.0 built it.
+     *
+     * @param name job name, used for output file names
+     * @param units the user's length unit
+     * @param gear the gear
+     * @param hob the hob
+     * @param machine the machine profile
+     * @param cycle the cycle settings
+     */
     public HobJob(String name, Units units, GearSpec gear, HobSpec hob, MachineProfile machine, CycleSettings cycle) {
         this(name, units, gear, hob, machine, cycle, Optional.empty());
     }
 
-    /** What the job cuts: {@code gear} or {@code spline}. */
+    /** {@return what the job cuts: {@code gear} or {@code spline}} */
     @ApiStatus(since = "1.1")
     public String part() {
         return spline.isPresent() ? "spline" : "gear";

@@ -43,6 +43,25 @@ public record HobSpec(
         @ApiStatus(since = "1.1") Optional<String> identifier,
         @ApiStatus(since = "1.1") Optional<SplineHobProfile> splineProfile) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param pitch normal pitch of the hob (must match the gear's)
+     * @param pressureAngleDeg normal pressure angle of the hob profile, degrees, 1 to 45
+     * @param starts number of starts (threads) z₀, 1 to 12
+     * @param hand thread hand
+     * @param outsideDiameterMm outside (tip) diameter d_a0, mm
+     * @param leadAngleDeg the value
+     * @param referenceDiameterMm the value
+     * @param gashes number of gashes (flutes), at least 1
+     * @param lengthMm usable hob length, mm
+     * @param maxRpm the value
+     * @param material cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+     * @param cuttingSense the sense the hob cuts in, seen from its drive end, if stated
+     * @param identifier the shop's identifier of the hob, if given
+     * @param splineProfile for a spline hob, its root form, tip radius and addendum
+     */
     public HobSpec {
         Checks.present("hob.pitch", pitch);
         Checks.field(JobFields.HOB_PRESSURE_ANGLE, pressureAngleDeg);
@@ -64,7 +83,23 @@ public record HobSpec(
         Objects.requireNonNull(splineProfile, "splineProfile");
     }
 
-    /** A gear hob (no spline profile). */
+    /**
+     * A gear hob (no spline profile).
+     *
+     * @param pitch normal pitch of the hob (must match the gear's)
+     * @param pressureAngleDeg normal pressure angle of the hob profile, degrees, 1 to 45
+     * @param starts number of starts (threads) z₀, 1 to 12
+     * @param hand hand of the hob thread
+     * @param outsideDiameterMm outside diameter, mm
+     * @param leadAngleDeg lead angle at the reference diameter, if stated
+     * @param referenceDiameterMm reference diameter, if stated
+     * @param gashes number of gashes (flutes), at least 1
+     * @param lengthMm usable hob length, mm
+     * @param maxRpm the hob maker's speed limit, rpm, if given
+     * @param material cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+     * @param cuttingSense the sense the hob cuts in, seen from its drive end, if stated
+     * @param identifier the shop's identifier of the hob, if given
+     */
     @ApiStatus(since = "1.1")
     public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
                    OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
@@ -74,7 +109,21 @@ public record HobSpec(
                 lengthMm, maxRpm, material, cuttingSense, identifier, Optional.empty());
     }
 
-    /** A hob whose cutting sense and identifier are not stated. */
+    /**
+     * A hob whose cutting sense and identifier are not stated.
+     *
+     * @param pitch normal pitch of the hob (must match the gear's)
+     * @param pressureAngleDeg normal pressure angle of the hob profile, degrees, 1 to 45
+     * @param starts number of starts (threads) z₀, 1 to 12
+     * @param hand thread hand
+     * @param outsideDiameterMm outside (tip) diameter d_a0, mm
+     * @param leadAngleDeg the value
+     * @param referenceDiameterMm the value
+     * @param gashes number of gashes (flutes), at least 1
+     * @param lengthMm usable hob length, mm
+     * @param maxRpm the value
+     * @param material cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+     */
     @ApiStatus(since = "1.1")
     public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
                    OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
@@ -95,7 +144,7 @@ public record HobSpec(
                 referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
-    /** Normal module in mm. */
+    /** {@return normal module in mm} */
     public double moduleMm() {
         return pitch.moduleMm();
     }

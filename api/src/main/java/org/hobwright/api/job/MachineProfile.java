@@ -58,6 +58,32 @@ public record MachineProfile(
         @ApiStatus(since = "1.1") MachineTimes times,
         @ApiStatus(since = "1.1") boolean phasedSync) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param name profile name (letters, digits, '.', '_', '-')
+     * @param dialect name of the NC dialect file used to post for this machine
+     * @param workMinRpm lowest stable work-spindle speed, rpm
+     * @param workMaxRpm highest work-spindle speed, rpm
+     * @param hobMinRpm lowest hob-spindle (live tool) speed, rpm
+     * @param hobMaxRpm highest hob-spindle speed, rpm
+     * @param maxSyncRatio largest hob turns per work turn the synchronisation accepts
+     * @param followsHelix true when the control can add the helical (differential) work rotation
+     * @param swivel the swivel holder or axis
+     * @param radialMinMm smallest reachable diameter of the hob axis path, as a work diameter, mm
+     * @param radialMaxMm largest reachable work diameter for the hob, mm
+     * @param axialMinMm axial travel limit on the side away from the chuck, mm from the front face
+     * @param axialMaxMm axial travel limit on the chuck side, mm from the front face
+     * @param hobShiftTravelMm the value
+     * @param rapidMmPerMin rapid traverse rate used for time estimates, mm/min
+     * @param maxFeedMmPerMin highest programmable feed rate, mm/min
+     * @param syncSettleS dwell after switching synchronisation on, s
+     * @param maxHobDiameterMm largest hob the holder takes, mm
+     * @param clockwiseTeethTowardChuck true when clockwise-turning hob teeth move toward the chuck at the work
+     * @param times load, unload, swivel, hob-shift and hob-change times
+     * @param phasedSync true when the control can start the synchronisation at a set work-spindle angle
+     */
     public MachineProfile {
         Checks.text("machine.name", name);
         Checks.text("machine.dialect", dialect);
@@ -99,6 +125,25 @@ public record MachineProfile(
     /**
      * A machine whose clockwise-turning hob teeth move away from the chuck at the work, with no times
      * known and no phased synchronisation.
+     *
+     * @param name profile name (letters, digits, '.', '_', '-')
+     * @param dialect name of the NC dialect file used to post for this machine
+     * @param workMinRpm lowest stable work-spindle speed, rpm
+     * @param workMaxRpm highest work-spindle speed, rpm
+     * @param hobMinRpm lowest hob-spindle (live tool) speed, rpm
+     * @param hobMaxRpm highest hob-spindle speed, rpm
+     * @param maxSyncRatio largest hob turns per work turn the synchronisation accepts
+     * @param followsHelix true when the control can add the helical (differential) work rotation
+     * @param swivel the swivel holder or axis
+     * @param radialMinMm smallest reachable diameter of the hob axis path, as a work diameter, mm
+     * @param radialMaxMm largest reachable work diameter for the hob, mm
+     * @param axialMinMm axial travel limit on the side away from the chuck, mm from the front face
+     * @param axialMaxMm axial travel limit on the chuck side, mm from the front face
+     * @param hobShiftTravelMm the value
+     * @param rapidMmPerMin rapid traverse rate used for time estimates, mm/min
+     * @param maxFeedMmPerMin highest programmable feed rate, mm/min
+     * @param syncSettleS dwell after switching synchronisation on, s
+     * @param maxHobDiameterMm largest hob the holder takes, mm
      */
     @ApiStatus(since = "1.1")
     public MachineProfile(String name, String dialect, double workMinRpm, double workMaxRpm, double hobMinRpm,

@@ -22,6 +22,16 @@ public record MachineTimes(OptionalDouble loadS, OptionalDouble unloadS, Optiona
     public static final MachineTimes UNKNOWN = new MachineTimes(OptionalDouble.empty(), OptionalDouble.empty(),
             OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty());
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param loadS putting a blank in and clamping it
+     * @param unloadS taking the finished part out
+     * @param swivelS one programmed swivel positioning, clamping included
+     * @param hobShiftS one programmed hob-shift move
+     * @param hobChangeS taking a worn hob off and setting a sharp one
+     */
     public MachineTimes {
         Checks.field(MachineFields.TIME_LOAD, loadS);
         Checks.field(MachineFields.TIME_UNLOAD, unloadS);

@@ -13,10 +13,10 @@ import org.hobwright.api.internal.Checks;
 @ApiStatus(since = "1.0")
 public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
 
-    /** Normal module in millimetres. */
+    /** {@return normal module in millimetres} */
     double moduleMm();
 
-    /** Normal diametral pitch in 1/in. */
+    /** {@return normal diametral pitch in 1/in} */
     default double diametralPitch() {
         return Units.IN.toMm(1.0) / moduleMm();
     }
@@ -28,6 +28,12 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
      */
     @ApiStatus(since = "1.0")
     record Module(double mm) implements Pitch {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param mm normal module, mm, greater than 0
+         */
         public Module {
             Checks.range("module", mm, JobFields.GEAR_MODULE.range().min(), JobFields.GEAR_MODULE.range().max());
         }
@@ -45,6 +51,12 @@ public sealed interface Pitch permits Pitch.Module, Pitch.Diametral {
      */
     @ApiStatus(since = "1.0")
     record Diametral(double perInch) implements Pitch {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param perInch normal diametral pitch, 1/in, greater than 0
+         */
         public Diametral {
             Checks.range("diametralPitch", perInch, JobFields.GEAR_DIAMETRAL_PITCH.range().min(),
                     JobFields.GEAR_DIAMETRAL_PITCH.range().max());

@@ -23,6 +23,14 @@ public record QualityTargets(
     public static final QualityTargets DEFAULTS =
             new QualityTargets(OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty());
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param feedMarkDepthUm the value
+     * @param envelopingDepthUm the value
+     * @param maxChipThicknessMm the value
+     */
     public QualityTargets {
         Objects.requireNonNull(feedMarkDepthUm, "feedMarkDepthUm");
         Objects.requireNonNull(envelopingDepthUm, "envelopingDepthUm");

@@ -15,6 +15,14 @@ import org.hobwright.api.internal.Checks;
  */
 @ApiStatus(since = "1.1")
 public record SplineHobProfile(String root, double tipRadiusMm, OptionalDouble addendumMm) {
+    /**
+     * Checks the components: a negative tip radius or an addendum that is not positive throws
+     * {@link IllegalArgumentException} naming the field.
+     *
+     * @param root {@code flat} or {@code fillet}
+     * @param tipRadiusMm tip corner radius ρ_a0
+     * @param addendumMm h_a0, or empty for the standard's
+     */
     public SplineHobProfile {
         Checks.text("hob.root", root);
         Checks.nonNegative("hob.tipRadius", tipRadiusMm);

@@ -22,6 +22,18 @@ import org.hobwright.api.internal.Checks;
 public record SplineSpec(String standard, String root, int toleranceClass, String fitClass,
                          OptionalDouble referenceDiameterMm, OptionalDouble allowanceMm,
                          OptionalDouble totalToleranceMm, OptionalDouble effectiveVariationMm) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field.
+     *
+     * @param standard {@code iso4156}, {@code ansi-b92.1} or {@code din5480}
+     * @param root {@code flat} or {@code fillet}
+     * @param toleranceClass tolerance class, 1 to 16
+     * @param fitClass fit class as the standard names it
+     * @param referenceDiameterMm DIN 5480 reference diameter d_B
+     * @param allowanceMm es from the drawing, −10 to 10 mm
+     * @param totalToleranceMm T + λ from the drawing
+     * @param effectiveVariationMm λ from the drawing, 0 to 10 mm
+     */
     public SplineSpec {
         Checks.text("spline.standard", standard);
         Checks.text("spline.root", root);

@@ -24,6 +24,17 @@ public record SwivelHolder(
         String positiveSense,
         boolean positiveIsRight) {
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param scale how the holder's scale (or the control) counts the angle
+     * @param resolutionDeg smallest settable step, degrees (e.g. 1/60 for a scale read in whole minutes)
+     * @param programmable true when the control positions the swivel axis from the program
+     * @param maxAngleDeg largest swivel either way, degrees
+     * @param positiveSense words that say which way a positive setting turns the hob on this machine, e.g.
+     * @param positiveIsRight true when this machine's positive setting equals a positive (right-hand
+     */
     public SwivelHolder {
         Checks.present("swivel.scale", scale);
         Checks.field(MachineFields.SWIVEL_RESOLUTION, resolutionDeg);

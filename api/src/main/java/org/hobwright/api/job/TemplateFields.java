@@ -16,13 +16,17 @@ import java.util.Optional;
  */
 @ApiStatus(since = "1.1")
 public final class TemplateFields {
+    /** The field {@code units}. */
     public static final FieldDef UNITS = FieldDef.of("units", CHOICE, NONE).choices(JobFields.UNIT_WORDS)
             .required(FieldDefault.convention("mm", "millimetres, the SI unit of length"))
             .text("Length unit", "The unit of the template's lengths and cutting speed.");
+    /** The field {@code machine}. */
     public static final FieldDef MACHINE = FieldDef.of("machine", TEXT, NONE).mustGive().namesLibraryEntry()
             .text("Machine", "The machine profile the template belongs to.");
+    /** The field {@code name}. */
     public static final FieldDef NAME = FieldDef.of("name", TEXT, NONE).mustGive().namesLibraryEntry()
             .text("Template name", "Names the template in the library.");
+    /** The field {@code description}. */
     public static final FieldDef DESCRIPTION = FieldDef.of("description", TEXT, NONE)
             .optional(FieldDefault.unused("no description")).text("Description", "One line saying what it is for.");
 
@@ -37,12 +41,17 @@ public final class TemplateFields {
         return List.copyOf(out);
     }
 
-    /** Every field of a template, in the order written. */
+    /** {@return every field of a template, in the order written} */
     public static List<FieldDef> all() {
         return ALL;
     }
 
-    /** The field with this key. */
+    /**
+     * The field with this key.
+     *
+     * @param key key
+     * @return the field with this key
+     */
     public static Optional<FieldDef> find(String key) {
         return FieldDef.find(ALL, key);
     }

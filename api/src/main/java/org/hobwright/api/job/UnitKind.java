@@ -41,17 +41,28 @@ public enum UnitKind {
         this.inch = inch;
     }
 
-    /** The unit shown beside a value of a file or job in the given units (empty when none). */
+    /**
+     * The unit shown beside a value of a file or job in the given units (empty when none).
+     *
+     * @param units units
+     * @return the unit shown beside a value of a file or job in the given units (empty when none)
+     */
     public String symbol(Units units) {
         return units == Units.IN ? inch : metric;
     }
 
-    /** True when the value's unit changes with the file's length unit. */
+    /** {@return true when the value's unit changes with the file's length unit} */
     public boolean followsUnits() {
         return !metric.equals(inch);
     }
 
-    /** A value written in {@code units} converted to the canonical unit (mm, m/min, mm/min, ...). */
+    /**
+     * A value written in {@code units} converted to the canonical unit (mm, m/min, mm/min, ...).
+     *
+     * @param value value
+     * @param units units
+     * @return A value written in {@code units} converted to the canonical unit (mm, m/min, mm/min, ...)
+     */
     public double toCanonical(double value, Units units) {
         return switch (this) {
             case LENGTH, FEED, LENGTH_PER_MIN -> units.toMm(value);
@@ -60,7 +71,13 @@ public enum UnitKind {
         };
     }
 
-    /** A canonical value converted to {@code units}. */
+    /**
+     * A canonical value converted to {@code units}.
+     *
+     * @param canonical canonical
+     * @param units units
+     * @return A canonical value converted to {@code units}
+     */
     public double fromCanonical(double canonical, Units units) {
         return switch (this) {
             case LENGTH, FEED, LENGTH_PER_MIN -> units.fromMm(canonical);

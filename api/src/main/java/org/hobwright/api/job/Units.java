@@ -27,28 +27,48 @@ public enum Units {
         this.metresPerSpeedLength = metresPerSpeedLength;
     }
 
-    /** The symbol used in files and on screen: {@code mm} or {@code in}. */
+    /** {@return the symbol used in files and on screen: {@code mm} or {@code in}} */
     public String symbol() {
         return symbol;
     }
 
-    /** Converts a length in this unit to millimetres. */
+    /**
+     * Converts a length in this unit to millimetres.
+     *
+     * @param value value
+     * @return converts a length in this unit to millimetres
+     */
     public double toMm(double value) {
         return value * mmPerUnit;
     }
 
-    /** Converts a length in millimetres to this unit. */
+    /**
+     * Converts a length in millimetres to this unit.
+     *
+     * @param mm mm
+     * @return converts a length in millimetres to this unit
+     */
     public double fromMm(double mm) {
         return mm / mmPerUnit;
     }
 
-    /** Converts a cutting speed in this unit system (m/min or ft/min) to metres per minute. */
+    /**
+     * Converts a cutting speed in this unit system (m/min or ft/min) to metres per minute.
+     *
+     * @param value value
+     * @return converts a cutting speed in this unit system (m/min or ft/min) to metres per minute
+     */
     @ApiStatus(since = "1.1")
     public double cuttingSpeedToMPerMin(double value) {
         return value * metresPerSpeedLength;
     }
 
-    /** Converts a cutting speed in metres per minute to this unit system's (m/min or ft/min). */
+    /**
+     * Converts a cutting speed in metres per minute to this unit system's (m/min or ft/min).
+     *
+     * @param metresPerMinute metresPerMinute
+     * @return converts a cutting speed in metres per minute to this unit system's (m/min or ft/min)
+     */
     @ApiStatus(since = "1.1")
     public double cuttingSpeedFromMPerMin(double metresPerMinute) {
         return metresPerMinute / metresPerSpeedLength;
@@ -58,6 +78,8 @@ public enum Units {
      * Reads a unit symbol as written in a job file.
      *
      * @throws IllegalArgumentException naming the symbol when it is neither {@code mm} nor {@code in}
+     * @param symbol symbol
+     * @return reads a unit symbol as written in a job file
      */
     public static Units fromSymbol(String symbol) {
         for (Units u : values()) {

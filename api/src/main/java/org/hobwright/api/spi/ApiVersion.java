@@ -23,6 +23,13 @@ public record ApiVersion(int major, int minor) implements Comparable<ApiVersion>
     /** The version a provider that does not state one was built against (the first api). */
     public static final ApiVersion FIRST = new ApiVersion(1, 0);
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param major the major version, raised for a change that is not an addition
+     * @param minor the minor version, raised for each addition
+     */
     public ApiVersion {
         Checks.atLeast("major", major, 1);
         Checks.atLeast("minor", minor, 0);

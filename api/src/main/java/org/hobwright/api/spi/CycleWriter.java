@@ -25,7 +25,7 @@ public interface CycleWriter extends Provider {
      */
     int spiVersion();
 
-    /** One line saying what this writer produces. */
+    /** {@return one line saying what this writer produces} */
     default String description() {
         return id();
     }

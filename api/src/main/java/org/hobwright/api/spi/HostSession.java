@@ -37,13 +37,13 @@ public interface HostSession extends AutoCloseable {
      */
     Outcome<HobJob> readJob(String json, String source);
 
-    /** The planner, with the library's cutting data and defaults. */
+    /** {@return the planner, with the library's cutting data and defaults} */
     CyclePlanner planner();
 
-    /** The usable writers, in class-path order. */
+    /** {@return the usable writers, in class-path order} */
     List<CycleWriter> writers();
 
-    /** Providers that were skipped while the session was opened, one finding each. */
+    /** {@return providers that were skipped while the session was opened, one finding each} */
     List<Finding> problems();
 
     /**
@@ -73,7 +73,7 @@ public interface HostSession extends AutoCloseable {
      */
     Wizard wizard(java.util.Optional<HobJob> start);
 
-    /** The machine, template, dialect and cutting-data library. */
+    /** {@return the machine, template, dialect and cutting-data library} */
     HostLibrary library();
 
     /** Releases what the session holds: threads, open files, caches. */

@@ -12,6 +12,13 @@ import org.hobwright.api.internal.Checks;
  */
 @ApiStatus(since = "1.0")
 public record OutputFile(String fileName, String text) {
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param fileName plain file name (no folder part)
+     * @param text contents, written as UTF-8
+     */
     public OutputFile {
         Checks.text("fileName", fileName);
         if (fileName.contains("/") || fileName.contains("\\") || fileName.startsWith(".")) {

@@ -9,7 +9,7 @@ import org.hobwright.api.ApiStatus;
 @ApiStatus(since = "1.1")
 public interface Provider {
 
-    /** Stable identifier of the provider; by default its class name. */
+    /** {@return stable identifier of the provider; by default its class name} */
     default String id() {
         return getClass().getName();
     }
@@ -18,12 +18,14 @@ public interface Provider {
      * The api version the provider was built against, {@code major.minor}. Implementations
      * return {@link Spi#API_VERSION}, which the compiler copies into their class. A provider
      * built before this method existed was built against the first api, {@code 1.0}.
+     *
+     * @return the api version the provider was built against, {@code major.minor}. Implementations
      */
     default String apiVersion() {
         return ApiVersion.FIRST.toString();
     }
 
-    /** The provider's own build version, e.g. {@code 0.2.0}; {@code unknown} when it does not say. */
+    /** {@return the provider's own build version, e.g. {@code 0.2.0}; {@code unknown} when it does not say} */
     default String buildVersion() {
         return "unknown";
     }

@@ -37,6 +37,13 @@ public final class Providers {
      */
     @ApiStatus(since = "1.0")
     public record Loaded<T>(List<T> providers, List<Finding> problems) {
+        /**
+         * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and
+         * the value.
+         *
+         * @param providers the usable providers, in class-path order
+         * @param problems one warning for each provider that was skipped
+         */
         public Loaded {
             providers = List.copyOf(providers);
             problems = List.copyOf(problems);

@@ -33,16 +33,21 @@ public record WriteContext(HobJob job, String generatedOn, String toolVersion, M
     @ApiStatus(since = "1.1")
     public static final String REPORT_WITH_ERRORS = "report.withErrors";
 
+    /**
+     * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
+     * value.
+     *
+     * @param job the job the cycle was planned from
+     * @param generatedOn the date to print in headers
+     * @param toolVersion version of the program that writes the files
+     * @param resources named texts a writer may need
+     */
     public WriteContext {
         Checks.present("job", job);
         Checks.text("generatedOn", generatedOn);
-        try {
-            if (!LocalDate.parse(generatedOn).toString().equals(generatedOn)) {
-                throw new DateTimeException(generatedOn);
-            }
-        } catch (DateTimeException e) {
+        if (!isoDate(generatedOn)) {
             throw new IllegalArgumentException("generatedOn must be an ISO 8601 date like 2026-12-01, was \""
-                    + generatedOn + "\"", e);
+                    + generatedOn + "\"");
         }
         Checks.text("toolVersion", toolVersion);
         resources = Map.copyOf(Checks.present("resources", resources));
@@ -58,12 +63,39 @@ public record WriteContext(HobJob job, String generatedOn, String toolVersion, M
      * @return the context
      */
     @ApiStatus(since = "1.1")
-    public static WriteContext of(HobJob job, LocalDate generatedOn, String toolVersion, Map<String, String> resources) {
+    public static WriteContext of(HobJob job, LocalDate generatedOn, String toolVersion,
+                                  Map<String, String> resources) {
         return new WriteContext(job, Checks.present("generatedOn", generatedOn).toString(), toolVersion, resources);
     }
 
-    /** A named resource, if present. */
+    /**
+     * A named resource, if present.
+     *
+     * @param key key
+     * @return A named resource, if present
+     */
     public Optional<String> resource(String key) {
         return Optional.ofNullable(resources.get(key));
+    }
+
+    /**
+     * True for a calendar date written {@code YYYY-MM-DD}. Read digit by digit: the JDK's date
+     * parser would load its formatter machinery and regular expressions into every run that writes.
+     */
+    private static boolean isoDate(String text) {
+        if (text.length() != 10 || text.charAt(4) != '-' || text.charAt(7) != '-') {
+            return false;
+        }
+        for (int i = 0; i < 10; i++) {
+            if (i != 4 && i != 7 && (text.charAt(i) < '0' || text.charAt(i) > '9')) {
+                return false;
+            }
+        }
+        try {
+            return LocalDate.of(Integer.parseInt(text, 0, 4, 10), Integer.parseInt(text, 5, 7, 10),
+                    Integer.parseInt(text, 8, 10, 10)).toString().equals(text);
+        } catch (DateTimeException e) {
+            return false;
+        }
     }
 }

@@ -15,7 +15,7 @@ import org.hobwright.api.job.HobJob;
 @ApiStatus(since = "1.0")
 public interface Wizard {
 
-    /** The current step as a host should render it. */
+    /** {@return the current step as a host should render it} */
     StepView view();
 
     /**
@@ -27,22 +27,28 @@ public interface Wizard {
      */
     List<Finding> answer(String key, String text);
 
-    /** The current answer of a field as text (its default when unanswered). */
+    /**
+     * The current answer of a field as text (its default when unanswered).
+     *
+     * @param key a field key of the current step
+     * @return the current answer of a field as text (its default when unanswered)
+     */
     String value(String key);
 
     /**
      * Completes the current step and moves on. Errors block; warnings block unless accepted.
      *
      * @param acceptWarnings true to move on despite warnings
+     * @return completes the current step and moves on
      */
     Transition next(boolean acceptWarnings);
 
-    /** Goes back one step, keeping every answer; later answers are checked again when reached. */
+    /** {@return goes back one step, keeping every answer; later answers are checked again when reached} */
     Transition back();
 
-    /** The job built from the answers so far, once GEAR to CYCLE are complete. */
+    /** {@return the job built from the answers so far, once GEAR to CYCLE are complete} */
     Optional<HobJob> job();
 
-    /** The planned cycle, once on REVIEW. */
+    /** {@return the planned cycle, once on REVIEW} */
     Optional<HobCycle> cycle();
 }

@@ -121,4 +121,66 @@ class AnglesTest {
             assertText(deg, false);
         }
     }
+
+    /**
+     * The hand-written reader against the regular grammar it implements (numbers read whole:
+     * possessive quantifiers), on 100,000 fixed-seed texts made of the characters angles are written
+     * with, and on every text of the examples above.
+     */
+    @org.junit.jupiter.api.Test
+    void readsLikeTheRegularGrammar() {
+        java.util.SplittableRandom r = new java.util.SplittableRandom(1328);
+        String alphabet = "0123456789012345.  °d'′m\"″s+-\t";
+        int angles = 0;
+        for (int i = 0; i < 100_000; i++) {
+            StringBuilder t = new StringBuilder();
+            int length = r.nextInt(1, 12);
+            for (int k = 0; k < length; k++) {
+                t.append(alphabet.charAt(r.nextInt(alphabet.length())));
+            }
+            String text = t.toString();
+            java.util.Optional<Double> expected = RegularGrammar.parse(text);
+            assertEquals(expected, Angles.parse(text), "\"" + text + "\"");
+            angles += expected.isPresent() ? 1 : 0;
+        }
+        assertTrue(angles > 5_000, angles + " of the texts are angles");
+        for (String text : new String[] {"1°30'", "1 30 0", "1° 30′ 0″", "-1°30'", "13d14m12s", "0°5'", "14.5°",
+            "+2 0 36", "1°60'", "1 2 60", "1..2", "1°30''", "1 30'' ", "13 14 12.4\"", "1d", " -13.2368 "}) {
+            assertEquals(RegularGrammar.parse(text), Angles.parse(text), text);
+        }
+    }
+
+    /** The grammar of angles as regular expressions: the reference the reader is checked against. */
+    private static final class RegularGrammar {
+        static final java.util.regex.Pattern DECIMAL = java.util.regex.Pattern.compile(
+                "[+-]?(\\d++(\\.\\d*+)?|\\.\\d++)");
+        static final java.util.regex.Pattern DMS = java.util.regex.Pattern.compile(
+                "([+-])?\\s*(\\d++)\\s*(?:°|d|\\s)\\s*(?:(\\d++(?:\\.\\d*+)?)\\s*(?:'|′|m)?\\s*"
+                        + "(?:(\\d++(?:\\.\\d*+)?)\\s*(?:\"|″|''|s)?)?)?\\s*");
+
+        static java.util.Optional<Double> parse(String text) {
+            String t = text.strip();
+            if (t.isEmpty()) {
+                return java.util.Optional.empty();
+            }
+            if (DECIMAL.matcher(t).matches()) {
+                return java.util.Optional.of(Double.parseDouble(t));
+            }
+            if (t.endsWith("°") && DECIMAL.matcher(t.substring(0, t.length() - 1).strip()).matches()) {
+                return java.util.Optional.of(Double.parseDouble(t.substring(0, t.length() - 1).strip()));
+            }
+            java.util.regex.Matcher m = DMS.matcher(t);
+            if (!m.matches()) {
+                return java.util.Optional.empty();
+            }
+            double deg = Double.parseDouble(m.group(2));
+            double min = m.group(3) == null ? 0 : Double.parseDouble(m.group(3));
+            double sec = m.group(4) == null ? 0 : Double.parseDouble(m.group(4));
+            if (min >= 60 || sec >= 60) {
+                return java.util.Optional.empty();
+            }
+            double v = deg + min / 60 + sec / 3600;
+            return java.util.Optional.of("-".equals(m.group(1)) ? -v : v);
+        }
+    }
 }
