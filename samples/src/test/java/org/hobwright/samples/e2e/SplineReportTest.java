@@ -22,7 +22,7 @@ class SplineReportTest {
 
     @Test
     void inchSplineReportInInches(@TempDir Path work) {
-        PlanRun run = PlanRun.of("reel-shaft-spline-tl40.json", work);
+        PlanRun run = PlanRun.of("reel-shaft-spline-4008.json", work);
         assertEquals(0, run.exitCode(), run.describe());
         for (String p : POINTERS) {
             assertTrue(run.number(p) > 0, p);
@@ -37,7 +37,7 @@ class SplineReportTest {
 
     @Test
     void metricSplineSheetAndProgramSaySpline(@TempDir Path work) throws Exception {
-        PlanRun run = PlanRun.of("drive-shaft-spline-sl16.json", work);
+        PlanRun run = PlanRun.of("drive-shaft-spline-1605.json", work);
         assertEquals(0, run.exitCode(), run.describe());
         assertEquals("spline", run.json().at("/partKind").asString());
         String sheet = Files.readString(run.file(".html"));

@@ -43,7 +43,7 @@ class SplineJobsTest {
 
     @Test
     void metricSampleJobPlansWithTheStandardsLimits() throws Exception {
-        HobJob job = read(sample("drive-shaft-spline-sl16.json")).value().orElseThrow();
+        HobJob job = read(sample("drive-shaft-spline-1605.json")).value().orElseThrow();
         assertEquals("spline", job.part());
         HobCycle cycle = new DefaultCyclePlanner().plan(job);
         assertFalse(cycle.hasErrors(), cycle.findings().toString());
@@ -64,7 +64,7 @@ class SplineJobsTest {
 
     @Test
     void inchSampleReadsThePitchAsTheStandardWritesIt() throws Exception {
-        HobJob job = read(sample("reel-shaft-spline-tl40.json")).value().orElseThrow();
+        HobJob job = read(sample("reel-shaft-spline-4008.json")).value().orElseThrow();
         assertEquals(Units.IN, job.units());
         assertEquals(25.4 / 16, job.gear().moduleMm(), 1e-12);
         HobCycle cycle = new DefaultCyclePlanner().plan(job);
@@ -74,7 +74,7 @@ class SplineJobsTest {
 
     @Test
     void splineJobsSurviveAWriteAndARead() throws Exception {
-        for (String name : List.of("drive-shaft-spline-sl16.json", "reel-shaft-spline-tl40.json")) {
+        for (String name : List.of("drive-shaft-spline-1605.json", "reel-shaft-spline-4008.json")) {
             HobJob job = read(sample(name)).value().orElseThrow();
             HobJob again = read(JobWriter.jobText(job, job.units(), true)).value().orElseThrow();
             assertEquals(job.spline(), again.spline(), name);
@@ -86,7 +86,7 @@ class SplineJobsTest {
 
     @Test
     void badSplineInputIsAFindingNamingTheField() throws Exception {
-        String metric = sample("drive-shaft-spline-sl16.json");
+        String metric = sample("drive-shaft-spline-1605.json");
         assertCode(read(metric.replace("\"module\": 1.0,\n    \"pressureAngle\": 30,\n    \"root\": \"flat\",\n    \"toleranceClass\"",
                 "\"diametralPitch\": \"16/30\",\n    \"pressureAngle\": 30,\n    \"root\": \"flat\",\n    \"toleranceClass\"")),
                 "INPUT_VALUE", "spline.diametralPitch");
@@ -99,7 +99,7 @@ class SplineJobsTest {
 
     @Test
     void aHobThatCannotMakeTheSplineGetsFindingsNotAProgram() throws Exception {
-        String metric = sample("drive-shaft-spline-sl16.json");
+        String metric = sample("drive-shaft-spline-1605.json");
         assertPlanError(metric.replace("\"root\": \"flat\",\n    \"tipRadius\": 0.2", "\"root\": \"fillet\",\n    \"tipRadius\": 0.4"),
                 "SPLINE_HOB_ROOT_FORM");
         assertPlanError(metric.replace("\"tipRadius\": 0.2,", "\"tipRadius\": 0.45,"), "SPLINE_FORM_NOT_REACHED");
