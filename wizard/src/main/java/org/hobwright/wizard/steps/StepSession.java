@@ -11,6 +11,7 @@ import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.FieldRange;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.FieldSpec;
 import org.hobwright.api.wizard.FieldType;
@@ -107,6 +108,9 @@ public final class StepSession implements Wizard {
         }
         Units before = units();
         answers.put(key, value);
+        if (key.equals(JobFields.PART.key())) {
+            hobFollowsThePart(value);
+        }
         unitSwitch.typed(field.get(), value, before);
         proposals.followPitch(answers);
         if (key.equals(StepFields.MACHINE) && !services.templates(value).contains(answers.get(StepFields.TEMPLATE))) {
@@ -120,6 +124,18 @@ public final class StepSession implements Wizard {
             return unitSwitch.switchUnits(answers, before, units()).map(List::of).orElse(List.of());
         }
         return List.of();
+    }
+
+    /**
+     * A part kind answered: the hob takes the part's answers where it still follows (a spline's 30°
+     * pressure angle and its root form for a hob proposed for a 20° gear).
+     */
+    private void hobFollowsThePart(String part) {
+        HOB_FOLLOWS.forEach((partKey, hobKey) -> {
+            if (partKey.startsWith(part + ".") && !answers.get(partKey).isEmpty() && follows(hobKey, partKey)) {
+                answers.put(hobKey, hobValue(partKey, answers.get(partKey)));
+            }
+        });
     }
 
     /** True while the hob's answer is the part's, or empty, or the table's default: it may be proposed anew. */
