@@ -129,6 +129,14 @@ class WithersTest {
             // basic rack profile A: h_aP = 1.0 m, h_fP = 1.25 m, rho_fP = 0.38 m (ISO 53:1998, Table 2)
             return new ToothProportions(1.0, 1.25, 0.38);
         }
+        if (type == SplineSpec.class) {
+            // an ISO 4156-1 spline, 30° flat root, class 5, fit h
+            return new SplineSpec("iso4156", "flat", 5, "h", OptionalDouble.empty(), OptionalDouble.empty(),
+                    OptionalDouble.empty(), OptionalDouble.empty());
+        }
+        if (type == SplineHobProfile.class) {
+            return new SplineHobProfile("flat", 0.2, OptionalDouble.empty());
+        }
         throw new AssertionError("no value to try for " + type);
     }
 

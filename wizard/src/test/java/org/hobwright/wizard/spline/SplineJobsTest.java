@@ -63,6 +63,22 @@ class SplineJobsTest {
     }
 
     @Test
+    void splinesAreCutSlowerThanTheGearRowByTheTypicalSplineRule() throws Exception {
+        HobJob job = read(sample("drive-shaft-spline-1605.json")).value().orElseThrow();
+        HobCycle cycle = new DefaultCyclePlanner().plan(job);
+        assertFalse(cycle.hasErrors(), cycle.findings().toString());
+        // the built-in row for the gear of the same material, hob material and module
+        var gearRow = org.hobwright.wizard.store.CuttingDataTable.builtIn()
+                .find(job.cycle().workMaterial(), job.hob().material(), job.gear().moduleMm()).orElseThrow();
+        double speed = cycle.setup().orElseThrow().cuttingSpeedMPerMin();
+        assertTrue(speed <= 0.9 * gearRow.cuttingSpeed().max() + 1e-9 && speed >= 0.9 * gearRow.cuttingSpeed().min()
+                - 1e-9, "speed " + speed + " within 0.9 × the gear row " + gearRow.cuttingSpeed());
+        var splineRow = gearRow.forSplines();
+        assertEquals(0.8 * gearRow.roughFeed().max(), splineRow.roughFeed().max(), 1e-12);
+        assertTrue(splineRow.status().contains("typical"), "marked as typical values: " + splineRow.status());
+    }
+
+    @Test
     void inchSampleReadsThePitchAsTheStandardWritesIt() throws Exception {
         HobJob job = read(sample("reel-shaft-spline-4008.json")).value().orElseThrow();
         assertEquals(Units.IN, job.units());
