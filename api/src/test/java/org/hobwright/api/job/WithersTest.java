@@ -129,6 +129,9 @@ class WithersTest {
             // basic rack profile A: h_aP = 1.0 m, h_fP = 1.25 m, rho_fP = 0.38 m (ISO 53:1998, Table 2)
             return new ToothProportions(1.0, 1.25, 0.38);
         }
+        if (type == MatingGear.class) {
+            return new MatingGear(31, OptionalDouble.of(0.1), OptionalDouble.of(52), -0.05, OptionalDouble.of(-0.12));
+        }
         if (type == SplineSpec.class) {
             // an ISO 4156-1 spline, 30° flat root, class 5, fit h
             return new SplineSpec("iso4156", "flat", 5, "h", OptionalDouble.empty(), OptionalDouble.empty(),
@@ -171,7 +174,7 @@ class WithersTest {
         List<Object> out = new ArrayList<>();
         if (type == double.class || type == Double.class) {
             double d = (Double) v;
-            out.addAll(List.of(d * 1.01, d + 0.01, d - 0.01, d * 0.99, 0.5, 1.0, 10.0));
+            out.addAll(List.of(d * 1.01, d + 0.01, d - 0.01, d * 0.99, 0.5, 1.0, 10.0, -0.05));
         } else if (type == int.class || type == Integer.class) {
             int i = (Integer) v;
             out.addAll(List.of(i + 1, i - 1, 1, 2, 10));

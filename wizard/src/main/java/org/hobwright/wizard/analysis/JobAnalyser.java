@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.GearData;
+import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.SimulationData;
 import org.hobwright.api.cycle.SplineData;
@@ -17,6 +18,7 @@ import org.hobwright.wizard.check.BlankCheck;
 import org.hobwright.wizard.check.DrawingCheck;
 import org.hobwright.wizard.check.EngineeringCode;
 import org.hobwright.wizard.check.GearChecks;
+import org.hobwright.wizard.check.GearPairChecks;
 import org.hobwright.wizard.check.HobChecks;
 import org.hobwright.wizard.check.InputChecks;
 import org.hobwright.wizard.check.InspectionChecks;
@@ -27,6 +29,7 @@ import org.hobwright.wizard.geometry.GearGeometry;
 import org.hobwright.wizard.geometry.InvoluteGear;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.hobwright.wizard.inspection.InspectionValues;
+import org.hobwright.wizard.inspection.MeasurementLimits;
 import org.hobwright.wizard.setup.HobSetup;
 
 /**
@@ -79,8 +82,17 @@ public final class JobAnalyser {
         Optional<ToleranceData> tolerances = ToleranceCheck.tolerances(spec, g, findings);
         InspectionValues inspection = InspectionValues.of(g, tip, spec.pinDiameterMm(), shopStepMm(job.units()));
         InspectionChecks.check(g, spec.faceWidthMm(), inspection, words, findings);
+        if (spec.thicknessAllowanceLowerMm().isPresent()) {
+            double lower = spec.thicknessAllowanceLowerMm().getAsDouble();
+            InspectionChecks.checkLowerLimit(g, inspection, lower, words, findings);
+            inspection = inspection.withLimits(MeasurementLimits.of(g, inspection, lower,
+                    InspectionChecks.limitsBasis(spec, words, findings)));
+        }
         DrawingCheck.check(spec.drawing(), g, inspection.pins().pinDiameterMm(), words, findings);
-        return result(Optional.of(gear), Optional.of(inspection.data()), tolerances, setup, findings);
+        Optional<GearPairData> pair = spec.mate().isPresent()
+                ? GearPairChecks.check(spec, g, tip, words, findings) : Optional.empty();
+        return result(Optional.of(gear), Optional.of(inspection.data()), tolerances, setup, findings, pair,
+                Optional.empty(), Optional.empty());
     }
 
     /** Rounding step of a computed pin: 0.01 mm, or 0.0005 in in inch jobs (common practice, no source). */
@@ -91,15 +103,17 @@ public final class JobAnalyser {
     static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
                                       Optional<ToleranceData> tolerances, Optional<HobSetup> setup,
                                       List<Finding> findings) {
-        return result(gear, inspection, tolerances, setup, findings, Optional.empty(), Optional.empty());
+        return result(gear, inspection, tolerances, setup, findings, Optional.empty(), Optional.empty(),
+                Optional.empty());
     }
 
     /** The analysis with its findings sorted errors first, each group in check order. */
     static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
                               Optional<ToleranceData> tolerances, Optional<HobSetup> setup, List<Finding> findings,
-                              Optional<SplineData> spline, Optional<SimulationData> simulation) {
+                              Optional<GearPairData> pair, Optional<SplineData> spline,
+                              Optional<SimulationData> simulation) {
         List<Finding> sorted = new ArrayList<>(findings);
         sorted.sort(Comparator.comparing(Finding::severity));
-        return new JobAnalysis(gear, inspection, tolerances, setup, sorted, spline, simulation);
+        return new JobAnalysis(gear, inspection, tolerances, setup, sorted, pair, spline, simulation);
     }
 }

@@ -140,6 +140,7 @@ final class SplineJobAnalyser {
 
     private static JobAnalysis done(Optional<GearData> gear, Optional<HobSetup> setup, Optional<SplineData> spline,
                                     Optional<SimulationData> simulation, List<Finding> findings) {
-        return JobAnalyser.result(gear, Optional.empty(), Optional.empty(), setup, findings, spline, simulation);
+        return JobAnalyser.result(gear, Optional.empty(), Optional.empty(), setup, findings, Optional.empty(), spline,
+                simulation);
     }
 }

@@ -133,20 +133,21 @@ final class TerminalWizard {
     }
 
     /**
-     * True when a question applies ({@link StepFields#applies}): the gear's or the spline's questions
-     * by the part kind, the custom rack factors only for the custom tooth system.
+     * True when a question applies ({@link StepFields#applies(String, java.util.function.Function)}): the
+     * gear's or the spline's questions by the part kind, the custom rack factors only for the custom tooth system.
      */
     static boolean applies(FieldSpec f, Wizard wizard) {
         return StepFields.applies(f.key(), wizard::value);
     }
 
-    /** True for a value printed on the drawing. */
+    /** True for a value printed on the drawing (its printed values and its mating gear). */
     static boolean isDrawing(FieldSpec f) {
-        return f.key().startsWith("gear.drawing.");
+        return f.key().startsWith("gear.drawing.") || f.key().startsWith("gear.mate.");
     }
 
     private boolean anyDrawingValue(List<FieldSpec> fields) {
-        return fields.stream().filter(TerminalWizard::isDrawing).anyMatch(f -> !wizard.value(f.key()).isEmpty());
+        return fields.stream().filter(f -> isDrawing(f) && applies(f, wizard))
+                .anyMatch(f -> !wizard.value(f.key()).isEmpty());
     }
 
     /**

@@ -114,7 +114,7 @@ final class JobPlanning {
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.of(setup),
                 errors ? List.of() : path.steps(), Optional.of(summary),
                 job.spline().isPresent() ? analysis.simulation() : GeneratingSimulation.forCycle(job, gd, findings),
-                DefaultCyclePlanner.sorted(findings), Optional.empty(), analysis.spline());
+                DefaultCyclePlanner.sorted(findings), Optional.empty(), analysis.pair(), analysis.spline());
     }
 
     /**

@@ -5,7 +5,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.function.UnaryOperator;
+import java.util.function.Function;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.JobFields;
@@ -58,25 +58,48 @@ public final class StepFields {
 
     /**
      * True when a field applies to the answers so far: the gear's questions for a gear, the spline's
-     * and the spline hob's for a spline, the custom rack factors only for the custom tooth system. A
-     * field that does not apply is not asked, not checked and left out of the job.
+     * and the spline hob's for a spline, the custom rack factors only for the custom tooth system, the
+     * tooth-thickness allowances only without a thickness series, the mating gear's other values only
+     * with its tooth count. A field that does not apply is not asked, not checked and left out of the job.
      */
     public static boolean applies(String key, Answers answers) {
         return applies(key, answers::get);
     }
 
-    /** {@link #applies(String, Answers)} on the answers of a session or host ({@code value} gives a key's). */
-    public static boolean applies(String key, UnaryOperator<String> value) {
-        return ofThePart(key, value) && (!key.startsWith("gear.custom.")
-                || "custom".equals(value.apply(JobFields.GEAR_TOOTH_SYSTEM.key())));
+    /**
+     * {@link #applies(String, Answers)} for answers given as a lookup from key to answer text.
+     *
+     * @param key    the field's key
+     * @param answer the answer text of a key, empty when not answered
+     * @return true when the field applies
+     */
+    public static boolean applies(String key, Function<String, String> answer) {
+        if (!ofThePart(key, answer)) {
+            return false;
+        }
+        if (key.startsWith("gear.custom.")) {
+            return "custom".equals(answer.apply(JobFields.GEAR_TOOTH_SYSTEM.key()));
+        }
+        if (key.equals(JobFields.GEAR_THICKNESS_ALLOWANCE.key())
+                || key.equals(JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER.key())) {
+            return answer.apply(JobFields.GEAR_THICKNESS_SERIES.key()).isBlank();
+        }
+        if (key.startsWith("gear.mate.") && !key.equals(JobFields.MATE_TEETH.key())) {
+            return !answer.apply(JobFields.MATE_TEETH.key()).isBlank();
+        }
+        return true;
     }
 
     /**
      * True when a field belongs to the part kind answered ({@link JobFields#PART}): a gear job has no
      * spline questions, a spline job none of the gear's. A step shows only these fields.
+     *
+     * @param key    the field's key
+     * @param answer the answer text of a key, empty when not answered
+     * @return true when the field belongs to the part kind
      */
-    public static boolean ofThePart(String key, UnaryOperator<String> value) {
-        boolean spline = JobFields.PARTS.get(1).equals(value.apply(JobFields.PART.key()));
+    public static boolean ofThePart(String key, Function<String, String> answer) {
+        boolean spline = JobFields.PARTS.get(1).equals(answer.apply(JobFields.PART.key()));
         return key.startsWith("gear.") ? !spline : !splineOnly(key) || spline;
     }
 
