@@ -73,10 +73,11 @@ public final class DialectLoader {
      * Loads a dialect.
      *
      * @param fileName the dialect's name or file name, for messages
-     * @param json     the dialect text
+     * @param text     the dialect text (a leading byte-order mark is skipped)
      * @return the dialect or the findings that say why not
      */
-    public static Loaded load(String fileName, String json) {
+    public static Loaded load(String fileName, String text) {
+        String json = JsonTrees.withoutByteOrderMark(text);
         JsonLines lines = JsonLines.of(json);
         Optional<DialectFile> plain = plain(json);
         DialectFile file;

@@ -66,7 +66,7 @@ final class JobPlanning {
         double root = gd.rootDiameterMm();
         SpeedWindow window = SpeedWindow.of(machine, hob, ratio);
         Optional<CuttingData> row = table.find(cycle.workMaterial(), hob.material(), gear.moduleMm());
-        new Blockers(job, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
+        new Blockers(job, table, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }

@@ -10,6 +10,7 @@ import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.UnitKind;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
+import org.hobwright.wizard.check.Wording;
 
 /**
  * The lines of the REVIEW step and of the terminal's run summary: setup, inspection, cycle time
@@ -42,13 +43,14 @@ public final class ReviewLines {
                 + " (" + s.swivelAngleDms() + ")");
         lines.add("  swivel setting " + s.swivelSettingText() + ", " + s.swivelDirection());
         lines.add("  hob " + num(s.hobRpm(), 0) + " rpm, work " + num(s.workRpm(), 1) + " rpm, sync ratio "
-                + s.syncHobTurns() + " hob : " + s.syncWorkTurns() + " work turns, cutting speed "
+                + Wording.count(s.syncHobTurns(), "hob turn", "hob turns") + " : "
+                + Wording.count(s.syncWorkTurns(), "work turn", "work turns") + ", cutting speed "
                 + speed(s.cuttingSpeedMPerMin()));
     }
 
     private void inspection(InspectionData i) {
         lines.add("Inspection");
-        lines.add("  span over " + i.spanTeeth() + " teeth " + len(i.spanWidthMm()) + ", over two "
+        lines.add("  span over " + Wording.teeth(i.spanTeeth()) + " " + len(i.spanWidthMm()) + ", over two "
                 + (i.balls() ? "balls" : "pins") + " of " + len(i.pinDiameterMm()) + ": " + len(i.overPinsMm()));
     }
 

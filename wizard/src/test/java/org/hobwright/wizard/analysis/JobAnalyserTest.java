@@ -145,6 +145,11 @@ class JobAnalyserTest {
         assertFalse(has(JobAnalyser.analyse(b.build()), "DRAWING_SPAN"));
         b.drawing = JobBuilder.drawing(null, null, null, null, 30, 7.6883, null, null);
         assertEquals("gear.drawing.spanTeeth", only(JobAnalyser.analyse(b.build()), "DRAWING_SPAN_TEETH").field());
+        // a span over one tooth (W_1 of m 1, z 24 is 1.81 mm) printed wrong: the count reads in the singular
+        b.drawing = JobBuilder.drawing(null, null, null, null, 1, 2.5, null, null);
+        Finding one = only(JobAnalyser.analyse(b.build()), "DRAWING_SPAN");
+        String text = one.message() + " " + one.fix().orElse("");
+        assertTrue(text.contains("span over 1 tooth") && !text.contains("1 teeth"), text);
     }
 
     @Test
