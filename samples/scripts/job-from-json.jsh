@@ -8,8 +8,8 @@ import org.hobwright.api.check.Finding;
 
 var hw = Hobwright.open(Files.createTempDirectory("hobwright-library"));
 System.out.println("machines: " + hw.library().machines());
-var lathe = hw.library().machine("ottmere-tl40").orElseThrow();
-System.out.println("ottmere-tl40 follows a helix: " + lathe.followsHelix());
+var lathe = hw.library().machine("ottmere-4008").orElseThrow();
+System.out.println("ottmere-4008 follows a helix: " + lathe.followsHelix());
 System.out.println(hw.library().cuttingData("steel-free-machining", "hss-coated").orElseThrow());
 
 var json = """
@@ -20,7 +20,7 @@ var json = """
                 "thicknessAllowance": -0.02, "toothSystem": "iso53-a", "toleranceClass": 8 },
       "hob": { "module": 0.8, "pressureAngle": 20, "starts": 1, "hand": "right",
                "outsideDiameter": 25, "gashes": 12, "length": 25, "material": "hss-coated" },
-      "machine": "ottmere-tl40",
+      "machine": "ottmere-4008",
       "cycle": { "workMaterial": "steel-free-machining" }
     }
     """;
@@ -32,7 +32,7 @@ if (planned.hasErrors()) {
 }
 
 // the same gear on the lathe whose control cannot follow a helix: refused, with the reason
-var refused = hw.plan(job.withMachine(hw.library().machine("varrow-sl16").orElseThrow()));
+var refused = hw.plan(job.withMachine(hw.library().machine("varrow-1605").orElseThrow()));
 System.out.println(Finding.lines(refused.findings()));
 if (!refused.hasErrors()) {
     throw new IllegalStateException("a helical gear on a spur-only lathe must be refused");

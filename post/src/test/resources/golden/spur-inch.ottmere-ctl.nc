@@ -1,9 +1,8 @@
 ; program 7300 spur-inch
-G90 G17
 ; Hobwright hobbing program - a starting point to be proved out
 ; Part DR-32 dial drive gear
 ; Job spur-inch date 2026-12-01 Hobwright 0.1.0-test
-; Machine varrow-sl16 dialect ottmere-ctl units in
+; Machine varrow-1605 dialect ottmere-ctl units in
 ; Gear z 32 DP 32/in pressure angle 20.0000 deg spur x 0.0000 face 0.2500 in
 ; Tip dia 1.0625 ref dia 1.0000 root dia 0.9210 in
 ; Hob DP 32/in 1 start right hand OD 1.2500 in 12 gashes hss lead angle 1.5292
@@ -16,7 +15,7 @@ G90 G17
 ; Ratio hob:work 32:1
 ; Hob spindle clockwise seen from its drive end
 ; Work spindle clockwise seen from the front face of the gear
-; Feed from the front face toward the chuck (climb hobbing)
+; Feed from the front face toward the chuck climb hobbing
 ; Passes 1 finish feed 0.02000 in/rev cycle time 79.7 s
 ; Caution: rotating multi-tooth cutter and synchronised spindles.
 ; Keep the guards closed and never reach into the working area while the
@@ -28,21 +27,26 @@ G90 G17
 ; Follow the machine builder's manual, local codes and your shop's licensed
 ; practice.
 ; Cutting data are typical values: confirm them with the hob supplier.
-G70
+G20 G18 G8 G40 G90
 G95
-T21 D1
-M206
+G54
+G0 X0.6299
+T5 M6 G43
 ; Pass 1 of 1: full depth, climb
 M8
 G0 X0.5713 Z0.3289
-S25.1 M303
-G133 P32 Q1 E802. M213
-G4 F1.5
+S25.1 M4
+M173 P802.
+M171 P32 Q1
+G4 P1.5
 G0 X0.4605 Z0.3289
 G1 X0.4605 Z-0.29 F0.02
 G0 X0.5713 Z-0.29
-G132
-M205 M305
+M170
+M175
+M5
 G0 X0.5713 Z0.3289
 M9
+G0 X0.6299
+G28
 M30

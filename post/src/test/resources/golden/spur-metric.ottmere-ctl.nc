@@ -1,9 +1,8 @@
 ; program 7300 spur-metric
-G90 G17
 ; Hobwright hobbing program - a starting point to be proved out
 ; Part SP-20 idler gear
 ; Job spur-metric date 2026-12-01 Hobwright 0.1.0-test
-; Machine ottmere-tl40 dialect ottmere-ctl units mm
+; Machine ottmere-4008 dialect ottmere-ctl units mm
 ; Gear z 20 module 2 mm pressure angle 20.0000 deg spur x 0.0000 face 20.000 mm
 ; Tip dia 44.000 ref dia 40.000 root dia 35.000 mm
 ; Hob module 2 mm 1 start right hand OD 70.000 mm 14 gashes hss-coated lead
@@ -16,7 +15,7 @@ G90 G17
 ; Ratio hob:work 20:1
 ; Hob spindle clockwise seen from its drive end
 ; Work spindle counter-clockwise seen from the front face of the gear
-; Feed from the front face toward the chuck (climb hobbing)
+; Feed from the front face toward the chuck climb hobbing
 ; Passes 1 finish feed 1.5000 mm/rev cycle time 130.9 s
 ; Caution: rotating multi-tooth cutter and synchronised spindles.
 ; Keep the guards closed and never reach into the working area while the
@@ -28,23 +27,28 @@ G90 G17
 ; Follow the machine builder's manual, local codes and your shop's licensed
 ; practice.
 ; Cutting data are typical values: confirm them with the hob supplier.
-G71
+G21 G18 G8 G40 G90
 G95
-T21 D1
-M206
+G54
+G0 X60.
+T5 M6 G43
 ; Pass 1 of 1: full depth, climb
 M8
 G0 A1.763
-G0 Y0.
+M157 P0.
 G0 X24. Z19.169
-S13.6 M304
-G133 P20 Q1 E272.8 M213
-G4 F2.
+S13.6 M3
+M173 P272.8
+M171 P20 Q1
+G4 P2.
 G0 X17.5 Z19.169
 G1 X17.5 Z-22. F1.5
 G0 X24. Z-22.
-G132
-M205 M305
+M170
+M175
+M5
 G0 X24. Z19.169
 M9
+G0 X60.
+G28
 M30

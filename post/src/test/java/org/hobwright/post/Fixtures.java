@@ -76,6 +76,17 @@ public final class Fixtures {
                     Map.of(WriteContext.DIALECT, dialectText(dialect), WriteContext.DIALECT_NAME, dialect));
         }
 
+        /**
+         * The shipped dialects this cycle can be posted with: every one that has the axes its steps
+         * move (a programmable swivel, a hob-shift axis); a manual swivel holder is set by hand.
+         */
+        public List<String> dialects() {
+            boolean swivel = cycle.steps().stream().anyMatch(s -> s instanceof CycleStep.Swivel sw && sw.programmable());
+            boolean shift = cycle.steps().stream().anyMatch(CycleStep.HobShift.class::isInstance);
+            return Fixtures.dialects().stream().filter(d -> (!swivel || dialectText(d).contains("\"swivel\": {"))
+                    && (!shift || dialectText(d).contains("\"shift\": {"))).toList();
+        }
+
         /** A context without a dialect. */
         public WriteContext plainContext() {
             return new WriteContext(job, DATE, "0.1.0-test", Map.of());
@@ -102,17 +113,17 @@ public final class Fixtures {
         }
     }
 
-    /** Varrow SL-16 as in samples/scenario/machines/varrow-sl16.json (resolution 0°5′). */
+    /** Varrow 1605 as in samples/scenario/machines/varrow-1605.json (resolution 0°5′). */
     static MachineProfile varrow() {
-        return new MachineProfile("varrow-sl16", "varrow-ctl", 5, 10000, 100, 6000, 120, false,
+        return new MachineProfile("varrow-1605", "varrow-ctl", 5, 10000, 100, 6000, 120, false,
                 new SwivelHolder(SwivelHolder.SwivelScale.DEGREES_MINUTES, 5.0 / 60, false, 30,
                         "top of the hob swung toward the main spindle", true),
                 0, 32, -10, 120, OptionalDouble.empty(), 12000, 2000, 1.5, 40);
     }
 
-    /** Ottmere TL-40 as in samples/scenario/machines/ottmere-tl40.json. */
+    /** Ottmere 4008 as in samples/scenario/machines/ottmere-4008.json. */
     static MachineProfile ottmere() {
-        return new MachineProfile("ottmere-tl40", "ottmere-ctl", 2, 4500, 50, 4000, 150, true,
+        return new MachineProfile("ottmere-4008", "ottmere-ctl", 2, 4500, 50, 4000, 150, true,
                 new SwivelHolder(SwivelHolder.SwivelScale.DECIMAL_DEGREES, 0.001, true, 45,
                         "hob head turned counter-clockwise seen from the operator side", false),
                 0, 120, -20, 250, OptionalDouble.of(40), 20000, 5000, 2.0, 80);

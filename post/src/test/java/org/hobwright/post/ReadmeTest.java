@@ -1,5 +1,6 @@
 package org.hobwright.post;
 
+import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -9,6 +10,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.hobwright.post.csv.CsvColumn;
+import org.hobwright.post.nc.DialectKeys;
 import org.hobwright.post.nc.Placeholder;
 import org.hobwright.post.nc.TemplateKey;
 import org.junit.jupiter.api.Test;
@@ -29,6 +31,46 @@ class ReadmeTest {
         for (TemplateKey t : TemplateKey.values()) {
             assertTrue(r.contains("| `" + t.key() + "` | " + (t.required() ? "yes" : "when")), t.key());
         }
+    }
+
+    /** The dialect's key table, as the definition gives it. */
+    static String dialectKeyTable() {
+        StringBuilder t = new StringBuilder("| key | value | required | meaning |\n|---|---|---|---|\n");
+        for (DialectKeys.Key k : DialectKeys.ALL) {
+            String value = switch (k.kind()) {
+                case TEXT -> k.choices().isEmpty() ? "text" : k.choices().stream().map(c -> "`\"" + c + "\"`")
+                        .collect(java.util.stream.Collectors.joining(" or "));
+                case ANY_TEXT -> "text, may be empty";
+                case LETTERS -> "1 to 3 letters";
+                case INTEGER -> k.min() == k.max() ? "`" + k.min() + "`" : !k.choices().isEmpty()
+                        ? String.join(" or ", k.choices()) : "whole number " + k.min() + "–" + k.max();
+                case BOOLEAN -> "`true` or `false`";
+                case OBJECT -> "object";
+                case LINES -> "text or list of texts";
+                case TEMPLATES -> "object of templates";
+            };
+            t.append("| `").append(k.path()).append("` | ").append(value).append(" | ")
+                    .append(k.required() ? "yes" : "no").append(" | ").append(k.meaning()).append(" |\n");
+        }
+        return t.toString();
+    }
+
+    @Test
+    void theDialectKeyTableIsTheDefinition() throws IOException {
+        String marker = "<!-- dialect keys: generated from DialectKeys, checked by ReadmeTest -->\n";
+        String r = readme();
+        int at = r.indexOf(marker);
+        assertTrue(at >= 0, "README has the dialect key table's marker");
+        int from = at + marker.length();
+        int to = r.indexOf("\n\n", from);
+        String table = dialectKeyTable();
+        if (System.getenv("HOBWRIGHT_WRITE_README") != null) {
+            Files.writeString(Path.of("README.md"), r.substring(0, from) + table.strip() + r.substring(to));
+            r = readme();
+            to = r.indexOf("\n\n", from);
+        }
+        assertEquals(table.strip(), r.substring(from, to),
+                "post/README.md's dialect key table differs from DialectKeys; rewrite it with HOBWRIGHT_WRITE_README=1");
     }
 
     @Test

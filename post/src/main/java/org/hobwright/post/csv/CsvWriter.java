@@ -43,15 +43,6 @@ public final class CsvWriter implements CycleWriter {
     public WriteResult write(HobCycle cycle, WriteContext context) {
         Optional<WriteResult> refusal = PostFindings.refusal(cycle, context, id());
         return refusal.orElseGet(() -> WriteResult.of(
-                new OutputFile(context.job().name() + ".csv", CycleCsv.write(cycle.steps(), dialect(context)))));
-    }
-
-    /**
-     * The machine's dialect, for the machine-axis columns; empty when none is given or it does not
-     * load (the NC writer reports why).
-     */
-    private static Optional<Dialect> dialect(WriteContext context) {
-        return context.resource(WriteContext.DIALECT).flatMap(text -> DialectLoader.load(
-                context.resource(WriteContext.DIALECT_NAME).orElse("dialect"), text).dialect());
+                new OutputFile(context.job().name() + ".csv", CycleCsv.write(cycle.steps(), DialectLoader.of(context)))));
     }
 }

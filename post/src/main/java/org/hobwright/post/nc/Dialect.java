@@ -14,7 +14,8 @@ import org.hobwright.api.job.Units;
  * @param lineEnding     the line separator text ({@code \r\n} or {@code \n})
  * @param maxLineLength  longest allowed block, characters, line number included
  * @param numbering      line numbering, when the dialect numbers blocks
- * @param programNumber  the program number
+ * @param programNumbers the program numbers the control takes, with the default
+ * @param toolStations   the tool stations the hob can sit in, with the default
  * @param decimals       decimals per kind of value
  * @param trailingZeros  false writes {@code 24.} for {@code 24.000}
  * @param comments       comment rules
@@ -34,7 +35,8 @@ public record Dialect(
         String lineEnding,
         int maxLineLength,
         Optional<Numbering> numbering,
-        int programNumber,
+        NumberRange programNumbers,
+        NumberRange toolStations,
         Decimals decimals,
         boolean trailingZeros,
         CommentRules comments,
@@ -55,6 +57,20 @@ public record Dialect(
         prologue = List.copyOf(prologue);
         epilogue = List.copyOf(epilogue);
         templates = Map.copyOf(templates);
+    }
+
+    /**
+     * Whole numbers the control takes, and the one used when the job gives none.
+     *
+     * @param dflt the default, within min and max
+     * @param min  the smallest
+     * @param max  the largest
+     */
+    public record NumberRange(long dflt, long min, long max) {
+        /** True when the control takes this number. */
+        public boolean takes(long n) {
+            return n >= min && n <= max;
+        }
     }
 
     /**

@@ -1,58 +1,39 @@
 package org.hobwright.post.nc;
 
-import org.hobwright.post.PostCode;
 import java.util.ArrayList;
 import java.util.EnumMap;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.Rotation;
-import org.hobwright.post.nc.DialectFile.RotationWords;
+import org.hobwright.api.spi.WriteContext;
+import org.hobwright.post.PostCode;
 import org.hobwright.text.JsonTrees;
 import tools.jackson.core.JacksonException;
-import tools.jackson.core.StreamReadFeature;
-import tools.jackson.databind.DeserializationFeature;
+import tools.jackson.core.JsonParser;
+import tools.jackson.core.JsonToken;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.MapperFeature;
-import tools.jackson.databind.json.JsonMapper;
+import tools.jackson.databind.node.ObjectNode;
 
 /**
- * Reads a dialect file (JSON) and checks it completely: unknown keys, unknown placeholders, a
- * placeholder used where it has no value, missing required templates and values out of range all
- * become error findings that name the dialect and the line. Never throws for bad input.
+ * The one reader of dialect files. It reads the JSON tree with its lines, checks every key against
+ * {@link DialectKeys} (unknown keys, missing keys, kinds, ranges, choices) and every template against
+ * {@link TemplateKey} (unknown templates and placeholders, a placeholder where it has no value,
+ * missing required templates, templates that need an axis), and collects every
+ * problem as an error finding that names the dialect, the line and the key:
+ * {@code varrow-ctl line 42, templates.feed: unknown placeholder {fed}}. Never throws for bad input.
  */
 public final class DialectLoader {
 
     /** The {@code format} every dialect file states. */
-    public static final String FORMAT = "hobwright-dialect";
+    public static final String FORMAT = DialectKeys.FORMAT;
 
-    /** The newest dialect version this loader reads. */
-    public static final int VERSION = 1;
+    /** The dialect version this loader reads. */
+    public static final int VERSION = DialectKeys.VERSION;
 
-    /** Largest count of decimals a dialect may ask for. */
-    static final int MAX_DECIMALS = 6;
-
-
-    /**
-     * The object mapper for dialect files, built on first use: a dialect in the plain form is bound
-     * by {@link DialectTree} without one (building a mapper is a large share of a short run's
-     * start-up), any other form by this mapper, whose binding is the reference for {@code DialectTree}.
-     */
-    static final class Binding {
-        static final JsonMapper MAPPER = JsonMapper.builder()
-                .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-                .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-                .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-                .enable(DeserializationFeature.ACCEPT_SINGLE_VALUE_AS_ARRAY)
-                .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
-                .disable(MapperFeature.ALLOW_COERCION_OF_SCALARS)
-                .build();
-
-        private Binding() {
-        }
-    }
+    private static final String FIX_SEE_README = "post/README.md describes every key";
 
     private DialectLoader() {
     }
@@ -73,195 +54,240 @@ public final class DialectLoader {
      * Loads a dialect.
      *
      * @param fileName the dialect's name or file name, for messages
-     * @param text     the dialect text (a leading byte-order mark is skipped)
+     * @param json     the dialect text (a leading byte-order mark is skipped)
      * @return the dialect or the findings that say why not
      */
-    public static Loaded load(String fileName, String text) {
-        String json = JsonTrees.withoutByteOrderMark(text);
-        JsonLines lines = JsonLines.of(json);
-        Optional<DialectFile> plain = plain(json);
-        DialectFile file;
-        try {
-            file = plain.isPresent() ? plain.get() : Binding.MAPPER.readValue(json, DialectFile.class);
+    public static Loaded load(String fileName, String json) {
+        Map<String, Integer> lines = new HashMap<>();
+        ObjectNode root;
+        try (JsonParser p = JsonTrees.parser(json)) {
+            JsonToken t = p.nextToken();
+            if (t != JsonToken.START_OBJECT) {
+                return unreadable(fileName, 1, "dialect", t == null ? "the file is empty"
+                        : "the file holds no JSON object", "write a dialect object { ... }");
+            }
+            root = JsonTrees.readObject(p, "", lines::put);
+            if (p.nextToken() != null) {
+                return unreadable(fileName, p.currentTokenLocation().getLineNr(), "dialect",
+                        "text after the end of the dialect object", "remove it");
+            }
+        } catch (JsonTrees.DuplicateKey e) {
+            return unreadable(fileName, e.line(), "dialect." + e.path(), "key " + e.path() + " is written twice",
+                    "keep one of the two");
         } catch (JacksonException e) {
-            String pointer = e.getPath().stream().map(r -> "/" + (r.getPropertyName() != null ? r.getPropertyName()
-                    : String.valueOf(r.getIndex()))).reduce("", String::concat);
-            int line = e.getLocation() != null && e.getLocation().getLineNr() > 0 ? e.getLocation().getLineNr()
-                    : lines.line(pointer);
-            String path = "dialect" + pointer.replace('/', '.');
-            return new Loaded(Optional.empty(), List.of(PostCode.NC_DIALECT_UNREADABLE.at(path,
-                    fileName + " line " + line + ": " + JsonTrees.message(e),
-                    "correct the dialect file at that line (post/README.md describes every key)")));
+            return unreadable(fileName, Math.max(1, JsonTrees.line(e)), "dialect", JsonTrees.message(e),
+                    "correct the JSON at that line (" + FIX_SEE_README + ")");
         }
-        if (file == null) {
-            return new Loaded(Optional.empty(), List.of(PostCode.NC_DIALECT_UNREADABLE.at("dialect",
-                    fileName + " line 1: the file is empty", "write a dialect object")));
-        }
-        return new Check(fileName, lines).dialect(file);
+        return new Reading(fileName, lines, root).dialect();
     }
 
     /**
-     * The file bound by {@link DialectTree} when it is in the plain form, without duplicate keys;
-     * empty otherwise, and the caller binds with Jackson, which reports any problem (a repeated key
-     * too: its parser detects them).
+     * The dialect a write context holds ({@link WriteContext#DIALECT}, named by
+     * {@link WriteContext#DIALECT_NAME} or the machine's dialect); empty when it holds none or one that
+     * does not load (the program writer reports why).
      */
-    private static Optional<DialectFile> plain(String json) {
-        try {
-            JsonNode root = JsonTrees.parse(json);
-            return root.isMissingNode() ? Optional.empty() : DialectTree.bind(root);
-        } catch (JacksonException | JsonTrees.DuplicateKey e) {
+    public static Optional<Dialect> of(WriteContext context) {
+        Optional<String> text = context.resource(WriteContext.DIALECT);
+        if (text.isEmpty()) {
             return Optional.empty();
         }
+        return load(context.resource(WriteContext.DIALECT_NAME).orElse(context.job().machine().dialect()), text.get())
+                .dialect();
     }
 
-    /** Checks one bound file and collects findings. */
-    private static final class Check {
+    private static Loaded unreadable(String fileName, int line, String field, String message, String fix) {
+        return new Loaded(Optional.empty(), List.of(PostCode.NC_DIALECT_UNREADABLE.at(field,
+                fileName + " line " + line + ": " + message, fix)));
+    }
+
+    /** One file being read: its tree, the lines of its keys and the findings so far. */
+    private static final class Reading {
         private final String fileName;
-        private final JsonLines lines;
+        private final Map<String, Integer> lines;
+        private final ObjectNode root;
         private final List<Finding> findings = new ArrayList<>();
 
-        Check(String fileName, JsonLines lines) {
+        Reading(String fileName, Map<String, Integer> lines, ObjectNode root) {
             this.fileName = fileName;
             this.lines = lines;
+            this.root = root;
         }
 
-        Loaded dialect(DialectFile f) {
-            if (!FORMAT.equals(f.format())) {
-                error(PostCode.NC_DIALECT_FORMAT, "/format", "\"format\" must be \"" + FORMAT + "\", was "
-                        + quoted(f.format()), "put \"format\": \"" + FORMAT + "\" in the file");
-            }
-            if (f.version() == null || f.version() != VERSION) {
-                error(PostCode.NC_DIALECT_VERSION, "/version", "\"version\" must be " + VERSION + ", was " + f.version(),
-                        "this build reads dialect version " + VERSION + "; update Hobwright or the file");
-            }
-            String name = text(f.name(), "/name");
-            String ending = lineEnding(f.lineEnding());
-            int maxLen = integer(f.maxLineLength(), "/maxLineLength", 20, 1000);
-            Optional<Dialect.Numbering> numbering = numbering(f.lineNumbers());
-            int programNumber = integer(f.programNumber(), "/programNumber", 0, 99_999_999);
-            Dialect.Decimals decimals = decimals(f.decimals());
-            boolean trailingZeros = flag(f.trailingZeros(), "/trailingZeros");
-            Dialect.CommentRules comments = comments(f.comments());
-            DialectFile.Axes axes = present(f.axes(), "/axes");
-            Dialect.Axis radial = axis(axes == null ? null : axes.radial(), "/axes/radial", true);
-            Dialect.Axis axial = axis(axes == null ? null : axes.axial(), "/axes/axial", true);
-            Optional<Dialect.Axis> swivel = Optional.ofNullable(axes == null ? null : axes.swivel())
-                    .map(a -> axis(a, "/axes/swivel", false));
-            Optional<Dialect.Axis> shift = Optional.ofNullable(axes == null ? null : axes.shift())
-                    .map(a -> axis(a, "/axes/shift", false));
-            DialectFile.Rotations rot = present(f.rotation(), "/rotation");
-            Map<Rotation, String> work = words(rot == null ? null : rot.work(), "/rotation/work");
-            Map<Rotation, String> hob = words(rot == null ? null : rot.hob(), "/rotation/hob");
-            Map<TemplateKey, List<LineTemplate>> templates = templates(f.templates(), swivel.isPresent(),
-                    shift.isPresent());
-            Map<TemplateKey, Integer> each = new EnumMap<>(TemplateKey.class);
-            templates.keySet().forEach(k -> each.put(k, lines.line("/templates/" + k.key())));
-            if (Finding.anyError(findings)) {
+        Loaded dialect() {
+            if (!version()) {
                 return new Loaded(Optional.empty(), findings);
             }
-            return new Loaded(Optional.of(new Dialect(name, ending, maxLen, numbering, programNumber, decimals,
-                    trailingZeros, comments, radial, axial, swivel, shift, work, hob,
-                    plain(f.prologue()), plain(f.epilogue()), templates,
-                    new Dialect.Lines(lines.line("/templates"), each))), findings);
+            check("", root);
+            JsonNode raw = root.get("templates");
+            Map<TemplateKey, List<LineTemplate>> templates = raw != null && raw.isObject()
+                    ? templates(raw, node("axes.swivel") != null, node("axes.shift") != null)
+                    : Map.of();
+            if (!findings.isEmpty()) {
+                return new Loaded(Optional.empty(), findings);
+            }
+            Dialect.NumberRange programs = range("programNumber");
+            Dialect.NumberRange tools = range("toolStation");
+            Dialect.Axis radial = axis("axes.radial");
+            Dialect.Axis axial = axis("axes.axial");
+            Optional<Dialect.Axis> swivel = optionalAxis("axes.swivel");
+            Optional<Dialect.Axis> shift = optionalAxis("axes.shift");
+            if (!findings.isEmpty()) {
+                return new Loaded(Optional.empty(), findings);
+            }
+            Map<TemplateKey, Integer> each = new EnumMap<>(TemplateKey.class);
+            templates.keySet().forEach(k -> each.put(k, line("templates." + k.key())));
+            Optional<Dialect.Numbering> numbering = node("lineNumbers") == null ? Optional.empty()
+                    : Optional.of(new Dialect.Numbering(text("lineNumbers.word"), integer("lineNumbers.start"),
+                    integer("lineNumbers.step")));
+            Dialect.Decimals decimals = new Dialect.Decimals(integer("decimals.mm"), integer("decimals.in"),
+                    integer("decimals.mmPerRev"), integer("decimals.inPerRev"), integer("decimals.deg"),
+                    integer("decimals.differential"), integer("decimals.s"), integer("decimals.rpm"));
+            Dialect.CommentRules comments = new Dialect.CommentRules(bool("comments.upperCase"),
+                    node("comments.forbidden") == null ? "" : text("comments.forbidden"));
+            return new Loaded(Optional.of(new Dialect(text("name"), "crlf".equals(text("lineEnding")) ? "\r\n" : "\n",
+                    integer("maxLineLength"), numbering, programs, tools, decimals, bool("trailingZeros"), comments,
+                    radial, axial, swivel, shift, words("rotation.work"),
+                    words("rotation.hob"), lines("prologue"), lines("epilogue"), templates,
+                    new Dialect.Lines(line("templates"), each))), findings);
         }
 
-        private String lineEnding(String value) {
-            if ("lf".equals(value)) {
-                return "\n";
+        /** The format and version, before anything else: another version is read no further. */
+        private boolean version() {
+            JsonNode f = root.get("format");
+            if (f == null || !f.isString() || !FORMAT.equals(f.stringValue())) {
+                error(PostCode.NC_DIALECT_FORMAT, "format", "\"format\" must be \"" + FORMAT + "\", was "
+                        + (f == null ? "nothing" : f.toString()), "put \"format\": \"" + FORMAT + "\" in the file");
             }
-            if ("crlf".equals(value)) {
-                return "\r\n";
+            JsonNode v = root.get("version");
+            if (v == null || !v.isInt() || v.intValue() != VERSION) {
+                String was = v == null ? "nothing" : v.toString();
+                String fix = v != null && v.isInt() && v.intValue() == 1
+                        ? "version 1 has no safe start and end and takes the program number and tool from the"
+                        + " dialect alone: add the templates safeStart and safeEnd, {tool} in toolCall, the objects"
+                        + " programNumber and toolStation { default, min, max }, and set \"version\": " + VERSION
+                        : "this build reads dialect version " + VERSION + "; update Hobwright or the file";
+                error(PostCode.NC_DIALECT_VERSION, "version", "\"version\" must be " + VERSION + ", was " + was, fix);
+                return false;
             }
-            error(PostCode.NC_DIALECT_BAD_VALUE, "/lineEnding", "\"lineEnding\" must be \"lf\" or \"crlf\", was "
-                    + quoted(value), "write \"lf\" or \"crlf\" as the control expects");
-            return "\n";
+            return true;
         }
 
-        private Optional<Dialect.Numbering> numbering(DialectFile.LineNumbers n) {
-            if (n == null) {
-                return Optional.empty();
-            }
-            String word = letters(n.word(), "/lineNumbers/word");
-            int start = integer(n.start(), "/lineNumbers/start", 0, 99_999_999);
-            int step = integer(n.step(), "/lineNumbers/step", 1, 10_000);
-            return Optional.of(new Dialect.Numbering(word, start, step));
-        }
-
-        private Dialect.Decimals decimals(DialectFile.Decimals d) {
-            if (present(d, "/decimals") == null) {
-                return new Dialect.Decimals(0, 0, 0, 0, 0, 0, 0, 0);
-            }
-            return new Dialect.Decimals(
-                    integer(d.mm(), "/decimals/mm", 0, MAX_DECIMALS),
-                    integer(d.inch(), "/decimals/in", 0, MAX_DECIMALS),
-                    integer(d.mmPerRev(), "/decimals/mmPerRev", 0, MAX_DECIMALS),
-                    integer(d.inPerRev(), "/decimals/inPerRev", 0, MAX_DECIMALS),
-                    integer(d.deg(), "/decimals/deg", 0, MAX_DECIMALS),
-                    integer(d.differential(), "/decimals/differential", 0, MAX_DECIMALS + 2),
-                    integer(d.s(), "/decimals/s", 0, MAX_DECIMALS),
-                    integer(d.rpm(), "/decimals/rpm", 0, MAX_DECIMALS));
-        }
-
-        private Dialect.CommentRules comments(DialectFile.Comments c) {
-            if (present(c, "/comments") == null) {
-                return new Dialect.CommentRules(false, "");
-            }
-            return new Dialect.CommentRules(flag(c.upperCase(), "/comments/upperCase"),
-                    c.forbidden() == null ? "" : c.forbidden());
-        }
-
-        private Dialect.Axis axis(DialectFile.Axis a, String pointer, boolean needsSign) {
-            if (present(a, pointer) == null) {
-                return new Dialect.Axis("?", 1, false);
-            }
-            String letter = letters(a.letter(), pointer + "/letter");
-            int sign = 1;
-            if (a.sign() != null || needsSign) {
-                Integer s = a.sign();
-                if (s == null || (s != 1 && s != -1)) {
-                    error(PostCode.NC_DIALECT_BAD_VALUE, pointer + "/sign", "\"sign\" must be 1 or -1, was " + s,
-                            "write 1 when the axis counts like Hobwright's value, -1 when it counts the other way");
+        /** Checks the members of an object against the keys defined for it, then its required keys. */
+        private void check(String path, JsonNode object) {
+            for (Map.Entry<String, JsonNode> e : object.properties()) {
+                String child = join(path, e.getKey());
+                Optional<DialectKeys.Key> key = DialectKeys.at(child);
+                if (child.equals("format") || child.equals("version")) {
+                    continue;
+                }
+                if (key.isEmpty()) {
+                    error(PostCode.NC_DIALECT_UNKNOWN_KEY, child, "the dialect format has no key \"" + e.getKey()
+                            + "\"" + (path.isEmpty() ? "" : " in \"" + path + "\""), "remove it or correct its name ("
+                            + FIX_SEE_README + ")");
                 } else {
-                    sign = s;
+                    value(key.get(), e.getValue());
                 }
             }
-            boolean diameter = a.diameter() != null && a.diameter();
-            if (diameter && !pointer.endsWith("radial")) {
-                error(PostCode.NC_DIALECT_BAD_VALUE, pointer + "/diameter", "only the radial axis can be programmed as a "
-                        + "diameter", "remove \"diameter\" from this axis");
+            for (DialectKeys.Key k : DialectKeys.children(path)) {
+                if (k.required() && !object.has(k.name())) {
+                    error(PostCode.NC_DIALECT_MISSING_KEY, k.path(), "\"" + k.name() + "\" is missing",
+                            "add it: " + k.meaning());
+                }
             }
-            return new Dialect.Axis(letter, sign, diameter);
         }
 
-        private Map<Rotation, String> words(RotationWords w, String pointer) {
-            Map<Rotation, String> m = new EnumMap<>(Rotation.class);
-            if (present(w, pointer) == null) {
-                return m;
+        private void value(DialectKeys.Key k, JsonNode v) {
+            switch (k.kind()) {
+                case OBJECT -> {
+                    if (v.isObject()) {
+                        check(k.path(), v);
+                    } else {
+                        wrongKind(k, "an object { ... }");
+                    }
+                }
+                case TEXT, ANY_TEXT -> {
+                    if (!v.isString()) {
+                        wrongKind(k, "a text in double quotes");
+                    } else if (k.kind() == DialectKeys.Kind.TEXT && v.stringValue().isBlank()) {
+                        error(PostCode.NC_DIALECT_BAD_VALUE, k.path(), "\"" + k.name() + "\" must not be blank",
+                                "write " + k.meaning());
+                    } else if (!k.choices().isEmpty() && !k.choices().contains(v.stringValue())) {
+                        error(PostCode.NC_DIALECT_BAD_VALUE, k.path(), "\"" + k.name() + "\" must be " + choices(k)
+                                + ", was \"" + v.stringValue() + "\"", "write one of them");
+                    }
+                }
+                case LETTERS -> {
+                    if (!v.isString() || !isAddressLetters(v.stringValue())) {
+                        error(PostCode.NC_DIALECT_BAD_VALUE, k.path(), "\"" + k.name() + "\" must be 1 to 3 letters,"
+                                + " was " + v, "write the address letter(s) the control uses");
+                    }
+                }
+                case INTEGER -> integer(k, v);
+                case BOOLEAN -> {
+                    if (!v.isBoolean()) {
+                        wrongKind(k, "true or false");
+                    }
+                }
+                case LINES -> lineList(k.path(), v);
+                case TEMPLATES -> {
+                    if (!v.isObject()) {
+                        wrongKind(k, "an object of templates { \"rapid\": \"...\", ... }");
+                    }
+                }
             }
-            m.put(Rotation.CLOCKWISE, text(w.clockwise(), pointer + "/clockwise"));
-            m.put(Rotation.COUNTER_CLOCKWISE, text(w.counterClockwise(), pointer + "/counterClockwise"));
-            return m;
         }
 
-        private Map<TemplateKey, List<LineTemplate>> templates(Map<String, List<String>> raw, boolean swivel,
-                                                              boolean shift) {
+        private void integer(DialectKeys.Key k, JsonNode v) {
+            // a zero fraction reads as the whole number (JSON does not tell 80 and 80.0 apart)
+            if (!v.isNumber() || v.doubleValue() != Math.rint(v.doubleValue()) || Math.abs(v.doubleValue()) > 1e15) {
+                wrongKind(k, "a whole number");
+                return;
+            }
+            long n = (long) v.doubleValue();
+            if (!k.choices().isEmpty() ? !k.choices().contains(Long.toString(n)) : n < k.min() || n > k.max()) {
+                error(PostCode.NC_DIALECT_BAD_NUMBER, k.path(), "\"" + k.name() + "\" must be " + (k.choices().isEmpty()
+                        ? "a whole number from " + k.min() + " to " + k.max() : choices(k)) + ", was " + n,
+                        "write " + k.meaning());
+            }
+        }
+
+        /** A list of texts, or one text. */
+        private List<String> lineList(String path, JsonNode v) {
+            List<String> out = new ArrayList<>();
+            if (v.isString()) {
+                out.add(v.stringValue());
+            } else if (v.isArray()) {
+                for (JsonNode e : v.values()) {
+                    if (!e.isString()) {
+                        error(PostCode.NC_DIALECT_BAD_VALUE, path + "[" + out.size() + "]", "every line must be a text"
+                                + " in double quotes, was " + e, "write the line as a text");
+                        return List.of();
+                    }
+                    out.add(e.stringValue());
+                }
+            } else {
+                error(PostCode.NC_DIALECT_BAD_VALUE, path, "must be a text or a list of texts, was " + v,
+                        "write a text, a list of texts, or [] for no line");
+                return List.of();
+            }
+            return out;
+        }
+
+        private Map<TemplateKey, List<LineTemplate>> templates(JsonNode raw, boolean swivel, boolean shift) {
             Map<TemplateKey, List<LineTemplate>> out = new EnumMap<>(TemplateKey.class);
-            if (present(raw, "/templates") == null) {
-                return out;
-            }
-            for (Map.Entry<String, List<String>> e : new LinkedHashMap<>(raw).entrySet()) {
-                String pointer = "/templates/" + e.getKey();
+            for (Map.Entry<String, JsonNode> e : raw.properties()) {
+                String path = "templates." + e.getKey();
                 Optional<TemplateKey> key = TemplateKey.byKey(e.getKey());
                 if (key.isEmpty()) {
-                    error(PostCode.NC_DIALECT_UNKNOWN_TEMPLATE, pointer, "unknown template \"" + e.getKey() + "\"",
+                    error(PostCode.NC_DIALECT_UNKNOWN_TEMPLATE, path, "unknown template \"" + e.getKey() + "\"",
                             "use one of the template names listed in post/README.md");
                     continue;
                 }
-                out.put(key.get(), templateLines(key.get(), e.getValue(), pointer));
+                out.put(key.get(), templateLines(key.get(), lineList(path, e.getValue()), path));
             }
             for (TemplateKey k : TemplateKey.values()) {
-                if (k.required() && !raw.containsKey(k.key())) {
-                    error(PostCode.NC_DIALECT_MISSING_TEMPLATE, "/templates", "required template \"" + k.key()
+                if (k.required() && !raw.has(k.key())) {
+                    error(PostCode.NC_DIALECT_MISSING_TEMPLATE, "templates", "required template \"" + k.key()
                             + "\" is missing", "add \"" + k.key() + "\" to \"templates\"");
                 }
             }
@@ -273,22 +299,17 @@ public final class DialectLoader {
         private void needsAxis(Map<TemplateKey, List<LineTemplate>> templates, TemplateKey key, boolean axis,
                                String axisName) {
             if (templates.containsKey(key) && !axis) {
-                error(PostCode.NC_DIALECT_BAD_VALUE, "/templates/" + key.key(), "template \"" + key.key()
+                error(PostCode.NC_DIALECT_BAD_VALUE, "templates." + key.key(), "template \"" + key.key()
                         + "\" needs \"axes\"." + axisName, "add \"" + axisName + "\": { \"letter\": ... } to \"axes\"");
             }
         }
 
-        private List<LineTemplate> templateLines(TemplateKey key, List<String> texts, String pointer) {
+        private List<LineTemplate> templateLines(TemplateKey key, List<String> texts, String path) {
             List<LineTemplate> out = new ArrayList<>();
-            if (texts == null) {
-                error(PostCode.NC_DIALECT_BAD_VALUE, pointer, "template \"" + key.key() + "\" is null",
-                        "write a text, a list of texts, or [] for no block");
-                return out;
-            }
             for (int i = 0; i < texts.size(); i++) {
-                String p = pointer + "/" + i;
+                String p = path + "[" + i + "]";
                 String t = texts.get(i);
-                if (t == null || t.isBlank()) {
+                if (t.isBlank()) {
                     error(PostCode.NC_DIALECT_BAD_VALUE, p, "template \"" + key.key() + "\" has a blank line",
                             "remove the blank line (an empty list [] writes no block)");
                     continue;
@@ -307,41 +328,109 @@ public final class DialectLoader {
             return out;
         }
 
+        private Dialect.NumberRange range(String path) {
+            long dflt = integer(path + ".default");
+            long min = integer(path + ".min");
+            long max = integer(path + ".max");
+            if (min > max || dflt < min || dflt > max) {
+                error(PostCode.NC_DIALECT_BAD_NUMBER, path, "\"" + path + "\" must have min ≤ default ≤ max, has"
+                        + " default " + dflt + ", min " + min + ", max " + max, "correct the three numbers");
+            }
+            return new Dialect.NumberRange(dflt, min, max);
+        }
+
+        private Optional<Dialect.Axis> optionalAxis(String path) {
+            return node(path) == null ? Optional.empty() : Optional.of(axis(path));
+        }
+
+        private Dialect.Axis axis(String path) {
+            JsonNode sign = node(path + ".sign");
+            JsonNode diameter = node(path + ".diameter");
+            boolean dia = diameter != null && diameter.booleanValue();
+            if (dia && !path.equals("axes.radial")) {
+                error(PostCode.NC_DIALECT_BAD_VALUE, path + ".diameter", "only the radial axis can be programmed as"
+                        + " a diameter", "remove \"diameter\" from this axis");
+            }
+            return new Dialect.Axis(text(path + ".letter"), sign == null ? 1 : sign.intValue(), dia);
+        }
+
+        private Map<Rotation, String> words(String path) {
+            Map<Rotation, String> m = new EnumMap<>(Rotation.class);
+            m.put(Rotation.CLOCKWISE, text(path + ".clockwise"));
+            m.put(Rotation.COUNTER_CLOCKWISE, text(path + ".counterClockwise"));
+            return m;
+        }
+
+        private List<String> lines(String path) {
+            JsonNode v = node(path);
+            return v == null ? List.of() : lineList(path, v);
+        }
+
+        /** The value at a dotted path, or null when absent. */
+        private JsonNode node(String path) {
+            JsonNode n = root;
+            int from = 0;
+            while (n != null && from <= path.length()) {
+                int dot = path.indexOf('.', from);
+                int to = dot < 0 ? path.length() : dot;
+                n = n.get(path.substring(from, to));
+                from = to + 1;
+            }
+            return n;
+        }
+
+        private String text(String path) {
+            return node(path).stringValue();
+        }
+
+        private int integer(String path) {
+            return (int) node(path).doubleValue();
+        }
+
+        private boolean bool(String path) {
+            return node(path).booleanValue();
+        }
+
+        private void wrongKind(DialectKeys.Key k, String expected) {
+            error(PostCode.NC_DIALECT_BAD_VALUE, k.path(), "\"" + k.name() + "\" must be " + expected + ", was "
+                    + node(k.path()), "write " + k.meaning());
+        }
+
+        /** An error naming the dialect, the line and the key; the field is the key's path under {@code dialect}. */
+        private void error(PostCode code, String path, String message, String fix) {
+            findings.add(code.at("dialect." + path.replace("[", ".").replace("]", ""),
+                    fileName + " line " + line(path) + ", " + path + ": " + message, fix));
+        }
+
+        /** The line of a key, or of its nearest parent that has one; 1 when unknown. */
+        private int line(String path) {
+            String p = path;
+            while (!p.isEmpty()) {
+                Integer l = lines.get(p);
+                if (l != null) {
+                    return l;
+                }
+                int cut = Math.max(p.lastIndexOf('.'), p.lastIndexOf('['));
+                p = cut < 0 ? "" : p.substring(0, cut);
+            }
+            return 1;
+        }
+
+        private static String join(String path, String key) {
+            return path.isEmpty() ? key : path + "." + key;
+        }
+
+        private static String choices(DialectKeys.Key k) {
+            return String.join(" or ", k.choices().stream().map(c -> k.kind() == DialectKeys.Kind.INTEGER ? c
+                    : "\"" + c + "\"").toList());
+        }
+
         private static String allowedText(TemplateKey key) {
             if (key.allowed().isEmpty()) {
                 return "literal words (this template takes no placeholder)";
             }
             return key.allowed().stream().sorted().map(p -> "{" + p.key() + "}")
                     .reduce((a, b) -> a + ", " + b).orElse("");
-        }
-
-        private List<String> plain(List<String> texts) {
-            return texts == null ? List.of() : texts.stream().filter(java.util.Objects::nonNull).toList();
-        }
-
-        private <T> T present(T value, String pointer) {
-            if (value == null) {
-                error(PostCode.NC_DIALECT_MISSING_KEY, pointer, "\"" + pointer.substring(pointer.lastIndexOf('/') + 1)
-                        + "\" is missing", "add it (post/README.md describes every key)");
-            }
-            return value;
-        }
-
-        private String text(String value, String pointer) {
-            if (present(value, pointer) != null && value.isBlank()) {
-                error(PostCode.NC_DIALECT_BAD_VALUE, pointer, "\"" + leaf(pointer) + "\" must not be blank",
-                        "write the word the control expects");
-            }
-            return value == null ? "?" : value;
-        }
-
-        private String letters(String value, String pointer) {
-            String v = text(value, pointer);
-            if (value != null && !isAddressLetters(value)) {
-                error(PostCode.NC_DIALECT_BAD_VALUE, pointer, "\"" + leaf(pointer) + "\" must be 1 to 3 letters, was "
-                        + quoted(value), "write the address letter(s) the control uses");
-            }
-            return v;
         }
 
         /** 1 to 3 ASCII letters. */
@@ -356,34 +445,6 @@ public final class DialectLoader {
                 }
             }
             return true;
-        }
-
-        private int integer(Integer value, String pointer, int min, int max) {
-            if (present(value, pointer) == null) {
-                return min;
-            }
-            if (value < min || value > max) {
-                error(PostCode.NC_DIALECT_BAD_NUMBER, pointer, "\"" + leaf(pointer) + "\" must be a whole number from "
-                        + min + " to " + max + ", was " + value, "write a value in that range");
-            }
-            return value;
-        }
-
-        private boolean flag(Boolean value, String pointer) {
-            return present(value, pointer) != null && value;
-        }
-
-        private void error(PostCode code, String pointer, String message, String fix) {
-            findings.add(code.at("dialect" + pointer.replace('/', '.'),
-                    fileName + " line " + lines.line(pointer) + ": " + message, fix));
-        }
-
-        private static String leaf(String pointer) {
-            return pointer.substring(pointer.lastIndexOf('/') + 1);
-        }
-
-        private static String quoted(String s) {
-            return s == null ? "nothing" : "\"" + s + "\"";
         }
     }
 }

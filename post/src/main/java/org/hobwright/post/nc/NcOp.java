@@ -19,6 +19,15 @@ public sealed interface NcOp {
     }
 
     /**
+     * The safe start or the safe end: the dialect's template with the machine's safe radial position.
+     *
+     * @param key        {@link TemplateKey#SAFE_START} or {@link TemplateKey#SAFE_END}
+     * @param diameterMm the safe work diameter of the hob tip (the machine's radial maximum), mm
+     */
+    record Safe(TemplateKey key, double diameterMm) implements NcOp {
+    }
+
+    /**
      * A comment line.
      *
      * @param text the text, not yet cleaned

@@ -6,7 +6,10 @@ import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.Units;
 
-/** Builds the program model from a cycle: start, header, setup blocks, one or two ops per step, end. */
+/**
+ * Builds the program model from a cycle: start, header, units and feed mode, the safe start, the tool
+ * call, one or two ops per step, the safe end, the end.
+ */
 final class NcProgramBuilder {
     private NcProgramBuilder() {
     }
@@ -17,13 +20,15 @@ final class NcProgramBuilder {
      * @param cycle  a cycle without errors
      * @param header the header comment lines
      * @param units  the job's units
+     * @param safeDiameterMm the machine's safe radial position, as a work diameter, mm
      */
-    static NcProgram build(HobCycle cycle, List<String> header, Units units) {
+    static NcProgram build(HobCycle cycle, List<String> header, Units units, double safeDiameterMm) {
         List<NcOp> ops = new ArrayList<>();
         ops.add(new NcOp.Fixed(TemplateKey.PROGRAM_START));
         header.forEach(h -> ops.add(new NcOp.Remark(h)));
         ops.add(new NcOp.Fixed(units == Units.MM ? TemplateKey.UNITS_MM : TemplateKey.UNITS_IN));
         ops.add(new NcOp.Fixed(TemplateKey.FEED_PER_REV));
+        ops.add(new NcOp.Safe(TemplateKey.SAFE_START, safeDiameterMm));
         ops.add(new NcOp.Fixed(TemplateKey.TOOL_CALL));
         for (CycleStep step : cycle.steps()) {
             if (step instanceof CycleStep.Swivel s && !s.programmable()) {
@@ -31,6 +36,7 @@ final class NcProgramBuilder {
             }
             ops.add(op(step));
         }
+        ops.add(new NcOp.Safe(TemplateKey.SAFE_END, safeDiameterMm));
         ops.add(new NcOp.Fixed(TemplateKey.PROGRAM_END));
         return new NcProgram(ops);
     }

@@ -100,6 +100,8 @@ final class NcRenderer {
     private TemplateKey key(NcOp op) {
         if (op instanceof NcOp.Fixed f) {
             return f.key();
+        } else if (op instanceof NcOp.Safe safe) {
+            return safe.key();
         } else if (op instanceof NcOp.Synchronise s) {
             return s.helical() ? TemplateKey.SYNC_ON_HELIX : TemplateKey.SYNC_ON;
         } else if (op instanceof NcOp.Wait) {
@@ -117,7 +119,9 @@ final class NcRenderer {
     private Map<Placeholder, String> values(PostedOp posted) {
         NcOp op = posted.op();
         Map<Placeholder, String> v = new EnumMap<>(Placeholder.class);
-        v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(d.programNumber()));
+        JobNumbers numbers = JobNumbers.of(job, d);
+        v.put(Placeholder.PROGRAM_NUMBER, String.valueOf(numbers.programNumber()));
+        v.put(Placeholder.TOOL, String.valueOf(numbers.toolStation()));
         v.put(Placeholder.PROGRAM_NAME, CommentText.clean(job.name(), d.comments()));
         posted.numbers().forEach((p, n) -> v.put(p, n.text(d.trailingZeros())));
         if (op instanceof NcOp.Synchronise s) {
@@ -129,6 +133,8 @@ final class NcRenderer {
             v.put(Placeholder.SWIVEL, d.swivel().orElseThrow().letter() + v.get(Placeholder.SWIVEL));
         } else if (op instanceof NcOp.ShiftTo) {
             v.put(Placeholder.SHIFT, d.shift().orElseThrow().letter() + v.get(Placeholder.SHIFT));
+        } else if (op instanceof NcOp.Safe) {
+            v.put(Placeholder.SAFE_RADIAL, d.radial().letter() + v.get(Placeholder.SAFE_RADIAL));
         } else if (op instanceof NcOp.Move) {
             v.put(Placeholder.RADIAL, d.radial().letter() + v.get(Placeholder.RADIAL));
             v.put(Placeholder.AXIAL, d.axial().letter() + v.get(Placeholder.AXIAL));

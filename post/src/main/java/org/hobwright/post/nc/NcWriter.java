@@ -11,6 +11,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleStep;
 import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.CycleWriter;
 import org.hobwright.api.spi.OutputFile;
 import org.hobwright.api.spi.Spi;
@@ -80,11 +81,12 @@ public final class NcWriter implements CycleWriter {
         }
         Dialect dialect = loaded.dialect().get();
         List<Finding> missing = missingTemplates(cycle, dialect);
+        missing.addAll(numbers(context.job(), dialect));
         if (!missing.isEmpty()) {
             return WriteResult.refused(missing);
         }
         NcProgram program = NcProgramBuilder.build(cycle, NcHeader.lines(cycle, context, dialect),
-                context.job().units());
+                context.job().units(), context.job().machine().radialMaxMm());
         if (program.ops().size() > MAX_OPERATIONS) {
             return WriteResult.refused(List.of(PostCode.NC_PROGRAM_TOO_LONG.at("cycle.steps", "the cycle has "
                     + cycle.steps().size() + " steps; a program may have at most " + MAX_OPERATIONS + " operations",
@@ -154,6 +156,25 @@ public final class NcWriter implements CycleWriter {
                         + "\", which the dialect does not have",
                         "add \"" + k.key() + "\" to \"templates\" with the words from the control builder's manual"));
             }
+        }
+        return out;
+    }
+
+    /** The program number and the tool station must be ones the dialect's control takes. */
+    private static List<Finding> numbers(HobJob job, Dialect d) {
+        List<Finding> out = new ArrayList<>(2);
+        JobNumbers numbers = JobNumbers.of(job, d);
+        long program = numbers.programNumber();
+        if (!d.programNumbers().takes(program)) {
+            out.add(PostCode.NC_PROGRAM_NUMBER.at("cycle.programNumber", "program number " + program + " is not one "
+                    + d.name() + " takes (" + d.programNumbers().min() + " to " + d.programNumbers().max() + ")",
+                    "give cycle.programNumber from " + d.programNumbers().min() + " to " + d.programNumbers().max()));
+        }
+        long tool = numbers.toolStation();
+        if (!d.toolStations().takes(tool)) {
+            out.add(PostCode.NC_TOOL_STATION.at("cycle.toolStation", "tool station " + tool + " is not one "
+                    + d.name() + " has (" + d.toolStations().min() + " to " + d.toolStations().max() + ")",
+                    "give cycle.toolStation from " + d.toolStations().min() + " to " + d.toolStations().max()));
         }
         return out;
     }

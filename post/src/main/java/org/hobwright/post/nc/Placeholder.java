@@ -9,8 +9,8 @@ import java.util.Optional;
  * and the number; every other placeholder gives the bare value.
  */
 public enum Placeholder {
-    /** The dialect's program number. */
-    PROGRAM_NUMBER("programNumber", "the dialect's programNumber"),
+    /** The program number: the job's or its template's, else the dialect's default. */
+    PROGRAM_NUMBER("programNumber", "the program number: the job's or its template's, else programNumber.default"),
     /** The job name, cleaned like comment text. */
     PROGRAM_NAME("programName", "the job name, cleaned like comment text"),
     /** Comment text, cleaned by the dialect's comment rules. */
@@ -43,7 +43,12 @@ public enum Placeholder {
     /** Swivel axis word. */
     SWIVEL("swivel", "swivel axis letter and the machine's setting, degrees, decimals.deg"),
     /** Hob-shift axis word. */
-    SHIFT("shift", "hob-shift axis letter and position, length decimals");
+    SHIFT("shift", "hob-shift axis letter and position, length decimals"),
+    /** The hob's tool station. */
+    TOOL("tool", "the hob's tool station: the job's or its template's, else toolStation.default"),
+    /** Radial axis word at the safe diameter. */
+    SAFE_RADIAL("safeRadial", "radial axis letter and the machine's largest radial position (travel.radialMax),"
+            + " rounded toward the work, never past the limit");
 
     private final String key;
     private final String meaning;

@@ -20,6 +20,8 @@ import org.hobwright.text.Decimal.Rounding;
  *   <li>feeds to the nearest value, but down when that would pass the machine's feed rate at the
  *       highest work speed the posted speed words allow;</li>
  *   <li>dwells up (the spindles settle at least as long as planned);</li>
+ *   <li>the safe radial position of the safe start and end toward the work: it is the machine's
+ *       travel limit, far above the part, and must not pass the limit;</li>
  *   <li>swivel, hob shift and helical addition to the nearest value.</li>
  * </ul>
  * A directed rounding never pushes a value across its limit, and no word moves by more than one
@@ -78,6 +80,10 @@ final class PostedWords {
         } else if (op instanceof NcOp.ShiftTo s) {
             n.put(Placeholder.SHIFT, signed(nearest(w.axial(s.positionMm()), Placeholder.SHIFT),
                     d.shift().orElseThrow().sign()));
+        } else if (op instanceof NcOp.Safe safe) {
+            // at the machine's travel limit: rounded toward the work, never past the limit
+            n.put(Placeholder.SAFE_RADIAL, signed(directed(w.radial(safe.diameterMm()), Placeholder.RADIAL,
+                    Rounding.DOWN), d.radial().sign()));
         } else if (op instanceof NcOp.Move m) {
             n.put(Placeholder.RADIAL, signed(directed(w.radial(m.diameterMm()), Placeholder.RADIAL, Rounding.CEILING),
                     d.radial().sign()));

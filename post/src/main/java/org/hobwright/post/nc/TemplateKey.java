@@ -1,6 +1,8 @@
 package org.hobwright.post.nc;
 
 import static org.hobwright.post.nc.Placeholder.AXIAL;
+import static org.hobwright.post.nc.Placeholder.SAFE_RADIAL;
+import static org.hobwright.post.nc.Placeholder.TOOL;
 import static org.hobwright.post.nc.Placeholder.DIFFERENTIAL;
 import static org.hobwright.post.nc.Placeholder.FEED;
 import static org.hobwright.post.nc.Placeholder.HOB_DIR;
@@ -37,8 +39,10 @@ public enum TemplateKey {
     UNITS_IN("unitsIn", true),
     /** Feed per revolution mode. */
     FEED_PER_REV("feedPerRev", true),
+    /** Work offset and retract to the safe position, one axis at a time where the machine needs it. */
+    SAFE_START("safeStart", true, SAFE_RADIAL),
     /** Call of the hob as a tool. */
-    TOOL_CALL("toolCall", true),
+    TOOL_CALL("toolCall", true, TOOL),
     /** One comment line. */
     COMMENT("comment", true, TEXT),
     /** Work spindle on, before the synchronisation. */
@@ -65,6 +69,8 @@ public enum TemplateKey {
     COOLANT_ON("coolantOn", true),
     /** Coolant off. */
     COOLANT_OFF("coolantOff", true),
+    /** Retract clear of the part, then home. */
+    SAFE_END("safeEnd", true, SAFE_RADIAL),
     /** Last block(s) of the program. */
     PROGRAM_END("programEnd", true, PROGRAM_NUMBER, PROGRAM_NAME);
 

@@ -57,7 +57,7 @@ final class WordUnits {
     int decimals(Placeholder p) {
         Dialect.Decimals dec = d.decimals();
         return switch (p) {
-            case RADIAL, AXIAL, SHIFT -> dec.length(units);
+            case RADIAL, AXIAL, SHIFT, SAFE_RADIAL -> dec.length(units);
             case FEED -> dec.feed(units);
             case HOB_RPM, WORK_RPM -> dec.rpm();
             case SWIVEL -> dec.deg();
@@ -70,7 +70,7 @@ final class WordUnits {
     /** The dialect key of a placeholder's decimals, for messages ({@code decimals.mmPerRev}). */
     String decimalsKey(Placeholder p) {
         return "decimals." + switch (p) {
-            case RADIAL, AXIAL, SHIFT -> units == Units.MM ? "mm" : "in";
+            case RADIAL, AXIAL, SHIFT, SAFE_RADIAL -> units == Units.MM ? "mm" : "in";
             case FEED -> units == Units.MM ? "mmPerRev" : "inPerRev";
             case HOB_RPM, WORK_RPM -> "rpm";
             case SWIVEL -> "deg";

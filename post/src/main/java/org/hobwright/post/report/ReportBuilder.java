@@ -16,7 +16,9 @@ import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.WriteContext;
+import org.hobwright.post.Batch;
 import org.hobwright.post.JobUnits;
+import org.hobwright.post.nc.JobNumbers;
 import org.hobwright.post.TargetsGiven;
 import tools.jackson.databind.node.ArrayNode;
 import tools.jackson.databind.node.JsonNodeFactory;
@@ -80,8 +82,32 @@ final class ReportBuilder {
         if (cycle.simulation().isPresent()) {
             root.set("simulation", simulation(cycle.simulation().get()));
         }
+        if (!cycle.steps().isEmpty()) {
+            root.set("batch", batch(Batch.of(cycle, job)));
+        }
+        Optional<JobNumbers> numbers = JobNumbers.of(context);
+        if (numbers.isPresent()) {
+            ObjectNode program = root.putObject("program");
+            program.put("number", numbers.get().programNumber());
+            program.put("toolStation", numbers.get().toolStation());
+        }
         root.set("findings", findings(cycle.findings()));
         return root;
+    }
+
+    private ObjectNode batch(Batch b) {
+        ObjectNode n = nodes.objectNode();
+        n.put("parts", b.parts());
+        n.put("cycleTime", b.cycleS());
+        if (b.loadS().isPresent()) {
+            n.put("loadTime", b.loadS().getAsDouble());
+        }
+        if (b.unloadS().isPresent()) {
+            n.put("unloadTime", b.unloadS().getAsDouble());
+        }
+        n.put("timePerPart", b.timePerPartS());
+        n.put("batchTime", b.batchTimeS());
+        return n;
     }
 
     private ObjectNode gear(GearData g) {

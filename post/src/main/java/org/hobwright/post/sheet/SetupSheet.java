@@ -1,16 +1,21 @@
 package org.hobwright.post.sheet;
 
+import java.util.Optional;
 import org.hobwright.api.cycle.CycleSummary;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.WriteContext;
+import org.hobwright.post.Batch;
 import org.hobwright.post.Cautions;
 import org.hobwright.text.Decimal;
 import org.hobwright.post.JobUnits;
 import org.hobwright.post.Senses;
 import org.hobwright.post.TargetsGiven;
+import org.hobwright.post.nc.Dialect;
+import org.hobwright.post.nc.DialectLoader;
+import org.hobwright.post.nc.JobNumbers;
 
 /**
  * The setup sheet: one self-contained XHTML page with inline SVG and CSS, laid out to print on A4
@@ -26,6 +31,7 @@ final class SetupSheet {
             h2 { font-size: 11.5pt; margin: 4mm 0 1.5mm 0; border-bottom: 0.4mm solid #444;
                  break-after: avoid; page-break-after: avoid; }
             p.meta { margin: 0 0 2mm 0; color: #333; }
+            p.run { margin: 0 0 0.5mm 0; }
             .cautions { border: 0.6mm solid #b00000; background: #fff3f0; padding: 1.5mm 3mm; margin: 2mm 0; }
             .cautions ul { margin: 1mm 0; padding-left: 5mm; }
             .figures { display: flex; gap: 4mm; break-inside: avoid; page-break-inside: avoid; }
@@ -73,11 +79,15 @@ final class SetupSheet {
         m.leaf("h1", "Hobbing setup sheet – " + job.gear().partName()).nl();
         m.leaf("p", "Job " + job.name() + " · machine " + job.machine().name() + " · units " + f.u().lengthSymbol()
                 + " · " + context.generatedOn() + " · Hobwright " + context.toolVersion(), "class", "meta").nl();
+        SheetTables t = new SheetTables(m, f, job);
+        Optional<Dialect> dialect = DialectLoader.of(context);
+        t.run(dialect.map(d -> JobNumbers.of(job, d)), dialect, Batch.of(cycle, job));
+        t.hob(job.hob(), job.cycle());
         m.open("div", "class", "cautions").leaf("strong", "Cautions").open("ul");
         Cautions.LINES.forEach(c -> m.leaf("li", c));
         m.close("ul").close("div");
         Senses senses = Senses.of(cycle, job);
-        senses.turnedRound().ifPresent(t -> m.open("div", "class", "cautions").leaf("strong", t).close("div"));
+        senses.turnedRound().ifPresent(w -> m.open("div", "class", "cautions").leaf("strong", w).close("div"));
         m.open("div", "class", "figures").nl();
         m.open("figure").raw(ToothSpaceFigure.svg(g, job.gear().teeth(), cycle.simulation(), f))
                 .leaf("figcaption", "Tooth space in the transverse section, drawn to scale"
@@ -89,7 +99,6 @@ final class SetupSheet {
                         "η " + f.deg(s.swivelAngleDeg())))
                 .leaf("figcaption", swivelCaption(s, job, f)).close("figure");
         m.close("div");
-        SheetTables t = new SheetTables(m, f, job);
         t.setup(s, sum, job.cycle().coolant(), senses);
         t.gear(g);
         cycle.inspection().ifPresent(t::inspection);

@@ -11,11 +11,16 @@ import org.hobwright.api.cycle.PassSummary;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.SimulationData;
 import org.hobwright.api.cycle.ToleranceData;
+import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.GearSpec;
+import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.post.Batch;
 import org.hobwright.post.Senses;
+import org.hobwright.post.nc.Dialect;
+import org.hobwright.post.nc.JobNumbers;
 import org.hobwright.text.Decimal;
 
 /** The tables of the setup sheet, each a {@code section} element. */
@@ -55,12 +60,59 @@ final class SheetTables {
         row("Finishing feed", f.feed(sum.finishFeedMmPerRev()));
         row("Passes", String.valueOf(sum.passes().size()));
         row("Approach / overrun (last pass)", f.lenU(sum.approachLengthMm()) + " / " + f.lenU(sum.overrunLengthMm()));
-        row("Hob shift position", f.lenU(s.hobShiftMm()));
+        if (job.machine().hobShiftTravelMm().isPresent()) {
+            row("Hob shift position", f.lenU(s.hobShiftMm()));
+        }
         row("Coolant", coolant ? "on" : "off");
-        row("Cycle time", f.seconds(sum.cycleTimeS()) + " (" + Decimal.fixed(sum.cycleTimeS() / 60, 2) + " min)");
         rows();
         passes(sum.passes());
         m.close("section");
+    }
+
+    /**
+     * Where the setter looks first, one line each under the heading: the program to call, the station
+     * the hob goes in, where the program's zeros lie and which way its axial axis counts; the batch.
+     */
+    void run(Optional<JobNumbers> numbers, Optional<Dialect> dialect, Batch b) {
+        List<String> program = new java.util.ArrayList<>(4);
+        if (numbers.isPresent()) {
+            program.add("Program " + numbers.get().programNumber());
+            program.add("hob station " + numbers.get().toolStation());
+        }
+        if (dialect.isPresent()) {
+            Dialect.Axis axial = dialect.get().axial();
+            Dialect.Axis radial = dialect.get().radial();
+            program.add(axial.letter() + "0 gear front face, " + axial.letter() + "+ "
+                    + (axial.sign() > 0 ? "toward" : "away from") + " the chuck");
+            program.add(radial.letter() + "0 work axis, " + radial.letter() + " as "
+                    + (radial.diameter() ? "diameter" : "radius"));
+        }
+        if (!program.isEmpty()) {
+            m.leaf("p", String.join(" · ", program), "class", "run").nl();
+        }
+        String unknown = b.unknownTimes().isEmpty() ? "" : "; not in the machine profile, counted as 0 s: "
+                + String.join(", ", b.unknownTimes());
+        m.leaf("p", "Cycle time " + f.seconds(b.cycleS()) + " (" + Decimal.fixed(b.cycleS() / 60, 2) + " min) · batch of "
+                + b.parts() + (b.parts() == 1 ? " part" : " parts") + ": " + f.seconds(b.timePerPartS()) + " per part (with"
+                + " load " + f.seconds(b.loadS().orElse(0)) + " and unload " + f.seconds(b.unloadS().orElse(0)) + unknown
+                + ") · batch " + f.seconds(b.batchTimeS()) + " (" + Decimal.fixed(b.batchTimeS() / 3600, 2) + " h)",
+                "class", "run").nl();
+    }
+
+    /** The hob as the setter finds it in the tool store; the work material and where the cutting data came from. */
+    void hob(HobSpec h, CycleSettings c) {
+        m.leaf("p", "Hob " + h.identifier().orElse("(no identifier)") + " · ⌀ " + f.len(h.outsideDiameterMm())
+                + " × " + f.lenU(h.lengthMm()) + " · " + (h.pitch() instanceof Pitch.Diametral d
+                ? "DP " + Decimal.fixed(d.perInch(), 4) + " /in" : "module " + Decimal.fixed(h.moduleMm(), 4) + " mm")
+                + ", " + f.deg(h.pressureAngleDeg()) + " · " + h.starts() + (h.starts() == 1 ? " start, " : " starts, ")
+                + h.hand().word() + " hand · " + h.gashes() + " gashes · " + h.material(), "class", "run").nl();
+        String table = "cutting-data table (typical, confirm with the hob supplier)";
+        String speed = c.cuttingSpeedMPerMin().isPresent() ? "the job" : table;
+        String feeds = c.roughFeedMmPerRev().isPresent() && c.finishFeedMmPerRev().isPresent() ? "the job"
+                : c.roughFeedMmPerRev().isPresent() || c.finishFeedMmPerRev().isPresent() ? "the job and the " + table
+                : table;
+        m.leaf("p", "Work material " + c.workMaterial() + " · " + (speed.equals(feeds) ? "speed and feeds: "
+                + speed : "speed: " + speed + ", feeds: " + feeds), "class", "run").nl();
     }
 
     private void passes(List<PassSummary> passes) {

@@ -106,7 +106,8 @@ class CycleCsvTest {
      * 30 mm with a 32 mm hob, so its centre is 30/2 + 32/2 = 31 mm from the work axis. The
      * sliding-headstock lathe's dialect programs X in diameter (62) and counts Z negative toward
      * the chuck (5 mm into the face → −5); the turret lathe's programs X as a radius (31). A manual
-     * swivel holder gets its row, without an axis letter.
+     * swivel holder gets its row, without an axis letter, and so does a swivel on a dialect without a swivel
+     * axis.
      */
     @Test
     void machineColumnsPutTheHobCentreOnTheDialectsAxes() {
@@ -121,7 +122,7 @@ class CycleCsvTest {
         assertEquals("false", varrow.get(1).get(h.indexOf("swivel_programmable")));
         assertEquals("", varrow.get(1).get(h.indexOf("swivel_axis")));
         assertEquals("true", varrow.get(2).get(h.indexOf("swivel_programmable")));
-        assertEquals("B", varrow.get(2).get(h.indexOf("swivel_axis")));
+        assertEquals("", varrow.get(2).get(h.indexOf("swivel_axis")), "the Varrow dialect has no swivel axis");
         assertEquals("32", varrow.get(3).get(h.indexOf("hob_tip_diameter_mm")));
         assertEquals("31", varrow.get(3).get(h.indexOf("hob_centre_radius_mm")));
         assertEquals("X", varrow.get(3).get(h.indexOf("radial_axis")));

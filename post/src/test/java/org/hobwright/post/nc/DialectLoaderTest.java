@@ -57,7 +57,7 @@ class DialectLoaderTest {
 
     @Test
     void missingRequiredTemplateNamesTheTemplatesLine() {
-        Finding f = single(replace("    \"syncOff\": \"G176\",\n", ""), "NC_DIALECT_MISSING_TEMPLATE");
+        Finding f = single(replace("    \"syncOff\": \"M160\",\n", ""), "NC_DIALECT_MISSING_TEMPLATE");
         assertTrue(f.message().contains("line " + lineOf("\"templates\": {")), f.message());
         assertTrue(f.message().contains("syncOff"), f.message());
     }
@@ -65,8 +65,8 @@ class DialectLoaderTest {
     @Test
     void missingTemplateTheCycleNeedsIsRefusedByTheWriter() {
         Fixture helical = Fixtures.helicalMetric();
-        String text = replace("    \"syncOnHelix\": \"G177 H{hobTurns} Q{workTurns} S{hobRpm} {hobDir} R{differential}\",\n",
-                "");
+        String text = replace("    \"syncOnHelix\": [\"{hobDir} P{hobRpm}\", \"M161 P{hobTurns} Q{workTurns}\", "
+                + "\"M162 P{differential}\"],\n", "");
         WriteResult r = new NcWriter().write(helical.cycle(), new WriteContext(helical.job(), Fixtures.DATE, "t",
                 java.util.Map.of(WriteContext.DIALECT, text, WriteContext.DIALECT_NAME, "varrow-ctl")));
         assertTrue(r.files().isEmpty());
@@ -78,13 +78,14 @@ class DialectLoaderTest {
 
     @Test
     void textWhereANumberBelongsNamesTheLine() {
-        Finding f = single(replace("\"mm\": 3,", "\"mm\": \"three\","), "NC_DIALECT_UNREADABLE");
+        Finding f = single(replace("\"mm\": 3,", "\"mm\": \"three\","), "NC_DIALECT_BAD_VALUE");
+        assertTrue(f.message().contains("decimals.mm"), f.message());
         assertTrue(f.message().contains("line " + lineOf("\"decimals\":")), f.message());
     }
 
     @Test
     void fractionWhereAWholeNumberBelongsNamesTheLine() {
-        Finding f = single(replace("\"mm\": 3,", "\"mm\": 2.5,"), "NC_DIALECT_UNREADABLE");
+        Finding f = single(replace("\"mm\": 3,", "\"mm\": 2.5,"), "NC_DIALECT_BAD_VALUE");
         assertTrue(f.message().contains("line " + lineOf("\"decimals\":")), f.message());
     }
 
@@ -97,14 +98,21 @@ class DialectLoaderTest {
 
     @Test
     void unknownKeyNamesTheKeyAndLine() {
-        Finding f = single(replace("\"trailingZeros\": true,", "\"trailingZeroes\": true,"), "NC_DIALECT_UNREADABLE");
-        assertTrue(f.message().contains("trailingZeroes"), f.message());
-        assertTrue(f.message().contains("line " + lineOf("\"trailingZeros\":")), f.message());
+        DialectLoader.Loaded l = DialectLoader.load("varrow-ctl", replace("\"trailingZeros\": true,",
+                "\"trailingZeroes\": true,"));
+        assertTrue(l.dialect().isEmpty());
+        Finding f = l.findings().stream().filter(x -> x.code().equals("NC_DIALECT_UNKNOWN_KEY")).findFirst()
+                .orElseThrow(() -> new AssertionError(l.findings().toString()));
+        assertTrue(f.message().startsWith("varrow-ctl line " + lineOf("\"trailingZeros\":") + ", trailingZeroes: "),
+                f.message());
+        assertTrue(l.findings().stream().anyMatch(x -> x.code().equals("NC_DIALECT_MISSING_KEY")
+                && x.message().contains("\"trailingZeros\" is missing")), l.findings().toString());
     }
 
     @Test
     void brokenJsonNamesTheLine() {
-        Finding f = single(replace("\"toolCall\": \"T1313\",", "\"toolCall\": \"T1313\""), "NC_DIALECT_UNREADABLE");
+        Finding f = single(replace("\"toolCall\": \"T{tool} M6 G43\",", "\"toolCall\": \"T{tool} M6 G43\""),
+                "NC_DIALECT_UNREADABLE");
         assertTrue(f.message().contains("line " + (lineOf("\"toolCall\":") + 1)), f.message());
     }
 
@@ -118,6 +126,48 @@ class DialectLoaderTest {
         assertTrue(codes.contains("NC_DIALECT_FORMAT") && codes.contains("NC_DIALECT_BAD_VALUE"), codes.toString());
         assertEquals(3, l.findings().size(), l.findings().toString());
         assertTrue(l.findings().stream().allMatch(f -> f.severity() == Severity.ERROR && f.fix().isPresent()));
+    }
+
+    @Test
+    void aVersion1DialectSaysWhatToAdd() {
+        Finding f = single(replace("\"version\": 2,", "\"version\": 1,"), "NC_DIALECT_VERSION");
+        assertTrue(f.fix().orElseThrow().contains("safeStart") && f.fix().orElseThrow().contains("{tool}"),
+                f.fix().toString());
+    }
+
+    @Test
+    void aDefaultOutsideTheRangeIsAnError() {
+        Finding f = single(replace("\"programNumber\": { \"default\": 4120, \"min\": 1, \"max\": 9999 }",
+                "\"programNumber\": { \"default\": 12000, \"min\": 1, \"max\": 9999 }"), "NC_DIALECT_BAD_NUMBER");
+        assertTrue(f.message().contains("programNumber"), f.message());
+    }
+
+    @Test
+    void aProgramNumberOrToolTheControlCannotTakeIsRefused() {
+        Fixture f = Fixtures.spurInch();
+        var c = f.job().cycle();
+        var run = new org.hobwright.api.job.RunSettings(1, java.util.OptionalInt.of(12000), java.util.OptionalInt.of(30),
+                false, java.util.OptionalDouble.empty());
+        var job = new org.hobwright.api.job.HobJob(f.job().name(), f.job().units(), f.job().gear(), f.job().hob(),
+                f.job().machine(), c.withRun(run));
+        WriteResult r = new NcWriter().write(f.cycle(), new WriteContext(job, Fixtures.DATE, "t",
+                java.util.Map.of(WriteContext.DIALECT, VARROW, WriteContext.DIALECT_NAME, "varrow-ctl")));
+        assertTrue(r.files().isEmpty());
+        assertEquals(List.of("NC_PROGRAM_NUMBER", "NC_TOOL_STATION"), r.findings().stream().map(Finding::code).toList());
+        assertTrue(r.findings().get(0).message().contains("1 to 9999"), r.findings().get(0).message());
+    }
+
+    @Test
+    void theJobsProgramNumberAndToolAreWritten() {
+        Fixture f = Fixtures.spurInch();
+        var run = new org.hobwright.api.job.RunSettings(1, java.util.OptionalInt.of(815), java.util.OptionalInt.of(7),
+                false, java.util.OptionalDouble.empty());
+        var job = new org.hobwright.api.job.HobJob(f.job().name(), f.job().units(), f.job().gear(), f.job().hob(),
+                f.job().machine(), f.job().cycle().withRun(run));
+        WriteResult r = new NcWriter().write(f.cycle(), new WriteContext(job, Fixtures.DATE, "t",
+                java.util.Map.of(WriteContext.DIALECT, VARROW, WriteContext.DIALECT_NAME, "varrow-ctl")));
+        String text = r.files().get(0).text();
+        assertTrue(text.contains("(PROGRAM 815 SPUR-INCH)") && text.contains(" T7 M6 G43\r\n"), text);
     }
 
     @Test

@@ -19,7 +19,9 @@ import tools.jackson.databind.json.JsonMapper;
  * exactly as written and checks the safety invariants on its words. It learns from the raw
  * dialect JSON only what a person reading the program would need (line endings, line numbers,
  * axis letters, signs and modes, and the templates, turned here into regular expressions so that
- * each block is known by the template that wrote it); it uses none of the writer's code.
+ * each block is known by the template that wrote it; the lines of a template of several lines,
+ * written one after the other, are read as one block with all their values); it uses none of the
+ * writer's code.
  *
  * <p>Use: {@code NcReader.assertSafe(programText, dialectJson, NcReader.Limits.of(job, cycle))},
  * or {@link #violations} for the list. What it checks, every block in order:
@@ -125,7 +127,7 @@ public final class NcReader {
     private static final double MM_PER_INCH = 25.4;
 
     /** A template line as a pattern, with the placeholders of its groups in order. */
-    private record Shape(String template, Pattern pattern, List<String> placeholders) {
+    private record Shape(String template, List<Pattern> patterns, List<List<String>> placeholders) {
     }
 
     private final JsonNode dialect;
@@ -142,9 +144,17 @@ public final class NcReader {
             } else {
                 lines.add(t.getValue().asString());
             }
-            for (String l : lines) {
-                (t.getKey().equals("comment") ? comments : shapes).add(shape(t.getKey(), l));
+            if (lines.isEmpty()) {
+                continue;
             }
+            List<Pattern> patterns = new ArrayList<>();
+            List<List<String>> names = new ArrayList<>();
+            for (String l : lines) {
+                List<String> n = new ArrayList<>();
+                patterns.add(pattern(l, n));
+                names.add(n);
+            }
+            (t.getKey().equals("comment") ? comments : shapes).add(new Shape(t.getKey(), patterns, names));
         }
         shapes.addAll(comments);
     }
@@ -216,13 +226,14 @@ public final class NcReader {
         int last = lines.length - count("epilogue");
         int max = dialect.get("maxLineLength").asInt();
         Pattern number = lineNumber();
-        List<Block> out = new ArrayList<>();
+        List<String> bodies = new ArrayList<>();
         for (int i = 0; i < lines.length; i++) {
             String l = lines[i];
             if (l.contains("\r") || l.contains("\n")) {
                 problems.add("line " + (i + 1) + " mixes line endings");
             }
             if (i < first || i >= last) {
+                bodies.add(null);
                 continue;
             }
             if (l.length() > max) {
@@ -232,18 +243,75 @@ public final class NcReader {
             if (number != null && body.equals(l)) {
                 problems.add("line " + (i + 1) + " has no line number: " + l);
             }
-            out.add(block(i + 1, l, body, problems));
+            bodies.add(body);
+        }
+        List<Block> out = new ArrayList<>();
+        for (int i = first; i < last; ) {
+            int taken = block(i, lines, bodies, problems, out);
+            i += Math.max(1, taken);
         }
         return out;
     }
 
-    private Block block(int line, String text, String body, List<String> problems) {
+    /**
+     * Reads the block at line {@code i}: the template whose lines match the most program lines from
+     * there (a template of several lines is one block with all their values). Returns the lines taken.
+     */
+    private int block(int i, String[] lines, List<String> bodies, List<String> problems, List<Block> out) {
+        Shape best = null;
+        Map<String, String> values = Map.of();
+        for (Shape s : shapes) {
+            if (best != null && s.patterns().size() <= best.patterns().size()) {
+                continue;
+            }
+            Map<String, String> found = new HashMap<>();
+            if (matches(s, i, bodies, found)) {
+                best = s;
+                values = found;
+            }
+        }
+        if (best == null) {
+            problems.add("line " + (i + 1) + " is no block the dialect's templates write: " + lines[i]);
+            out.add(new Block(i + 1, lines[i], words(i + 1, lines[i], bodies.get(i), problems), Optional.empty(),
+                    Map.of()));
+            return 1;
+        }
+        int n = best.patterns().size();
+        List<Word> words = new ArrayList<>();
+        StringBuilder text = new StringBuilder();
+        for (int k = 0; k < n; k++) {
+            words.addAll(words(i + k + 1, lines[i + k], bodies.get(i + k), problems));
+            text.append(k == 0 ? "" : " / ").append(lines[i + k]);
+        }
+        out.add(new Block(i + 1, text.toString(), words, Optional.of(best.template()), values));
+        return n;
+    }
+
+    private static boolean matches(Shape s, int i, List<String> bodies, Map<String, String> values) {
+        for (int k = 0; k < s.patterns().size(); k++) {
+            String body = i + k < bodies.size() ? bodies.get(i + k) : null;
+            if (body == null) {
+                return false;
+            }
+            Matcher m = s.patterns().get(k).matcher(body);
+            if (!m.matches()) {
+                return false;
+            }
+            List<String> names = s.placeholders().get(k);
+            for (int g = 0; g < names.size(); g++) {
+                values.put(names.get(g), m.group(g + 1));
+            }
+        }
+        return true;
+    }
+
+    private static List<Word> words(int line, String text, String body, List<String> problems) {
+        List<Word> words = new ArrayList<>();
         String code = body.replaceAll("\\([^)]*\\)", " ");
         int semi = code.indexOf(';');
         if (semi >= 0) {
             code = code.substring(0, semi);
         }
-        List<Word> words = new ArrayList<>();
         for (String token : code.strip().split("\\s+")) {
             if (token.isEmpty()) {
                 continue;
@@ -255,18 +323,7 @@ public final class NcReader {
                 problems.add("line " + line + ": \"" + token + "\" is not an ISO 6983 word in: " + text);
             }
         }
-        for (Shape s : shapes) {
-            Matcher m = s.pattern().matcher(body);
-            if (m.matches()) {
-                Map<String, String> values = new HashMap<>();
-                for (int g = 0; g < s.placeholders().size(); g++) {
-                    values.put(s.placeholders().get(g), m.group(g + 1));
-                }
-                return new Block(line, text, words, Optional.of(s.template()), values);
-            }
-        }
-        problems.add("line " + line + " is no block the dialect's templates write: " + text);
-        return new Block(line, text, words, Optional.empty(), Map.of());
+        return words;
     }
 
     private int count(String key) {
@@ -280,9 +337,8 @@ public final class NcReader {
     }
 
     /** A template line as a regular expression: literal text quoted, each placeholder a group. */
-    private Shape shape(String name, String template) {
+    private Pattern pattern(String template, List<String> names) {
         StringBuilder re = new StringBuilder();
-        List<String> names = new ArrayList<>();
         Matcher m = Pattern.compile("\\{([^}]*)}").matcher(template);
         int at = 0;
         while (m.find()) {
@@ -291,12 +347,14 @@ public final class NcReader {
             names.add(p);
             if (AXES.contains(p)) {
                 re.append(Pattern.quote(letter(p)));
+            } else if (p.equals("safeRadial")) {
+                re.append(Pattern.quote(letter("radial")));
             }
             re.append('(').append(placeholderPattern(p)).append(')');
             at = m.end();
         }
         re.append(Pattern.quote(template.substring(at)));
-        return new Shape(name, Pattern.compile(re.toString()), names);
+        return Pattern.compile(re.toString());
     }
 
     private String placeholderPattern(String p) {
@@ -305,7 +363,7 @@ public final class NcReader {
             case "workDir" -> words("work");
             case "hobDir" -> words("hob");
             case "radial", "axial", "swivel", "shift", "workRpm", "hobRpm", "hobTurns", "workTurns", "differential", "seconds", "milliseconds", "feed",
-                 "programNumber" -> NUMBER;
+                 "programNumber", "safeRadial", "tool" -> NUMBER;
             default -> "\\S*";
         };
     }
@@ -339,10 +397,10 @@ public final class NcReader {
             for (Block b : blocks) {
                 String t = b.template().orElse("");
                 switch (t) {
+                    case "syncOn", "syncOnHelix" -> sync(b);
                     case "unitsMm" -> mmPerUnit = 1.0;
                     case "unitsIn" -> mmPerUnit = MM_PER_INCH;
                     case "workSpindle" -> workWord = positive(b, "workRpm", "work speed");
-                    case "syncOn", "syncOnHelix" -> sync(b);
                     case "syncOff" -> synced = false;
                     case "spindlesStop" -> {
                         if (synced) {

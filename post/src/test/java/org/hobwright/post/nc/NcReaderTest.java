@@ -23,10 +23,10 @@ import org.junit.jupiter.api.Test;
 class NcReaderTest {
 
     private static final Fixture SPUR = Fixtures.spurMetric();
-    private static final String DIALECT = "varrow-ctl";
+    private static final String DIALECT = "ottmere-ctl";
 
     private static String golden() throws IOException {
-        return Files.readString(Path.of("src/test/resources/golden/spur-metric.varrow-ctl.nc"), StandardCharsets.UTF_8);
+        return Files.readString(Path.of("src/test/resources/golden/spur-metric.ottmere-ctl.nc"), StandardCharsets.UTF_8);
     }
 
     private static List<String> violations(String program) {
@@ -39,39 +39,43 @@ class NcReaderTest {
         assertEquals(List.of(), violations(golden()));
     }
 
-    @ParameterizedTest(name = "{0} -> {2}")
+    /** Each case: the lines to change (¶ between lines), what they become, which occurrence, what is found. */
+    @ParameterizedTest(name = "{0} -> {3}")
     @CsvSource(delimiter = '|', value = {
         // a feed word written as zero
-        "N450 G1 X35.000 Z-22.000 F1.500 | N450 G1 X35.000 Z-22.000 F0.000 | feed word 0.0 is not above zero",
-        // the feed rate: 1.5 mm at 14 rpm is 21 mm/min, 400 mm at 14 rpm above the machine's 5000 mm/min
-        "N450 G1 X35.000 Z-22.000 F1.500 | N450 G1 X35.000 Z-22.000 F400.000 | above the machine's 5000.0 mm/min",
+        "G1 X17.5 Z-22. F1.5 | G1 X17.5 Z-22. F0 | first | feed word 0.0 is not above zero",
+        // the feed rate: 400 mm at 13.6 rpm is 5440 mm/min, above the machine's 5000 mm/min
+        "G1 X17.5 Z-22. F1.5 | G1 X17.5 Z-22. F400 | first | above the machine's 5000.0 mm/min",
         // a work speed word written as zero
-        "N410 G97 S14 M4 | N410 G97 S0 M4 | work speed word 0.0 is not above zero",
+        "S13.6 M3 | S0 M3 | first | work speed word 0.0 is not above zero",
         // the hob at 4100 rpm, above the Ottmere's 4000 rpm hob spindle
-        "N420 G177 H20 Q1 S273 M63 | N420 G177 H20 Q1 S4100 M63 | hob speed 4100.0 rpm",
-        // 14 rpm of the work locks the hob to 280 rpm; at 300:1 to 4200 rpm, and 300 is above the largest ratio 150
-        "N420 G177 H20 Q1 S273 M63 | N420 G177 H300 Q1 S273 M63 | above the machine's 150.0",
-        // the final cut 0.002 mm inside the root diameter
-        "N450 G1 X35.000 Z-22.000 F1.500 | N450 G1 X34.998 Z-22.000 F1.500 | inside the final root diameter",
-        // a rapid to full depth 1 mm before the entry face
-        "N440 G0 X35.000 Z19.169 | N440 G0 X35.000 Z1.000 | brings the hob into the blank",
-        // a rapid back along the blank 0.1 mm under its surface
-        "N500 G0 X48.000 Z19.169 | N500 G0 X43.800 Z19.169 | brings the hob into the blank",
+        "M173 P272.8 | M173 P4100 | first | hob speed 4100.0 rpm",
+        // 13.6 rpm of the work locks the hob to 4080 rpm at 300:1, and 300 is above the largest ratio 150
+        "M171 P20 Q1 | M171 P300 Q1 | first | above the machine's 150.0",
+        // the final cut 0.001 mm (as a radius) inside the root diameter
+        "G1 X17.5 Z-22. F1.5 | G1 X17.499 Z-22. F1.5 | first | inside the final root diameter",
+        // a rapid to full depth 1 mm before the front face
+        "G0 X17.5 Z19.169 | G0 X17.5 Z1. | first | brings the hob into the blank",
+        // the rapid back along the blank 0.1 mm under its surface
+        "G0 X24. Z19.169 | G0 X21.9 Z19.169 | last | brings the hob into the blank",
         // a block no template writes
-        "N450 G1 X35.000 Z-22.000 F1.500 | N450 G1 X35.000 Z-22.000 | no block the dialect's templates write",
+        "G1 X17.5 Z-22. F1.5 | G1 X17.5 Z-22. | first | no block the dialect's templates write",
         // a number with an exponent
-        "N450 G1 X35.000 Z-22.000 F1.500 | N450 G1 X3.5E1 Z-22.000 F1.500 | is not an ISO 6983 word",
+        "G1 X17.5 Z-22. F1.5 | G1 X1.75E1 Z-22. F1.5 | first | is not an ISO 6983 word",
         // the spindles stopped while synchronised
-        "N470 G176 | N470 M65 | the spindles stop while synchronised",
+        "M170¶M175 | M175 | first | the spindles stop while synchronised",
         // a cut before the synchronisation
-        "N420 G177 H20 Q1 S273 M63 | N420 M63 | a feed move before the synchronisation is on",
+        "M173 P272.8¶M171 P20 Q1 | M173 P272.8 | first | a feed move before the synchronisation is on",
         // too short a settle dwell (the Ottmere needs 2 s)
-        "N430 G4 U2.0 | N430 G4 U1.9 | the machine needs 2.0 s",
+        "G4 P2. | G4 P1.9 | first | the machine needs 2.0 s",
     })
-    void aBrokenInvariantIsFound(String line, String broken, String expected) throws IOException {
+    void aBrokenInvariantIsFound(String lines, String broken, String which, String expected) throws IOException {
         String program = golden();
-        assertTrue(program.contains(line + "\r\n"), line);
-        List<String> v = violations(program.replace(line + "\r\n", broken + "\r\n"));
+        String from = "\n" + lines.replace("¶", "\n") + "\n";
+        int at = which.equals("last") ? program.lastIndexOf(from) : program.indexOf(from);
+        assertTrue(at >= 0, lines);
+        String changed = program.substring(0, at) + "\n" + broken + "\n" + program.substring(at + from.length());
+        List<String> v = violations(changed);
         assertTrue(v.stream().anyMatch(x -> x.contains(expected)), () -> expected + " in " + v);
     }
 }

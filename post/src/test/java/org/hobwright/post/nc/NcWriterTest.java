@@ -30,8 +30,8 @@ class NcWriterTest {
 
     static Stream<Arguments> cases() {
         List<Arguments> out = new ArrayList<>();
-        for (String d : Fixtures.dialects()) {
-            for (Fixture f : Fixtures.all()) {
+        for (Fixture f : Fixtures.all()) {
+            for (String d : f.dialects()) {
                 out.add(Arguments.of(d, f));
             }
         }

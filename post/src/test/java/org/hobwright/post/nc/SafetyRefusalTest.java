@@ -25,7 +25,7 @@ class SafetyRefusalTest {
 
     @Test
     void cleanCycleIsWritten() {
-        assertTrue(new NcWriter().write(SPUR.cycle(), SPUR.context("varrow-ctl")).findings().isEmpty());
+        assertTrue(new NcWriter().write(SPUR.cycle(), SPUR.context("ottmere-ctl")).findings().isEmpty());
     }
 
     @Test
@@ -69,7 +69,7 @@ class SafetyRefusalTest {
 
     @Test
     void hobSpeedAboveTheMachineIsRefused() {
-        // the Ottmere hob spindle runs to 4000 rpm (samples/scenario/machines/ottmere-tl40.json)
+        // the Ottmere hob spindle runs to 4000 rpm (samples/scenario/machines/ottmere-4008.json)
         refused("NC_SAFETY_HOB_SPEED", steps -> replaceSync(steps, 4100, 205));
     }
 
@@ -110,7 +110,7 @@ class SafetyRefusalTest {
         HobCycle c = SPUR.cycle();
         HobCycle broken = new HobCycle(c.gear(), c.inspection(), c.tolerances(), c.setup(),
                 change.apply(new ArrayList<>(c.steps())), c.summary(), c.simulation(), c.findings());
-        for (String dialect : Fixtures.dialects()) {
+        for (String dialect : SPUR.dialects()) {
             WriteResult r = new NcWriter().write(broken, SPUR.context(dialect));
             assertTrue(r.files().isEmpty(), "nothing is written");
             assertTrue(Finding.anyError(r.findings()));
@@ -130,7 +130,7 @@ class SafetyRefusalTest {
         }
         HobCycle big = new HobCycle(c.gear(), c.inspection(), c.tolerances(), c.setup(), steps, c.summary(),
                 c.simulation(), c.findings());
-        WriteResult r = new NcWriter().write(big, SPUR.context("varrow-ctl"));
+        WriteResult r = new NcWriter().write(big, SPUR.context("ottmere-ctl"));
         assertTrue(r.files().isEmpty());
         assertEquals(List.of("NC_PROGRAM_TOO_LONG"), r.findings().stream().map(Finding::code).toList());
     }

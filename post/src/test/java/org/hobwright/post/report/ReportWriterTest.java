@@ -30,7 +30,7 @@ class ReportWriterTest {
             "/setup/leadAngle", "/setup/swivelAngle", "/setup/swivelAngleDms", "/setup/swivelDirection",
             "/cycle/hobRpm", "/cycle/workRpm", "/cycle/axialFeed", "/cycle/passes", "/cycle/approachLength",
             "/cycle/overrunLength", "/cycle/cuttingTime", "/cycle/feedMarkDepth", "/cycle/envelopingDepth",
-            "/findings");
+            "/batch/parts", "/batch/cycleTime", "/batch/timePerPart", "/batch/batchTime", "/findings");
 
     static List<Fixture> fixtures() {
         return Fixtures.all();

@@ -81,7 +81,7 @@ class UnloadTest {
                 assertEquals(r == round, machines.contains("round-" + r),
                         "round " + round + " lists the built-in machines of its own jar: " + machines);
             }
-            assertTrue(machines.contains("varrow-sl16"), machines::toString);
+            assertTrue(machines.contains("varrow-1605"), machines::toString);
             if (round > 0) {
                 assertTrue(hw.library().machine("round-" + round).ok(), "the new built-in machine reads");
             }
@@ -110,8 +110,8 @@ class UnloadTest {
                 }
                 out.closeEntry();
             }
-            String lathe = Files.readString(Host.samples().resolve("machines/varrow-sl16.json"))
-                    .replace("\"name\": \"varrow-sl16\"", "\"name\": \"" + machine + "\"");
+            String lathe = Files.readString(Host.samples().resolve("machines/varrow-1605.json"))
+                    .replace("\"name\": \"varrow-1605\"", "\"name\": \"" + machine + "\"");
             out.putNextEntry(new JarEntry("org/hobwright/builtin/machines/" + machine + ".json"));
             out.write(lathe.getBytes(StandardCharsets.UTF_8));
             out.closeEntry();

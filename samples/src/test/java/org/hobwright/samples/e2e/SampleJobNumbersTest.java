@@ -165,7 +165,7 @@ class SampleJobNumbersTest {
         close(0.4, pinion.number("/cycle/axialFeed"), 1e-9, "f_a from steel-small-module");
         // the demo job moved to the turret lathe with its template: a roughing and a finishing pass
         PlanRun moved = PlanRun.of("metering-pump-gear.json", work.resolve("moved"),
-                "--machine", "ottmere-tl40", "--template", "steel-rough-finish");
+                "--machine", "ottmere-4008", "--template", "steel-rough-finish");
         assertEquals(0, moved.exitCode(), moved.describe());
         assertEquals(2, moved.number("/cycle/passes"), "finish stock 0.2 mm gives two passes");
         close(0.6, moved.number("/cycle/axialFeed"), 1e-9, "finishing feed from the template");
@@ -198,7 +198,7 @@ class SampleJobNumbersTest {
 
     @Test
     void helicalGearOnTheTurretLathe() {
-        PlanRun r = PlanRun.of("pump-helical-gear-tl40.json", work);
+        PlanRun r = PlanRun.of("pump-helical-gear-4008.json", work);
         assertEquals(0, r.exitCode(), r.describe());
         // FORMULAS.md §1.5 worked example (m_n 2, z 30, β 15° RH, x 0.2, ISO 53 A) scaled to m_n 0.8:
         // every length of these relations is proportional to m_n, every angle is unchanged.
@@ -227,7 +227,7 @@ class SampleJobNumbersTest {
 
     @Test
     void helicalGearOnTheSlidingHeadstockLatheIsRefused() {
-        PlanRun r = PlanRun.of("pump-helical-gear-sl16.json", work);
+        PlanRun r = PlanRun.of("pump-helical-gear-1605.json", work);
         assertEquals(1, r.exitCode(), r.describe());
         var helix = r.findings().stream()
                 .filter(f -> f.at("/severity").asString().equals("error"))

@@ -39,7 +39,7 @@ class SampleJobsChainTest {
      */
     private static final Map<String, Set<String>> SHOWS = Map.of(
             "dosing-pinion-z12.json", Set.of("GEAR_UNDERCUT"),
-            "pump-helical-gear-sl16.json", Set.of("MACHINE_NO_HELIX"),
+            "pump-helical-gear-1605.json", Set.of("MACHINE_NO_HELIX"),
             "counter-wheel-drawing-error.json", Set.of("DRAWING_OUTSIDE_DIAMETER", "DRAWING_INCONSISTENT"));
 
     @ParameterizedTest(name = "{0}")

@@ -27,7 +27,7 @@ import org.openjdk.jmh.infra.Blackhole;
 
 /**
  * Plan + post throughput on one core: each operation plans the invented metering-pump gear on the
- * Varrow SL-16 and formats all four outputs (NC program, cycle CSV, setup sheet, report) with the
+ * Varrow 1605 and formats all four outputs (NC program, cycle CSV, setup sheet, report) with the
  * writers found through the SPI, as {@code hobwright plan} does, without the file writes. Run with
  * {@code mvn -B -pl wizard -am -Pbench -DskipTests verify -Dbench.args=PlanAndPostBenchmark}.
  */

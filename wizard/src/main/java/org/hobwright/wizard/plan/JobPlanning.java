@@ -1,5 +1,6 @@
 package org.hobwright.wizard.plan;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
@@ -16,7 +17,9 @@ import org.hobwright.api.job.CycleSettings;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.HobSpec;
+import org.hobwright.api.job.MachineFields;
 import org.hobwright.api.job.MachineProfile;
+import org.hobwright.api.job.MachineTimes;
 import org.hobwright.text.Decimal;
 import org.hobwright.wizard.analysis.JobAnalysis;
 import org.hobwright.wizard.setup.Angles;
@@ -85,6 +88,7 @@ final class JobPlanning {
                 gear.pressureAngleDeg(), hs.swivelAngleDeg(), !gear.isSpur(), cycle.axialClearanceMm(),
                 cycle.radialClearanceMm(), machine.radialMaxMm(), machine.rapidMmPerMin(), machine.syncSettleS());
         Optional<HobShiftPlan> shift = HobShiftPlan.of(machine, hob, cycle, depth, gear.pressureAngleDeg(), findings);
+        unknownTimes(shift.isPresent());
         String swivelDms = hs.swivelAngleDms();
         Toolpath path = ToolpathBuilder.build(geometry, drive, settings,
                 HeaderSteps.of(job, swivel, drive, settings, shift), cycle.coolant());
@@ -109,6 +113,33 @@ final class JobPlanning {
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.of(setup),
                 errors ? List.of() : path.steps(), Optional.of(summary),
                 GeneratingSimulation.forCycle(job, gd, findings), DefaultCyclePlanner.sorted(findings));
+    }
+
+    /**
+     * The machine times the cycle (swivel, hob shift) and the batch (load, unload) count that the
+     * profile does not give: they count as 0 s, and a remark says so.
+     */
+    private void unknownTimes(boolean shifts) {
+        MachineTimes t = machine.times();
+        List<String> missing = new ArrayList<>(4);
+        if (t.loadS().isEmpty()) {
+            missing.add(MachineFields.TIME_LOAD.key());
+        }
+        if (t.unloadS().isEmpty()) {
+            missing.add(MachineFields.TIME_UNLOAD.key());
+        }
+        if (machine.swivel().programmable() && t.swivelS().isEmpty()) {
+            missing.add(MachineFields.TIME_SWIVEL.key());
+        }
+        if (shifts && t.hobShiftS().isEmpty()) {
+            missing.add(MachineFields.TIME_HOB_SHIFT.key());
+        }
+        if (!missing.isEmpty()) {
+            findings.add(PlanCode.PLAN_MACHINE_TIME_UNKNOWN.at("machine.times", "the machine profile " + machine.name()
+                    + " gives no " + String.join(", ", missing) + ": the cycle time and the batch time count "
+                    + (missing.size() == 1 ? "it" : "them") + " as 0 s", "measure " + (missing.size() == 1 ? "it" : "them")
+                    + " at the machine and add " + (missing.size() == 1 ? "it" : "them") + " to the machine profile"));
+        }
     }
 
     private Drive drive(SyncRatio ratio) {

@@ -78,6 +78,8 @@ public enum PlanCode implements FindingCode {
             "hob cutting sense, FORMULAS.md §7.4", WARNING),
     PLAN_HOB_SHIFT_NO_AXIS("cycle.hobShift.perPart", "shift asked for on a machine without a shift axis",
             PlanSources.MACHINE, INFO),
+    PLAN_MACHINE_TIME_UNKNOWN("machine.times", "a time the cycle or the batch counts is not in the machine profile:"
+            + " counted as 0 s", PlanSources.MACHINE, INFO),
     PLAN_FASTEST("cycle.fastest", "the fastest cycle, its proved lower bound and binding limits",
             "fastest-cycle search (derived)", INFO);
 

@@ -31,7 +31,7 @@ final class Builtins {
         this.loader = loader;
     }
 
-    /** The text of a bundled file, e.g. {@code machines/varrow-sl16.json}. */
+    /** The text of a bundled file, e.g. {@code machines/varrow-1605.json}. */
     Optional<String> text(String relative) {
         try (InputStream in = loader.getResourceAsStream(ROOT + relative)) {
             return in == null ? Optional.empty() : Optional.of(new String(in.readAllBytes(), StandardCharsets.UTF_8));

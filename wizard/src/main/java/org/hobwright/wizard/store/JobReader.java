@@ -148,7 +148,7 @@ public final class JobReader {
             return new MachineChoice(named.value(), named.unreadable());
         }
         if (m == null) {
-            root.missing("machine", "name a machine profile, e.g. \"machine\": \"varrow-sl16\", or describe it inline");
+            root.missing("machine", "name a machine profile, e.g. \"machine\": \"varrow-1605\", or describe it inline");
             return new MachineChoice(Optional.empty(), false);
         }
         Optional<FieldReader> inline = inlineMachineFields(root);

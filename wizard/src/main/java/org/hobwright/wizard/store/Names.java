@@ -50,6 +50,6 @@ public final class Names {
         return Optional.of(InputCode.LIBRARY_BAD_NAME.at(what,
                 (what.equals("name") || what.endsWith(".name") ? what : what + " name") + " " + shown
                         + " is not allowed: " + why,
-                "use a name like varrow-sl16 or brass_fine.2"));
+                "use a name like varrow-1605 or brass_fine.2"));
     }
 }

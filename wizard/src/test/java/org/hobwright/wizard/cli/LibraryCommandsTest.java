@@ -14,7 +14,7 @@ class LibraryCommandsTest {
     Path home;
 
     private Path machineFile(String name) throws IOException {
-        String text = Store.builtinText("machines/varrow-sl16.json").replace("\"varrow-sl16\"", "\"" + name + "\"");
+        String text = Store.builtinText("machines/varrow-1605.json").replace("\"varrow-1605\"", "\"" + name + "\"");
         return Files.writeString(home.resolve(name + "-file.json"), text);
     }
 
@@ -22,9 +22,9 @@ class LibraryCommandsTest {
     void builtInMachinesAreListedAndShown() {
         Cli.Run list = Cli.run(home, "machines", "list");
         assertEquals(ExitCodes.OK, list.code(), list::toString);
-        assertTrue(list.out().contains("varrow-sl16  (built-in)"), list::toString);
-        assertTrue(list.out().contains("ottmere-tl40  (built-in)"), list::toString);
-        Cli.Run show = Cli.run(home, "machines", "show", "varrow-sl16");
+        assertTrue(list.out().contains("varrow-1605  (built-in)"), list::toString);
+        assertTrue(list.out().contains("ottmere-4008  (built-in)"), list::toString);
+        Cli.Run show = Cli.run(home, "machines", "show", "varrow-1605");
         assertEquals(ExitCodes.OK, show.code(), show::toString);
         assertTrue(show.out().contains("\"hobwright-machine\""), show::toString);
     }
@@ -57,7 +57,7 @@ class LibraryCommandsTest {
 
     @Test
     void builtInMachinesCannotBeRemovedAndBadNamesAreRefused() {
-        Cli.Run r = Cli.run(home, "machines", "remove", "varrow-sl16");
+        Cli.Run r = Cli.run(home, "machines", "remove", "varrow-1605");
         assertEquals(ExitCodes.USAGE, r.code(), r::toString);
         Cli.Run bad = Cli.run(home, "machines", "show", "../x");
         assertEquals(ExitCodes.USAGE, bad.code(), bad::toString);

@@ -84,7 +84,7 @@ class PlanRunTest {
         Path out = dir.resolve("out");
         Cli.Run r = Cli.run(dir.resolve("home"), "plan", good.toString(), bad.toString(), "--out", out.toString());
         assertEquals(ExitCodes.JOB_ERRORS, r.code(), r::toString);
-        // varrow-sl16 cannot follow a helix (samples/scenario/machines/varrow-sl16.json)
+        // varrow-1605 cannot follow a helix (samples/scenario/machines/varrow-1605.json)
         assertTrue(r.out().contains("MACHINE_NO_HELIX"), r::toString);
         assertFalse(Files.exists(out), "nothing may be written");
     }
@@ -107,11 +107,11 @@ class PlanRunTest {
     void theMachineAndFastestOptionsReachThePlan() throws IOException {
         Path job = Files.writeString(dir.resolve("job.json"), SAMPLE.replace("\"helixAngle\": 0",
                 "\"helixAngle\": 15, \"hand\": \"right\"").replace("\"blankDiameter\": 26.0,", ""));
-        Cli.Run r = Cli.run(dir.resolve("home"), "plan", job.toString(), "--machine", "ottmere-tl40", "--fastest",
+        Cli.Run r = Cli.run(dir.resolve("home"), "plan", job.toString(), "--machine", "ottmere-4008", "--fastest",
                 "--json");
         assertEquals(ExitCodes.OK, r.code(), r::toString);
         assertTrue(r.err().contains("fastest proposal"), r::toString);
-        Path machineFile = Files.writeString(dir.resolve("m.json"), Store.builtinText("machines/ottmere-tl40.json"));
+        Path machineFile = Files.writeString(dir.resolve("m.json"), Store.builtinText("machines/ottmere-4008.json"));
         Cli.Run fromFile = Cli.run(dir.resolve("home"), "plan", job.toString(), "--machine", machineFile.toString(),
                 "--json");
         assertEquals(ExitCodes.OK, fromFile.code(), fromFile::toString);

@@ -25,7 +25,7 @@ class QuickArgsTest {
     @ValueSource(strings = {
         "plan a.json",
         "plan a.json b.json jobs --out o",
-        "plan a.json --machine varrow-sl16 --template brass-fine --json --fastest",
+        "plan a.json --machine varrow-1605 --template brass-fine --json --fastest",
         "plan --json a.json --date 2026-12-01",
         "plan a.json --out=o --machine=m.json --date=2026-01-31",
         "--home h plan a.json",

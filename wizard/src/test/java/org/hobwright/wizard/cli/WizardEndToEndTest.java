@@ -177,7 +177,7 @@ class WizardEndToEndTest {
         assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
         assertFalse(Files.exists(dir.resolve("out")));
         assertTrue(wizard.out().contains("Saved template fine-finish"), wizard::toString);
-        Path saved = home.resolve("templates/varrow-sl16/fine-finish.json");
+        Path saved = home.resolve("templates/varrow-1605/fine-finish.json");
         var cycle = tools.jackson.databind.json.JsonMapper.shared().readTree(Files.readString(saved)).path("cycle");
         // the values the plan used, not only the answers typed: speed and feeds the planner chose too
         for (String key : List.of("workMaterial", "cuttingSpeed", "finishFeed", "finishStock", "method", "coolant")) {

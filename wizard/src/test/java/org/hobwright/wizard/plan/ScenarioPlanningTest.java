@@ -20,7 +20,7 @@ class ScenarioPlanningTest {
     private static final Path DEMO_JOB = Path.of("..", "samples", "scenario", "jobs", "metering-pump-gear.json");
 
     @ParameterizedTest(name = "{0} {1}")
-    @CsvSource({"varrow-sl16, ''", "varrow-sl16, brass-fine", "ottmere-tl40, ''", "ottmere-tl40, steel-production"})
+    @CsvSource({"varrow-1605, ''", "varrow-1605, brass-fine", "ottmere-4008, ''", "ottmere-4008, steel-production"})
     void demoJobPlans(String machine, String template, @TempDir Path home) {
         Loaded<HobJob> job = new JobReader(Library.open(Optional.of(home))).read(DEMO_JOB, new JobReader.Overrides(
                 Optional.of(machine), template.isEmpty() ? Optional.empty() : Optional.of(template)));

@@ -74,7 +74,7 @@ final class TestJobs {
 
     /**
      * The invented demo scenario: the metering-pump spur gear (m 1, z 24, ISO 53 C, blank 26) with a
-     * coated 32 mm hob on the invented Varrow SL-16 lathe (values of samples/scenario).
+     * coated 32 mm hob on the invented Varrow 1605 lathe (values of samples/scenario).
      */
     static HobJob meteringPumpOnVarrow() {
         GearSpec gear = new GearSpec("MP-204 metering pump drive gear", 24, new Pitch.Module(1.0), 20, 0, Hand.RIGHT, 8,
@@ -82,7 +82,7 @@ final class TestJobs {
                 OptionalInt.of(8), DrawingValues.NONE);
         HobSpec hob = new HobSpec(new Pitch.Module(1.0), 20, 1, Hand.RIGHT, 32, OptionalDouble.empty(),
                 OptionalDouble.empty(), 12, 25, OptionalDouble.of(4000), "hss-coated");
-        MachineProfile varrow = new MachineProfile("varrow-sl16", "varrow-ctl", 5, 10000, 100, 6000, 120, false,
+        MachineProfile varrow = new MachineProfile("varrow-1605", "varrow-ctl", 5, 10000, 100, 6000, 120, false,
                 new SwivelHolder(SwivelHolder.SwivelScale.DEGREES_MINUTES, 5.0 / 60, false, 30,
                         "top of the hob swung toward the main spindle", true),
                 0, 32, -10, 120, OptionalDouble.empty(), 12000, 2000, 1.5, 40);

@@ -233,11 +233,11 @@ class StepSessionTest {
         Transition gear = w.next(true);
         assertTrue(gear.moved(), gear::toString);
         assertTrue(w.next(true).moved());
-        // the sample's machine, varrow-sl16, cannot follow a helix (samples/scenario/machines/varrow-sl16.json)
+        // the sample's machine, varrow-1605, cannot follow a helix (samples/scenario/machines/varrow-1605.json)
         Transition machine = w.next(true);
         assertFalse(machine.moved());
         assertTrue(machine.findings().stream().anyMatch(f -> f.code().equals("MACHINE_NO_HELIX")), machine::toString);
-        assertTrue(w.answer(StepFields.MACHINE, "ottmere-tl40").isEmpty());
+        assertTrue(w.answer(StepFields.MACHINE, "ottmere-4008").isEmpty());
         Transition other = w.next(true);
         assertTrue(other.moved(), other::toString);
     }
@@ -249,7 +249,7 @@ class StepSessionTest {
         w.next(true);
         var machine = w.view().fields().get(0);
         assertEquals(StepFields.MACHINE, machine.key());
-        assertTrue(machine.choices().containsAll(List.of("varrow-sl16", "ottmere-tl40")), machine::toString);
+        assertTrue(machine.choices().containsAll(List.of("varrow-1605", "ottmere-4008")), machine::toString);
         assertEquals("WIZARD_NOT_A_CHOICE", w.answer(StepFields.MACHINE, "no-such-machine").get(0).code());
     }
 

@@ -65,7 +65,7 @@ class StepWizardFactoryTest {
         Wizard sample = factory().start(Map.of(WizardFactory.HOME, home.toString(),
                 WizardFactory.START, WizardFactory.START_SAMPLE));
         assertEquals("metering-pump-gear", sample.value("name"));
-        assertEquals("varrow-sl16", sample.value("machine"));
+        assertEquals("varrow-1605", sample.value("machine"));
     }
 
     @Test

@@ -24,9 +24,9 @@ class BuiltinsTest {
     @Test
     void listsAndReadsFromAFolder() {
         Builtins b = new Builtins(BuiltinsTest.class.getClassLoader());
-        assertTrue(b.names("machines").containsAll(List.of("ottmere-tl40", "varrow-sl16")));
-        assertTrue(b.folders("templates").contains("varrow-sl16"));
-        assertTrue(b.text("machines/varrow-sl16.json").orElseThrow().contains("hobwright-machine"));
+        assertTrue(b.names("machines").containsAll(List.of("ottmere-4008", "varrow-1605")));
+        assertTrue(b.folders("templates").contains("varrow-1605"));
+        assertTrue(b.text("machines/varrow-1605.json").orElseThrow().contains("hobwright-machine"));
         assertEquals(List.of(), b.names("no-such-folder"));
     }
 

@@ -49,7 +49,7 @@ class JobReaderTest {
         assertEquals(new Pitch.Module(1.0), job.gear().pitch());
         assertEquals(-0.03, job.gear().thicknessAllowanceMm());
         assertEquals(Hand.RIGHT, job.gear().hand(), "spur gear without hand reads as right hand");
-        assertEquals("varrow-sl16", job.machine().name());
+        assertEquals("varrow-1605", job.machine().name());
         // the built-in machine's swivel resolution is written "0°5'": 5/60 degree
         assertEquals(5.0 / 60, job.machine().swivel().resolutionDeg(), 1e-12);
         assertEquals(HobbingMethod.CLIMB, job.cycle().method());
@@ -94,7 +94,7 @@ class JobReaderTest {
     void aMetricTemplateIsConvertedForAnInchJob() throws Exception {
         // brass-fine is in mm: 80 m/min, 1.0 mm/rev; an inch job reads them as the same physical values
         String json = Files.readString(RESOURCES.resolve("instrument-gear-in.json"))
-                .replace("\"machine\": {", "\"machine\": \"varrow-sl16\", \"unused\": {")
+                .replace("\"machine\": {", "\"machine\": \"varrow-1605\", \"unused\": {")
                 .replace("\"cuttingSpeed\": 100,", "\"template\": \"brass-fine\",")
                 .replace("\"roughFeed\": 0.02,", "");
         ObjectNode tree = (ObjectNode) JsonMapper.shared().readTree(json);
@@ -108,14 +108,14 @@ class JobReaderTest {
     @Test
     void overridesReplaceMachineAndTemplate(@TempDir Path dir) throws Exception {
         Loaded<HobJob> byName = reader.read(SCENARIO.resolve("jobs/metering-pump-gear.json"),
-                new JobReader.Overrides(Optional.of("ottmere-tl40"), Optional.of("steel-production")));
+                new JobReader.Overrides(Optional.of("ottmere-4008"), Optional.of("steel-production")));
         assertTrue(byName.ok(), byName::errorLine);
-        assertEquals("ottmere-tl40", byName.get().machine().name());
+        assertEquals("ottmere-4008", byName.get().machine().name());
         assertEquals(20, byName.get().cycle().hobShiftEveryParts(), "from the ottmere template");
 
         Path file = dir.resolve("my-machine.json");
-        Files.writeString(file, Files.readString(SCENARIO.resolve("machines/ottmere-tl40.json"))
-                .replace("\"ottmere-tl40\"", "\"my-machine\""));
+        Files.writeString(file, Files.readString(SCENARIO.resolve("machines/ottmere-4008.json"))
+                .replace("\"ottmere-4008\"", "\"my-machine\""));
         Loaded<HobJob> byFile = reader.read(SCENARIO.resolve("jobs/metering-pump-gear.json"),
                 new JobReader.Overrides(Optional.of(file.toString()), Optional.empty()));
         assertTrue(byFile.ok(), byFile::errorLine);

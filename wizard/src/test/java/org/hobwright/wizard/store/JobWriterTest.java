@@ -57,7 +57,7 @@ class JobWriterTest {
         JobReader reader = new JobReader(Library.open(Optional.of(home)));
         HobJob job = reader.read(StoreTesting.SCENARIO.resolve("jobs/metering-pump-gear.json")).get();
         String text = JobWriter.jobText(job, Units.MM, true);
-        assertTrue(text.contains("\"machine\": \"varrow-sl16\""), text);
+        assertTrue(text.contains("\"machine\": \"varrow-1605\""), text);
         assertTrue(text.contains("\"faceWidth\": 8,"), "whole numbers without a fraction: " + text);
         assertEquals(job, reader.read(text, "again").get(), "mm to mm is exact");
     }

@@ -43,12 +43,12 @@ class LibraryTest {
     @Test
     void builtInsAreListedAndReadOnly() {
         List<String> names = lib.machines().stream().map(LibraryEntry::name).toList();
-        assertTrue(names.containsAll(List.of("ottmere-tl40", "varrow-sl16")), names.toString());
+        assertTrue(names.containsAll(List.of("ottmere-4008", "varrow-1605")), names.toString());
         assertTrue(lib.machines().stream().allMatch(LibraryEntry::builtIn));
-        assertTrue(lib.machine("varrow-sl16").ok());
-        Loaded<Path> removed = lib.removeMachine("varrow-sl16");
+        assertTrue(lib.machine("varrow-1605").ok());
+        Loaded<Path> removed = lib.removeMachine("varrow-1605");
         assertEquals("LIBRARY_READ_ONLY", removed.findings().get(0).code());
-        assertTrue(lib.templates("varrow-sl16").stream().anyMatch(e -> e.name().equals("brass-fine")));
+        assertTrue(lib.templates("varrow-1605").stream().anyMatch(e -> e.name().equals("brass-fine")));
     }
 
     @Test
@@ -83,15 +83,15 @@ class LibraryTest {
     @Test
     void aSavedMachineWinsOverTheBuiltInOfTheSameName() throws Exception {
         Path file = home.resolve("my-varrow.json");
-        Files.writeString(file, Files.readString(SCENARIO.resolve("machines/varrow-sl16.json"))
+        Files.writeString(file, Files.readString(SCENARIO.resolve("machines/varrow-1605.json"))
                 .replace("\"maxSyncRatio\": 120", "\"maxSyncRatio\": 90"));
         assertTrue(lib.saveMachine(file, false).ok());
-        assertEquals(90, lib.machine("varrow-sl16").get().maxSyncRatio());
-        LibraryEntry e = lib.machines().stream().filter(x -> x.name().equals("varrow-sl16")).findFirst().orElseThrow();
+        assertEquals(90, lib.machine("varrow-1605").get().maxSyncRatio());
+        LibraryEntry e = lib.machines().stream().filter(x -> x.name().equals("varrow-1605")).findFirst().orElseThrow();
         assertTrue(e.hidesBuiltIn());
-        assertFalse(Files.readString(home.resolve("machines/varrow-sl16.json")).contains("$schema"));
-        assertTrue(lib.removeMachine("varrow-sl16").ok());
-        assertEquals(120, lib.machine("varrow-sl16").get().maxSyncRatio(), "the built-in one again");
+        assertFalse(Files.readString(home.resolve("machines/varrow-1605.json")).contains("$schema"));
+        assertTrue(lib.removeMachine("varrow-1605").ok());
+        assertEquals(120, lib.machine("varrow-1605").get().maxSyncRatio(), "the built-in one again");
     }
 
     static List<String> badNames() {
@@ -104,7 +104,7 @@ class LibraryTest {
         assertEquals("LIBRARY_BAD_NAME", lib.machine(name).findings().get(0).code());
         assertEquals("LIBRARY_BAD_NAME", lib.removeMachine(name).findings().get(0).code());
         assertEquals("LIBRARY_BAD_NAME", lib.template(name, "x").findings().get(0).code());
-        assertEquals("LIBRARY_BAD_NAME", lib.template("varrow-sl16", name).findings().get(0).code());
+        assertEquals("LIBRARY_BAD_NAME", lib.template("varrow-1605", name).findings().get(0).code());
         assertEquals("LIBRARY_BAD_NAME", lib.dialectText(name).findings().get(0).code());
         assertTrue(lib.machine(name).unreadable());
         assertFalse(Files.exists(home.resolve("machines")), "nothing created");
@@ -113,8 +113,8 @@ class LibraryTest {
     @Test
     void aMachineFileNamedBadlyIsNotSaved() throws Exception {
         Path file = home.resolve("evil.json");
-        Files.writeString(file, Files.readString(SCENARIO.resolve("machines/varrow-sl16.json"))
-                .replace("\"varrow-sl16\"", "\"../../evil\""));
+        Files.writeString(file, Files.readString(SCENARIO.resolve("machines/varrow-1605.json"))
+                .replace("\"varrow-1605\"", "\"../../evil\""));
         Loaded<Path> saved = lib.saveMachine(file, true);
         assertFalse(saved.ok());
         assertTrue(saved.errorLine().contains("evil.json:6:"), saved.errorLine());
@@ -124,17 +124,17 @@ class LibraryTest {
     @Test
     void templateRoundTripAndMachineCheck() {
         CycleSettings settings = new RandomJobs(9).cycle();
-        CycleTemplate t = CycleTemplate.of("night-shift", "varrow-sl16", "long runs", settings, Units.IN);
+        CycleTemplate t = CycleTemplate.of("night-shift", "varrow-1605", "long runs", settings, Units.IN);
         assertTrue(lib.saveTemplate(t, false).ok());
-        CycleTemplate back = lib.template("varrow-sl16", "night-shift").get();
+        CycleTemplate back = lib.template("varrow-1605", "night-shift").get();
         assertEquals(Units.IN, back.units());
         assertEquals(JobWriter.text(JobWriter.templateTree(t)), JobWriter.text(JobWriter.templateTree(back)));
-        assertTrue(lib.templates("varrow-sl16").stream().anyMatch(e -> e.name().equals("night-shift") && !e.builtIn()));
-        assertTrue(lib.templates().stream().anyMatch(e -> e.machine().equals("ottmere-tl40")));
-        assertTrue(lib.templateText("varrow-sl16", "night-shift").get().contains("\"name\": \"night-shift\""));
-        assertTrue(lib.removeTemplate("varrow-sl16", "night-shift").ok());
-        assertTrue(lib.template("varrow-sl16", "night-shift").unreadable());
-        assertTrue(lib.template("ottmere-tl40", "brass-fine").unreadable(), "templates belong to one machine");
+        assertTrue(lib.templates("varrow-1605").stream().anyMatch(e -> e.name().equals("night-shift") && !e.builtIn()));
+        assertTrue(lib.templates().stream().anyMatch(e -> e.machine().equals("ottmere-4008")));
+        assertTrue(lib.templateText("varrow-1605", "night-shift").get().contains("\"name\": \"night-shift\""));
+        assertTrue(lib.removeTemplate("varrow-1605", "night-shift").ok());
+        assertTrue(lib.template("varrow-1605", "night-shift").unreadable());
+        assertTrue(lib.template("ottmere-4008", "brass-fine").unreadable(), "templates belong to one machine");
     }
 
     @Test
@@ -165,7 +165,7 @@ class LibraryTest {
     @Test
     void unknownKeyInAMigratedFileNamesItsOriginalLine() {
         String v0 = "{\n  \"format\": \"hobwright-template\",\n  \"version\": 0,\n  \"units\": \"mm\",\n"
-                + "  \"machine\": \"varrow-sl16\",\n  \"name\": \"x\",\n  \"colour\": \"green\"\n}\n";
+                + "  \"machine\": \"varrow-1605\",\n  \"name\": \"x\",\n  \"colour\": \"green\"\n}\n";
         Loaded<CycleTemplate> t = JsonDocument.parse(v0, "old.json").then(TemplateReader::read);
         assertTrue(t.value().isEmpty() && t.hasErrors());
         assertTrue(t.errorLine().startsWith("old.json:7: unknown key \"colour\" in cycle"), t.errorLine());
@@ -174,8 +174,8 @@ class LibraryTest {
     @Test
     void unknownKeyInASavedMachineNamesKeyFileAndLine() throws Exception {
         Path dir = Files.createDirectories(home.resolve("machines"));
-        Files.writeString(dir.resolve("odd.json"), Files.readString(SCENARIO.resolve("machines/varrow-sl16.json"))
-                .replace("\"varrow-sl16\"", "\"odd\"").replace("\"rapid\": 12000,", "\"rapid\": 12000,\n  \"turbo\": true,"));
+        Files.writeString(dir.resolve("odd.json"), Files.readString(SCENARIO.resolve("machines/varrow-1605.json"))
+                .replace("\"varrow-1605\"", "\"odd\"").replace("\"rapid\": 12000,", "\"rapid\": 12000,\n  \"turbo\": true,"));
         Loaded<MachineFile> m = lib.machineFile("odd");
         assertTrue(m.value().isEmpty() && m.hasErrors());
         assertTrue(m.errorLine().contains(dir.resolve("odd.json") + ":23: unknown key \"turbo\""), m.errorLine());
@@ -184,7 +184,7 @@ class LibraryTest {
     @Test
     void aFileWhoseNameDisagreesWithItsContentIsAnError() throws Exception {
         Path dir = Files.createDirectories(home.resolve("machines"));
-        Files.copy(SCENARIO.resolve("machines/varrow-sl16.json"), dir.resolve("other.json"));
+        Files.copy(SCENARIO.resolve("machines/varrow-1605.json"), dir.resolve("other.json"));
         assertEquals("INPUT_CONFLICT", lib.machine("other").findings().get(0).code());
     }
 

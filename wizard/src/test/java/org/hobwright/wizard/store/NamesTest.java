@@ -28,7 +28,7 @@ class NamesTest {
 
     @Test
     void edges() {
-        assertTrue(Names.valid("varrow-sl16"));
+        assertTrue(Names.valid("varrow-1605"));
         assertTrue(Names.valid("brass_fine.2"));
         assertTrue(Names.valid("x".repeat(64)));
         assertFalse(Names.valid("x".repeat(65)));

@@ -98,7 +98,7 @@ public final class SaveLoop {
 
         static org.hobwright.api.job.MachineProfile profile(String name) {
             org.hobwright.api.job.MachineProfile p = Library.readMachineFile(StoreTesting.SCENARIO
-                    .resolve("machines/varrow-sl16.json")).get().profile();
+                    .resolve("machines/varrow-1605.json")).get().profile();
             return new org.hobwright.api.job.MachineProfile(name, p.dialect(), p.workMinRpm(), p.workMaxRpm(),
                     p.hobMinRpm(), p.hobMaxRpm(), p.maxSyncRatio(), p.followsHelix(), p.swivel(), p.radialMinMm(),
                     p.radialMaxMm(), p.axialMinMm(), p.axialMaxMm(), p.hobShiftTravelMm(), p.rapidMmPerMin(),
