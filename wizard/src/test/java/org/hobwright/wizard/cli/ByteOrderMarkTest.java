@@ -46,12 +46,12 @@ class ByteOrderMarkTest {
         Path dialect = withMark("home/dialects/shop-ctl.json", Store.builtinText("dialects/varrow-ctl.json")
                 .replace("\"varrow-ctl\"", "\"shop-ctl\""));
         assertTrue(Files.exists(dialect));
-        Path machine = withMark("machine.json", Store.builtinText("machines/varrow-sl16.json")
-                .replace("\"varrow-sl16\"", "\"shop-lathe\"").replace("\"varrow-ctl\"", "\"shop-ctl\""));
+        Path machine = withMark("machine.json", Store.builtinText("machines/varrow-1605.json")
+                .replace("\"varrow-1605\"", "\"shop-lathe\"").replace("\"varrow-ctl\"", "\"shop-ctl\""));
         Cli.Run saveMachine = Cli.run(home, "machines", "save", machine.toString());
         assertEquals(ExitCodes.OK, saveMachine.code(), saveMachine::toString);
-        Path template = withMark("template.json", Store.builtinText("templates/varrow-sl16/brass-fine.json")
-                .replace("\"varrow-sl16\"", "\"shop-lathe\""));
+        Path template = withMark("template.json", Store.builtinText("templates/varrow-1605/brass-fine.json")
+                .replace("\"varrow-1605\"", "\"shop-lathe\""));
         Cli.Run saveTemplate = Cli.run(home, "templates", "save", template.toString());
         assertEquals(ExitCodes.OK, saveTemplate.code(), saveTemplate::toString);
         withMark("home/cutting-data.json", """

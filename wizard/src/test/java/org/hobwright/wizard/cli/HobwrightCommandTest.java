@@ -20,14 +20,14 @@ class HobwrightCommandTest {
     void helpListsEveryVerbAndTheCautions() {
         Cli.Run r = Cli.run(home, "--help");
         assertEquals(ExitCodes.OK, r.code(), r::toString);
-        for (String verb : new String[] {"wizard", "demo", "plan", "machines", "templates"}) {
+        for (String verb : new String[] {"wizard", "demo", "plan", "machines", "templates", "dialects"}) {
             assertTrue(r.out().contains(verb), verb + " missing from\n" + r.out());
         }
         assertTrue(r.out().contains("Caution"), r.out());
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"wizard", "demo", "plan", "machines", "templates"})
+    @ValueSource(strings = {"wizard", "demo", "plan", "machines", "templates", "dialects"})
     void everyVerbHasHelp(String verb) {
         Cli.Run r = Cli.run(home, verb, "--help");
         assertEquals(ExitCodes.OK, r.code(), r::toString);
