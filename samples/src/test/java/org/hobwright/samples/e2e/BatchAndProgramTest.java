@@ -41,13 +41,11 @@ class BatchAndProgramTest {
     void theProgramStartsAndEndsSafeAndTheNumbersAgree(String job, @TempDir Path work) throws IOException {
         PlanRun run = PlanRun.of(job, work);
         assertEquals(0, run.exitCode(), run.describe());
-        JsonNode jobTree = JSON.readTree(Files.readString(PlanRun.JOBS.resolve(job)));
-        JsonNode machine = JSON.readTree(Files.readString(PlanRun.JOBS.resolveSibling("machines")
-                .resolve(jobTree.get("machine").asString() + ".json")));
-        String dialectText = Files.readString(PlanRun.JOBS.resolveSibling("dialects")
-                .resolve(machine.get("dialect").asString() + ".json"));
-        JsonNode dialect = JSON.readTree(dialectText);
-        NcReader reader = new NcReader(dialectText);
+        SampleFiles files = SampleFiles.of(job);
+        JsonNode jobTree = files.job();
+        JsonNode machine = files.machine();
+        JsonNode dialect = files.dialect();
+        NcReader reader = new NcReader(files.dialectText());
         List<NcReader.Block> blocks = reader.blocks(Files.readString(run.file(".nc")));
 
         int safeStart = first(blocks, "safeStart");

@@ -57,8 +57,7 @@ class ClimbAndConventionalTest {
         PlanRun run = PlanRun.of(file.toAbsolutePath().toString(), work);
         assertEquals(0, run.exitCode(), run.describe());
         String machineName = tree.get("machine").asString();
-        JsonNode machine = JSON.readTree(Files.readString(PlanRun.JOBS.resolveSibling("machines")
-                .resolve(machineName + ".json")));
+        JsonNode machine = SampleFiles.machine(machineName);
         String dialectText = Files.readString(PlanRun.JOBS.resolveSibling("dialects")
                 .resolve(machine.get("dialect").asString() + ".json"));
         NcReader reader = new NcReader(dialectText);

@@ -23,7 +23,6 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.MethodSource;
 import tools.jackson.databind.JsonNode;
-import tools.jackson.databind.json.JsonMapper;
 
 /**
  * Every sample program, with the blocks of the dialects' invented words (M100 to M199, the range
@@ -35,10 +34,10 @@ import tools.jackson.databind.json.JsonMapper;
  * seconds, the work spindle's sense, and every move of the cycle CSV at the position the CSV gives
  * (the interpreter reports X as a radius in the program's units whatever the diameter mode, and
  * Z as the machine counts it). Skipped when {@code rs274} is not installed ({@code .ci/run}
- * installs it); {@code HOBWRIGHT_RS274} may name another binary.
+ * installs it when run with {@code HOBWRIGHT_CI_RS274=1}); {@code HOBWRIGHT_RS274} may name
+ * another binary.
  */
 class ReferenceInterpreterTest {
-    private static final JsonMapper JSON = JsonMapper.builder().build();
     private static final Pattern PRIVATE = Pattern.compile("(?<![A-Z#\\d.])M1\\d\\d(?!\\d)");
     private static final Pattern CALL = Pattern.compile("\\s*\\d+\\s+N[\\d.]+\\s+([A-Z_]+)\\((.*)\\)\\s*");
 
@@ -74,11 +73,9 @@ class ReferenceInterpreterTest {
         Assumptions.assumeTrue(rs274.isPresent(), "rs274 (Debian package linuxcnc-uspace) is not installed");
         PlanRun run = PlanRun.of(job, work);
         assertEquals(0, run.exitCode(), run.describe());
-        JsonNode jobTree = JSON.readTree(Files.readString(PlanRun.JOBS.resolve(job)));
-        JsonNode machine = JSON.readTree(Files.readString(PlanRun.JOBS.resolveSibling("machines")
-                .resolve(jobTree.get("machine").asString() + ".json")));
-        String dialect = Files.readString(PlanRun.JOBS.resolveSibling("dialects")
-                .resolve(machine.get("dialect").asString() + ".json"));
+        SampleFiles files = SampleFiles.of(job);
+        JsonNode jobTree = files.job();
+        String dialect = files.dialectText();
         String program = Files.readString(run.file(".nc"));
         List<NcReader.Block> blocks = new NcReader(dialect).blocks(program);
         String tool = blocks.stream().filter(b -> b.is("toolCall")).findFirst().orElseThrow().values().get("tool");
@@ -123,7 +120,7 @@ class ReferenceInterpreterTest {
                 || c.name().equals("STRAIGHT_TRAVERSE")).toList();
         List<Operation> planned = ops.stream().filter(o -> o.kind().equals("rapid") || o.kind().equals("feed")).toList();
         double unit = inch ? 25.4 : 1;
-        int axialSign = JSON.readTree(dialect).at("/axes/axial/sign").asInt(1);
+        int axialSign = files.dialect().at("/axes/axial/sign").asInt(1);
         int at = 0;
         for (Operation o : planned) {
             double x = o.number("diameter_mm").orElseThrow() / 2 / unit;
