@@ -23,7 +23,8 @@ import tools.jackson.databind.json.JsonMapper;
  * program (read by the post tests' {@link NcReader}) starts with the dialect's safe start before
  * any spindle or axis move, retracting the radial axis alone to the machine's radial limit, and
  * ends with the dialect's safe end after the last move; the program number and the tool station
- * it calls are the ones the setup sheet and the report give; the sheet's axial zero and feed
+ * it calls are the job file's (else the dialect file's defaults) and the ones the setup sheet and
+ * the report give; the sheet's axial zero and feed
  * direction agree with the way the program's cutting moves run; the sheet names the hob's gashes and
  * the work material of the job file; and the report's batch times add up
  * from the cycle CSV's step times and the machine profile's load and unload times (time per part =
@@ -72,6 +73,10 @@ class BatchAndProgramTest {
         String program = blocks.stream().filter(b -> b.is("programStart")).findFirst().orElseThrow()
                 .values().get("programNumber");
         String tool = blocks.stream().filter(b -> b.is("toolCall")).findFirst().orElseThrow().values().get("tool");
+        long givenProgram = jobTree.at("/cycle/programNumber").asLong(dialect.at("/programNumber/default").asLong());
+        long givenTool = jobTree.at("/cycle/toolStation").asLong(dialect.at("/toolStation/default").asLong());
+        assertEquals(givenProgram, Long.parseLong(program), "the job's program number, else the dialect's default");
+        assertEquals(givenTool, Long.parseLong(tool), "the job's tool station, else the dialect's default");
         JsonNode report = JSON.readTree(Files.readString(run.file(".report.json")));
         assertEquals(Long.parseLong(program), report.at("/program/number").asLong(), "report and program");
         assertEquals(Long.parseLong(tool), report.at("/program/toolStation").asLong(), "report and program");
