@@ -13,6 +13,7 @@ import org.hobwright.api.host.HostLibrary;
 import org.hobwright.api.host.Outcome;
 import org.hobwright.api.host.PlannedJob;
 import org.hobwright.api.host.Written;
+import org.hobwright.api.internal.Causes;
 import org.hobwright.api.internal.Checks;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.spi.CyclePlanner;
@@ -21,6 +22,7 @@ import org.hobwright.api.spi.HostProvider;
 import org.hobwright.api.spi.HostSession;
 import org.hobwright.api.spi.ProviderMissingException;
 import org.hobwright.api.spi.Providers;
+import org.hobwright.api.spi.SpiCode;
 import org.hobwright.api.spi.WriteResult;
 import org.hobwright.api.wizard.Wizard;
 
@@ -69,15 +71,21 @@ public final class Hobwright implements AutoCloseable {
      *                not exist)
      * @return the open handle; close it when done
      * @throws ProviderMissingException when the loader holds no usable provider, naming what was
-     *                                  skipped and why (for instance a plugin built against a newer api)
+     *                                  skipped and why (for instance a plugin built against a newer api),
+     *                                  or when the provider cannot open a session (for instance a library
+     *                                  missing beside it), naming the causes and keeping them as its cause
      */
     public static Hobwright open(ClassLoader plugins, Path home) {
         Checks.present("plugins", plugins);
         Checks.present("home", home);
         HostProvider provider = Providers.host(plugins);
-        HostSession session = provider.open(home);
-        List<Finding> problems = new java.util.ArrayList<>(session.problems());
-        return new Hobwright(session, problems);
+        HostSession session;
+        try {
+            session = provider.open(home);
+        } catch (RuntimeException | LinkageError e) {
+            throw openFailed(provider, e);
+        }
+        return new Hobwright(session, session.problems());
     }
 
     /**
@@ -266,6 +274,17 @@ public final class Hobwright implements AutoCloseable {
                     + " must be whole seconds since 1970, was \"" + epoch + "\"", "set it to a number such as"
                     + " 1795996800, or unset it")));
         }
+    }
+
+    /** A provider found but unable to open, typically a dependency missing beside it: the causes named and kept. */
+    private static ProviderMissingException openFailed(HostProvider provider, Throwable e) {
+        String message = provider.getClass().getName() + " could not open a session: " + Causes.chain(e);
+        ProviderMissingException missing = new ProviderMissingException("No usable HostProvider: " + message
+                + "; put hobwright-plugin.jar, which holds every library the plugin needs, on the class loader",
+                List.of(SpiCode.SPI_PROVIDER_BROKEN.at("spi.HostProvider", message,
+                        "remove or rebuild the jar that declares it")));
+        missing.initCause(e);
+        return missing;
     }
 
     private HostSession open() {

@@ -9,6 +9,7 @@ import java.util.ServiceLoader;
 import java.util.function.ToIntFunction;
 import org.hobwright.api.ApiStatus;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.internal.Causes;
 import org.hobwright.api.internal.Checks;
 import org.hobwright.api.wizard.WizardFactory;
 
@@ -261,10 +262,6 @@ public final class Providers {
 
     /** The message of a failure with every cause behind it, e.g. the class a missing dependency should have held. */
     static String causes(Throwable e) {
-        StringBuilder sb = new StringBuilder(String.valueOf(e));
-        for (Throwable c = e.getCause(); c != null && c != c.getCause(); c = c.getCause()) {
-            sb.append("; caused by ").append(c);
-        }
-        return sb.toString();
+        return Causes.chain(e);
     }
 }

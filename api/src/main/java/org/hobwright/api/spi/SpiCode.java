@@ -7,8 +7,9 @@ import org.hobwright.api.check.Severity;
 /** Finding codes of the provider look-up ({@link Providers}); listed in {@code api/FINDINGS.md}. */
 @ApiStatus(since = "1.1")
 public enum SpiCode implements FindingCode {
-    /** A provider failed to load or to state its SPI version; it was skipped. */
-    SPI_PROVIDER_BROKEN("a provider could not be loaded or failed when asked for its SPI version; it was skipped"),
+    /** A provider failed to load, to state its version or to open a session; it was skipped. */
+    SPI_PROVIDER_BROKEN("a provider could not be loaded, failed when asked for its version or could not open a"
+            + " session; it was skipped"),
     /** A provider was built for another SPI version; it was skipped. */
     SPI_VERSION_MISMATCH("a provider was built for another SPI version; it was skipped"),
     /** A provider was built against a newer minor version of the api than the host's; it was skipped. */

@@ -40,7 +40,7 @@ public record FieldSpec(String key, String label, String unit, FieldType type, S
      * @param required true when the step cannot complete without a value
      * @param help one or two sentences of help
      * @param minExclusive true when the number must be greater than {@code min} (e.g. a length that must be greater
-     *     than 0), false when {
+     *     than 0), false when {@code min} itself is allowed
      */
     public FieldSpec {
         Checks.text("key", key);

@@ -3,6 +3,7 @@ package org.hobwright.api.contract;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -39,6 +40,21 @@ public abstract class CyclePlannerContract {
                 assertFalse(cycle.steps().isEmpty(), job.name() + ": a clean cycle has steps");
             }
         }
+    }
+
+    /** A null job is a broken contract: a NullPointerException that names the job, not a bare one. */
+    @Test
+    void planNullNamesTheJob() {
+        NullPointerException e = assertThrows(NullPointerException.class, () -> planner().plan(null));
+        assertNotNull(e.getMessage(), "a message, not a bare NullPointerException");
+        assertTrue(e.getMessage().contains("job"), e.getMessage());
+    }
+
+    /** The cycle says which job it was planned for, so a writer can refuse it for another one. */
+    @Test
+    void cycleNamesItsJob() {
+        HobJob job = SampleJobs.spurMetric();
+        assertEquals(java.util.Optional.of(job), planner().plan(job).plannedFor());
     }
 
     @Test

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.hobwright.api.check.Finding;
+import org.hobwright.api.check.Severity;
 import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.spi.CycleWriter;
 import org.hobwright.api.spi.Spi;
@@ -48,6 +49,19 @@ public abstract class CycleWriterContract {
         WriteResult r = writer().write(bad, context());
         assertTrue(r.files().isEmpty(), "nothing is written for a cycle with errors");
         assertTrue(Finding.anyError(r.findings()), "the refusal says why");
+    }
+
+    /** A cycle that says it was planned for another job is refused: its numbers belong to another part. */
+    @Test
+    void refusesCycleOfAnotherJob() {
+        HobCycle other = cleanCycle().forJob(context().job().withName(context().job().name() + "-other"));
+        WriteResult r = writer().write(other, context());
+        assertTrue(r.files().isEmpty(), "nothing is written for another job's cycle");
+        assertTrue(r.findings().stream().anyMatch(f -> f.severity() == Severity.ERROR && f.field().equals("job")
+                && f.message().contains(context().job().name() + "-other")), () -> "the refusal names the job: "
+                + r.findings());
+        WriteResult own = writer().write(cleanCycle().forJob(context().job()), context());
+        assertFalse(own.files().isEmpty(), () -> "the cycle of the job itself is written: " + own.findings());
     }
 
     @Test

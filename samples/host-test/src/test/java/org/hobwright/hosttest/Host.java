@@ -46,6 +46,11 @@ final class Host {
         return Path.of(System.getProperty("hobwright.terminalJar"));
     }
 
+    /** {@return the version of this build, as in the jars' names} */
+    static String version() {
+        return System.getProperty("hobwright.version");
+    }
+
     static Path samples() {
         return Path.of(System.getProperty("hobwright.samples"));
     }

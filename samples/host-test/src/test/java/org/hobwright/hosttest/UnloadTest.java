@@ -91,6 +91,7 @@ class UnloadTest {
             assertTrue(w.ok(), w::toString);
             Wizard wizard = hw.wizard();
             assertTrue(wizard.answer("gear.teeth", "24").isEmpty());
+            assertFalse(descriptorsOn(jar).isEmpty(), "while the loader is open the check sees its descriptor on the jar");
         }
         assertTrue(plugins.getClass().getName().length() > 0);
         return plugins;

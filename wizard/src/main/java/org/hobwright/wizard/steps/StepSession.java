@@ -202,7 +202,8 @@ public final class StepSession implements Wizard {
         OptionalDouble min = r.hasMin() ? OptionalDouble.of(f.unit().fromCanonical(r.min(), u)) : OptionalDouble.empty();
         OptionalDouble max = r.hasMax() ? OptionalDouble.of(f.unit().fromCanonical(r.max(), u)) : OptionalDouble.empty();
         return new FieldSpec(f.key(), f.label(), f.unit().symbol(u), f.type(), answers.get(f.key()),
-                choices(f), min, max, f.required(), f.help() + " Default: " + f.dflt().describe() + ".");
+                choices(f), min, max, f.required(), f.help() + " Default: " + f.dflt().describe() + ".",
+                r.hasMin() && r.minOpen());
     }
 
     /** The choices of a field now: fixed ones, or the library's machines and templates. */
