@@ -62,8 +62,22 @@ public final class ReviewLines {
         lines.add("  feed marks " + num(c.feedMarkFlankUm(), 2) + " µm on the flank, " + num(c.feedMarkRootUm(), 2)
                 + " µm in the root; enveloping cuts " + num(c.envelopingDepthUm(), 2)
                 + " µm; largest chip " + len(c.maxChipThicknessMm()));
-        c.fastest().ifPresent(f -> lines.add("  fastest proposal: " + num(f.cycleTimeS(), 1) + " s ("
-                + f.passes() + " passes, hob " + num(f.hobRpm(), 0) + " rpm; limited by " + f.bindingLimit() + ")"));
+        c.fastest().ifPresent(f -> lines.add("  fastest proposal: " + num(f.cycleTimeS(), 1) + " s in "
+                + Wording.count(f.passes(), "pass", "passes") + ", hob " + num(f.hobRpm(), 0) + " rpm; limited by "
+                + f.bindingLimit() + "; to use it, give the job cycle.cuttingSpeed "
+                + down(units.cuttingSpeedFromMPerMin(f.cuttingSpeedMPerMin()), 1) + ", cycle.roughFeed "
+                + down(units.fromMm(f.roughFeedMmPerRev()), feedDecimals()) + " and cycle.finishFeed "
+                + down(units.fromMm(f.finishFeedMmPerRev()), feedDecimals())));
+    }
+
+    /** A proposed value rounded down, so that it stays within the limit that bound it. */
+    private static String down(double v, int decimals) {
+        String text = Decimal.fixed(v, decimals, false, Decimal.Rounding.FLOOR);
+        return text.endsWith(".") ? text.substring(0, text.length() - 1) : text;
+    }
+
+    private int feedDecimals() {
+        return units == Units.IN ? 4 : 3;
     }
 
     private void tolerances(ToleranceData t) {
