@@ -66,18 +66,7 @@ public final class Providers {
         List<T> found = new ArrayList<>();
         List<Finding> problems = new ArrayList<>();
         String kind = type.getSimpleName();
-        Iterator<T> it = ServiceLoader.load(type, loader).iterator();
-        while (true) {
-            T provider;
-            try {
-                if (!it.hasNext()) {
-                    break;
-                }
-                provider = it.next();
-            } catch (ServiceConfigurationError | LinkageError e) {
-                problems.add(broken(kind, "A " + kind + " provider could not be loaded: " + causes(e)));
-                continue;
-            }
+        for (T provider : instances(type, loader, problems)) {
             String name = provider.getClass().getName();
             ApiVersion built;
             try {
@@ -113,18 +102,7 @@ public final class Providers {
         List<T> found = new ArrayList<>();
         List<Finding> problems = new ArrayList<>();
         String kind = type.getSimpleName();
-        Iterator<T> it = ServiceLoader.load(type, loader).iterator();
-        while (true) {
-            T provider;
-            try {
-                if (!it.hasNext()) {
-                    break;
-                }
-                provider = it.next();
-            } catch (ServiceConfigurationError | LinkageError e) {
-                problems.add(broken(kind, "A " + kind + " provider could not be loaded: " + causes(e)));
-                continue;
-            }
+        for (T provider : instances(type, loader, problems)) {
             try {
                 int declared = version.applyAsInt(provider);
                 if (declared != Spi.VERSION) {
@@ -223,6 +201,23 @@ public final class Providers {
         return loaded.providers().stream().filter(w -> w.id().equals(id)).findFirst()
                 .orElseThrow(() -> missing("CycleWriter", " with id \"" + id + "\"",
                         "put hobwright-plugin.jar (or hobwright-post) on the class path", loaded));
+    }
+
+    /** Every provider of a type that can be instantiated; each one that cannot is a finding in {@code problems}. */
+    private static <T> List<T> instances(Class<T> type, ClassLoader loader, List<Finding> problems) {
+        List<T> out = new ArrayList<>();
+        String kind = type.getSimpleName();
+        Iterator<T> it = ServiceLoader.load(type, loader).iterator();
+        while (true) {
+            try {
+                if (!it.hasNext()) {
+                    return out;
+                }
+                out.add(it.next());
+            } catch (ServiceConfigurationError | LinkageError e) {
+                problems.add(broken(kind, "A " + kind + " provider could not be loaded: " + causes(e)));
+            }
+        }
     }
 
     private static ProviderMissingException missing(String kind, String which, String fix, Loaded<?> loaded) {
