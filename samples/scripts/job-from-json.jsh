@@ -38,7 +38,11 @@ if (!refused.hasErrors()) {
     throw new IllegalStateException("a helical gear on a spur-only lathe must be refused");
 }
 
+// a host's wizard starts blank: no sample part name, tooth count or machine
 var wizard = hw.wizard();
 System.out.println(wizard.view().id() + ", teeth empty: " + wizard.value("gear.teeth").isEmpty());
+if (!wizard.value("name").isEmpty() || !wizard.value("gear.teeth").isEmpty() || !wizard.value("machine").isEmpty()) {
+    throw new IllegalStateException("the wizard should start blank");
+}
 hw.close();
 /exit
