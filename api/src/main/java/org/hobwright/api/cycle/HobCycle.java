@@ -23,6 +23,7 @@ import org.hobwright.api.job.HobJob;
  * @param findings    every finding, errors first
  * @param plannedFor  the job the cycle was planned for (empty from a planner built against api 1.0);
  *                    writers refuse to write the cycle with another job
+ * @param pair        the gear with its mate, when the job gives a mating gear and the pair could be computed
  */
 @ApiStatus(since = "1.0")
 public record HobCycle(
@@ -34,7 +35,8 @@ public record HobCycle(
         Optional<CycleSummary> summary,
         Optional<SimulationData> simulation,
         List<Finding> findings,
-        @ApiStatus(since = "1.1") Optional<HobJob> plannedFor) {
+        @ApiStatus(since = "1.1") Optional<HobJob> plannedFor,
+        @ApiStatus(since = "1.1") Optional<GearPairData> pair) {
 
     /**
      * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
@@ -50,6 +52,7 @@ public record HobCycle(
      * @param findings every finding, errors first
      * @param plannedFor the job the cycle was planned for (empty from a planner built against api 1.0); writers
      *     refuse to write the cycle with another job
+     * @param pair the gear with its mate, when the job gives a mating gear and the pair could be computed
      */
     public HobCycle {
         Checks.present("gear", gear);
@@ -61,6 +64,7 @@ public record HobCycle(
         Checks.present("simulation", simulation);
         findings = List.copyOf(Checks.present("findings", findings));
         Checks.present("plannedFor", plannedFor);
+        Checks.present("pair", pair);
         if (Finding.anyError(findings) && !steps.isEmpty()) {
             throw new IllegalArgumentException("a cycle with error findings must have no steps, had "
                     + steps.size());
@@ -86,6 +90,25 @@ public record HobCycle(
     }
 
     /**
+     * A cycle without a gear pair (the form before the mating gear).
+     *
+     * @param gear computed gear geometry
+     * @param inspection inspection values
+     * @param tolerances ISO 1328-1 flank tolerances, when a class is known
+     * @param setup setup values
+     * @param steps the ordered steps (empty when the job has errors)
+     * @param summary time and predicted quality
+     * @param simulation generating simulation, when run
+     * @param findings every finding, errors first
+     * @param plannedFor the job the cycle was planned for
+     */
+    public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
+                    Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
+                    Optional<SimulationData> simulation, List<Finding> findings, Optional<HobJob> plannedFor) {
+        this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, plannedFor, Optional.empty());
+    }
+
+    /**
      * This cycle marked as planned for a job.
      *
      * @param job the job it was planned from
@@ -94,7 +117,7 @@ public record HobCycle(
     @ApiStatus(since = "1.1")
     public HobCycle forJob(HobJob job) {
         return new HobCycle(gear, inspection, tolerances, setup, steps, summary, simulation, findings,
-                Optional.of(Checks.present("job", job)));
+                Optional.of(Checks.present("job", job)), pair);
     }
 
     /** {@return true when any finding is an error: nothing may be posted} */

@@ -28,6 +28,12 @@ import org.hobwright.api.internal.Checks;
  * @param pinDiameterMm         the pin or ball the inspector will use, if chosen
  * @param flankToleranceClass   ISO 1328-1:2013 flank tolerance class, if the drawing gives one
  * @param drawing               values printed on the drawing, for the drawing check
+ * @param thicknessAllowanceLowerMm the lower normal tooth-thickness allowance E_sni, mm, -10 to 10 and not above
+ *                              {@code thicknessAllowanceMm} (the upper one, E_sns), when the drawing or a
+ *                              tolerance series gives one: the inspection values get upper and lower limits
+ * @param thicknessSeries       the tolerance series both allowances were taken from when the drawing gives
+ *                              none (e.g. {@code din3967-cd25}), as a label; the allowances carry the values
+ * @param mate                  the gear this one runs with, when the drawing gives it
  */
 @ApiStatus(since = "1.0")
 public record GearSpec(
@@ -45,7 +51,10 @@ public record GearSpec(
         OptionalDouble blankDiameterMm,
         OptionalDouble pinDiameterMm,
         OptionalInt flankToleranceClass,
-        DrawingValues drawing) {
+        DrawingValues drawing,
+        @ApiStatus(since = "1.1") OptionalDouble thicknessAllowanceLowerMm,
+        @ApiStatus(since = "1.1") Optional<String> thicknessSeries,
+        @ApiStatus(since = "1.1") Optional<MatingGear> mate) {
 
     /**
      * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
@@ -66,6 +75,10 @@ public record GearSpec(
      * @param pinDiameterMm the value
      * @param flankToleranceClass the value
      * @param drawing values printed on the drawing, for the drawing check
+     * @param thicknessAllowanceLowerMm the lower normal tooth-thickness allowance E_sni, mm, not above
+     *     {@code thicknessAllowanceMm}, if given
+     * @param thicknessSeries the tolerance series the allowances were taken from, if any
+     * @param mate the gear this one runs with, if the drawing gives it
      */
     public GearSpec {
         Checks.text("partName", partName);
@@ -86,11 +99,48 @@ public record GearSpec(
         Objects.requireNonNull(flankToleranceClass, "flankToleranceClass");
         Checks.field(JobFields.GEAR_TOLERANCE_CLASS, flankToleranceClass);
         Checks.present("drawing", drawing);
+        Objects.requireNonNull(thicknessAllowanceLowerMm, "thicknessAllowanceLowerMm");
+        Checks.field(JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER, thicknessAllowanceLowerMm);
+        if (thicknessAllowanceLowerMm.isPresent() && thicknessAllowanceLowerMm.getAsDouble() > thicknessAllowanceMm) {
+            throw new IllegalArgumentException("thicknessAllowanceLower must not be above thicknessAllowance ("
+                    + thicknessAllowanceMm + "), was " + thicknessAllowanceLowerMm.getAsDouble());
+        }
+        Objects.requireNonNull(thicknessSeries, "thicknessSeries");
+        thicknessSeries.ifPresent(t -> Checks.text("thicknessSeries", t));
+        Objects.requireNonNull(mate, "mate");
         if (toothSystem.equals("custom") != customProportions.isPresent()) {
             throw new IllegalArgumentException(
                     "customProportions must be given exactly when toothSystem is \"custom\", toothSystem was \""
                             + toothSystem + "\"");
         }
+    }
+
+    /**
+     * A gear without lower allowance, tolerance series or mate (the form of api 1.0).
+     *
+     * @param partName the part name or number
+     * @param teeth number of teeth z
+     * @param pitch normal pitch
+     * @param pressureAngleDeg normal pressure angle α_n, degrees
+     * @param helixAngleDeg helix angle β, degrees (0 = spur)
+     * @param hand helix hand
+     * @param faceWidthMm face width b, mm
+     * @param profileShift profile shift coefficient x
+     * @param thicknessAllowanceMm normal tooth-thickness allowance E_sn, mm
+     * @param toothSystem tooth system identifier
+     * @param customProportions basic rack factors of the custom tooth system
+     * @param blankDiameterMm blank diameter, if known
+     * @param pinDiameterMm pin or ball diameter, if chosen
+     * @param flankToleranceClass ISO 1328-1:2013 flank tolerance class, if given
+     * @param drawing values printed on the drawing
+     */
+    public GearSpec(String partName, int teeth, Pitch pitch, double pressureAngleDeg, double helixAngleDeg, Hand hand,
+                    double faceWidthMm, double profileShift, double thicknessAllowanceMm, String toothSystem,
+                    Optional<ToothProportions> customProportions, OptionalDouble blankDiameterMm,
+                    OptionalDouble pinDiameterMm, OptionalInt flankToleranceClass, DrawingValues drawing) {
+        this(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm, profileShift,
+                thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, OptionalDouble.empty(), Optional.empty(), Optional.empty());
     }
 
     /** {@return true for a spur gear (helix angle 0)} */
@@ -118,7 +168,7 @@ public record GearSpec(
     public GearSpec withPartName(String partName) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -131,7 +181,7 @@ public record GearSpec(
     public GearSpec withTeeth(int teeth) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -144,7 +194,7 @@ public record GearSpec(
     public GearSpec withPitch(Pitch pitch) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -157,7 +207,7 @@ public record GearSpec(
     public GearSpec withPressureAngleDeg(double pressureAngleDeg) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -170,7 +220,7 @@ public record GearSpec(
     public GearSpec withHelixAngleDeg(double helixAngleDeg) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -183,7 +233,7 @@ public record GearSpec(
     public GearSpec withHand(Hand hand) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -196,7 +246,7 @@ public record GearSpec(
     public GearSpec withFaceWidthMm(double faceWidthMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -209,7 +259,7 @@ public record GearSpec(
     public GearSpec withProfileShift(double profileShift) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -222,7 +272,7 @@ public record GearSpec(
     public GearSpec withThicknessAllowanceMm(double thicknessAllowanceMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -235,7 +285,7 @@ public record GearSpec(
     public GearSpec withToothSystem(String toothSystem) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -248,7 +298,7 @@ public record GearSpec(
     public GearSpec withCustomProportions(Optional<ToothProportions> customProportions) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -272,7 +322,7 @@ public record GearSpec(
     public GearSpec withBlankDiameterMm(OptionalDouble blankDiameterMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -296,7 +346,7 @@ public record GearSpec(
     public GearSpec withPinDiameterMm(OptionalDouble pinDiameterMm) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -320,7 +370,7 @@ public record GearSpec(
     public GearSpec withFlankToleranceClass(OptionalInt flankToleranceClass) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 
     /**
@@ -344,6 +394,45 @@ public record GearSpec(
     public GearSpec withDrawing(DrawingValues drawing) {
         return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
                 profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
-                flankToleranceClass, drawing);
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
+    }
+
+    /**
+     * This gear spec with a lower tooth-thickness allowance.
+     *
+     * @param thicknessAllowanceLowerMm the lower normal allowance E_sni, mm, not above the upper one
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withThicknessAllowanceLowerMm(OptionalDouble thicknessAllowanceLowerMm) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
+    }
+
+    /**
+     * This gear spec with another tolerance-series label.
+     *
+     * @param thicknessSeries the series the allowances were taken from, or empty
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withThicknessSeries(Optional<String> thicknessSeries) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
+    }
+
+    /**
+     * This gear spec with another mating gear.
+     *
+     * @param mate the gear this one runs with, or empty
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public GearSpec withMate(Optional<MatingGear> mate) {
+        return new GearSpec(partName, teeth, pitch, pressureAngleDeg, helixAngleDeg, hand, faceWidthMm,
+                profileShift, thicknessAllowanceMm, toothSystem, customProportions, blankDiameterMm, pinDiameterMm,
+                flankToleranceClass, drawing, thicknessAllowanceLowerMm, thicknessSeries, mate);
     }
 }

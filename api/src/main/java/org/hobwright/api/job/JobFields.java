@@ -102,12 +102,22 @@ public final class JobFields {
             .range(-3, 3).optional(FieldDefault.convention("0", "a gear without profile shift unless the drawing"
                     + " gives one (common practice)"))
             .text("Profile shift coefficient", "Profile shift x in modules; 0 for a standard gear."));
+    /** The field {@code gear.thicknessSeries}. */
+    public static final FieldDef GEAR_THICKNESS_SERIES = add(FieldDef.of("gear.thicknessSeries", TEXT, NONE)
+            .optional(FieldDefault.unused("the drawing's allowances"))
+            .text("Tooth thickness series", "Leave empty to enter the drawing's allowances. Only for a drawing"
+                    + " without them: a DIN 3967 allowance and tolerance series such as din3967-cd25."));
     /** The field {@code gear.thicknessAllowance}. */
     public static final FieldDef GEAR_THICKNESS_ALLOWANCE = add(FieldDef.of("gear.thicknessAllowance", NUMBER,
             LENGTH).range(-10, 10).optional(FieldDefault.convention("0", "the nominal tooth thickness unless the"
                     + " drawing gives an allowance (common practice)"))
             .text("Tooth thickness allowance", "Upper normal tooth thickness allowance E_sn from the drawing;"
                     + " negative thins the tooth for backlash."));
+    /** The field {@code gear.thicknessAllowanceLower}. */
+    public static final FieldDef GEAR_THICKNESS_ALLOWANCE_LOWER = add(FieldDef.of("gear.thicknessAllowanceLower",
+            NUMBER, LENGTH).range(-10, 10).optional(FieldDefault.unused("no limits, only nominal inspection values"))
+            .text("Lower tooth thickness allowance", "Lower normal allowance E_sni from the drawing, not above the"
+                    + " upper one; gives the inspection values their lower limits."));
     /** The field {@code gear.toothSystem}. */
     public static final FieldDef GEAR_TOOTH_SYSTEM = add(FieldDef.of("gear.toothSystem", CHOICE, NONE)
             .choices(TOOTH_SYSTEMS).required(FieldDefault.standard("", "by the pitch: iso53-a for a module"
@@ -165,6 +175,31 @@ public final class JobFields {
     /** The field {@code gear.drawing.overPins}. */
     public static final FieldDef DRAWING_OVER_PINS = add(drawing("overPins", "Drawing: over pins",
             "Measurement over two pins or balls as printed."));
+
+    /** The field {@code gear.mate.teeth}. */
+    public static final FieldDef MATE_TEETH = add(FieldDef.of("gear.mate.teeth", INTEGER, NONE).range(1, 2000)
+            .optional(FieldDefault.unused("no mating gear"))
+            .text("Mating gear: teeth", "Tooth count of the gear this one runs with, if the drawing gives it;"
+                    + " needed for the other mating-gear values."));
+    /** The field {@code gear.mate.profileShift}. */
+    public static final FieldDef MATE_PROFILE_SHIFT = add(FieldDef.of("gear.mate.profileShift", NUMBER, NONE)
+            .range(-3, 3).optional(FieldDefault.computed("from the centre distance, else 0"))
+            .text("Mating gear: profile shift", "The mate's profile shift coefficient; empty works it out from the"
+                    + " centre distance."));
+    /** The field {@code gear.mate.centreDistance}. */
+    public static final FieldDef MATE_CENTRE_DISTANCE = add(FieldDef.of("gear.mate.centreDistance", NUMBER, LENGTH)
+            .range(FieldRange.POSITIVE).optional(FieldDefault.computed("the centre distance without backlash"))
+            .text("Mating gear: centre distance", "Centre distance of the pair as drawn."));
+    /** The field {@code gear.mate.thicknessAllowance}. */
+    public static final FieldDef MATE_THICKNESS_ALLOWANCE = add(FieldDef.of("gear.mate.thicknessAllowance", NUMBER,
+            LENGTH).range(-10, 10).optional(FieldDefault.convention("0", "the nominal tooth thickness unless the"
+                    + " drawing gives an allowance (common practice)"))
+            .text("Mating gear: upper allowance", "The mate's upper normal tooth thickness allowance."));
+    /** The field {@code gear.mate.thicknessAllowanceLower}. */
+    public static final FieldDef MATE_THICKNESS_ALLOWANCE_LOWER = add(FieldDef.of("gear.mate.thicknessAllowanceLower",
+            NUMBER, LENGTH).range(-10, 10).optional(FieldDefault.computed("the mate's upper allowance"))
+            .text("Mating gear: lower allowance", "The mate's lower normal tooth thickness allowance, not above its"
+                    + " upper one."));
 
     // ---------------------------------------------------------------- hob
     /** The field {@code hob.module}. */

@@ -129,6 +129,9 @@ class WithersTest {
             // basic rack profile A: h_aP = 1.0 m, h_fP = 1.25 m, rho_fP = 0.38 m (ISO 53:1998, Table 2)
             return new ToothProportions(1.0, 1.25, 0.38);
         }
+        if (type == MatingGear.class) {
+            return new MatingGear(31, OptionalDouble.of(0.1), OptionalDouble.of(52), -0.05, OptionalDouble.of(-0.12));
+        }
         throw new AssertionError("no value to try for " + type);
     }
 
@@ -163,7 +166,7 @@ class WithersTest {
         List<Object> out = new ArrayList<>();
         if (type == double.class || type == Double.class) {
             double d = (Double) v;
-            out.addAll(List.of(d * 1.01, d + 0.01, d - 0.01, d * 0.99, 0.5, 1.0, 10.0));
+            out.addAll(List.of(d * 1.01, d + 0.01, d - 0.01, d * 0.99, 0.5, 1.0, 10.0, -0.05));
         } else if (type == int.class || type == Integer.class) {
             int i = (Integer) v;
             out.addAll(List.of(i + 1, i - 1, 1, 2, 10));

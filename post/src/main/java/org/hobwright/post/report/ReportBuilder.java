@@ -8,7 +8,9 @@ import org.hobwright.api.cycle.CycleSummary;
 import org.hobwright.api.cycle.FastestProposal;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
+import org.hobwright.api.cycle.InspectionLimits;
 import org.hobwright.api.cycle.PassSummary;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.SimulationData;
@@ -72,6 +74,9 @@ final class ReportBuilder {
         }
         if (cycle.inspection().isPresent()) {
             root.set("inspection", inspection(cycle.inspection().get()));
+        }
+        if (cycle.pair().isPresent()) {
+            root.set("pair", pair(cycle.pair().get()));
         }
         if (cycle.tolerances().isPresent()) {
             root.set("tolerances", tolerances(cycle.tolerances().get()));
@@ -153,6 +158,39 @@ final class ReportBuilder {
         n.put("balls", i.balls());
         n.put("chordalThickness", u.length(i.chordalThicknessMm()));
         n.put("chordalHeight", u.length(i.chordalHeightMm()));
+        if (i.limits().isPresent()) {
+            InspectionLimits l = i.limits().get();
+            n.put("thicknessAllowanceUpper", u.length(l.upperAllowanceMm()));
+            n.put("thicknessAllowanceLower", u.length(l.lowerAllowanceMm()));
+            n.put("limitsFrom", l.basis());
+            n.put("spanWidthUpper", u.length(l.spanWidthUpperMm()));
+            n.put("spanWidthLower", u.length(l.spanWidthLowerMm()));
+            n.put("overPinsUpper", u.length(l.overPinsUpperMm()));
+            n.put("overPinsLower", u.length(l.overPinsLowerMm()));
+            n.put("chordalThicknessUpper", u.length(l.chordalThicknessUpperMm()));
+            n.put("chordalThicknessLower", u.length(l.chordalThicknessLowerMm()));
+            n.put("rootDiameterUpper", u.length(l.rootDiameterUpperMm()));
+            n.put("rootDiameterLower", u.length(l.rootDiameterLowerMm()));
+        }
+        return n;
+    }
+
+    private ObjectNode pair(GearPairData p) {
+        ObjectNode n = nodes.objectNode();
+        n.put("mateTeeth", p.mateTeeth());
+        n.put("mateProfileShift", p.mateProfileShift());
+        n.put("mateProfileShiftGiven", p.mateProfileShiftGiven());
+        n.put("referenceCentreDistance", u.length(p.referenceCentreDistanceMm()));
+        n.put("centreDistance", u.length(p.centreDistanceMm()));
+        n.put("centreDistanceGiven", p.centreDistanceGiven());
+        n.put("workingPressureAngle", p.workingPressureAngleDeg());
+        n.put("profileShiftSum", p.profileShiftSum());
+        n.put("backlashMin", u.length(p.backlashMinMm()));
+        n.put("backlashMax", u.length(p.backlashMaxMm()));
+        n.put("mateTipDiameter", u.length(p.mateTipDiameterMm()));
+        n.put("mateRootDiameter", u.length(p.mateRootDiameterMm()));
+        n.put("tipClearance", u.length(p.tipClearanceMm()));
+        n.put("mateTipClearance", u.length(p.mateTipClearanceMm()));
         return n;
     }
 

@@ -43,6 +43,8 @@ final class SetupSheet {
             th, td { border: 0.2mm solid #999; padding: 0.8mm 1.5mm; text-align: left; vertical-align: top; }
             th[scope=row] { width: 45%; font-weight: normal; background: #f2f2f2; }
             thead th { background: #e4e4e4; }
+            table.record td.blank { width: 22%; } table.record td:last-child { width: 8%; }
+            table.signoff th[scope=row] { width: 13%; } table.signoff td.blank { width: 12%; height: 6mm; }
             td.ok { color: #0a5d00; } td.bad { color: #b00000; font-weight: bold; }
             svg text { font-family: inherit; } svg { overflow: visible; display: block; }
             .frame { fill: #fff; stroke: #bbb; }
@@ -56,8 +58,12 @@ final class SetupSheet {
             .tooth { stroke: #6b7f99; stroke-width: 1.4; } .hob { fill: #f7e3c0; fill-opacity: 0.9; stroke: #7a4b00; }
             .thread { stroke: #7a4b00; stroke-width: 1.3; } .sweep { fill: none; stroke: #b00000; stroke-width: 2; }
             .arrowhead { fill: #b00000; }
+            .columns > section:first-child h2 { margin-top: 4mm; }
             @media print { body { font-size: 9pt; max-width: none; } .figures { gap: 3mm; }
-                           .figures svg { max-height: 62mm; } }
+                           .figures svg { max-height: 62mm; } th, td { padding: 0.5mm 1.2mm; }
+                           .columns { column-count: 2; column-gap: 5mm; }
+                           .columns section { break-inside: avoid; page-break-inside: avoid; }
+                           .columns h2 { margin-top: 0; } }
             """;
 
     private SetupSheet() {
@@ -100,11 +106,15 @@ final class SetupSheet {
                 .leaf("figcaption", swivelCaption(s, job, f)).close("figure");
         m.close("div");
         t.setup(s, sum, job.cycle().coolant(), senses);
+        m.open("div", "class", "columns");
         t.gear(g);
         cycle.inspection().ifPresent(t::inspection);
+        cycle.pair().ifPresent(t::pair);
+        m.close("div");
         t.quality(sum, TargetsGiven.none(sum.targets()) ? job.cycle().targets() : sum.targets(),
                 cycle.tolerances(), cycle.simulation());
         t.findings(cycle.findings());
+        t.firstArticle(g, s, cycle.inspection());
         m.close("body").close("html");
         return m.toString();
     }

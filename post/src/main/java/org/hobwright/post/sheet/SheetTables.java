@@ -6,7 +6,9 @@ import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.CycleSummary;
 import org.hobwright.api.cycle.GearData;
+import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
+import org.hobwright.api.cycle.InspectionLimits;
 import org.hobwright.api.cycle.PassSummary;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.SimulationData;
@@ -153,12 +155,81 @@ final class SheetTables {
 
     void inspection(InspectionData i) {
         section("Inspection");
-        row("Span over k teeth", "k = " + i.spanTeeth() + ", W = " + f.lenU(i.spanWidthMm()));
+        Optional<InspectionLimits> l = i.limits();
+        row("Span over k teeth", "k = " + i.spanTeeth() + ", W = " + l.map(x -> range(x.spanWidthLowerMm(),
+                x.spanWidthUpperMm())).orElse(f.lenU(i.spanWidthMm())));
         row("Anvil contact ⌀", f.lenU(i.spanContactDiameterMm()));
         row(i.balls() ? "Ball ⌀" : "Pin ⌀", f.lenU(i.pinDiameterMm()));
-        row(i.balls() ? "Over two balls" : "Over two pins", f.lenU(i.overPinsMm()));
-        row("Chordal thickness / height", f.lenU(i.chordalThicknessMm()) + " / " + f.lenU(i.chordalHeightMm()));
+        row(i.balls() ? "Over two balls" : "Over two pins", l.map(x -> range(x.overPinsLowerMm(),
+                x.overPinsUpperMm())).orElse(f.lenU(i.overPinsMm())));
+        row("Chordal thickness / height", l.map(x -> range(x.chordalThicknessLowerMm(), x.chordalThicknessUpperMm()))
+                .orElse(f.lenU(i.chordalThicknessMm())) + " / " + f.lenU(i.chordalHeightMm()));
+        l.ifPresent(x -> row("Tooth-thickness allowances (normal)", "upper " + f.lenU(x.upperAllowanceMm())
+                + ", lower " + f.lenU(x.lowerAllowanceMm()) + " (" + x.basis() + ")"));
         end();
+    }
+
+    /** "lower … upper unit": a range of limits. */
+    private String range(double lowerMm, double upperMm) {
+        return f.len(lowerMm) + " … " + f.lenU(upperMm);
+    }
+
+    void pair(GearPairData p) {
+        section("Mating gear");
+        row("Mate", p.mateTeeth() + " teeth, profile shift " + Decimal.fixed(p.mateProfileShift(), 4)
+                + (p.mateProfileShiftGiven() ? "" : " (from the centre distance)"));
+        row("Centre distance", f.lenU(p.centreDistanceMm()) + (p.centreDistanceGiven() ? " (drawing)"
+                : " (without backlash)") + "; reference " + f.lenU(p.referenceCentreDistanceMm()));
+        row("Working pressure angle (transverse)", f.deg(p.workingPressureAngleDeg()));
+        row("x₁ + x₂ the centre distance implies", Decimal.fixed(p.profileShiftSum(), 4));
+        row("Normal backlash", range(p.backlashMinMm(), p.backlashMaxMm()));
+        row("Mate tip ⌀ / root ⌀", f.lenU(p.mateTipDiameterMm()) + " / " + f.lenU(p.mateRootDiameterMm()));
+        row("Tip clearance: this gear / the mate", f.lenU(p.tipClearanceMm()) + " / " + f.lenU(p.mateTipClearanceMm()));
+        end();
+    }
+
+    /**
+     * The first-article record: what the inspector measures on the first part, with the limits and blank
+     * fields for the measured values, the verdict, the date and the signatures.
+     */
+    void firstArticle(GearData g, SetupValues s, Optional<InspectionData> inspection) {
+        m.open("section", "class", "record keep").leaf("h2", "First-article record").nl();
+        m.open("table", "class", "record").open("thead").open("tr");
+        for (String h : List.of("Characteristic", "Nominal", "Lower limit", "Upper limit", "Measured", "OK?")) {
+            m.leaf("th", h);
+        }
+        m.close("tr").close("thead").open("tbody");
+        inspection.ifPresent(i -> {
+            Optional<InspectionLimits> l = i.limits();
+            measure("Span over " + i.spanTeeth() + " teeth", i.spanWidthMm(), l.map(InspectionLimits::spanWidthLowerMm),
+                    l.map(InspectionLimits::spanWidthUpperMm));
+            measure((i.balls() ? "Over two balls ⌀ " : "Over two pins ⌀ ") + f.lenU(i.pinDiameterMm()), i.overPinsMm(),
+                    l.map(InspectionLimits::overPinsLowerMm), l.map(InspectionLimits::overPinsUpperMm));
+        });
+        measure("Tip ⌀ (turned blank)", s.blankDiameterMm(), Optional.empty(), Optional.empty());
+        Optional<InspectionLimits> l = inspection.flatMap(InspectionData::limits);
+        measure("Root ⌀", g.rootDiameterMm(), l.map(InspectionLimits::rootDiameterLowerMm),
+                l.map(InspectionLimits::rootDiameterUpperMm));
+        m.close("tbody").close("table");
+        m.leaf("p", "Limits from the tooth-thickness allowances; \u201cdrawing\u201d: the drawing's tolerance applies.");
+        m.open("table", "class", "signoff").open("tbody");
+        for (String[] r : List.of(new String[] {"Part / serial no.", "Measured by", "Date", "Signature"},
+                new String[] {"Machine / program", "Released by", "Date", "Signature"})) {
+            m.open("tr");
+            for (String c : r) {
+                m.leaf("th", c, "scope", "row").leaf("td", "", "class", "blank");
+            }
+            m.close("tr");
+        }
+        m.close("tbody").close("table");
+        m.close("section");
+    }
+
+    private void measure(String name, double nominalMm, Optional<Double> lowerMm, Optional<Double> upperMm) {
+        m.open("tr").leaf("td", name).leaf("td", f.lenU(nominalMm))
+                .leaf("td", lowerMm.map(f::lenU).orElse("drawing"))
+                .leaf("td", upperMm.map(f::lenU).orElse("drawing"))
+                .leaf("td", "", "class", "blank").leaf("td", "", "class", "blank").close("tr");
     }
 
     void quality(CycleSummary sum, QualityTargets t, Optional<ToleranceData> tol,

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.GearData;
+import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.GearSpec;
@@ -15,6 +16,7 @@ import org.hobwright.wizard.check.BlankCheck;
 import org.hobwright.wizard.check.DrawingCheck;
 import org.hobwright.wizard.check.EngineeringCode;
 import org.hobwright.wizard.check.GearChecks;
+import org.hobwright.wizard.check.GearPairChecks;
 import org.hobwright.wizard.check.HobChecks;
 import org.hobwright.wizard.check.InputChecks;
 import org.hobwright.wizard.check.InspectionChecks;
@@ -25,6 +27,7 @@ import org.hobwright.wizard.geometry.GearGeometry;
 import org.hobwright.wizard.geometry.InvoluteGear;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.hobwright.wizard.inspection.InspectionValues;
+import org.hobwright.wizard.inspection.MeasurementLimits;
 import org.hobwright.wizard.setup.HobSetup;
 
 /**
@@ -74,8 +77,16 @@ public final class JobAnalyser {
         Optional<ToleranceData> tolerances = ToleranceCheck.tolerances(spec, g, findings);
         InspectionValues inspection = InspectionValues.of(g, tip, spec.pinDiameterMm(), shopStepMm(job.units()));
         InspectionChecks.check(g, spec.faceWidthMm(), inspection, words, findings);
+        if (spec.thicknessAllowanceLowerMm().isPresent()) {
+            double lower = spec.thicknessAllowanceLowerMm().getAsDouble();
+            InspectionChecks.checkLowerLimit(g, inspection, lower, words, findings);
+            inspection = inspection.withLimits(MeasurementLimits.of(g, inspection, lower,
+                    InspectionChecks.limitsBasis(spec, words, findings)));
+        }
         DrawingCheck.check(spec.drawing(), g, inspection.pins().pinDiameterMm(), words, findings);
-        return result(Optional.of(gear), Optional.of(inspection.data()), tolerances, setup, findings);
+        Optional<GearPairData> pair = spec.mate().isPresent()
+                ? GearPairChecks.check(spec, g, tip, words, findings) : Optional.empty();
+        return result(Optional.of(gear), Optional.of(inspection.data()), tolerances, setup, findings, pair);
     }
 
     /** Rounding step of a computed pin: 0.01 mm, or 0.0005 in in inch jobs (common practice, no source). */
@@ -86,8 +97,14 @@ public final class JobAnalyser {
     private static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
                                       Optional<ToleranceData> tolerances, Optional<HobSetup> setup,
                                       List<Finding> findings) {
+        return result(gear, inspection, tolerances, setup, findings, Optional.empty());
+    }
+
+    private static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
+                                      Optional<ToleranceData> tolerances, Optional<HobSetup> setup,
+                                      List<Finding> findings, Optional<GearPairData> pair) {
         List<Finding> sorted = new ArrayList<>(findings);
         sorted.sort(Comparator.comparing(Finding::severity));
-        return new JobAnalysis(gear, inspection, tolerances, setup, sorted);
+        return new JobAnalysis(gear, inspection, tolerances, setup, sorted, pair);
     }
 }

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.GearData;
+import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.wizard.setup.HobSetup;
@@ -17,10 +18,11 @@ import org.hobwright.wizard.setup.HobSetup;
  * @param tolerances  ISO 1328-1 flank tolerances, when a class is known and the gear is in scope
  * @param hobSetup    hob lead and swivel, when they could be computed
  * @param findings    every finding of the checks
+ * @param pair        the gear with its mate, when the job gives one and the pair could be computed
  */
 public record JobAnalysis(Optional<GearData> gear, Optional<InspectionData> inspection,
                           Optional<ToleranceData> tolerances, Optional<HobSetup> hobSetup,
-                          List<Finding> findings) {
+                          List<Finding> findings, Optional<GearPairData> pair) {
     public JobAnalysis {
         findings = List.copyOf(findings);
     }

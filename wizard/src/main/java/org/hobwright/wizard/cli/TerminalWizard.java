@@ -131,18 +131,19 @@ final class TerminalWizard {
         return true;
     }
 
-    /** True when a question applies: the custom rack factors only for the custom tooth system. */
+    /** True when a question applies ({@link StepFields#applies(String, java.util.function.Function)}). */
     static boolean applies(FieldSpec f, Wizard wizard) {
-        return !f.key().startsWith("gear.custom.") || "custom".equals(wizard.value("gear.toothSystem"));
+        return StepFields.applies(f.key(), wizard::value);
     }
 
-    /** True for a value printed on the drawing. */
+    /** True for a value printed on the drawing (its printed values and its mating gear). */
     static boolean isDrawing(FieldSpec f) {
-        return f.key().startsWith("gear.drawing.");
+        return f.key().startsWith("gear.drawing.") || f.key().startsWith("gear.mate.");
     }
 
     private boolean anyDrawingValue(List<FieldSpec> fields) {
-        return fields.stream().filter(TerminalWizard::isDrawing).anyMatch(f -> !wizard.value(f.key()).isEmpty());
+        return fields.stream().filter(f -> isDrawing(f) && applies(f, wizard))
+                .anyMatch(f -> !wizard.value(f.key()).isEmpty());
     }
 
     /**

@@ -32,6 +32,12 @@ public record InvoluteGear(int teeth, double normalModuleMm, double normalPressu
                 thicknessAllowanceMm, system);
     }
 
+    /** The same gear with another normal tooth-thickness allowance E_sn, mm. */
+    public InvoluteGear withThicknessAllowance(double allowanceMm) {
+        return new InvoluteGear(teeth, normalModuleMm, normalPressureAngleRad, helixAngleRad, profileShift, allowanceMm,
+                system);
+    }
+
     /** The same gear without its thickness allowance (the tooth as the basic rack gives it). */
     public InvoluteGear withoutAllowance() {
         return new InvoluteGear(teeth, normalModuleMm, normalPressureAngleRad, helixAngleRad, profileShift, 0,

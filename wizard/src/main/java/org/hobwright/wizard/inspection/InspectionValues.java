@@ -38,4 +38,12 @@ public record InspectionValues(InspectionData data, SpanMeasurement span, OverPi
                 pins.pinDiameterMm(), pins.overPinsMm(), pins.balls(), chordal.thicknessMm(), chordal.heightMm());
         return new InspectionValues(data, span, pins, pin, chordal, tipDiameterMm, form);
     }
+
+    /** These values with their upper and lower limits. */
+    public InspectionValues withLimits(org.hobwright.api.cycle.InspectionLimits limits) {
+        InspectionData d = data;
+        return new InspectionValues(new InspectionData(d.spanTeeth(), d.spanWidthMm(), d.spanContactDiameterMm(),
+                d.pinDiameterMm(), d.overPinsMm(), d.balls(), d.chordalThicknessMm(), d.chordalHeightMm(),
+                java.util.Optional.of(limits)), span, pins, pin, chordal, tipDiameterMm, formDiameterMm);
+    }
 }

@@ -112,7 +112,8 @@ final class JobPlanning {
         boolean errors = Finding.anyError(findings);
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.of(setup),
                 errors ? List.of() : path.steps(), Optional.of(summary),
-                GeneratingSimulation.forCycle(job, gd, findings), DefaultCyclePlanner.sorted(findings));
+                GeneratingSimulation.forCycle(job, gd, findings), DefaultCyclePlanner.sorted(findings),
+                Optional.empty(), analysis.pair());
     }
 
     /**

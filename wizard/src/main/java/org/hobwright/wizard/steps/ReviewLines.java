@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import org.hobwright.api.cycle.CycleSummary;
 import org.hobwright.api.cycle.HobCycle;
+import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.ToleranceData;
@@ -30,6 +31,7 @@ public final class ReviewLines {
         ReviewLines r = new ReviewLines(units);
         cycle.setup().ifPresent(r::setup);
         cycle.inspection().ifPresent(r::inspection);
+        cycle.pair().ifPresent(r::pair);
         cycle.summary().ifPresent(r::summary);
         cycle.tolerances().ifPresent(r::tolerances);
         return List.copyOf(r.lines);
@@ -52,6 +54,17 @@ public final class ReviewLines {
         lines.add("Inspection");
         lines.add("  span over " + Wording.teeth(i.spanTeeth()) + " " + len(i.spanWidthMm()) + ", over two "
                 + (i.balls() ? "balls" : "pins") + " of " + len(i.pinDiameterMm()) + ": " + len(i.overPinsMm()));
+        i.limits().ifPresent(l -> lines.add("  limits (" + l.basis() + "): span " + len(l.spanWidthLowerMm()) + " to "
+                + len(l.spanWidthUpperMm()) + ", over " + (i.balls() ? "balls " : "pins ") + len(l.overPinsLowerMm())
+                + " to " + len(l.overPinsUpperMm()) + ", chordal thickness " + len(l.chordalThicknessLowerMm())
+                + " to " + len(l.chordalThicknessUpperMm())));
+    }
+
+    private void pair(GearPairData p) {
+        lines.add("Mating gear");
+        lines.add("  " + p.mateTeeth() + " teeth, shift " + num(p.mateProfileShift(), 4) + ", centre distance "
+                + len(p.centreDistanceMm()) + ", working pressure angle " + deg(p.workingPressureAngleDeg())
+                + ", backlash " + len(p.backlashMinMm()) + " to " + len(p.backlashMaxMm()));
     }
 
     private void summary(CycleSummary c) {

@@ -5,6 +5,7 @@ import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.function.Function;
 import org.hobwright.api.check.Finding;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.JobFields;
@@ -57,10 +58,33 @@ public final class StepFields {
 
     /**
      * True when a field applies to the answers so far: the custom rack factors only for the custom
-     * tooth system. A field that does not apply is not asked, not checked and left out of the job.
+     * tooth system, the tooth-thickness allowances only without a thickness series, the mating gear's
+     * other values only with its tooth count. A field that does not apply is not asked, not checked and
+     * left out of the job.
      */
     public static boolean applies(String key, Answers answers) {
-        return !key.startsWith("gear.custom.") || "custom".equals(answers.get(JobFields.GEAR_TOOTH_SYSTEM.key()));
+        return applies(key, answers::get);
+    }
+
+    /**
+     * {@link #applies(String, Answers)} for answers given as a lookup from key to answer text.
+     *
+     * @param key    the field's key
+     * @param answer the answer text of a key, empty when not answered
+     * @return true when the field applies
+     */
+    public static boolean applies(String key, Function<String, String> answer) {
+        if (key.startsWith("gear.custom.")) {
+            return "custom".equals(answer.apply(JobFields.GEAR_TOOTH_SYSTEM.key()));
+        }
+        if (key.equals(JobFields.GEAR_THICKNESS_ALLOWANCE.key())
+                || key.equals(JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER.key())) {
+            return answer.apply(JobFields.GEAR_THICKNESS_SERIES.key()).isBlank();
+        }
+        if (key.startsWith("gear.mate.") && !key.equals(JobFields.MATE_TEETH.key())) {
+            return !answer.apply(JobFields.MATE_TEETH.key()).isBlank();
+        }
+        return true;
     }
 
     /** The step a job-file path (or a finding's field) belongs to; REVIEW for whole-job fields. */

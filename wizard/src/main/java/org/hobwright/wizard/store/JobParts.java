@@ -12,9 +12,11 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.Hand;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.JobFields;
+import org.hobwright.api.job.MatingGear;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.ToothProportions;
 import org.hobwright.wizard.geometry.ToothSystem;
+import org.hobwright.wizard.tolerance.ThicknessSeries;
 
 /**
  * Reads the gear and the hob of a job by the field table ({@link JobFields}). Each method records a
@@ -60,18 +62,99 @@ final class JobParts {
         double width = f.value(JobFields.GEAR_FACE_WIDTH);
         double shift = f.value(JobFields.GEAR_PROFILE_SHIFT);
         double allowance = f.value(JobFields.GEAR_THICKNESS_ALLOWANCE);
+        OptionalDouble lower = f.number(JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER);
+        if (lower.isPresent() && lower.getAsDouble() > allowance) {
+            f.problem(InputCode.INPUT_CONFLICT, "thicknessAllowanceLower", f.path("thicknessAllowanceLower")
+                    + " (" + FieldReader.format(f.raw("thicknessAllowanceLower").doubleValue()) + ") is above "
+                    + f.path("thicknessAllowance") + " (" + (f.has(JobFields.GEAR_THICKNESS_ALLOWANCE)
+                    ? FieldReader.format(f.raw("thicknessAllowance").doubleValue()) : "0, not given") + ")",
+                    "the upper allowance (thicknessAllowance) is the larger one: swap the two values");
+        }
+        Optional<ThicknessSeries> series = series(f, teeth, pitch, beta);
+        if (series.isPresent()) {
+            double d = referenceDiameterMm(teeth, pitch.orElseThrow(), beta);
+            allowance = series.get().upperAllowanceMm(d);
+            lower = OptionalDouble.of(series.get().lowerAllowanceMm(d));
+        }
         Optional<String> system = f.text(JobFields.GEAR_TOOTH_SYSTEM);
         Optional<ToothProportions> custom = custom(f, system);
         OptionalDouble blank = f.number(JobFields.GEAR_BLANK_DIAMETER);
         OptionalDouble pin = f.number(JobFields.GEAR_PIN_DIAMETER);
         OptionalInt tolerance = f.integer(JobFields.GEAR_TOLERANCE_CLASS);
         DrawingValues drawing = drawing(f.child("drawing"));
+        Optional<MatingGear> mate = f.has("mate") ? mate(f.child("mate")) : Optional.empty();
         if (errors(out) > before) {
             return Optional.empty();
         }
         return Optional.of(new GearSpec(part, teeth, pitch.orElseThrow(), alpha, beta,
                 Hand.fromWord(handWord.orElseThrow()), width, shift, allowance, system.orElseThrow(),
-                custom, blank, pin, tolerance, drawing));
+                custom, blank, pin, tolerance, drawing, lower, series.map(ThicknessSeries::jobText), mate));
+    }
+
+    private static double referenceDiameterMm(int teeth, Pitch pitch, double helixDeg) {
+        return teeth * pitch.moduleMm() / Math.cos(Math.toRadians(helixDeg));
+    }
+
+    /**
+     * Reads {@code thicknessSeries} (e.g. {@code din3967-cd25}), which replaces both allowances: given
+     * together with either, it is a conflict. Empty when absent or wrong (with a finding).
+     */
+    private static Optional<ThicknessSeries> series(FieldReader f, int teeth, Optional<Pitch> pitch, double beta) {
+        Optional<String> text = f.text(JobFields.GEAR_THICKNESS_SERIES);
+        if (text.isEmpty()) {
+            return Optional.empty();
+        }
+        Optional<ThicknessSeries> series = ThicknessSeries.parse(text.get());
+        if (series.isEmpty()) {
+            f.problem(InputCode.INPUT_CHOICE, "thicknessSeries", f.path("thicknessSeries") + " \"" + text.get()
+                    + "\" is not a DIN 3967 allowance and tolerance series", "write the allowance series (one of "
+                    + String.join(", ", ThicknessSeries.allowanceSeries()) + ") and the tolerance series (21 to 30),"
+                    + " e.g. \"" + ThicknessSeries.PREFIX + "cd25\"");
+            return Optional.empty();
+        }
+        for (FieldDef key : List.of(JobFields.GEAR_THICKNESS_ALLOWANCE, JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER)) {
+            if (f.has(key)) {
+                f.problem(InputCode.INPUT_CONFLICT, key.leaf(), f.path(key.leaf()) + " and "
+                        + f.path("thicknessSeries") + " both give the tooth-thickness allowances",
+                        "keep the drawing's allowances, or the series when the drawing gives none");
+                return Optional.empty();
+            }
+        }
+        if (pitch.isEmpty() || teeth < 1 || !Double.isFinite(beta)) {
+            return Optional.empty();
+        }
+        double d = referenceDiameterMm(teeth, pitch.get(), beta);
+        if (!ThicknessSeries.covers(d)) {
+            f.problem(InputCode.INPUT_CONFLICT, "thicknessSeries", f.path("thicknessSeries") + ": DIN 3967 gives"
+                    + " allowances for reference diameters up to 1000 mm, this gear's is "
+                    + FieldReader.format(f.units().fromMm(d)) + " " + f.units().symbol(),
+                    "give the drawing's allowances in thicknessAllowance and thicknessAllowanceLower");
+            return Optional.empty();
+        }
+        return series;
+    }
+
+    /** Reads the mating gear: its teeth, and optionally its shift, allowances and the centre distance. */
+    private static Optional<MatingGear> mate(FieldReader m) {
+        if (!m.has(JobFields.MATE_TEETH)) {
+            m.missing("teeth", "give the mating gear's number of teeth, or leave \"mate\" out");
+            return Optional.empty();
+        }
+        OptionalInt teeth = m.integer(JobFields.MATE_TEETH);
+        OptionalDouble shift = m.number(JobFields.MATE_PROFILE_SHIFT);
+        OptionalDouble centre = m.number(JobFields.MATE_CENTRE_DISTANCE);
+        double upper = m.value(JobFields.MATE_THICKNESS_ALLOWANCE);
+        OptionalDouble lower = m.number(JobFields.MATE_THICKNESS_ALLOWANCE_LOWER);
+        if (lower.isPresent() && lower.getAsDouble() > upper) {
+            m.problem(InputCode.INPUT_CONFLICT, "thicknessAllowanceLower", m.path("thicknessAllowanceLower")
+                    + " is above " + m.path("thicknessAllowance"), "the upper allowance is the larger one: swap the"
+                    + " two values");
+            return Optional.empty();
+        }
+        if (teeth.isEmpty() || !Double.isFinite(upper)) {
+            return Optional.empty();
+        }
+        return Optional.of(new MatingGear(teeth.getAsInt(), shift, centre, upper, lower));
     }
 
     private static Optional<ToothProportions> custom(FieldReader f, Optional<String> system) {

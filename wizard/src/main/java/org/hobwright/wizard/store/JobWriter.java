@@ -143,7 +143,12 @@ public final class JobWriter {
         n.put(JobFields.GEAR_HAND.leaf(), g.hand().word());
         put(n, JobFields.GEAR_FACE_WIDTH, g.faceWidthMm(), units);
         put(n, JobFields.GEAR_PROFILE_SHIFT, g.profileShift(), units);
-        put(n, JobFields.GEAR_THICKNESS_ALLOWANCE, g.thicknessAllowanceMm(), units);
+        if (g.thicknessSeries().isPresent()) {
+            n.put(JobFields.GEAR_THICKNESS_SERIES.leaf(), g.thicknessSeries().get());
+        } else {
+            put(n, JobFields.GEAR_THICKNESS_ALLOWANCE, g.thicknessAllowanceMm(), units);
+            put(n, JobFields.GEAR_THICKNESS_ALLOWANCE_LOWER, g.thicknessAllowanceLowerMm(), units);
+        }
         n.put(JobFields.GEAR_TOOTH_SYSTEM.leaf(), g.toothSystem());
         g.customProportions().ifPresent(p -> {
             ObjectNode c = n.putObject("custom");
@@ -158,6 +163,14 @@ public final class JobWriter {
         if (!d.isEmpty()) {
             n.set("drawing", d);
         }
+        g.mate().ifPresent(m -> {
+            ObjectNode t = n.putObject("mate");
+            t.put(JobFields.MATE_TEETH.leaf(), m.teeth());
+            put(t, JobFields.MATE_PROFILE_SHIFT, m.profileShift(), units);
+            put(t, JobFields.MATE_CENTRE_DISTANCE, m.centreDistanceMm(), units);
+            put(t, JobFields.MATE_THICKNESS_ALLOWANCE, m.thicknessAllowanceMm(), units);
+            put(t, JobFields.MATE_THICKNESS_ALLOWANCE_LOWER, m.thicknessAllowanceLowerMm(), units);
+        });
         return n;
     }
 

@@ -62,7 +62,7 @@ class WizardEndToEndTest {
             if (f.key().startsWith("gear.custom.")) {
                 continue;
             }
-            if (f.key().startsWith("gear.drawing.")) {
+            if (f.key().startsWith("gear.drawing.") || f.key().startsWith("gear.mate.")) {
                 if (!drawingAsked) {
                     lines.add("");
                     drawingAsked = true;

@@ -142,4 +142,31 @@ class BruteForceCrossCheckTest {
                         new double[] {0, Math.cos(psi), Math.sin(psi)}, faceWidth), -0.6, 0.6, 40);
         assertRelative(width, SpanMeasurement.widthMm(g, k), 1e-8, "span");
     }
+
+    // The lower limits are the values of the tooth thinned by the lower allowance over the same teeth and with
+    // the same pin or ball: the same constructions on flanks sampled with that allowance.
+    @ParameterizedTest(name = "z {0}, m {1}, β {3}°, x {4}, E {5} / {6}")
+    @CsvSource({
+        "24, 1, 20, 0, 0, -0.03, -0.08", "21, 2, 20, 0, 0.2, -0.02, -0.09", "31, 2, 20, 15, 0.2, -0.05, -0.12",
+        "25, 1.5, 20, 25, -0.1, -0.02, -0.07"})
+    void lowerLimitsAgreeWithSampledFlanksOfTheThinnerTooth(int z, double m, double alpha, double beta, double x,
+                                                           double upper, double lower) {
+        InvoluteGear g = gear(z, m, alpha, beta, x, upper);
+        InspectionValues v = InspectionValues.of(g, g.tipDiameterMm(), java.util.OptionalDouble.empty(), 0.01);
+        org.hobwright.api.cycle.InspectionLimits l = MeasurementLimits.of(g, v, lower, "drawing");
+        SampledFlanks thinner = new SampledFlanks(z, m, alpha, beta, x, lower, g.tipDiameterMm());
+        double pin = v.pins().pinDiameterMm();
+        double r = centreRadius(gear(z, m, alpha, beta, x, lower), thinner, pin);
+        double other = z % 2 == 0 ? Math.PI : Math.PI - Math.PI / z;
+        assertRelative(Math.hypot(r - r * Math.cos(other), r * Math.sin(other)) + pin, l.overPinsLowerMm(), 1e-8,
+                "lower over-pins limit");
+        int k = v.span().teeth();
+        double top = (k - 1) / 2.0 * thinner.pitchAngle();
+        double width = beta == 0 ? 2 * thinner.support(top, new double[] {0, 1, 0}, 40)
+                : SampledFlanks.minimise(psi -> 2 * thinner.support(top,
+                        new double[] {0, Math.cos(psi), Math.sin(psi)}, 40), -0.6, 0.6, 40);
+        assertRelative(width, l.spanWidthLowerMm(), 1e-8, "lower span limit");
+        assertEquals(v.data().spanWidthMm(), l.spanWidthUpperMm(), 0, "upper span limit is the value");
+        assertEquals(v.data().overPinsMm(), l.overPinsUpperMm(), 0, "upper over-pins limit is the value");
+    }
 }

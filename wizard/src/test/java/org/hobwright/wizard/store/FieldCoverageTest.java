@@ -27,7 +27,8 @@ import tools.jackson.databind.JsonNode;
 
 /**
  * Every field of the table is written by {@link JobWriter} and read back by the readers: a field
- * added to the table and not to the writer or the reader fails here.
+ * added to the table and not to the writer or the reader fails here. The thickness series replaces
+ * both allowances, so it has a job of its own.
  */
 class FieldCoverageTest {
     /** A job with every optional value given (the custom tooth system, every drawing value). */
@@ -37,7 +38,9 @@ class FieldCoverageTest {
                 OptionalDouble.of(46.1));
         GearSpec gear = new GearSpec("part 1", 20, new Pitch.Module(2), 20, 10, Hand.LEFT, 20, 0.1, -0.05, "custom",
                 Optional.of(new ToothProportions(1, 1.25, 0.3)), OptionalDouble.of(44.5), OptionalDouble.of(3.5),
-                OptionalInt.of(7), drawing);
+                OptionalInt.of(7), drawing, OptionalDouble.of(-0.1), Optional.empty(),
+                Optional.of(new org.hobwright.api.job.MatingGear(31, OptionalDouble.of(0.2), OptionalDouble.of(52),
+                        -0.04, OptionalDouble.of(-0.12))));
         HobSpec hob = new HobSpec(new Pitch.Module(2), 20, 1, Hand.LEFT, 60, OptionalDouble.of(2.1),
                 OptionalDouble.of(55), 12, 60, OptionalDouble.of(3000), "carbide")
                 .withCuttingSense(Optional.of(org.hobwright.api.job.CuttingSense.COUNTER_CLOCKWISE))
@@ -72,7 +75,8 @@ class FieldCoverageTest {
         Set<String> expected = new TreeSet<>(Set.of("format", "version"));
         for (FieldDef f : JobFields.all()) {
             if (f != JobFields.GEAR_DIAMETRAL_PITCH && f != JobFields.HOB_DIAMETRAL_PITCH
-                    && f != JobFields.CYCLE_TEMPLATE && f != JobFields.MACHINE) {
+                    && f != JobFields.CYCLE_TEMPLATE && f != JobFields.MACHINE
+                    && f != JobFields.GEAR_THICKNESS_SERIES) {
                 expected.add(f.key());
             }
         }
@@ -86,5 +90,18 @@ class FieldCoverageTest {
                 java.nio.file.Path.of("no-home"))).read(tree, "full");
         assertEquals(java.util.List.of(), back.findings());
         StoreTesting.assertClose(full(), back.get(), 1e-12, "job");
+    }
+
+    @Test
+    void theThicknessSeriesIsWrittenInsteadOfTheAllowancesAndReadBack() {
+        HobJob job = full();
+        HobJob series = job.withGear(job.gear().withThicknessSeries(Optional.of("din3967-cd25")));
+        JsonNode tree = JobWriter.jobTree(series, Units.MM, false);
+        assertEquals("din3967-cd25", tree.get("gear").get("thicknessSeries").asString());
+        assertEquals(null, tree.get("gear").get("thicknessAllowance"));
+        assertEquals(null, tree.get("gear").get("thicknessAllowanceLower"));
+        Loaded<HobJob> back = new JobReader(Library.open(Optional.empty(), java.util.Map.of(),
+                java.nio.file.Path.of("no-home"))).read(tree, "full");
+        assertEquals(Optional.of("din3967-cd25"), back.get().gear().thicknessSeries());
     }
 }

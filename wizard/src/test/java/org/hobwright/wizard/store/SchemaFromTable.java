@@ -23,7 +23,8 @@ import tools.jackson.databind.node.ObjectNode;
  * table ({@link JobFields}, {@link MachineFields}, {@link TemplateFields}): every key, type, range,
  * choice, default and help text comes from there. What a table of single fields cannot say is
  * written here once: exactly one of module and diametral pitch, the hand of a helical gear, the
- * custom factors only with the custom tooth system, a machine by name or inline. A range in a unit
+ * custom factors only with the custom tooth system, a thickness series only without allowances, the
+ * mating gear's teeth whenever it is given, a machine by name or inline. A range in a unit
  * that follows the file's ({@code mm} or {@code in}) can only be stated as its sign; its limits are
  * in the description.
  */
@@ -164,6 +165,16 @@ final class SchemaFromTable {
                     .set("required", words("toothSystem")));
             custom.set("then", NODES.objectNode().set("required", words("custom")));
             custom.set("else", NODES.objectNode().set("not", NODES.objectNode().set("required", words("custom"))));
+            ObjectNode series = all.addObject();
+            series.set("if", NODES.objectNode().set("required", words("thicknessSeries")));
+            ArrayNode allowances = NODES.arrayNode();
+            allowances.addObject().set("required", words("thicknessAllowance"));
+            allowances.addObject().set("required", words("thicknessAllowanceLower"));
+            series.set("then", NODES.objectNode().set("not", NODES.objectNode().set("anyOf", allowances)));
+            ObjectNode mate = (ObjectNode) object.get("properties").get("mate");
+            mate.set("required", words("teeth"));
+            mate.put("description", "the external gear this one runs with (same module, pressure angle, helix angle"
+                    + " of the other hand and tooth system)");
         }
         object.set("allOf", all);
     }
