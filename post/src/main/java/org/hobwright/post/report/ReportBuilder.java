@@ -35,6 +35,9 @@ import tools.jackson.databind.node.ObjectNode;
  * left out. The pointers listed in post/README.md ("The JSON report") are a contract.
  */
 final class ReportBuilder {
+    /** Micrometres in a millimetre: quality values (feed marks, enveloping cuts, deviations) are in µm. */
+    private static final double MICROMETRES_PER_MM = 1000;
+
 
     /** The {@code format} of the report. */
     static final String FORMAT = "hobwright-report";
@@ -338,9 +341,10 @@ final class ReportBuilder {
 
     private ObjectNode simulation(SimulationData s) {
         ObjectNode n = nodes.objectNode();
-        n.put("envelopingDepth", u.length(s.envelopingDepthMm()));
-        n.put("closedFormEnvelopingDepth", u.length(s.closedFormEnvelopingDepthMm()));
-        n.put("profileDeviationMax", u.length(s.profileDeviationMaxMm()));
+        // quality values in µm in every unit system, as /cycle/envelopingDepth and the targets
+        n.put("envelopingDepth", s.envelopingDepthMm() * MICROMETRES_PER_MM);
+        n.put("closedFormEnvelopingDepth", s.closedFormEnvelopingDepthMm() * MICROMETRES_PER_MM);
+        n.put("profileDeviationMax", s.profileDeviationMaxMm() * MICROMETRES_PER_MM);
         n.put("undercut", s.undercut());
         n.put("activeInvoluteStartDiameter", u.length(s.activeInvoluteStartDiameterMm()));
         return n;

@@ -75,7 +75,7 @@ public final class JobAnalyser {
         }
         GearData gear = GearGeometry.of(g);
         GearChecks.customRootRadius(g, words, findings);
-        GearChecks.undercut(g, words, findings);
+        GearChecks.undercut(g, job, words, findings);
         double tip = Math.min(g.tipDiameterMm(), spec.blankDiameterMm().orElse(Double.POSITIVE_INFINITY));
         spec.blankDiameterMm().ifPresent(b -> BlankCheck.check(g, b, words, findings));
         GearChecks.tip(g, tip, job, words, findings);

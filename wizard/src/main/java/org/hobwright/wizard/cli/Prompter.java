@@ -5,6 +5,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.util.Optional;
+import org.hobwright.text.JsonTrees;
 
 /**
  * Asks questions on a terminal or on piped input. When the input is piped the answer is echoed,
@@ -39,7 +40,8 @@ final class Prompter {
     /**
      * Asks and reads one line.
      *
-     * @return the answer, stripped, or empty when the input has ended
+     * @return the answer, stripped (of a byte-order mark too, which an answers file may start with),
+     *         or empty when the input has ended
      */
     Optional<String> ask(String prompt) {
         out.print(prompt);
@@ -49,7 +51,7 @@ final class Prompter {
             if (echo || line == null) {
                 out.println(line == null ? "" : line);
             }
-            return Optional.ofNullable(line).map(String::strip);
+            return Optional.ofNullable(line).map(l -> JsonTrees.withoutByteOrderMark(l).strip());
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

@@ -70,7 +70,7 @@ final class JobPlanning {
         SpeedWindow window = SpeedWindow.of(machine, hob, ratio);
         Optional<CuttingData> row = table.find(cycle.workMaterial(), hob.material(), gear.moduleMm())
                 .map(r -> job.spline().isPresent() ? r.forSplines() : r);
-        new Blockers(job, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
+        new Blockers(job, table, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }

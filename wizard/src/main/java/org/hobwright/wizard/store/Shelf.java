@@ -12,6 +12,7 @@ import java.util.function.Function;
 import java.util.function.Supplier;
 import java.util.stream.Stream;
 import org.hobwright.api.check.Finding;
+import org.hobwright.text.JsonTrees;
 
 /**
  * The files of the library folder over the built-in ones: find, list, save and remove entries
@@ -65,7 +66,7 @@ final class Shelf {
             if (Files.isRegularFile(saved)) {
                 return JsonDocument.read(saved).then(d -> {
                     try {
-                        return Loaded.of(Files.readString(saved));
+                        return Loaded.of(JsonTrees.withoutByteOrderMark(Files.readString(saved)));
                     } catch (IOException e) {
                         return Loaded.unreadable(InputCode.INPUT_IO.at("file", saved + ": cannot be read", null));
                     }
