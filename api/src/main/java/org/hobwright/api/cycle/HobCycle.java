@@ -24,6 +24,7 @@ import org.hobwright.api.job.HobJob;
  * @param plannedFor  the job the cycle was planned for (empty from a planner built against api 1.0);
  *                    writers refuse to write the cycle with another job
  * @param pair        the gear with its mate, when the job gives a mating gear and the pair could be computed
+ * @param spline      for a spline job, the spline's limits, pins and form check
  */
 @ApiStatus(since = "1.0")
 public record HobCycle(
@@ -36,7 +37,8 @@ public record HobCycle(
         Optional<SimulationData> simulation,
         List<Finding> findings,
         @ApiStatus(since = "1.1") Optional<HobJob> plannedFor,
-        @ApiStatus(since = "1.1") Optional<GearPairData> pair) {
+        @ApiStatus(since = "1.1") Optional<GearPairData> pair,
+        @ApiStatus(since = "1.1") Optional<SplineData> spline) {
 
     /**
      * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
@@ -53,6 +55,7 @@ public record HobCycle(
      * @param plannedFor the job the cycle was planned for (empty from a planner built against api 1.0); writers
      *     refuse to write the cycle with another job
      * @param pair the gear with its mate, when the job gives a mating gear and the pair could be computed
+     * @param spline for a spline job, the spline's limits, pins and form check
      */
     public HobCycle {
         Checks.present("gear", gear);
@@ -65,6 +68,7 @@ public record HobCycle(
         findings = List.copyOf(Checks.present("findings", findings));
         Checks.present("plannedFor", plannedFor);
         Checks.present("pair", pair);
+        Checks.present("spline", spline);
         if (Finding.anyError(findings) && !steps.isEmpty()) {
             throw new IllegalArgumentException("a cycle with error findings must have no steps, had "
                     + steps.size());
@@ -86,11 +90,46 @@ public record HobCycle(
     public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
                     Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
                     Optional<SimulationData> simulation, List<Finding> findings) {
-        this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, Optional.empty());
+        this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, Optional.empty(),
+                Optional.empty(), Optional.empty());
     }
 
     /**
-     * A cycle without a gear pair (the form before the mating gear).
+     * A gear job's cycle with its gear pair (no spline data).
+     *
+     * @param gear computed gear geometry
+     * @param inspection inspection values
+     * @param tolerances ISO 1328-1 flank tolerances, when a class is known
+     * @param setup setup values
+     * @param steps the ordered steps (empty when the job has errors)
+     * @param summary time and predicted quality
+     * @param simulation generating simulation, when run
+     * @param findings every finding, errors first
+     * @param plannedFor the job the cycle was planned for
+     * @param pair the gear with its mate, when the job gives a mating gear and the pair could be computed
+     */
+    public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
+                    Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
+                    Optional<SimulationData> simulation, List<Finding> findings, Optional<HobJob> plannedFor,
+                    Optional<GearPairData> pair) {
+        this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, plannedFor, pair,
+                Optional.empty());
+    }
+
+    /**
+     * The cycle of a spline job, not yet marked with its job.
+     *
+     * @param spline the spline's limits, pins and form check
+     * @return the copy
+     */
+    @ApiStatus(since = "1.1")
+    public HobCycle withSpline(Optional<SplineData> spline) {
+        return new HobCycle(gear, inspection, tolerances, setup, steps, summary, simulation, findings, plannedFor,
+                pair, spline);
+    }
+
+    /**
+     * A cycle without a gear pair or spline data (the form before the mating gear and the spline).
      *
      * @param gear computed gear geometry
      * @param inspection inspection values
@@ -105,7 +144,8 @@ public record HobCycle(
     public HobCycle(Optional<GearData> gear, Optional<InspectionData> inspection, Optional<ToleranceData> tolerances,
                     Optional<SetupValues> setup, List<CycleStep> steps, Optional<CycleSummary> summary,
                     Optional<SimulationData> simulation, List<Finding> findings, Optional<HobJob> plannedFor) {
-        this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, plannedFor, Optional.empty());
+        this(gear, inspection, tolerances, setup, steps, summary, simulation, findings, plannedFor, Optional.empty(),
+                Optional.empty());
     }
 
     /**
@@ -117,7 +157,8 @@ public record HobCycle(
     @ApiStatus(since = "1.1")
     public HobCycle forJob(HobJob job) {
         return new HobCycle(gear, inspection, tolerances, setup, steps, summary, simulation, findings,
-                Optional.of(Checks.present("job", job)), pair);
+                Optional.of(Checks.present("job", job)), pair,
+                spline);
     }
 
     /** {@return true when any finding is an error: nothing may be posted} */

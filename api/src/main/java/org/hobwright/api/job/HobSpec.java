@@ -24,6 +24,7 @@ import org.hobwright.api.internal.Checks;
  * @param cuttingSense        the sense the hob cuts in, seen from its drive end, if stated (the planner
  *                            assumes clockwise otherwise and says so)
  * @param identifier          the shop's identifier of the hob (tool number, serial), if given
+ * @param splineProfile       for a spline hob, its root form, tip radius and addendum
  */
 @ApiStatus(since = "1.0")
 public record HobSpec(
@@ -39,7 +40,8 @@ public record HobSpec(
         OptionalDouble maxRpm,
         String material,
         @ApiStatus(since = "1.1") Optional<CuttingSense> cuttingSense,
-        @ApiStatus(since = "1.1") Optional<String> identifier) {
+        @ApiStatus(since = "1.1") Optional<String> identifier,
+        @ApiStatus(since = "1.1") Optional<SplineHobProfile> splineProfile) {
 
     /**
      * Checks the components: a value out of range throws {@link IllegalArgumentException} naming the field and the
@@ -58,6 +60,7 @@ public record HobSpec(
      * @param material cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
      * @param cuttingSense the sense the hob cuts in, seen from its drive end, if stated
      * @param identifier the shop's identifier of the hob, if given
+     * @param splineProfile for a spline hob, its root form, tip radius and addendum
      */
     public HobSpec {
         Checks.present("hob.pitch", pitch);
@@ -77,6 +80,33 @@ public record HobSpec(
         Objects.requireNonNull(cuttingSense, "cuttingSense");
         Objects.requireNonNull(identifier, "identifier");
         identifier.ifPresent(id -> Checks.text("hob.identifier", id));
+        Objects.requireNonNull(splineProfile, "splineProfile");
+    }
+
+    /**
+     * A gear hob (no spline profile).
+     *
+     * @param pitch normal pitch of the hob (must match the gear's)
+     * @param pressureAngleDeg normal pressure angle of the hob profile, degrees, 1 to 45
+     * @param starts number of starts (threads) z₀, 1 to 12
+     * @param hand hand of the hob thread
+     * @param outsideDiameterMm outside diameter, mm
+     * @param leadAngleDeg lead angle at the reference diameter, if stated
+     * @param referenceDiameterMm reference diameter, if stated
+     * @param gashes number of gashes (flutes), at least 1
+     * @param lengthMm usable hob length, mm
+     * @param maxRpm the hob maker's speed limit, rpm, if given
+     * @param material cutting material: {@code hss}, {@code hss-coated}, {@code carbide}
+     * @param cuttingSense the sense the hob cuts in, seen from its drive end, if stated
+     * @param identifier the shop's identifier of the hob, if given
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec(Pitch pitch, double pressureAngleDeg, int starts, Hand hand, double outsideDiameterMm,
+                   OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
+                   OptionalDouble maxRpm, String material, Optional<CuttingSense> cuttingSense,
+                   Optional<String> identifier) {
+        this(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg, referenceDiameterMm, gashes,
+                lengthMm, maxRpm, material, cuttingSense, identifier, Optional.empty());
     }
 
     /**
@@ -99,7 +129,19 @@ public record HobSpec(
                    OptionalDouble leadAngleDeg, OptionalDouble referenceDiameterMm, int gashes, double lengthMm,
                    OptionalDouble maxRpm, String material) {
         this(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg, referenceDiameterMm, gashes,
-                lengthMm, maxRpm, material, Optional.empty(), Optional.empty());
+                lengthMm, maxRpm, material, Optional.empty(), Optional.empty(), Optional.empty());
+    }
+
+    /**
+     * This hob spec with another {@code splineProfile}.
+     *
+     * @param splineProfile the spline hob's root form, tip radius and addendum, or empty for a gear hob
+     * @return the copy, checked like any new one
+     */
+    @ApiStatus(since = "1.1")
+    public HobSpec withSplineProfile(Optional<SplineHobProfile> splineProfile) {
+        return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /** {@return normal module in mm} */
@@ -116,7 +158,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withPitch(Pitch pitch) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -128,7 +170,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withPressureAngleDeg(double pressureAngleDeg) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -140,7 +182,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withStarts(int starts) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -152,7 +194,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withHand(Hand hand) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -164,7 +206,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withOutsideDiameterMm(double outsideDiameterMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -176,7 +218,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withLeadAngleDeg(OptionalDouble leadAngleDeg) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -200,7 +242,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withReferenceDiameterMm(OptionalDouble referenceDiameterMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -223,7 +265,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withGashes(int gashes) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -235,7 +277,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withLengthMm(double lengthMm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -247,7 +289,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withMaxRpm(OptionalDouble maxRpm) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -270,7 +312,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withMaterial(String material) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -282,7 +324,7 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withCuttingSense(Optional<CuttingSense> cuttingSense) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 
     /**
@@ -294,6 +336,6 @@ public record HobSpec(
     @ApiStatus(since = "1.1")
     public HobSpec withIdentifier(Optional<String> identifier) {
         return new HobSpec(pitch, pressureAngleDeg, starts, hand, outsideDiameterMm, leadAngleDeg,
-                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier);
+                referenceDiameterMm, gashes, lengthMm, maxRpm, material, cuttingSense, identifier, splineProfile);
     }
 }

@@ -46,6 +46,12 @@ public final class JobFields {
     public static final List<String> METHODS = List.of("climb", "conventional");
     /** Senses a hob cuts in, seen from its own drive end. */
     public static final List<String> SENSES = List.of("clockwise", "counter-clockwise");
+    /** What a job cuts. */
+    public static final List<String> PARTS = List.of("gear", "spline");
+    /** The spline standards (identifiers of wizard.spline). */
+    public static final List<String> SPLINE_STANDARDS = List.of("iso4156", "ansi-b92.1", "din5480");
+    /** Root forms of a spline and of a spline hob. */
+    public static final List<String> SPLINE_ROOTS = List.of("flat", "fillet");
     /** Length units of a file. */
     public static final List<String> UNIT_WORDS = List.of("mm", "in");
 
@@ -64,6 +70,12 @@ public final class JobFields {
     public static final FieldDef UNITS = add(FieldDef.of("units", CHOICE, NONE).choices(UNIT_WORDS)
             .required(FieldDefault.convention("mm", "millimetres, the SI unit of length"))
             .text("Length unit", "The unit every length of this job is entered and printed in."));
+
+    /** The field {@code part}. */
+    public static final FieldDef PART = add(FieldDef.of("part", CHOICE, NONE).choices(PARTS)
+            .optional(FieldDefault.convention("gear", "a gear unless the job says spline"))
+            .text("Part kind", "What the job cuts: gear, or spline (an external involute spline; the spline"
+                    + " questions replace the gear's)."));
 
     // ---------------------------------------------------------------- gear
     /** The field {@code gear.partName}. */
@@ -201,6 +213,75 @@ public final class JobFields {
             .text("Mating gear: lower allowance", "The mate's lower normal tooth thickness allowance, not above its"
                     + " upper one."));
 
+    // ---------------------------------------------------------------- spline
+    /** The field {@code spline.partName}. */
+    public static final FieldDef SPLINE_PART_NAME = add(FieldDef.of("spline.partName", TEXT, NONE)
+            .optional(FieldDefault.computed("the job name"))
+            .text("Part name or number", "As on the drawing; printed in the program header and on the setup sheet."));
+    /** The field {@code spline.standard}. */
+    public static final FieldDef SPLINE_STANDARD = add(FieldDef.of("spline.standard", CHOICE, NONE)
+            .choices(SPLINE_STANDARDS).mustGive()
+            .text("Spline standard", "iso4156 (ISO 4156-1, module, side fit), ansi-b92.1 (inch, side fit) or din5480"
+                    + " (reference diameter)."));
+    /** The field {@code spline.teeth}. */
+    public static final FieldDef SPLINE_TEETH = add(FieldDef.of("spline.teeth", INTEGER, NONE).range(5, 2000)
+            .mustGive().text("Number of teeth", "Tooth count z of the spline."));
+    /** The field {@code spline.module}. */
+    public static final FieldDef SPLINE_MODULE = add(FieldDef.of("spline.module", NUMBER, MODULE).range(0.05, 100)
+            .optional(PITCH)
+            .text("Module", "Module m in mm (ISO 4156, DIN 5480). Give the module or the diametral pitch, not both."));
+    /** The field {@code spline.diametralPitch}. */
+    public static final FieldDef SPLINE_DIAMETRAL_PITCH = add(FieldDef.of("spline.diametralPitch", TEXT, NONE)
+            .optional(PITCH)
+            .text("Diametral pitch", "ANSI B92.1 pitch as the drawing writes it, e.g. 16/32 (the stub pitch is"
+                    + " twice the pitch)."));
+    /** The field {@code spline.pressureAngle}. */
+    public static final FieldDef SPLINE_PRESSURE_ANGLE = add(FieldDef.of("spline.pressureAngle", ANGLE,
+            UnitKind.ANGLE).range(10, 45).required(FieldDefault.standard("30", "ISO 4156-1, ANSI B92.1 and DIN 5480:"
+                    + " 30° (37.5° and 45° in ISO 4156 and ANSI B92.1)"))
+            .text("Pressure angle", "30, 37.5 or 45°."));
+    /** The field {@code spline.root}. */
+    public static final FieldDef SPLINE_ROOT = add(FieldDef.of("spline.root", CHOICE, NONE).choices(SPLINE_ROOTS)
+            .required(FieldDefault.standard("fillet", "every pressure angle has a fillet root; flat only at 30°"))
+            .text("Root form", "flat (30° only) or fillet."));
+    /** The field {@code spline.toleranceClass}. */
+    public static final FieldDef SPLINE_TOLERANCE_CLASS = add(FieldDef.of("spline.toleranceClass", INTEGER, NONE)
+            .range(1, 16).required(FieldDefault.standard("5", "ISO 4156-1 and ANSI B92.1 class 5, the former single"
+                    + " class"))
+            .text("Tolerance class", "4 to 7 (ISO 4156, ANSI B92.1); the quality for DIN 5480."));
+    /** The field {@code spline.fitClass}. */
+    public static final FieldDef SPLINE_FIT_CLASS = add(FieldDef.of("spline.fitClass", TEXT, NONE)
+            .optional(FieldDefault.convention("h", "the standards' fit without clearance allowance"))
+            .text("Fit class", "As the standard names it: h, f, e or d (ANSI B92.1: h)."));
+    /** The field {@code spline.referenceDiameter}. */
+    public static final FieldDef SPLINE_REFERENCE_DIAMETER = add(FieldDef.of("spline.referenceDiameter", NUMBER,
+            LENGTH).range(FieldRange.POSITIVE).optional(FieldDefault.unused("only DIN 5480 uses it"))
+            .text("Reference diameter", "DIN 5480 reference diameter d_B (the first number of W d_B × m × z)."));
+    /** The field {@code spline.faceWidth}. */
+    public static final FieldDef SPLINE_FACE_WIDTH = add(FieldDef.of("spline.faceWidth", NUMBER, LENGTH)
+            .range(FieldRange.POSITIVE).mustGive().text("Spline length", "Length of the splined section."));
+    /** The field {@code spline.pinDiameter}. */
+    public static final FieldDef SPLINE_PIN_DIAMETER = add(FieldDef.of("spline.pinDiameter", NUMBER, LENGTH)
+            .range(FieldRange.POSITIVE).optional(FieldDefault.computed("the standard's pin"))
+            .text("Pin diameter", "Pin for the measurement over pins; empty takes the standard's."));
+    /** The field {@code spline.blankDiameter}. */
+    public static final FieldDef SPLINE_BLANK_DIAMETER = add(FieldDef.of("spline.blankDiameter", NUMBER, LENGTH)
+            .range(FieldRange.POSITIVE).optional(FieldDefault.computed("the maximum major diameter"))
+            .text("Blank diameter", "Major diameter the shaft is turned to before hobbing."));
+    /** The field {@code spline.allowance}. */
+    public static final FieldDef SPLINE_ALLOWANCE = add(FieldDef.of("spline.allowance", NUMBER, LENGTH)
+            .range(-10, 10).optional(FieldDefault.computed("the fit class's deviation (ISO 4156, ANSI B92.1)"))
+            .text("Tooth thickness deviation", "es (DIN 5480: A_s = s_v max − s) from the drawing; negative thins"
+                    + " the tooth."));
+    /** The field {@code spline.totalTolerance}. */
+    public static final FieldDef SPLINE_TOTAL_TOLERANCE = add(FieldDef.of("spline.totalTolerance", NUMBER, LENGTH)
+            .range(FieldRange.POSITIVE).optional(FieldDefault.computed("the tolerance class (ISO 4156, ANSI B92.1)"))
+            .text("Total tooth thickness tolerance", "T + λ (DIN 5480: T_G = s_v max − s_min) from the drawing."));
+    /** The field {@code spline.effectiveVariation}. */
+    public static final FieldDef SPLINE_EFFECTIVE_VARIATION = add(FieldDef.of("spline.effectiveVariation", NUMBER,
+            LENGTH).range(0, 10).optional(FieldDefault.computed("the tolerance class (ISO 4156, ANSI B92.1)"))
+            .text("Effective variation", "λ (DIN 5480: T_eff = s_v max − s_max) from the drawing."));
+
     // ---------------------------------------------------------------- hob
     /** The field {@code hob.module}. */
     public static final FieldDef HOB_MODULE = add(FieldDef.of("hob.module", NUMBER, MODULE).range(0.05, 100)
@@ -258,6 +339,20 @@ public final class JobFields {
     public static final FieldDef HOB_IDENTIFIER = add(FieldDef.of("hob.identifier", TEXT, NONE)
             .optional(FieldDefault.unused("no identifier on the setup sheet"))
             .text("Hob identifier", "Your tool number or serial of the hob, for the setup sheet."));
+
+    /** The field {@code hob.root}. */
+    public static final FieldDef HOB_ROOT = add(FieldDef.of("hob.root", CHOICE, NONE).choices(SPLINE_ROOTS)
+            .optional(FieldDefault.unused("a gear hob"))
+            .text("Spline hob root form", "The root form the spline hob's tip cuts: flat or fillet."));
+    /** The field {@code hob.tipRadius}. */
+    public static final FieldDef HOB_TIP_RADIUS = add(FieldDef.of("hob.tipRadius", NUMBER, LENGTH)
+            .range(0, 100).optional(FieldDefault.unused("a gear hob; a spline hob must give it"))
+            .text("Spline hob tip radius", "Tip corner radius of the spline hob, as the hob maker states it."));
+    /** The field {@code hob.addendum}. */
+    public static final FieldDef HOB_ADDENDUM = add(FieldDef.of("hob.addendum", NUMBER, LENGTH)
+            .range(FieldRange.POSITIVE).optional(FieldDefault.computed("the standard's: the hob cuts the minor"
+                    + " diameter limit"))
+            .text("Spline hob addendum", "Tip line below the datum line, where the hob tooth is π m / 2 thick."));
 
     // ---------------------------------------------------------------- machine
     /** The field {@code machine}. */

@@ -132,6 +132,14 @@ class WithersTest {
         if (type == MatingGear.class) {
             return new MatingGear(31, OptionalDouble.of(0.1), OptionalDouble.of(52), -0.05, OptionalDouble.of(-0.12));
         }
+        if (type == SplineSpec.class) {
+            // an ISO 4156-1 spline, 30° flat root, class 5, fit h
+            return new SplineSpec("iso4156", "flat", 5, "h", OptionalDouble.empty(), OptionalDouble.empty(),
+                    OptionalDouble.empty(), OptionalDouble.empty());
+        }
+        if (type == SplineHobProfile.class) {
+            return new SplineHobProfile("flat", 0.2, OptionalDouble.empty());
+        }
         throw new AssertionError("no value to try for " + type);
     }
 

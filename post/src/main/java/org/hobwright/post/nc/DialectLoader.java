@@ -54,7 +54,7 @@ public final class DialectLoader {
      * Loads a dialect.
      *
      * @param fileName the dialect's name or file name, for messages
-     * @param json     the dialect text
+     * @param json     the dialect text (a leading byte-order mark is skipped)
      * @return the dialect or the findings that say why not
      */
     public static Loaded load(String fileName, String json) {

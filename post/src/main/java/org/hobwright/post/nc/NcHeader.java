@@ -42,10 +42,18 @@ final class NcHeader {
         out.add("Part " + g.partName());
         out.add("Job " + job.name() + "  date " + context.generatedOn() + "  Hobwright " + context.toolVersion());
         out.add("Machine " + job.machine().name() + "  dialect " + dialect.name() + "  units " + u.lengthSymbol());
-        out.add("Gear z " + g.teeth() + "  " + pitch(g.pitch()) + "  pressure angle "
-                + Decimal.fixed(g.pressureAngleDeg(), ad) + " deg  "
-                + (g.isSpur() ? "spur" : "helix " + Decimal.fixed(g.helixAngleDeg(), ad) + " deg " + g.hand().word()
-                + " hand") + "  x " + Decimal.fixed(g.profileShift(), 4) + "  face " + len(u, g.faceWidthMm(), ld) + lu);
+        if (job.spline().isPresent()) {
+            out.add("Spline " + job.spline().get().standard() + " z " + g.teeth() + "  " + pitch(g.pitch())
+                    + "  pressure angle " + Decimal.fixed(g.pressureAngleDeg(), ad) + " deg  " + job.spline().get().root()
+                    + " root  class " + job.spline().get().toleranceClass() + job.spline().get().fitClass() + "  length "
+                    + len(u, g.faceWidthMm(), ld) + lu);
+        } else {
+            out.add("Gear z " + g.teeth() + "  " + pitch(g.pitch()) + "  pressure angle "
+                    + Decimal.fixed(g.pressureAngleDeg(), ad) + " deg  "
+                    + (g.isSpur() ? "spur" : "helix " + Decimal.fixed(g.helixAngleDeg(), ad) + " deg " + g.hand().word()
+                    + " hand") + "  x " + Decimal.fixed(g.profileShift(), 4) + "  face " + len(u, g.faceWidthMm(), ld)
+                    + lu);
+        }
         out.add("Tip dia " + len(u, gd.tipDiameterMm(), ld) + "  ref dia " + len(u, gd.referenceDiameterMm(), ld)
                 + "  root dia " + len(u, gd.rootDiameterMm(), ld) + lu);
         out.add("Hob " + pitch(h.pitch()) + "  " + h.starts() + " start " + h.hand().word() + " hand  OD "

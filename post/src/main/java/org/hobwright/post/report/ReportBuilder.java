@@ -14,9 +14,11 @@ import org.hobwright.api.cycle.InspectionLimits;
 import org.hobwright.api.cycle.PassSummary;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.SimulationData;
+import org.hobwright.api.cycle.SplineData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.spi.WriteContext;
 import org.hobwright.post.Batch;
 import org.hobwright.post.JobUnits;
@@ -33,6 +35,9 @@ import tools.jackson.databind.node.ObjectNode;
  * left out. The pointers listed in post/README.md ("The JSON report") are a contract.
  */
 final class ReportBuilder {
+    /** Micrometres in a millimetre: quality values (feed marks, enveloping cuts, deviations) are in µm. */
+    private static final double MICROMETRES_PER_MM = 1000;
+
 
     /** The {@code format} of the report. */
     static final String FORMAT = "hobwright-report";
@@ -57,6 +62,9 @@ final class ReportBuilder {
         root.put("toolVersion", context.toolVersion());
         root.put("job", job.name());
         root.put("part", job.gear().partName());
+        if (job.spline().isPresent()) {
+            root.put("partKind", job.part());
+        }
         root.put("machine", job.machine().name());
         ObjectNode units = root.putObject("units");
         units.put("length", u.lengthSymbol());
@@ -84,8 +92,17 @@ final class ReportBuilder {
         if (cycle.summary().isPresent()) {
             root.set("cycle", cycle(cycle.summary().get(), cycle.steps(), cycle.setup()));
         }
+        if (cycle.spline().isPresent()) {
+            root.set("spline", spline(cycle.spline().get()));
+        }
         if (cycle.simulation().isPresent()) {
-            root.set("simulation", simulation(cycle.simulation().get()));
+            ObjectNode sim = simulation(cycle.simulation().get());
+            if (cycle.spline().isPresent() && cycle.spline().get().form().isPresent()) {
+                SplineData.Form f = cycle.spline().get().form().get();
+                sim.put("formReached", f.formReached());
+                sim.put("rootDiameter", u.length(f.rootDiameterMm()));
+            }
+            root.set("simulation", sim);
         }
         if (!cycle.steps().isEmpty()) {
             root.set("batch", batch(Batch.of(cycle, job)));
@@ -292,11 +309,42 @@ final class ReportBuilder {
         return n;
     }
 
+    private ObjectNode spline(SplineData d) {
+        SplineSpec spec = job.spline().orElseThrow();
+        ObjectNode n = nodes.objectNode();
+        n.put("standard", d.standard());
+        n.put("root", spec.root());
+        n.put("toleranceClass", spec.toleranceClass());
+        n.put("fitClass", spec.fitClass());
+        n.put("pitchDiameter", u.length(d.pitchDiameterMm()));
+        n.put("baseDiameter", u.length(d.baseDiameterMm()));
+        n.put("majorDiameterMax", u.length(d.majorDiameterMaxMm()));
+        n.put("majorDiameterMin", u.length(d.majorDiameterMinMm()));
+        n.put("minorDiameterMax", u.length(d.minorDiameterMaxMm()));
+        n.put("minorDiameterMin", u.length(d.minorDiameterMinMm()));
+        n.put("formDiameter", u.length(d.formDiameterMm()));
+        n.put("formClearance", u.length(d.formClearanceMm()));
+        n.put("basicToothThickness", u.length(d.basicToothThicknessMm()));
+        n.put("effectiveThicknessMax", u.length(d.effectiveThicknessMaxMm()));
+        n.put("effectiveThicknessMin", u.length(d.effectiveThicknessMinMm()));
+        n.put("toothThicknessMax", u.length(d.toothThicknessMaxMm()));
+        n.put("toothThicknessMin", u.length(d.toothThicknessMinMm()));
+        n.put("allowance", u.length(d.allowanceMm()));
+        n.put("totalTolerance", u.length(d.totalToleranceMm()));
+        n.put("effectiveVariation", u.length(d.effectiveVariationMm()));
+        n.put("pinDiameter", u.length(d.pinDiameterMm()));
+        n.put("pinOrigin", d.pinOrigin());
+        n.put("overPinsMax", u.length(d.overPinsMaxMm()));
+        n.put("overPinsMin", u.length(d.overPinsMinMm()));
+        return n;
+    }
+
     private ObjectNode simulation(SimulationData s) {
         ObjectNode n = nodes.objectNode();
-        n.put("envelopingDepth", u.length(s.envelopingDepthMm()));
-        n.put("closedFormEnvelopingDepth", u.length(s.closedFormEnvelopingDepthMm()));
-        n.put("profileDeviationMax", u.length(s.profileDeviationMaxMm()));
+        // quality values in µm in every unit system, as /cycle/envelopingDepth and the targets
+        n.put("envelopingDepth", s.envelopingDepthMm() * MICROMETRES_PER_MM);
+        n.put("closedFormEnvelopingDepth", s.closedFormEnvelopingDepthMm() * MICROMETRES_PER_MM);
+        n.put("profileDeviationMax", s.profileDeviationMaxMm() * MICROMETRES_PER_MM);
         n.put("undercut", s.undercut());
         n.put("activeInvoluteStartDiameter", u.length(s.activeInvoluteStartDiameterMm()));
         return n;

@@ -80,9 +80,9 @@ final class SetupSheet {
         m.raw("<!DOCTYPE html>\n");
         m.open("html", "xmlns", "http://www.w3.org/1999/xhtml", "lang", "en").nl();
         m.open("head").empty("meta", "charset", "UTF-8")
-                .leaf("title", "Hobbing setup sheet – " + job.gear().partName()).open("style").raw(CSS).close("style").close("head");
+                .leaf("title", (job.spline().isPresent() ? "Spline hobbing" : "Hobbing") + " setup sheet – " + job.gear().partName()).open("style").raw(CSS).close("style").close("head");
         m.open("body").nl();
-        m.leaf("h1", "Hobbing setup sheet – " + job.gear().partName()).nl();
+        m.leaf("h1", (job.spline().isPresent() ? "Spline hobbing" : "Hobbing") + " setup sheet – " + job.gear().partName()).nl();
         m.leaf("p", "Job " + job.name() + " · machine " + job.machine().name() + " · units " + f.u().lengthSymbol()
                 + " · " + context.generatedOn() + " · Hobwright " + context.toolVersion(), "class", "meta").nl();
         SheetTables t = new SheetTables(m, f, job);
@@ -107,7 +107,11 @@ final class SetupSheet {
         m.close("div");
         t.setup(s, sum, job.cycle().coolant(), senses);
         m.open("div", "class", "columns");
-        t.gear(g);
+        if (cycle.spline().isPresent()) {
+            t.spline(cycle.spline().get());
+        } else {
+            t.gear(g);
+        }
         cycle.inspection().ifPresent(t::inspection);
         cycle.pair().ifPresent(t::pair);
         m.close("div");

@@ -9,6 +9,7 @@ import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
 import org.hobwright.api.cycle.InspectionLimits;
+import org.hobwright.api.cycle.SplineData;
 import org.hobwright.api.cycle.PassSummary;
 import org.hobwright.api.cycle.SetupValues;
 import org.hobwright.api.cycle.SimulationData;
@@ -18,6 +19,7 @@ import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Pitch;
+import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.post.Batch;
 import org.hobwright.post.Senses;
@@ -150,6 +152,36 @@ final class SheetTables {
         row("Root ⌀", f.lenU(g.rootDiameterMm()));
         row("Whole depth", f.lenU(g.wholeDepthMm()));
         row("Tooth thickness (normal, reference circle)", f.lenU(g.toothThicknessMm()));
+        end();
+    }
+
+    /** The spline's limits, its inspection over pins and the form check, for a spline job. */
+    void spline(SplineData d) {
+        GearSpec s = job.gear();
+        SplineSpec sp = job.spline().orElseThrow();
+        section("Spline");
+        row("Part", s.partName());
+        row("Standard", d.standard() + ", " + sp.root() + " root, class " + sp.toleranceClass() + sp.fitClass());
+        row("Teeth z", String.valueOf(s.teeth()));
+        row(s.pitch() instanceof Pitch.Diametral ? "Diametral pitch" : "Module",
+                s.pitch() instanceof Pitch.Diametral p ? Decimal.fixed(p.perInch(), 4) + "/" + Decimal.fixed(2 * p.perInch(), 4)
+                        : Decimal.fixed(s.moduleMm(), 4) + " mm");
+        row("Pressure angle", f.deg(s.pressureAngleDeg()));
+        row("Spline length", f.lenU(s.faceWidthMm()));
+        row("Pitch ⌀ D / base ⌀ D_b", f.lenU(d.pitchDiameterMm()) + " / " + f.lenU(d.baseDiameterMm()));
+        row("Major ⌀ D_ee (turn to)", f.len(d.majorDiameterMinMm()) + " … " + f.lenU(d.majorDiameterMaxMm()));
+        row("Minor ⌀ D_ie", f.len(d.minorDiameterMinMm()) + " … " + f.lenU(d.minorDiameterMaxMm()));
+        row("Form ⌀ D_Fe (involute at least down to)", f.lenU(d.formDiameterMm()));
+        d.form().ifPresent(fc -> {
+            row("Involute begins at (simulated, thickest tooth)", f.lenU(fc.involuteStartDiameterMm())
+                    + (fc.formReached() ? " — form diameter reached" : " — FORM DIAMETER NOT REACHED"));
+            row("Root ⌀ the hob cuts", f.len(fc.rootDiameterMinMm()) + " … " + f.lenU(fc.rootDiameterMaxMm()));
+        });
+        row("Tooth thickness S_v max (effective)", f.lenU(d.effectiveThicknessMaxMm()));
+        row("Tooth thickness S_max … S_min (actual)", f.len(d.toothThicknessMaxMm()) + " … "
+                + f.lenU(d.toothThicknessMinMm()));
+        row("Pin ⌀", f.lenU(d.pinDiameterMm()) + " (" + d.pinOrigin() + ")");
+        row("Over two pins, max … min", f.len(d.overPinsMaxMm()) + " … " + f.lenU(d.overPinsMinMm()));
         end();
     }
 

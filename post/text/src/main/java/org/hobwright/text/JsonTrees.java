@@ -45,9 +45,17 @@ public final class JsonTrees {
     private JsonTrees() {
     }
 
-    /** A parser over a text, from a bare factory (no object mapper behind it). */
+    /**
+     * A parser over a text, from a bare factory (no object mapper behind it). A leading UTF-8
+     * byte-order mark (U+FEFF, which some editors write at the start of a file) is skipped.
+     */
     public static JsonParser parser(String json) {
-        return FACTORY.createParser(ObjectReadContext.empty(), json);
+        return FACTORY.createParser(ObjectReadContext.empty(), withoutByteOrderMark(json));
+    }
+
+    /** The text without a leading byte-order mark (U+FEFF), as JSON texts are read (RFC 8259, 8.1). */
+    public static String withoutByteOrderMark(String text) {
+        return text.startsWith("\uFEFF") ? text.substring(1) : text;
     }
 
     /**

@@ -225,4 +225,33 @@ class DecimalTest {
         assertEquals("4.941e-324", Decimal.readable(Double.MIN_VALUE));
         assertEquals("1.798e308", Decimal.readable(Double.MAX_VALUE));
     }
+
+    /**
+     * Numbers in messages are readable at every magnitude: against java.math.BigDecimal rounding to
+     * six significant digits (plain from 0.0001 to below 10⁹, whole numbers with all their digits) or
+     * four with a power of ten (outside),
+     * for values spread over the whole double range; never longer than 13 characters.
+     */
+    @Test
+    void readableNumbersAtEveryMagnitude() {
+        assertEquals("1e300", Decimal.readable(1e300));
+        assertEquals("1e-9", Decimal.readable(1e-9));
+        assertEquals("0.000976198", Decimal.readable(0.000976198));
+        assertEquals("1234.57", Decimal.readable(1234.5678));
+        assertEquals("2000", Decimal.readable(2000));
+        assertEquals("-1.235e11", Decimal.readable(-123456789012.0));
+        SplittableRandom random = new SplittableRandom(14);
+        for (int i = 0; i < 20_000; i++) {
+            double v = (random.nextBoolean() ? 1 : -1) * random.nextDouble(1, 10) * Math.pow(10, random.nextInt(-300, 300));
+            String text = Decimal.readable(v);
+            BigDecimal exact = new BigDecimal(v);
+            double a = Math.abs(v);
+            // six significant digits, whole numbers from 10⁵ on (all their digits), four outside the plain range
+            BigDecimal expected = a >= 1e5 && a < 1e9 ? exact.setScale(0, RoundingMode.HALF_UP)
+                    : exact.round(new MathContext(a >= 1e-4 && a < 1e9 ? 6 : 4, RoundingMode.HALF_UP));
+            assertEquals(expected.doubleValue(), Double.parseDouble(text), Math.ulp(expected.doubleValue()) * 4,
+                    v + " -> " + text);
+            assertTrue(text.length() <= 13, v + " -> " + text);
+        }
+    }
 }

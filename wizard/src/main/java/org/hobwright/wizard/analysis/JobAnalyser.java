@@ -8,6 +8,8 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
+import org.hobwright.api.cycle.SimulationData;
+import org.hobwright.api.cycle.SplineData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.GearSpec;
 import org.hobwright.api.job.HobJob;
@@ -42,6 +44,9 @@ public final class JobAnalyser {
 
     /** Analyses a job. */
     public static JobAnalysis analyse(HobJob job) {
+        if (job.spline().isPresent()) {
+            return SplineJobAnalyser.analyse(job);
+        }
         List<Finding> findings = new ArrayList<>();
         Wording words = new Wording(job.units());
         GearSpec spec = job.gear();
@@ -70,7 +75,7 @@ public final class JobAnalyser {
         }
         GearData gear = GearGeometry.of(g);
         GearChecks.customRootRadius(g, words, findings);
-        GearChecks.undercut(g, words, findings);
+        GearChecks.undercut(g, job, words, findings);
         double tip = Math.min(g.tipDiameterMm(), spec.blankDiameterMm().orElse(Double.POSITIVE_INFINITY));
         spec.blankDiameterMm().ifPresent(b -> BlankCheck.check(g, b, words, findings));
         GearChecks.tip(g, tip, job, words, findings);
@@ -86,7 +91,8 @@ public final class JobAnalyser {
         DrawingCheck.check(spec.drawing(), g, inspection.pins().pinDiameterMm(), words, findings);
         Optional<GearPairData> pair = spec.mate().isPresent()
                 ? GearPairChecks.check(spec, g, tip, words, findings) : Optional.empty();
-        return result(Optional.of(gear), Optional.of(inspection.data()), tolerances, setup, findings, pair);
+        return result(Optional.of(gear), Optional.of(inspection.data()), tolerances, setup, findings, pair,
+                Optional.empty(), Optional.empty());
     }
 
     /** Rounding step of a computed pin: 0.01 mm, or 0.0005 in in inch jobs (common practice, no source). */
@@ -94,17 +100,20 @@ public final class JobAnalyser {
         return units == Units.IN ? Units.IN.toMm(0.0005) : 0.01;
     }
 
-    private static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
+    static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
                                       Optional<ToleranceData> tolerances, Optional<HobSetup> setup,
                                       List<Finding> findings) {
-        return result(gear, inspection, tolerances, setup, findings, Optional.empty());
+        return result(gear, inspection, tolerances, setup, findings, Optional.empty(), Optional.empty(),
+                Optional.empty());
     }
 
-    private static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
-                                      Optional<ToleranceData> tolerances, Optional<HobSetup> setup,
-                                      List<Finding> findings, Optional<GearPairData> pair) {
+    /** The analysis with its findings sorted errors first, each group in check order. */
+    static JobAnalysis result(Optional<GearData> gear, Optional<InspectionData> inspection,
+                              Optional<ToleranceData> tolerances, Optional<HobSetup> setup, List<Finding> findings,
+                              Optional<GearPairData> pair, Optional<SplineData> spline,
+                              Optional<SimulationData> simulation) {
         List<Finding> sorted = new ArrayList<>(findings);
         sorted.sort(Comparator.comparing(Finding::severity));
-        return new JobAnalysis(gear, inspection, tolerances, setup, sorted, pair);
+        return new JobAnalysis(gear, inspection, tolerances, setup, sorted, pair, spline, simulation);
     }
 }

@@ -6,6 +6,8 @@ import org.hobwright.api.check.Finding;
 import org.hobwright.api.cycle.GearData;
 import org.hobwright.api.cycle.GearPairData;
 import org.hobwright.api.cycle.InspectionData;
+import org.hobwright.api.cycle.SimulationData;
+import org.hobwright.api.cycle.SplineData;
 import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.wizard.setup.HobSetup;
 
@@ -19,12 +21,21 @@ import org.hobwright.wizard.setup.HobSetup;
  * @param hobSetup    hob lead and swivel, when they could be computed
  * @param findings    every finding of the checks
  * @param pair        the gear with its mate, when the job gives one and the pair could be computed
+ * @param spline      for a spline job: its limits, pins and form check
+ * @param simulation  for a spline job whose hob fits: the generating simulation of the form check
  */
 public record JobAnalysis(Optional<GearData> gear, Optional<InspectionData> inspection,
                           Optional<ToleranceData> tolerances, Optional<HobSetup> hobSetup,
-                          List<Finding> findings, Optional<GearPairData> pair) {
+                          List<Finding> findings, Optional<GearPairData> pair, Optional<SplineData> spline,
+                          Optional<SimulationData> simulation) {
     public JobAnalysis {
         findings = List.copyOf(findings);
+    }
+
+    /** The analysis of a gear job. */
+    public JobAnalysis(Optional<GearData> gear, Optional<InspectionData> inspection,
+                       Optional<ToleranceData> tolerances, Optional<HobSetup> hobSetup, List<Finding> findings) {
+        this(gear, inspection, tolerances, hobSetup, findings, Optional.empty(), Optional.empty(), Optional.empty());
     }
 
     /** True when a check found an error. */

@@ -66,12 +66,12 @@ public final class DrawingCheck {
                              Wording words, List<Finding> out) {
         int k = dv.spanTeeth().orElse(SpanMeasurement.of(g).teeth());
         if (k < 1 || k > g.teeth() - 1) {
-            out.add(EngineeringCode.DRAWING_SPAN_TEETH.at("gear.drawing.spanTeeth", "span over " + k
-                    + " teeth is not possible on a gear of " + g.teeth() + " teeth (1 to " + (g.teeth() - 1) + ")",
-                    "use " + SpanMeasurement.of(g).teeth() + " teeth"));
+            out.add(EngineeringCode.DRAWING_SPAN_TEETH.at("gear.drawing.spanTeeth", "span over "
+                    + Wording.teeth(k) + " is not possible on a gear of " + Wording.teeth(g.teeth()) + " (1 to "
+                    + (g.teeth() - 1) + ")", "use " + Wording.teeth(SpanMeasurement.of(g).teeth())));
             return;
         }
-        c.compare(EngineeringCode.DRAWING_SPAN, "span", "span over " + k + " teeth", v,
+        c.compare(EngineeringCode.DRAWING_SPAN, "span", "span over " + Wording.teeth(k), v,
                 SpanMeasurement.widthMm(g, k), SpanMeasurement.widthMm(nominal, k), true,
                 x -> SpanMeasurement.widthMm(g.withProfileShift(x), k), null,
                 "check the number of teeth spanned, the profile shift and the thickness allowance");

@@ -37,8 +37,13 @@ public final class GearChecks {
         return false;
     }
 
-    /** Undercut: the hob's straight flank reaches below the interference point. Proposes the shift to use. */
-    public static void undercut(InvoluteGear g, Wording words, List<Finding> out) {
+    /**
+     * Undercut: the hob's straight flank reaches below the interference point. Proposes the range of
+     * profile shifts that avoids undercut and keeps the tip thickness of {@link #tip} (from the
+     * smallest shift without undercut to the largest with the tip thick enough); when the range is
+     * empty, says so and proposes tip shortening, or another pressure angle or tooth system.
+     */
+    public static void undercut(InvoluteGear g, HobJob job, Wording words, List<Finding> out) {
         double hStar = Undercut.hStar(g);
         double xMin = Undercut.minProfileShift(hStar, g);
         double xE = g.effectiveProfileShift();
@@ -54,12 +59,67 @@ public final class GearChecks {
                 + ": the hob undercuts the tooth roots" + (slight ? " slightly, below the working flank" : "")
                 + " (no undercut from " + zMin + " teeth at zero shift; this tooth count needs a shift of at least "
                 + words.number(xMin + allowanceShift) + ")";
-        String fix = "set gear.profileShift to " + words.number(proposed) + ": tip diameter "
-                + words.length(shifted.tipDiameterMm()) + ", root diameter " + words.length(shifted.rootDiameterMm())
-                + ", tip thickness " + words.length(shifted.normalThicknessAtMm(shifted.tipDiameterMm()))
-                + "; the mating gear and centre distance must allow for it";
+        double limit = tipLimitFactor(job) * g.normalModuleMm();
+        double largest = Math.floor(largestShiftForTip(g, limit, proposed) * 100 + 1e-9) / 100;
+        String geometry = ": tip diameter " + words.length(shifted.tipDiameterMm()) + ", root diameter "
+                + words.length(shifted.rootDiameterMm());
+        String mate = "; the mating gear and centre distance must allow for it";
+        String fix;
+        if (largest >= proposed) {
+            fix = "set gear.profileShift to " + words.number(proposed) + " (from " + words.number(proposed) + " to "
+                    + words.number(largest) + " the teeth are free of undercut and the tip at least "
+                    + words.length(limit) + " thick)" + geometry + ", tip thickness "
+                    + words.length(shifted.normalThicknessAtMm(shifted.tipDiameterMm())) + mate;
+        } else {
+            OptionalDouble shortened = diameterWithThickness(shifted, limit, shifted.tipDiameterMm());
+            fix = "no profile shift avoids undercut and keeps the tip at least " + words.length(limit) + " thick for "
+                    + g.teeth() + " teeth at " + words.angle(Math.toDegrees(g.normalPressureAngleRad()))
+                    + " (undercut needs at least " + words.number(proposed) + ", the tip allows at most "
+                    + words.number(largest) + "); "
+                    + (shortened.isPresent() ? "set gear.profileShift to " + words.number(proposed)
+                    + " and turn the blank to " + words.length(roundedDown(shortened.getAsDouble()))
+                    + " (tip shortening: check the contact ratio with the mate), or " : "")
+                    + "use a larger pressure angle (25°), a stub tooth system or more teeth" + mate;
+        }
         EngineeringCode code = slight ? EngineeringCode.GEAR_UNDERCUT_SLIGHT : EngineeringCode.GEAR_UNDERCUT;
         out.add(code.at("gear.profileShift", msg, fix));
+    }
+
+    /**
+     * The largest profile shift at which the tip (at the shifted gear's own tip diameter) is at least
+     * {@code limitMm} thick, found by bisection (the tip thickness falls as the shift grows); a value
+     * below {@code from} when even {@code from} gives too thin a tip.
+     */
+    static double largestShiftForTip(InvoluteGear g, double limitMm, double from) {
+        if (tipThickness(g, from) < limitMm) {
+            return from - 1;
+        }
+        double lo = from;
+        double hi = from + 0.1;
+        while (tipThickness(g, hi) >= limitMm && hi < from + 10) {
+            lo = hi;
+            hi += 0.5;
+        }
+        for (int i = 0; i < 60; i++) {
+            double mid = (lo + hi) / 2;
+            if (tipThickness(g, mid) >= limitMm) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return lo;
+    }
+
+    private static double tipThickness(InvoluteGear g, double shift) {
+        InvoluteGear s = g.withProfileShift(shift);
+        return s.normalThicknessAtMm(s.tipDiameterMm());
+    }
+
+    /** The tip thickness limit as a factor of the module: 0.4 for case-hardened work, else 0.25. */
+    static double tipLimitFactor(HobJob job) {
+        boolean caseHardened = job.cycle().workMaterial().toLowerCase(Locale.ROOT).contains("case-harden");
+        return caseHardened ? TIP_LIMIT_CASE_HARDENED : TIP_LIMIT_SOFT;
     }
 
     /**
@@ -69,15 +129,15 @@ public final class GearChecks {
      * @param tipDiameterMm actual tip diameter (the smaller of d_a and the blank), mm
      */
     public static void tip(InvoluteGear g, double tipDiameterMm, HobJob job, Wording words, List<Finding> out) {
-        boolean caseHardened = job.cycle().workMaterial().toLowerCase(Locale.ROOT).contains("case-harden");
-        double factor = caseHardened ? TIP_LIMIT_CASE_HARDENED : TIP_LIMIT_SOFT;
+        double factor = tipLimitFactor(job);
+        boolean caseHardened = factor == TIP_LIMIT_CASE_HARDENED;
         double limit = factor * g.normalModuleMm();
         double s = g.normalThicknessAtMm(tipDiameterMm);
         if (s >= limit) {
             return;
         }
         OptionalDouble shortened = diameterWithThickness(g, limit, tipDiameterMm);
-        String fix = (shortened.isPresent() ? "turn the blank to " + words.length(shortened.getAsDouble())
+        String fix = (shortened.isPresent() ? "turn the blank to " + words.length(roundedDown(shortened.getAsDouble()))
                 + " (tip shortening) for a tip thickness of " + words.length(limit) + ", or " : "")
                 + "reduce the profile shift";
         if (s <= 0) {
@@ -88,6 +148,14 @@ public final class GearChecks {
                     + " is below " + words.number(factor) + " module (" + words.length(limit) + ")"
                     + (caseHardened ? " for a case-hardened gear" : ""), fix));
         }
+    }
+
+    /**
+     * A diameter to turn, rounded down to 0.001 mm with at least 0.0005 mm to spare, so that the
+     * printed value (4 decimals in mm, 5 in inches) is never above the one computed.
+     */
+    static double roundedDown(double mm) {
+        return Math.floor(mm * 1000 - 0.5) / 1000;
     }
 
     /** The largest diameter below {@code maxMm} where the normal thickness is at least {@code thicknessMm}. */

@@ -44,7 +44,7 @@ public final class InspectionChecks {
         double dc = v.span().contactDiameterMm();
         if (!v.span().touchesBetween(form, tip)) {
             out.add(EngineeringCode.INSPECTION_SPAN_CONTACT.at("gear.profileShift", "the span anvils over "
-                    + v.span().teeth() + " teeth touch at " + words.length(dc) + ", outside the involute ("
+                    + Wording.teeth(v.span().teeth()) + " touch at " + words.length(dc) + ", outside the involute ("
                     + words.length(form) + " to " + words.length(tip) + ")", "measure over pins or balls instead"));
         }
         if (tip <= g.referenceDiameterMm()) {
@@ -56,8 +56,9 @@ public final class InspectionChecks {
         double needed = w * Math.sin(g.baseHelixAngleRad()) + ANVIL_MARGIN_MM;
         if (!g.isSpur() && faceWidthMm < needed) {
             out.add(EngineeringCode.INSPECTION_SPAN_FACE_WIDTH.at("gear.faceWidth", "face width "
-                    + words.length(faceWidthMm) + " is too narrow for span anvils over " + v.span().teeth()
-                    + " teeth (needs about " + words.length(needed) + ")", "measure over balls instead"));
+                    + words.length(faceWidthMm) + " is too narrow for span anvils over "
+                    + Wording.teeth(v.span().teeth())
+                    + " (needs about " + words.length(needed) + ")", "measure over balls instead"));
         }
     }
 

@@ -27,6 +27,16 @@ public record Wording(Units units) {
         return plain(v, 4);
     }
 
+    /** A count with its noun in the right number: {@code 1 tooth}, {@code 3 teeth}. */
+    public static String count(long n, String one, String many) {
+        return n + " " + (n == 1 ? one : many);
+    }
+
+    /** A number of teeth: {@code 1 tooth}, {@code 3 teeth}. */
+    public static String teeth(long n) {
+        return count(n, "tooth", "teeth");
+    }
+
     /** The input field of a pitch: {@code PREFIX.module} or {@code PREFIX.diametralPitch}. */
     public static String pitchField(String prefix, Pitch pitch) {
         return prefix + (pitch instanceof Pitch.Diametral ? ".diametralPitch" : ".module");

@@ -16,7 +16,7 @@ import picocli.CommandLine.ScopeType;
                 + " plans feeds and passes, and posts the program, cycle CSV and setup sheet."
                 + " Without a verb, runs the wizard.",
         subcommands = {WizardCommand.class, DemoCommand.class, PlanCommand.class, MachinesCommand.class,
-                TemplatesCommand.class, SimulateCommand.class, CommandLine.HelpCommand.class},
+                TemplatesCommand.class, DialectsCommand.class, SimulateCommand.class, CommandLine.HelpCommand.class},
         footer = {"", "Exit codes: 0 done, 1 the job has errors (findings printed, nothing written),"
                 + " 2 usage or input problem, 3 a fault in Hobwright itself.",
                 "Caution: a hobbing cycle drives a rotating cutter and synchronised spindles. Prove out every"

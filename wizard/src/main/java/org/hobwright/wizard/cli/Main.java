@@ -15,7 +15,8 @@ public final class Main {
     }
 
     /**
-     * Runs the tool and exits with its code: 0 done, 1 the job has errors, 2 usage or input problem.
+     * Runs the tool and exits with its code: 0 done, 1 the job has errors, 2 usage or input problem,
+     * 3 a fault in Hobwright itself ({@link ExitCodes}).
      *
      * @param args command-line arguments
      */

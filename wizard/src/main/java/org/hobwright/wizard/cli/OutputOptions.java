@@ -6,7 +6,8 @@ import picocli.CommandLine.Option;
 /** The output options of {@code wizard}, {@code demo} and {@code plan}. */
 final class OutputOptions {
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Output folder (default: " + PlanRequest.DEFAULT_OUT + "; for plan --json, none unless given).")
+            description = "Output folder (default: " + PlanRequest.DEFAULT_OUT + "), created when missing; files of"
+                    + " the same names in it are replaced, and the summary names them.")
     Path out;
 
     @Option(names = "--date", paramLabel = "YYYY-MM-DD",

@@ -29,7 +29,7 @@ final class PlanCommand extends Verb implements Callable<Integer> {
     OutputOptions output = new OutputOptions();
 
     @Option(names = "--json", description = "Print the JSON report on standard output (the summary goes to"
-            + " standard error).")
+            + " standard error); files are written only when --out is given.")
     boolean json;
 
     @Option(names = "--fastest", description = "Also ask the optimiser for the shortest cycle within the limits.")

@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.util.Optional;
+import org.hobwright.text.JsonTrees;
 
 /**
  * Asks questions on a terminal or on piped input. When the input is piped the answer is echoed,
@@ -40,7 +41,8 @@ final class Prompter {
     /**
      * Asks and reads one line.
      *
-     * @return the answer, stripped, or empty when the input has ended
+     * @return the answer, stripped (of a byte-order mark too, which an answers file may start with),
+     *         or empty when the input has ended
      */
     Optional<String> ask(String prompt) {
         out.print(Finding.printable(prompt));
@@ -50,7 +52,7 @@ final class Prompter {
             if (echo || line == null) {
                 out.println(line == null ? "" : Finding.printable(line));
             }
-            return Optional.ofNullable(line).map(String::strip);
+            return Optional.ofNullable(line).map(l -> JsonTrees.withoutByteOrderMark(l).strip());
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

@@ -10,6 +10,7 @@ import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 import java.util.function.Function;
 import org.hobwright.api.cycle.GearData;
+import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.HobJob;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
@@ -74,6 +75,13 @@ public final class SimulateCommand implements Callable<Integer> {
             return ExitCodes.JOB_ERRORS;
         }
         HobJob j = loaded.get();
+        // the checks and exit codes of plan: a job plan refuses is not simulated either
+        HobCycle planned = new DefaultCyclePlanner().plan(j);
+        if (planned.hasErrors()) {
+            planned.findings().forEach(f -> err.println(f.line()));
+            err.println("Nothing written: the job has errors (the same as 'hobwright plan' reports).");
+            return ExitCodes.JOB_ERRORS;
+        }
         Optional<ToothSystem> system = ToothSystem.of(j.gear());
         if (system.isEmpty()) {
             err.println(CliCode.SIMULATION_INPUT.at("gear.toothSystem", "tooth system \""
@@ -89,7 +97,7 @@ public final class SimulateCommand implements Callable<Integer> {
             err.println(CliCode.SIMULATION_INPUT.at(e.field(), e.getMessage(), e.fix()).line());
             return ExitCodes.JOB_ERRORS;
         }
-        Optional<FeedMarks> marks = feed(j).stream().boxed().findFirst().map(f -> FeedMarks.of(
+        Optional<FeedMarks> marks = feed(planned).stream().boxed().findFirst().map(f -> FeedMarks.of(
                 j.hob().outsideDiameterMm() / 2, f, Math.toRadians(j.gear().helixAngleDeg()),
                 GeneratingSimulation.RESOLUTION_MM));
         Path target = out.resolve(j.name() + "-simulation.svg");
@@ -126,27 +134,30 @@ public final class SimulateCommand implements Callable<Integer> {
         return option == null ? Optional.empty() : Optional.ofNullable((Path) option.getValue());
     }
 
-    /**
-     * The feed that leaves the finishing marks: the finishing feed the planner chooses for the job
-     * (which honours the job's own feeds), when the job can be planned.
-     */
-    private static OptionalDouble feed(HobJob j) {
-        return new DefaultCyclePlanner().plan(j).summary()
-                .map(s -> OptionalDouble.of(s.finishFeedMmPerRev())).orElse(OptionalDouble.empty());
+    /** The feed that leaves the finishing marks: the finishing feed the planner chose for the job. */
+    private static OptionalDouble feed(HobCycle planned) {
+        return planned.summary().map(s -> OptionalDouble.of(s.finishFeedMmPerRev())).orElse(OptionalDouble.empty());
     }
 
     private static void summary(PrintWriter o, Units units, ToothSpaceSimulation sim, Optional<FeedMarks> marks) {
         String u = " " + units.symbol();
-        o.println("profile deviation max   " + length(units, sim.profileDeviationMaxMm()) + u);
-        o.println("enveloping depth        " + length(units, sim.envelopingDepthMm()) + u + " (closed form "
-                + length(units, sim.closedFormEnvelopingDepthMm()) + u + ")");
+        o.println("profile deviation max   " + micrometres(sim.profileDeviationMaxMm()));
+        o.println("enveloping depth        " + micrometres(sim.envelopingDepthMm()) + " (closed form "
+                + micrometres(sim.closedFormEnvelopingDepthMm()) + ")");
         o.println("undercut                " + (sim.undercut() ? "yes, " + length(units, sim.undercutDepthMm()) + u
                 + " deep" : "no"));
         o.println("active involute from    Ø " + length(units, sim.activeInvoluteStartDiameterMm()) + u
                 + " (form circle Ø " + length(units, sim.rootFormDiameterMm()) + u + ")");
-        marks.ifPresentOrElse(m -> o.println("feed marks at the root  " + length(units, m.depthMm()) + u + " at "
-                + length(units, m.feedMm()) + u + " per work turn"),
-                () -> o.println("feed marks at the root  not drawn: the job cannot be planned (see 'hobwright plan')"));
+        marks.ifPresent(m -> o.println("feed marks at the root  " + micrometres(m.depthMm()) + " at "
+                + length(units, m.feedMm()) + u + " per work turn"));
+    }
+
+    /**
+     * A quality value (a deviation from the true flank) in µm, as the targets and the plan's summary
+     * give them: to 0.001 µm, trailing zeros dropped, so the smallest simulated step (about 0.01 µm) shows.
+     */
+    static String micrometres(double mm) {
+        return Decimal.plain(mm * 1000, 3) + " µm";
     }
 
     /** A length in the job's unit to six significant digits. */

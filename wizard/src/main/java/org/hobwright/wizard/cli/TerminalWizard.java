@@ -124,14 +124,18 @@ final class TerminalWizard {
                 }
                 if (!Finding.anyError(said)) {
                     i++;                                 // taken; remarks were shown
-                    fields = sameFieldsAnew(fields);     // an answer may change others (a unit, a default)
+                    // an answer may change others (a unit, a default) or, the part kind, the questions
+                    fields = subset ? sameFieldsAnew(fields) : wizard.view().fields();
                 }
             }
         }
         return true;
     }
 
-    /** True when a question applies ({@link StepFields#applies(String, java.util.function.Function)}). */
+    /**
+     * True when a question applies ({@link StepFields#applies(String, java.util.function.Function)}): the
+     * gear's or the spline's questions by the part kind, the custom rack factors only for the custom tooth system.
+     */
     static boolean applies(FieldSpec f, Wizard wizard) {
         return StepFields.applies(f.key(), wizard::value);
     }

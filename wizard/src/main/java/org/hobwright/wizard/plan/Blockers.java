@@ -8,6 +8,7 @@ import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.MachineProfile;
 import org.hobwright.text.Decimal;
 import org.hobwright.wizard.store.CuttingData;
+import org.hobwright.wizard.store.CuttingDataTable;
 
 /**
  * The problems that stop a cycle from being planned at all; each becomes an error finding naming
@@ -18,10 +19,12 @@ import org.hobwright.wizard.store.CuttingData;
  */
 final class Blockers {
     private final HobJob job;
+    private final CuttingDataTable table;
     private final List<Finding> findings;
 
-    Blockers(HobJob job, List<Finding> findings) {
+    Blockers(HobJob job, CuttingDataTable table, List<Finding> findings) {
         this.job = job;
+        this.table = table;
         this.findings = findings;
     }
 
@@ -62,10 +65,26 @@ final class Blockers {
         boolean open = job.cycle().cuttingSpeedMPerMin().isEmpty() || job.cycle().roughFeedMmPerRev().isEmpty()
                 || job.cycle().finishFeedMmPerRev().isEmpty();
         if (row.isEmpty() && open) {
+            cuttingDataMissing(hob);
+        }
+    }
+
+    /**
+     * No row for the pair of materials: names the hob material when the work material has rows for
+     * other hobs, else the work material.
+     */
+    private void cuttingDataMissing(HobSpec hob) {
+        String work = job.cycle().workMaterial();
+        List<String> hobs = table.hobMaterialsFor(work);
+        String open = ", and the cycle leaves the cutting speed or a feed open";
+        String give = "give cycle.cuttingSpeed, roughFeed and finishFeed, or add a row to your cutting-data table";
+        if (hobs.isEmpty()) {
             error(PlanCode.PLAN_CUTTING_DATA_MISSING, "cycle.workMaterial", "the cutting-data table has no row for "
-                    + job.cycle().workMaterial() + " with a " + hob.material() + " hob, and the cycle leaves the"
-                    + " cutting speed or a feed open", "give cycle.cuttingSpeed, roughFeed and finishFeed, or add a"
-                    + " row to your cutting-data table");
+                    + work + " with any hob" + open, give);
+        } else {
+            error(PlanCode.PLAN_CUTTING_DATA_MISSING, "hob.material", "the cutting-data table has no row for "
+                    + work + " with a " + hob.material() + " hob, only with " + String.join(" or ", hobs) + " hobs"
+                    + open, "use a " + String.join(" or ", hobs) + " hob, or " + give);
         }
     }
 

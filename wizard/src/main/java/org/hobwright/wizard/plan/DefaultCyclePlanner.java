@@ -84,7 +84,8 @@ public final class DefaultCyclePlanner implements CyclePlanner {
     /** The cycle of a job that cannot be planned: analysis results and findings, no steps. */
     static HobCycle unplanned(JobAnalysis analysis, List<Finding> findings) {
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.empty(),
-                List.of(), Optional.empty(), Optional.empty(), sorted(findings), Optional.empty(), analysis.pair());
+                List.of(), Optional.empty(), Optional.empty(), sorted(findings), Optional.empty(), analysis.pair(),
+                analysis.spline());
     }
 
     /** The findings, errors first (stable). */

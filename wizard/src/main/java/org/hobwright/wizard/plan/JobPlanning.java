@@ -68,8 +68,9 @@ final class JobPlanning {
         double touchOff = gear.blankDiameterMm().orElse(gd.tipDiameterMm());
         double root = gd.rootDiameterMm();
         SpeedWindow window = SpeedWindow.of(machine, hob, ratio);
-        Optional<CuttingData> row = table.find(cycle.workMaterial(), hob.material(), gear.moduleMm());
-        new Blockers(job, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
+        Optional<CuttingData> row = table.find(cycle.workMaterial(), hob.material(), gear.moduleMm())
+                .map(r -> job.spline().isPresent() ? r.forSplines() : r);
+        new Blockers(job, table, findings).check(ratio, swivel, touchOff, root, roughDepth((touchOff - root) / 2), window, row);
         if (Finding.anyError(findings)) {
             return DefaultCyclePlanner.unplanned(analysis, findings);
         }
@@ -112,8 +113,8 @@ final class JobPlanning {
         boolean errors = Finding.anyError(findings);
         return new HobCycle(analysis.gear(), analysis.inspection(), analysis.tolerances(), Optional.of(setup),
                 errors ? List.of() : path.steps(), Optional.of(summary),
-                GeneratingSimulation.forCycle(job, gd, findings), DefaultCyclePlanner.sorted(findings),
-                Optional.empty(), analysis.pair());
+                job.spline().isPresent() ? analysis.simulation() : GeneratingSimulation.forCycle(job, gd, findings),
+                DefaultCyclePlanner.sorted(findings), Optional.empty(), analysis.pair(), analysis.spline());
     }
 
     /**

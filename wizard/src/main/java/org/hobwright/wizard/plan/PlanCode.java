@@ -26,7 +26,8 @@ public enum PlanCode implements FindingCode {
             "cut geometry, FORMULAS.md §7.1", ERROR),
     PLAN_SWIVEL_BEYOND_HOLDER("machine.swivel.maxAngle", "swivel setting beyond the holder's range",
             PlanSources.MACHINE, ERROR),
-    PLAN_CUTTING_DATA_MISSING("cycle.workMaterial", "no table row and a speed or feed left open",
+    PLAN_CUTTING_DATA_MISSING("cycle.workMaterial or hob.material", "no table row for the work and hob material"
+            + " (the field names the unknown one), and a speed or feed left open",
             PlanSources.TABLE, ERROR),
     PLAN_SPEED_WINDOW_EMPTY("machine", "no hob speed meets both the minimum and maximum limits",
             PlanSources.MACHINE, ERROR),

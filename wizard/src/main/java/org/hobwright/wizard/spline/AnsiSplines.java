@@ -3,6 +3,7 @@ package org.hobwright.wizard.spline;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.check.Wording;
 
 /**
  * The limits of an external spline by ANSI B92.1-1996 (inch, side fit), computed in inches and returned
@@ -37,11 +38,11 @@ final class AnsiSplines {
         return -1;
     }
 
-    static Optional<SplineLimits> limits(SplineSpec s, List<Finding> findings) {
+    static Optional<SplineLimits> limits(SplineDrawing s, Wording words, List<Finding> findings) {
         double p = s.diametralPitch();
         int g = group(p);
         if (g < 0) {
-            findings.add(SplineCode.SPLINE_PITCH.at("spline.diametralPitch", "diametral pitch " + p
+            findings.add(SplineCode.SPLINE_PITCH.at("spline.diametralPitch", "diametral pitch " + words.number(p)
                     + " is not one of ANSI B92.1's (2.5/5 … 128/256)", "use the pitch on the drawing, e.g. \"16/32\""));
             return Optional.empty();
         }
@@ -56,7 +57,7 @@ final class AnsiSplines {
         double minorMax = (n - minorFactor(s, p)) / p + es / tan;
         double classSeven = total(g, n, 3);
         double cf = Math.min(0.010, Math.max(0.002, 0.001 * d));
-        double form = (n - formFactor(s.pressureAngleDeg())) / p - 2 * cf;
+        double form = Math.max((n - formFactor(s.pressureAngleDeg())) / p - 2 * cf, hobFormDiameter(s, p));
         int c = Math.max(0, Math.min(3, s.toleranceClass() - 4));
         double total = s.totalToleranceMm().isPresent() ? s.totalToleranceMm().getAsDouble() / IN : total(g, n, c);
         double lambda = s.effectiveVariationMm().isPresent() ? s.effectiveVariationMm().getAsDouble() / IN
@@ -84,7 +85,7 @@ final class AnsiSplines {
     }
 
     /** D_re = (N − b)/P: 1.35 (30° flat), 1.8 (30° fillet, up to 12/24) or 2.0 (16/32 and finer), 1.3, 1.0. */
-    static double minorFactor(SplineSpec s, double p) {
+    static double minorFactor(SplineDrawing s, double p) {
         double a = s.pressureAngleDeg();
         if (a == 30) {
             return s.root() == SplineRoot.FLAT ? 1.35 : p < 16 ? 1.8 : 2.0;
@@ -95,6 +96,22 @@ final class AnsiSplines {
     /** D_Fe = (N − b)/P − 2 c_F: 1 (30°), 0.8 (37.5°), 0.6 (45°). */
     static double formFactor(double alphaDeg) {
         return alphaDeg == 30 ? 1.0 : alphaDeg == 37.5 ? 0.8 : 0.6;
+    }
+
+    /**
+     * The smallest form diameter a standard 30° hob generates, in: the standard takes the larger of this and
+     * the tabled D_Fe (which matters for few teeth). Written as the standard does,
+     * √(3 N² + (N − 0.016 P − 4.5)²) / (2P) for the flat root and √(3 N² + (N − 5.359)²) / (2P) for the fillet
+     * root; that is 2 √(r_b² + L²) with L = r sin 30° − h/sin 30°, h = 0.5625/P + 0.002 in (flat) or
+     * 0.6699/P (fillet) the straight flank of the standard hob. 0 for 37.5° and 45°.
+     */
+    static double hobFormDiameter(SplineDrawing s, double p) {
+        if (s.pressureAngleDeg() != 30) {
+            return 0;
+        }
+        int n = s.teeth();
+        double k = s.root() == SplineRoot.FLAT ? n - 0.016 * p - 4.5 : n - 5.359;
+        return Math.sqrt(3.0 * n * n + k * k) / (2 * p);
     }
 
     /** T + λ of class 4 … 7 (index 0 … 3) for a pitch group, in: the class factor times the class 5 table values. */

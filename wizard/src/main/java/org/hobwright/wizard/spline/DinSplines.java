@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.check.Wording;
 
 /**
  * The limits of an external spline by DIN 5480-1:2006 (reference diameter d_B, 30°, profile shift
@@ -22,17 +23,17 @@ final class DinSplines {
     }
 
     /** The profile shift x m = (d_B − m z − 1.1 m) / 2, mm. */
-    static double shiftMm(SplineSpec s) {
+    static double shiftMm(SplineDrawing s) {
         return (s.referenceDiameterMm() - s.pitchDiameterMm() - 1.1 * s.moduleMm()) / 2;
     }
 
-    static Optional<SplineLimits> limits(SplineSpec s, List<Finding> findings) {
+    static Optional<SplineLimits> limits(SplineDrawing s, Wording words, List<Finding> findings) {
         double m = s.moduleMm();
         double dB = s.referenceDiameterMm();
         double x = shiftMm(s) / m;
         if (!Double.isFinite(dB) || x < -0.05 - 1e-9 || x > 0.45 + 1e-9) {
             findings.add(SplineCode.SPLINE_REFERENCE_DIAMETER.at("spline.referenceDiameter", Double.isFinite(dB)
-                    ? "reference diameter " + dB + " mm gives x = " + x + " for " + s.teeth() + " teeth of module " + m
+                    ? "reference diameter " + words.length(dB) + " gives x = " + words.number(x) + " for " + s.teeth() + " teeth of module " + words.number(m) + " mm"
                     : "a DIN 5480 spline needs its reference diameter", "give d_B as on the drawing (the first number"
                     + " of W d_B × m × z)"));
             return Optional.empty();
@@ -45,8 +46,8 @@ final class DinSplines {
         double majorMax = dB - 0.2 * m;
         OptionalDouble it = IsoFits.tolerance(11, majorMax);
         if (it.isEmpty()) {
-            findings.add(SplineCode.SPLINE_SIZE.at("spline.referenceDiameter", "reference diameter " + dB
-                    + " mm is beyond the ISO 286 tables (up to 500 mm)", "check the reference diameter"));
+            findings.add(SplineCode.SPLINE_SIZE.at("spline.referenceDiameter", "reference diameter " + words.length(dB)
+                    + " is beyond the ISO 286 tables (up to 500 mm)", "check the reference diameter"));
             return Optional.empty();
         }
         double minorMax = dB - 2.2 * m + es / tan;

@@ -2,6 +2,7 @@ package org.hobwright.wizard.spline;
 
 import java.util.List;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.check.Wording;
 import org.hobwright.api.cycle.Point;
 import org.hobwright.wizard.simulate.GeneratingSetup;
 import org.hobwright.wizard.simulate.GeneratingSimulation;
@@ -28,7 +29,7 @@ public record FormCheck(boolean formReached, double involuteStartDiameterMm, dou
 
     /** The generating setup that cuts tooth thickness S with the hob, cuts phased on the space centre. */
     static GeneratingSetup setup(SplineLimits limits, SplineHob hob, double thicknessMm, double resolutionMm) {
-        SplineSpec s = limits.spec();
+        SplineDrawing s = limits.spec();
         return new GeneratingSetup(s.teeth(), s.moduleMm(), s.pressureAngleRad(), 0, limits.shiftFor(thicknessMm),
                 hob.addendumMm(), hob.tipRadiusMm(), limits.majorDiameterMaxMm(), hob.starts(), hob.gashes(), 0,
                 resolutionMm);
@@ -40,9 +41,11 @@ public record FormCheck(boolean formReached, double involuteStartDiameterMm, dou
      * @param limits       the spline
      * @param hob          the hob
      * @param resolutionMm spacing of the simulated profile points, mm
+     * @param words        numbers in the job's units for the messages
      * @param findings     receives the findings
      */
-    public static FormCheck run(SplineLimits limits, SplineHob hob, double resolutionMm, List<Finding> findings) {
+    public static FormCheck run(SplineLimits limits, SplineHob hob, double resolutionMm, Wording words,
+                                List<Finding> findings) {
         ToothSpaceSimulation high = GeneratingSimulation.run(setup(limits, hob, limits.toothThicknessMaxMm(), resolutionMm));
         ToothSpaceSimulation low = GeneratingSimulation.run(setup(limits, hob, limits.toothThicknessMinMm(), resolutionMm));
         ToothSpaceSimulation middle = GeneratingSimulation.run(setup(limits, hob,
@@ -54,20 +57,21 @@ public record FormCheck(boolean formReached, double involuteStartDiameterMm, dou
         String field = "hob.addendum";
         if (!reached) {
             findings.add(SplineCode.SPLINE_FORM_NOT_REACHED.at("hob.tipRadius", "the involute begins at "
-                    + start + " mm, above the form diameter D_Fe " + limits.formDiameterMm() + " mm: the fillet of the"
+                    + words.length(start) + ", above the form diameter D_Fe " + words.length(limits.formDiameterMm())
+                    + ": the fillet of the"
                     + " hob tip reaches too high", "use a hob with a smaller tip radius or a longer straight flank"));
         }
         if (check.rootDiameterMinMm < limits.minorDiameterMinMm() - 1e-6) {
             findings.add(SplineCode.SPLINE_ROOT_BELOW_MINOR.at(field, "at the smallest tooth thickness the hob cuts"
-                    + " the root to " + check.rootDiameterMinMm + " mm, below D_ie min " + limits.minorDiameterMinMm()
-                    + " mm", "use a hob with a shorter addendum (the standard's is " + limits.standardHobAddendumMm()
-                    + " mm)"));
+                    + " the root to " + words.length(check.rootDiameterMinMm) + ", below D_ie min "
+                    + words.length(limits.minorDiameterMinMm()), "use a hob with a shorter addendum (the standard's is "
+                    + words.length(limits.standardHobAddendumMm()) + ")"));
         }
         if (check.rootDiameterMaxMm > limits.minorDiameterMaxMm() + 1e-6) {
             findings.add(SplineCode.SPLINE_ROOT_ABOVE_MINOR.at(field, "at the largest tooth thickness the hob"
-                    + " leaves the root at " + check.rootDiameterMaxMm + " mm, above D_ie max "
-                    + limits.minorDiameterMaxMm() + " mm", "use a hob with a longer addendum (the standard's is "
-                    + limits.standardHobAddendumMm() + " mm)"));
+                    + " leaves the root at " + words.length(check.rootDiameterMaxMm) + ", above D_ie max "
+                    + words.length(limits.minorDiameterMaxMm()), "use a hob with a longer addendum (the standard's is "
+                    + words.length(limits.standardHobAddendumMm()) + ")"));
         }
         return check;
     }

@@ -1,5 +1,6 @@
 package org.hobwright.wizard.spline;
 
+import java.util.List;
 import java.util.OptionalDouble;
 
 /**
@@ -20,7 +21,7 @@ public final class IsoFits {
     private static final int[] DEV_F = {-6, -10, -13, -16, -20, -25, -30, -36, -43, -50, -56, -62, -68};
 
     /** The fit classes (shaft deviations) these tables hold. */
-    public static final String FITS = "h, f, e, d";
+    public static final List<String> FIT_CLASSES = List.of("h", "f", "e", "d");
 
     private IsoFits() {
     }

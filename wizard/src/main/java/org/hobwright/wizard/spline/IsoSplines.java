@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.check.Wording;
 
 /**
  * The limits of an external spline by ISO 4156-1:2005 (metric module, side fit). Formulas from memory,
@@ -23,7 +24,7 @@ final class IsoSplines {
     private IsoSplines() {
     }
 
-    static Optional<SplineLimits> limits(SplineSpec s, List<Finding> findings) {
+    static Optional<SplineLimits> limits(SplineDrawing s, Wording words, List<Finding> findings) {
         double m = s.moduleMm();
         int z = s.teeth();
         double alpha = s.pressureAngleRad();
@@ -34,7 +35,7 @@ final class IsoSplines {
         double majorMax = m * (z + majorFactor) + es.orElse(0) / tan;
         OptionalDouble it = IsoFits.tolerance(m <= 0.75 ? 10 : m < 2 ? 11 : 12, majorMax);
         if (es.isEmpty() || it.isEmpty() || d > 500) {
-            findings.add(SplineCode.SPLINE_SIZE.at("spline.teeth", "pitch diameter " + d + " mm is beyond the"
+            findings.add(SplineCode.SPLINE_SIZE.at("spline.teeth", "pitch diameter " + words.length(d) + " is beyond the"
                     + " ISO 286 tables (up to 500 mm)", "give spline.allowance, or check module and teeth"));
             return Optional.empty();
         }
@@ -57,7 +58,7 @@ final class IsoSplines {
     }
 
     /** Minor diameter factor: D_ie max = m (z − b) + es/tan α_D; b = 1.5 (30° flat), 1.8 (30° fillet), 1.4, 1.2. */
-    static double minorFactor(SplineSpec s) {
+    static double minorFactor(SplineDrawing s) {
         double a = s.pressureAngleDeg();
         if (a == 30) {
             return s.root() == SplineRoot.FLAT ? 1.5 : 1.8;
@@ -71,7 +72,7 @@ final class IsoSplines {
     }
 
     /** ρ_Fe min / m: 0.2 (30° flat), 0.4 (30° fillet), 0.3 (37.5°), 0.25 (45°). */
-    static double rootRadiusFactor(SplineSpec s) {
+    static double rootRadiusFactor(SplineDrawing s) {
         double a = s.pressureAngleDeg();
         if (a == 30) {
             return s.root() == SplineRoot.FLAT ? 0.2 : 0.4;
@@ -101,7 +102,7 @@ final class IsoSplines {
         return 0.6 * Math.sqrt(fp * fp + ff * ff + fb * fb) / 1000;
     }
 
-    private static SplineTolerance tolerance(SplineSpec s, double es) {
+    private static SplineTolerance tolerance(SplineDrawing s, double es) {
         int c = Math.max(0, Math.min(3, s.toleranceClass() - 4));
         double total = s.totalToleranceMm().orElse(total(c, s.pitchDiameterMm(), s.moduleMm()));
         double lambda = s.effectiveVariationMm().orElse(effectiveVariation(c, s.moduleMm(), s.teeth(), s.lengthMm()));

@@ -41,7 +41,17 @@ public enum SplineCode implements FindingCode {
     SPLINE_ROOT_BELOW_MINOR(Severity.ERROR, "the hob cuts below the minimum minor diameter",
             "generating simulation (FORMULAS.md, splines: form check)"),
     SPLINE_ROOT_ABOVE_MINOR(Severity.WARNING, "the hob leaves the root above the maximum minor diameter",
-            "generating simulation (FORMULAS.md, splines: form check)");
+            "generating simulation (FORMULAS.md, splines: form check)"),
+    SPLINE_STANDARD(Severity.ERROR, "the spline standard or root form is not one Hobwright knows",
+            "Hobwright spline standards: iso4156, ansi-b92.1, din5480; roots flat, fillet"),
+    SPLINE_HOB_NOT_SPLINE(Severity.ERROR, "a spline job needs a spline hob (its root form and tip radius)",
+            "the hob tip forms the spline root"),
+    SPLINE_HELIX(Severity.ERROR, "splines are straight: the helix angle must be 0",
+            "ISO 4156-1:2005, ANSI B92.1-1996, DIN 5480-1:2006 cover straight splines (from memory)"),
+    SPLINE_BLANK_BELOW_MAJOR(Severity.ERROR, "blank below the minimum major diameter: the teeth would be too short",
+            "D_ee min of the standard"),
+    SPLINE_BLANK_ABOVE_MAJOR(Severity.WARNING, "blank above the maximum major diameter: turn it to size before hobbing",
+            "D_ee max of the standard");
 
     private final Severity severity;
     private final String meaning;

@@ -8,7 +8,7 @@ final class SplineInputs {
     private SplineInputs() {
     }
 
-    static void check(SplineSpec s, List<Finding> findings) {
+    static void check(SplineDrawing s, List<Finding> findings) {
         SplineStandard std = s.standard();
         double a = s.pressureAngleDeg();
         boolean din = std == SplineStandard.DIN_5480;
@@ -41,8 +41,9 @@ final class SplineInputs {
                     + " has tolerance classes 4 to 7, not " + s.toleranceClass(), "use the class on the drawing, 4 to 7"));
         }
         if (s.allowanceMm().isEmpty()) {
-            String fits = std == SplineStandard.ISO_4156 ? IsoFits.FITS : "h";
-            if (!List.of(fits.split(", ")).contains(s.fitClass())) {
+            List<String> classes = std == SplineStandard.ISO_4156 ? IsoFits.FIT_CLASSES : List.of("h");
+            String fits = String.join(", ", classes);
+            if (!classes.contains(s.fitClass())) {
                 findings.add(SplineCode.SPLINE_FIT_CLASS.at("spline.fitClass", "fit class \"" + s.fitClass()
                         + "\" is not one of " + fits, "use one of " + fits + ", or give the allowance es in"
                         + " spline.allowance"));

@@ -3,6 +3,7 @@ package org.hobwright.wizard.spline;
 import java.util.List;
 import java.util.Optional;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.check.Wording;
 
 /**
  * The limits of an external involute spline as its standard gives them, in mm. Symbols are the
@@ -25,7 +26,7 @@ import org.hobwright.api.check.Finding;
  * @param recommendedPinMm      the pin the standard recommends (or Hobwright's rule, see pinRule)
  * @param pinRule               how the recommended pin was found
  */
-public record SplineLimits(SplineSpec spec, double pitchDiameterMm, double baseDiameterMm, double circularPitchMm,
+public record SplineLimits(SplineDrawing spec, double pitchDiameterMm, double baseDiameterMm, double circularPitchMm,
                            double basicToothThicknessMm, double majorDiameterMaxMm, double majorDiameterMinMm,
                            double minorDiameterMaxMm, double minorDiameterMinMm, double formDiameterMm,
                            double formClearanceMm, double minimumRootRadiusMm, SplineTolerance tolerance,
@@ -35,22 +36,23 @@ public record SplineLimits(SplineSpec spec, double pitchDiameterMm, double baseD
      * The limits of a spline by its standard; problems with the inputs become findings and no limits.
      *
      * @param spec     the spline
+     * @param words    numbers in the job's units for the messages
      * @param findings receives the findings
      */
-    public static Optional<SplineLimits> of(SplineSpec spec, List<Finding> findings) {
+    public static Optional<SplineLimits> of(SplineDrawing spec, Wording words, List<Finding> findings) {
         int before = findings.size();
         SplineInputs.check(spec, findings);
         if (Finding.anyError(findings.subList(before, findings.size()))) {
             return Optional.empty();
         }
         Optional<SplineLimits> limits = switch (spec.standard()) {
-            case ISO_4156 -> IsoSplines.limits(spec, findings);
-            case ANSI_B92_1 -> AnsiSplines.limits(spec, findings);
-            case DIN_5480 -> DinSplines.limits(spec, findings);
+            case ISO_4156 -> IsoSplines.limits(spec, words, findings);
+            case ANSI_B92_1 -> AnsiSplines.limits(spec, words, findings);
+            case DIN_5480 -> DinSplines.limits(spec, words, findings);
         };
         if (limits.isPresent() && !(limits.get().toothThicknessMinMm() > 0)) {
             findings.add(SplineCode.SPLINE_TOOTH_TOO_THIN.at("spline.toleranceClass", "the minimum actual tooth"
-                    + " thickness S_min would be " + limits.get().toothThicknessMinMm() + " mm",
+                    + " thickness S_min would be " + words.length(limits.get().toothThicknessMinMm()),
                     "check the module, the fit class and the tolerances"));
             return Optional.empty();
         }

@@ -3,6 +3,7 @@ package org.hobwright.wizard.spline;
 import java.util.List;
 import java.util.OptionalDouble;
 import org.hobwright.api.check.Finding;
+import org.hobwright.wizard.check.Wording;
 import org.hobwright.wizard.geometry.InvoluteGear;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.hobwright.wizard.inspection.OverPins;
@@ -48,7 +49,7 @@ public record SplinePins(double pinMm, String origin, OverPins atMax, OverPins a
      * @param thicknessMm   actual circular tooth thickness S at D, mm
      */
     public static OverPins measure(SplineLimits limits, double pinMm, double thicknessMm) {
-        SplineSpec s = limits.spec();
+        SplineDrawing s = limits.spec();
         ToothSystem rack = new ToothSystem("spline", 1, 1, 0, 0, s.pressureAngleDeg(), "spline: only the flank is used");
         InvoluteGear g = new InvoluteGear(s.teeth(), s.moduleMm(), s.pressureAngleRad(), 0,
                 limits.shiftFor(thicknessMm), 0, rack);
@@ -97,12 +98,13 @@ public record SplinePins(double pinMm, String origin, OverPins atMax, OverPins a
      * @param limits   the spline
      * @param jobPinMm the pin the job gives
      * @param shopPins the shop's pin diameters, mm (empty: any size)
+     * @param words    numbers in the job's units for the messages
      * @param findings receives the findings
      */
     public static SplinePins choose(SplineLimits limits, OptionalDouble jobPinMm, List<Double> shopPins,
-                                    List<Finding> findings) {
+                                    Wording words, List<Finding> findings) {
         if (jobPinMm.isPresent()) {
-            return checked(limits, jobPinMm.getAsDouble(), "the job's pin", findings);
+            return checked(limits, jobPinMm.getAsDouble(), "the job's pin", words, findings);
         }
         double pin = limits.recommendedPinMm();
         String origin = limits.pinRule();
@@ -121,13 +123,13 @@ public record SplinePins(double pinMm, String origin, OverPins atMax, OverPins a
                 }
             }
             if (Double.isFinite(best) && best != pin) {
-                findings.add(SplineCode.SPLINE_PIN_FROM_SHOP_SET.at("spline.pinDiameter", "pin " + best
-                        + " mm from the shop's pins instead of " + pin + " mm (" + origin + ").",
+                findings.add(SplineCode.SPLINE_PIN_FROM_SHOP_SET.at("spline.pinDiameter", "pin " + words.length(best)
+                        + " from the shop's pins instead of " + words.length(pin) + " (" + origin + ").",
                         "Give spline.pinDiameter to use another pin."));
-                return checked(limits, best, "the shop's pin nearest to " + pin + " mm", findings);
+                return checked(limits, best, "the shop's pin nearest to " + words.length(pin), words, findings);
             }
         }
-        return checked(limits, pin, origin, findings);
+        return checked(limits, pin, origin, words, findings);
     }
 
     private static boolean fits(SplineLimits limits, double pin) {
@@ -136,12 +138,13 @@ public record SplinePins(double pinMm, String origin, OverPins atMax, OverPins a
                 && measure(limits, pin, limits.toothThicknessMinMm()).fits(limits.formDiameterMm(), top);
     }
 
-    private static SplinePins checked(SplineLimits limits, double pin, String origin, List<Finding> findings) {
+    private static SplinePins checked(SplineLimits limits, double pin, String origin, Wording words,
+                                      List<Finding> findings) {
         if (!fits(limits, pin)) {
-            findings.add(SplineCode.SPLINE_PIN_CONTACT.at("spline.pinDiameter", "a " + pin + " mm pin does not"
-                    + " touch the flank between the form diameter " + limits.formDiameterMm() + " mm and the major"
-                    + " diameter " + limits.majorDiameterMaxMm() + " mm, or does not stand above the teeth",
-                    "use a pin near " + limits.recommendedPinMm() + " mm"));
+            findings.add(SplineCode.SPLINE_PIN_CONTACT.at("spline.pinDiameter", "a " + words.length(pin) + " pin does not"
+                    + " touch the flank between the form diameter " + words.length(limits.formDiameterMm())
+                    + " and the major diameter " + words.length(limits.majorDiameterMaxMm()) + ", or does not stand"
+                    + " above the teeth", "use a pin near " + words.length(limits.recommendedPinMm())));
         }
         return new SplinePins(pin, origin, measure(limits, pin, limits.toothThicknessMaxMm()),
                 measure(limits, pin, limits.toothThicknessMinMm()));

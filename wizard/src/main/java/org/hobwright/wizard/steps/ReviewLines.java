@@ -11,6 +11,7 @@ import org.hobwright.api.cycle.ToleranceData;
 import org.hobwright.api.job.UnitKind;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.Decimal;
+import org.hobwright.wizard.check.Wording;
 
 /**
  * The lines of the REVIEW step and of the terminal's run summary: setup, inspection, cycle time
@@ -44,13 +45,14 @@ public final class ReviewLines {
                 + " (" + s.swivelAngleDms() + ")");
         lines.add("  swivel setting " + s.swivelSettingText() + ", " + s.swivelDirection());
         lines.add("  hob " + num(s.hobRpm(), 0) + " rpm, work " + num(s.workRpm(), 1) + " rpm, sync ratio "
-                + s.syncHobTurns() + " hob : " + s.syncWorkTurns() + " work turns, cutting speed "
+                + Wording.count(s.syncHobTurns(), "hob turn", "hob turns") + " : "
+                + Wording.count(s.syncWorkTurns(), "work turn", "work turns") + ", cutting speed "
                 + speed(s.cuttingSpeedMPerMin()));
     }
 
     private void inspection(InspectionData i) {
         lines.add("Inspection");
-        lines.add("  span over " + i.spanTeeth() + " teeth " + len(i.spanWidthMm()) + ", over two "
+        lines.add("  span over " + Wording.teeth(i.spanTeeth()) + " " + len(i.spanWidthMm()) + ", over two "
                 + (i.balls() ? "balls" : "pins") + " of " + len(i.pinDiameterMm()) + ": " + len(i.overPinsMm()));
         i.limits().ifPresent(l -> lines.add("  limits (" + l.basis() + "): span " + len(l.spanWidthLowerMm()) + " to "
                 + len(l.spanWidthUpperMm()) + ", over " + (i.balls() ? "balls " : "pins ") + len(l.overPinsLowerMm())
@@ -73,8 +75,22 @@ public final class ReviewLines {
         lines.add("  feed marks " + num(c.feedMarkFlankUm(), 2) + " µm on the flank, " + num(c.feedMarkRootUm(), 2)
                 + " µm in the root; enveloping cuts " + num(c.envelopingDepthUm(), 2)
                 + " µm; largest chip " + len(c.maxChipThicknessMm()));
-        c.fastest().ifPresent(f -> lines.add("  fastest proposal: " + num(f.cycleTimeS(), 1) + " s ("
-                + f.passes() + " passes, hob " + num(f.hobRpm(), 0) + " rpm; limited by " + f.bindingLimit() + ")"));
+        c.fastest().ifPresent(f -> lines.add("  fastest proposal: " + num(f.cycleTimeS(), 1) + " s in "
+                + Wording.count(f.passes(), "pass", "passes") + ", hob " + num(f.hobRpm(), 0) + " rpm; limited by "
+                + f.bindingLimit() + "; to use it, give the job cycle.cuttingSpeed "
+                + down(units.cuttingSpeedFromMPerMin(f.cuttingSpeedMPerMin()), 1) + ", cycle.roughFeed "
+                + down(units.fromMm(f.roughFeedMmPerRev()), feedDecimals()) + " and cycle.finishFeed "
+                + down(units.fromMm(f.finishFeedMmPerRev()), feedDecimals())));
+    }
+
+    /** A proposed value rounded down, so that it stays within the limit that bound it. */
+    private static String down(double v, int decimals) {
+        String text = Decimal.fixed(v, decimals, false, Decimal.Rounding.FLOOR);
+        return text.endsWith(".") ? text.substring(0, text.length() - 1) : text;
+    }
+
+    private int feedDecimals() {
+        return units == Units.IN ? 4 : 3;
     }
 
     private void tolerances(ToleranceData t) {

@@ -57,10 +57,10 @@ public final class StepFields {
     }
 
     /**
-     * True when a field applies to the answers so far: the custom rack factors only for the custom
-     * tooth system, the tooth-thickness allowances only without a thickness series, the mating gear's
-     * other values only with its tooth count. A field that does not apply is not asked, not checked and
-     * left out of the job.
+     * True when a field applies to the answers so far: the gear's questions for a gear, the spline's
+     * and the spline hob's for a spline, the custom rack factors only for the custom tooth system, the
+     * tooth-thickness allowances only without a thickness series, the mating gear's other values only
+     * with its tooth count. A field that does not apply is not asked, not checked and left out of the job.
      */
     public static boolean applies(String key, Answers answers) {
         return applies(key, answers::get);
@@ -74,6 +74,9 @@ public final class StepFields {
      * @return true when the field applies
      */
     public static boolean applies(String key, Function<String, String> answer) {
+        if (!ofThePart(key, answer)) {
+            return false;
+        }
         if (key.startsWith("gear.custom.")) {
             return "custom".equals(answer.apply(JobFields.GEAR_TOOTH_SYSTEM.key()));
         }
@@ -87,9 +90,29 @@ public final class StepFields {
         return true;
     }
 
+    /**
+     * True when a field belongs to the part kind answered ({@link JobFields#PART}): a gear job has no
+     * spline questions, a spline job none of the gear's. A step shows only these fields.
+     *
+     * @param key    the field's key
+     * @param answer the answer text of a key, empty when not answered
+     * @return true when the field belongs to the part kind
+     */
+    public static boolean ofThePart(String key, Function<String, String> answer) {
+        boolean spline = JobFields.PARTS.get(1).equals(answer.apply(JobFields.PART.key()));
+        return key.startsWith("gear.") ? !spline : !splineOnly(key) || spline;
+    }
+
+    /** True for the keys only a spline job has: the spline's and the spline hob's. */
+    public static boolean splineOnly(String key) {
+        return key.startsWith("spline.") || key.equals(JobFields.HOB_ROOT.key())
+                || key.equals(JobFields.HOB_TIP_RADIUS.key()) || key.equals(JobFields.HOB_ADDENDUM.key());
+    }
+
     /** The step a job-file path (or a finding's field) belongs to; REVIEW for whole-job fields. */
     public static StepId stepOf(String path) {
-        if (path.equals("name") || path.equals(UNITS) || path.startsWith("gear")) {
+        if (path.equals("name") || path.equals(UNITS) || path.equals(JobFields.PART.key()) || path.startsWith("gear")
+                || path.startsWith("spline")) {
             return StepId.GEAR;
         }
         if (path.startsWith("hob")) {

@@ -11,6 +11,7 @@ import org.hobwright.api.cycle.HobCycle;
 import org.hobwright.api.job.FieldDef;
 import org.hobwright.api.job.FieldRange;
 import org.hobwright.api.job.HobJob;
+import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.Units;
 import org.hobwright.api.wizard.FieldSpec;
 import org.hobwright.api.wizard.FieldType;
@@ -32,13 +33,16 @@ import org.hobwright.api.wizard.Wizard;
 public final class StepSession implements Wizard {
     private static final StepId[] ORDER = StepId.values();
     /**
-     * The hob's pitch and pressure angle follow the gear's while they are equal to it, so a gear
-     * answered with a new module gets a matching hob proposed (a hob must match the gear's normal
-     * module and pressure angle).
+     * The hob's pitch and pressure angle follow the gear's (or the spline's) while they are equal to
+     * it or still the table's default, so a part answered with a new module gets a matching hob
+     * proposed (a hob must match the part's normal module and pressure angle; a spline hob also its
+     * root form).
      */
     private static final java.util.Map<String, String> HOB_FOLLOWS = java.util.Map.of(
             "gear.module", "hob.module", "gear.diametralPitch", "hob.diametralPitch",
-            "gear.pressureAngle", "hob.pressureAngle", "gear.hand", "hob.hand");
+            "gear.pressureAngle", "hob.pressureAngle", "gear.hand", "hob.hand",
+            "spline.module", "hob.module", "spline.diametralPitch", "hob.diametralPitch",
+            "spline.pressureAngle", "hob.pressureAngle", "spline.root", "hob.root");
 
     private final StepServices services;
     private final Answers answers;
@@ -78,7 +82,8 @@ public final class StepSession implements Wizard {
             List<String> summary = cycle.map(c -> ReviewLines.of(c, units())).orElse(List.of());
             return new StepView(id, StepFields.title(id), List.of(), review, summary);
         }
-        List<FieldSpec> specs = StepFields.of(id).stream().map(this::spec).toList();
+        List<FieldSpec> specs = StepFields.of(id).stream().filter(f -> StepFields.ofThePart(f.key(), answers::get))
+                .map(this::spec).toList();
         return new StepView(id, StepFields.title(id), specs, shown, List.of());
     }
 
@@ -98,11 +103,14 @@ public final class StepSession implements Wizard {
             value = FieldCheck.yesNo(value).orElseThrow() ? "yes" : "no";
         }
         String hobKey = HOB_FOLLOWS.get(key);
-        if (hobKey != null && answers.get(hobKey).equals(answers.get(key))) {
-            answers.put(hobKey, value);
+        if (hobKey != null && follows(hobKey, key)) {
+            answers.put(hobKey, hobValue(key, value));
         }
         Units before = units();
         answers.put(key, value);
+        if (key.equals(JobFields.PART.key())) {
+            hobFollowsThePart(value);
+        }
         unitSwitch.typed(field.get(), value, before);
         proposals.followPitch(answers);
         if (key.equals(StepFields.MACHINE) && !services.templates(value).contains(answers.get(StepFields.TEMPLATE))) {
@@ -116,6 +124,31 @@ public final class StepSession implements Wizard {
             return unitSwitch.switchUnits(answers, before, units()).map(List::of).orElse(List.of());
         }
         return List.of();
+    }
+
+    /**
+     * A part kind answered: the hob takes the part's answers where it still follows (a spline's 30°
+     * pressure angle and its root form for a hob proposed for a 20° gear).
+     */
+    private void hobFollowsThePart(String part) {
+        HOB_FOLLOWS.forEach((partKey, hobKey) -> {
+            if (partKey.startsWith(part + ".") && !answers.get(partKey).isEmpty() && follows(hobKey, partKey)) {
+                answers.put(hobKey, hobValue(partKey, answers.get(partKey)));
+            }
+        });
+    }
+
+    /** True while the hob's answer is the part's, or empty, or the table's default: it may be proposed anew. */
+    private boolean follows(String hobKey, String partKey) {
+        String hob = answers.get(hobKey);
+        return hob.isEmpty() || hob.equals(hobValue(partKey, answers.get(partKey)))
+                || StepFields.find(hobKey).map(f -> hob.equals(f.dflt().value(units()))).orElse(false);
+    }
+
+    /** The hob's value for a part's answer: a spline's diametral pitch "16/32" is the hob's 16. */
+    private static String hobValue(String partKey, String value) {
+        int slash = value.indexOf('/');
+        return partKey.equals("spline.diametralPitch") && slash > 0 ? value.substring(0, slash).strip() : value;
     }
 
     @Override

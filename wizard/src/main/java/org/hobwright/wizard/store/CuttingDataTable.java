@@ -1,6 +1,7 @@
 package org.hobwright.wizard.store;
 
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 
@@ -37,6 +38,13 @@ public record CuttingDataTable(Map<String, CuttingData> rows, QualityDefaults qu
     public Optional<CuttingData> find(String workMaterial, String hobMaterial, double moduleMm) {
         return find(workMaterial, hobMaterial).map(r -> moduleMm < fineModuleBelow ? r.withFeeds(
                 fineRoughFeed, fineFinishFeed) : r);
+    }
+
+    /** The hob materials that have a row for this work material, sorted; empty when it has none. */
+    public List<String> hobMaterialsFor(String workMaterial) {
+        String prefix = key(workMaterial, "");
+        return rows.keySet().stream().filter(k -> k.startsWith(prefix)).map(k -> k.substring(prefix.length()))
+                .sorted().toList();
     }
 
     /** This table with the rows of {@code user} replacing or adding rows, and the user's defaults winning. */

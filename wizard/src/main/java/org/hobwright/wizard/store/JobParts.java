@@ -14,6 +14,7 @@ import org.hobwright.api.job.HobSpec;
 import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.MatingGear;
 import org.hobwright.api.job.Pitch;
+import org.hobwright.api.job.SplineHobProfile;
 import org.hobwright.api.job.ToothProportions;
 import org.hobwright.wizard.geometry.ToothSystem;
 import org.hobwright.wizard.tolerance.ThicknessSeries;
@@ -212,11 +213,12 @@ final class JobParts {
         Optional<CuttingSense> sense = f.text(JobFields.HOB_CUTTING_SENSE)
                 .map(w -> w.equals(CuttingSense.CLOCKWISE.word()) ? CuttingSense.CLOCKWISE : CuttingSense.COUNTER_CLOCKWISE);
         Optional<String> identifier = f.text(JobFields.HOB_IDENTIFIER);
+        Optional<SplineHobProfile> profile = SplineParts.hobProfile(f);
         if (errors(out) > before) {
             return Optional.empty();
         }
         return Optional.of(new HobSpec(pitch.orElseThrow(), alpha, starts, Hand.fromWord(hand.orElseThrow()), outside,
-                lead, reference, gashes, length, maxRpm, material.orElseThrow(), sense, identifier));
+                lead, reference, gashes, length, maxRpm, material.orElseThrow(), sense, identifier, profile));
     }
 
     static int errors(List<Finding> out) {

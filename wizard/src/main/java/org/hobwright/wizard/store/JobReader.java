@@ -110,14 +110,25 @@ public final class JobReader {
                 return Loaded.unreadable(out);
             }
             String name = root.text(JobFields.NAME).orElse("job");
-            if (!root.has("gear")) {
-                root.missing("gear", "describe the gear: teeth, module or diametralPitch, pressureAngle, ...");
+            boolean spline = root.word(JobFields.PART).orElse("gear").equals("spline");
+            String partKey = spline ? "spline" : "gear";
+            if (!root.has(partKey)) {
+                root.missing(partKey, spline ? "describe the spline: standard, teeth, module or diametralPitch,"
+                        + " pressureAngle, root, toleranceClass, ..." : "describe the gear: teeth, module or"
+                        + " diametralPitch, pressureAngle, ...");
+            }
+            String other = spline ? "gear" : "spline";
+            if (root.has(other)) {
+                root.problem(InputCode.INPUT_CONFLICT, other, "a " + partKey + " job has no " + other + " object",
+                        spline ? "describe the part in \"spline\" only" : "set \"part\": \"spline\" for a spline job");
             }
             if (!root.has("hob")) {
                 root.missing("hob", "describe the hob: module or diametralPitch, starts, hand, outsideDiameter, ...");
             }
-            Optional<GearSpec> gear = root.has("gear") ? JobParts.gear(root.child("gear"), name, out)
-                    : Optional.empty();
+            Optional<SplineParts.Read> splineRead = spline && root.has("spline")
+                    ? SplineParts.spline(root.child("spline"), name, out) : Optional.empty();
+            Optional<GearSpec> gear = spline ? splineRead.map(SplineParts.Read::frame)
+                    : root.has("gear") ? JobParts.gear(root.child("gear"), name, out) : Optional.empty();
             Optional<HobSpec> hob = root.has("hob") ? JobParts.hob(root.child("hob"), out) : Optional.empty();
             CycleReader.Values cycle = CycleReader.read(cycleFields, true);
             if (Finding.anyError(out) || gear.isEmpty() || hob.isEmpty() || machine.isEmpty()) {
@@ -126,7 +137,7 @@ public final class JobReader {
             try {
                 CycleSettings settings = cycle.settings();
                 return Loaded.of(new HobJob(name, units.get(), gear.get(), hob.get(), machine.get().profile(),
-                        settings), out);
+                        settings, splineRead.map(SplineParts.Read::spline)), out);
             } catch (IllegalArgumentException | NullPointerException | java.util.NoSuchElementException e) {
                 out.add(InputCode.INPUT_VALUE.at("job", doc.source() + ": " + e.getMessage(), null));
                 return Loaded.failed(out);

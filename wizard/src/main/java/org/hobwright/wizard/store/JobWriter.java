@@ -16,6 +16,7 @@ import org.hobwright.api.job.MachineTimes;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
 import org.hobwright.api.job.RunSettings;
+import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.SwivelHolder;
 import org.hobwright.api.job.Units;
 import org.hobwright.text.JsonTrees;
@@ -48,7 +49,12 @@ public final class JobWriter {
         ObjectNode root = header(FileFormat.JOB);
         root.put("name", job.name());
         root.put("units", units.symbol());
-        root.set("gear", gearTree(job.gear(), units));
+        if (job.spline().isPresent()) {
+            root.put(JobFields.PART.leaf(), "spline");
+            root.set("spline", splineTree(job.gear(), job.spline().get(), units));
+        } else {
+            root.set("gear", gearTree(job.gear(), units));
+        }
         root.set("hob", hobTree(job.hob(), units));
         if (machineByName) {
             root.put("machine", job.machine().name());
@@ -174,6 +180,37 @@ public final class JobWriter {
         return n;
     }
 
+    /** A spline job's {@code spline} object: its gear frame's keys and what makes it a spline. */
+    private static ObjectNode splineTree(GearSpec g, SplineSpec s, Units units) {
+        ObjectNode n = NODES.objectNode();
+        n.put(JobFields.SPLINE_PART_NAME.leaf(), g.partName());
+        n.put(JobFields.SPLINE_STANDARD.leaf(), s.standard());
+        n.put(JobFields.SPLINE_TEETH.leaf(), g.teeth());
+        if (g.pitch() instanceof Pitch.Diametral d) {
+            n.put(JobFields.SPLINE_DIAMETRAL_PITCH.leaf(), plain(d.perInch()) + "/" + plain(2 * d.perInch()));
+        } else {
+            put(n, JobFields.SPLINE_MODULE, g.moduleMm(), units);
+        }
+        put(n, JobFields.SPLINE_PRESSURE_ANGLE, g.pressureAngleDeg(), units);
+        n.put(JobFields.SPLINE_ROOT.leaf(), s.root());
+        n.put(JobFields.SPLINE_TOLERANCE_CLASS.leaf(), s.toleranceClass());
+        n.put(JobFields.SPLINE_FIT_CLASS.leaf(), s.fitClass());
+        put(n, JobFields.SPLINE_REFERENCE_DIAMETER, s.referenceDiameterMm(), units);
+        put(n, JobFields.SPLINE_FACE_WIDTH, g.faceWidthMm(), units);
+        put(n, JobFields.SPLINE_PIN_DIAMETER, g.pinDiameterMm(), units);
+        put(n, JobFields.SPLINE_BLANK_DIAMETER, g.blankDiameterMm(), units);
+        put(n, JobFields.SPLINE_ALLOWANCE, s.allowanceMm(), units);
+        put(n, JobFields.SPLINE_TOTAL_TOLERANCE, s.totalToleranceMm(), units);
+        put(n, JobFields.SPLINE_EFFECTIVE_VARIATION, s.effectiveVariationMm(), units);
+        return n;
+    }
+
+    /** A number as a short text: 16, 2.5. */
+    private static String plain(double v) {
+        double t = JsonNumbers.tidy(v);
+        return t == Math.rint(t) ? Long.toString((long) t) : Double.toString(t);
+    }
+
     private static ObjectNode drawingTree(DrawingValues d, Units units) {
         ObjectNode n = NODES.objectNode();
         put(n, JobFields.DRAWING_PITCH_DIAMETER, d.pitchDiameterMm(), units);
@@ -203,6 +240,11 @@ public final class JobWriter {
         n.put(JobFields.HOB_MATERIAL.leaf(), h.material());
         h.cuttingSense().ifPresent(v -> n.put(JobFields.HOB_CUTTING_SENSE.leaf(), v.word()));
         h.identifier().ifPresent(v -> n.put(JobFields.HOB_IDENTIFIER.leaf(), v));
+        h.splineProfile().ifPresent(p -> {
+            n.put(JobFields.HOB_ROOT.leaf(), p.root());
+            put(n, JobFields.HOB_TIP_RADIUS, p.tipRadiusMm(), units);
+            put(n, JobFields.HOB_ADDENDUM, p.addendumMm(), units);
+        });
         return n;
     }
 

@@ -85,10 +85,30 @@ public final class Library {
         return JsonDocument.read(file).then(MachineReader::read);
     }
 
-    /** Saves a machine profile file under the name it states; replaces an existing one only with {@code force}. */
+    /**
+     * Saves a machine profile file under the name it states; replaces an existing one only with
+     * {@code force}. The dialect it names must be in the library (saved or built-in).
+     */
     public Loaded<Path> saveMachine(Path file, boolean force) {
         return JsonDocument.read(file).then(d -> FileFormat.MACHINE.open(d).then(md -> MachineReader.read(md)
-                .then(m -> shelf.save(MACHINES, m.name(), "machine", storedText(md), force))));
+                .then(m -> dialectKnown(m, md)).then(m -> shelf.save(MACHINES, m.name(), "machine", storedText(md),
+                        force))));
+    }
+
+    /** The machine, when the dialect it names is in the library; else why not, and the fix. */
+    private Loaded<MachineFile> dialectKnown(MachineFile m, JsonDocument d) {
+        String dialect = m.profile().dialect();
+        if (Names.valid(dialect) && dialectText(dialect).ok()) {
+            return Loaded.of(m);
+        }
+        return Loaded.unreadable(List.of(InputCode.LIBRARY_NOT_FOUND.at("dialect", d.at("dialect") + ": machine \""
+                + m.name() + "\" names dialect \"" + dialect + "\", which is not in the library (it has "
+                + names(dialects()) + ")", "save the dialect first (hobwright dialects save FILE) or correct the"
+                + " machine's \"dialect\" key")));
+    }
+
+    private static String names(List<LibraryEntry> entries) {
+        return entries.isEmpty() ? "none" : String.join(", ", entries.stream().map(LibraryEntry::name).toList());
     }
 
     /** Saves a machine profile, written in its file units; replaces an existing one only with {@code force}. */
@@ -148,10 +168,25 @@ public final class Library {
         return JsonDocument.read(file).then(TemplateReader::read);
     }
 
-    /** Saves a template file under the machine and name it states; replaces only with {@code force}. */
+    /**
+     * Saves a template file under the machine and name it states; replaces only with {@code force}.
+     * The machine must be in the library (saved or built-in).
+     */
     public Loaded<Path> saveTemplate(Path file, boolean force) {
         return JsonDocument.read(file).then(d -> FileFormat.TEMPLATE.open(d).then(td -> TemplateReader.read(td)
+                .then(t -> machineKnown(t, td))
                 .then(t -> shelf.save(TEMPLATES + "/" + t.machine(), t.name(), "template", storedText(td), force))));
+    }
+
+    /** The template, when the machine it names is in the library; else why not, and the fix. */
+    private Loaded<CycleTemplate> machineKnown(CycleTemplate t, JsonDocument d) {
+        if (machineText(t.machine()).ok()) {
+            return Loaded.of(t);
+        }
+        return Loaded.unreadable(List.of(InputCode.LIBRARY_NOT_FOUND.at("machine", d.at("machine") + ": template \""
+                + t.name() + "\" names machine \"" + t.machine() + "\", which is not in the library (it has "
+                + names(machines()) + ")", "save the machine first (hobwright machines save FILE) or correct the"
+                + " template's \"machine\" key")));
     }
 
     /** Saves a template (e.g. the wizard's answers); replaces an existing one only with {@code force}. */

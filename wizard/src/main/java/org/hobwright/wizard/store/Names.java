@@ -48,7 +48,8 @@ public final class Names {
                 : name.startsWith(".") ? "it starts with a dot"
                 : "only letters, digits, '.', '_' and '-' are allowed";
         return Optional.of(InputCode.LIBRARY_BAD_NAME.at(what,
-                what + " name " + shown + " is not allowed: " + why,
+                (what.equals("name") || what.endsWith(".name") ? what : what + " name") + " " + shown
+                        + " is not allowed: " + why,
                 "use a name like varrow-1605 or brass_fine.2"));
     }
 }

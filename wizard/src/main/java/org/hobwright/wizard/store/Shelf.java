@@ -12,6 +12,7 @@ import java.util.function.Function;
 import java.util.function.Supplier;
 import java.util.stream.Stream;
 import org.hobwright.api.check.Finding;
+import org.hobwright.text.JsonTrees;
 
 /**
  * The files of the library folder over the built-in ones: find, list, save and remove entries
@@ -63,7 +64,8 @@ final class Shelf {
         return named(what, name, () -> {
             Path saved = file(folder, name);
             if (Files.isRegularFile(saved)) {
-                return JsonDocument.text(saved).then(t -> JsonDocument.parse(t, saved.toString()).map(d -> t));
+                return JsonDocument.text(saved).then(t -> JsonDocument.parse(t, saved.toString())
+                        .map(d -> JsonTrees.withoutByteOrderMark(t)));
             }
             return builtins.text(folder + "/" + name + ".json").map(t -> Loaded.of(withoutSchemaLine(t)))
                     .orElseGet(() -> Loaded.unreadable(notFound(folder, what, name)));

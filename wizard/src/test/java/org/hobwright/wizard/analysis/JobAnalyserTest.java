@@ -71,9 +71,76 @@ class JobAnalyserTest {
         assertEquals(Severity.WARNING, f.severity());
         assertEquals("gear.profileShift", f.field());
         assertTrue(f.message().contains("at least 0.2981"), f.message());
-        assertTrue(f.fix().orElseThrow().startsWith("set gear.profileShift to 0.3:"), f.fix().orElseThrow());
+        assertTrue(f.fix().orElseThrow().startsWith("set gear.profileShift to 0.3 (from 0.3 to 0.54 "),
+                f.fix().orElseThrow());
         b.shift = 0.3;
         assertFalse(has(JobAnalyser.analyse(b.build()), "GEAR_UNDERCUT"));
+        // the top of the range is where the tip check (0.25 m = 0.2 mm) starts to complain
+        b.shift = 0.54;
+        assertFalse(has(JobAnalyser.analyse(b.build()), "GEAR_TIP_THIN"));
+        b.shift = 0.55;
+        assertTrue(has(JobAnalyser.analyse(b.build()), "GEAR_TIP_THIN"));
+    }
+
+    /**
+     * The undercut advice never loops into the tip check: for small tooth counts of several tooth
+     * systems and both tip limits, the advice applied (the shift, and the blank when it says so) leaves
+     * neither undercut nor a thin or pointed tip. When the advice says no shift exists, a search over
+     * every shift from 0 to 1.5 in steps of 0.01 confirms it.
+     */
+    @Test
+    void undercutAdviceNeverLeadsToAThinTip() {
+        java.util.regex.Pattern shiftWord = java.util.regex.Pattern.compile("set gear.profileShift to ([0-9.]+)");
+        java.util.regex.Pattern blankWord = java.util.regex.Pattern.compile("turn the blank to ([0-9.]+) mm");
+        int advised = 0;
+        int none = 0;
+        for (String[] system : new String[][] {{"iso53-a", "20"}, {"iso53-c", "20"}, {"full-depth-14.5", "14.5"}}) {
+            for (String material : new String[] {"steel-free-machining", "steel-case-hardening"}) {
+                for (int z = 5; z <= 16; z++) {
+                    JobBuilder b = new JobBuilder();
+                    b.teeth = z;
+                    b.system = system[0];
+                    b.pressureAngle = Double.parseDouble(system[1]);
+                    b.hobPressureAngle = b.pressureAngle;
+                    b.material = material;
+                    String what = z + " teeth, " + system[0] + ", " + material;
+                    var f = JobAnalyser.analyse(b.build()).findings().stream()
+                            .filter(x -> x.code().startsWith("GEAR_UNDERCUT")).findFirst();
+                    if (f.isEmpty()) {
+                        continue;
+                    }
+                    String fix = f.get().fix().orElseThrow();
+                    var shift = shiftWord.matcher(fix);
+                    if (fix.startsWith("no profile shift")) {
+                        none++;
+                        assertTrue(fix.contains("larger pressure angle"), fix);
+                        for (int x = 0; x <= 150; x++) {
+                            b.shift = x / 100.0;
+                            JobAnalysis a = JobAnalyser.analyse(b.build());
+                            assertFalse(!has(a, "GEAR_UNDERCUT") && !has(a, "GEAR_UNDERCUT_SLIGHT")
+                                    && !has(a, "GEAR_TIP_THIN") && !has(a, "GEAR_TIP_POINTED"),
+                                    what + ": shift " + b.shift + " is free of both, but the advice said none is: " + fix);
+                        }
+                    }
+                    if (!shift.find()) {
+                        assertTrue(fix.startsWith("no profile shift"), what + ": " + fix);
+                        continue;
+                    }
+                    b.shift = Double.parseDouble(shift.group(1));
+                    var blank = blankWord.matcher(fix);
+                    if (blank.find()) {
+                        b.blank = OptionalDouble.of(Double.parseDouble(blank.group(1)));
+                    }
+                    JobAnalysis after = JobAnalyser.analyse(b.build());
+                    for (String code : new String[] {"GEAR_UNDERCUT", "GEAR_TIP_THIN", "GEAR_TIP_POINTED"}) {
+                        assertFalse(has(after, code), what + ", advice " + fix + " applied: " + code + " "
+                                + after.findings());
+                    }
+                    advised++;
+                }
+            }
+        }
+        assertTrue(advised > 20 && none > 0, advised + " advised, " + none + " without a shift");
     }
 
     // 14 teeth at 20°: the practical limit (Niemann/Winter, from memory; FORMULAS.md §2.3) → only a remark.
@@ -145,6 +212,11 @@ class JobAnalyserTest {
         assertFalse(has(JobAnalyser.analyse(b.build()), "DRAWING_SPAN"));
         b.drawing = JobBuilder.drawing(null, null, null, null, 30, 7.6883, null, null);
         assertEquals("gear.drawing.spanTeeth", only(JobAnalyser.analyse(b.build()), "DRAWING_SPAN_TEETH").field());
+        // a span over one tooth (W_1 of m 1, z 24 is 1.81 mm) printed wrong: the count reads in the singular
+        b.drawing = JobBuilder.drawing(null, null, null, null, 1, 2.5, null, null);
+        Finding one = only(JobAnalyser.analyse(b.build()), "DRAWING_SPAN");
+        String text = one.message() + " " + one.fix().orElse("");
+        assertTrue(text.contains("span over 1 tooth") && !text.contains("1 teeth"), text);
     }
 
     @Test

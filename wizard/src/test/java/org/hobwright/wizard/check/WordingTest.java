@@ -19,4 +19,12 @@ class WordingTest {
         assertEquals("gear.diametralPitch", Wording.pitchField("gear", new Pitch.Diametral(12)));
         assertEquals("hob.module", Wording.pitchField("hob", new Pitch.Module(2)));
     }
+
+    @Test
+    void countsTakeTheSingularForOne() {
+        assertEquals("1 tooth", Wording.teeth(1));
+        assertEquals("3 teeth", Wording.teeth(3));
+        assertEquals("1 work turn", Wording.count(1, "work turn", "work turns"));
+        assertEquals("0 work turns", Wording.count(0, "work turn", "work turns"));
+    }
 }

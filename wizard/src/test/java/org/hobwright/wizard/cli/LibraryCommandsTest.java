@@ -76,4 +76,59 @@ class LibraryCommandsTest {
     void machinesWithoutAnActionIsAUsageError() {
         assertEquals(ExitCodes.USAGE, Cli.run(home, "machines").code());
     }
+
+    /** A machine naming a dialect the library does not have is refused on save, not when planning. */
+    @Test
+    void aMachineWhoseDialectIsMissingIsRefused() throws IOException {
+        Path file = Files.writeString(home.resolve("m.json"), Store.builtinText("machines/varrow-1605.json")
+                .replace("\"varrow-1605\"", "\"shop-lathe-4\"").replace("\"varrow-ctl\"", "\"no-such-ctl\""));
+        Cli.Run r = Cli.run(home, "machines", "save", file.toString());
+        assertEquals(ExitCodes.USAGE, r.code(), r::toString);
+        assertTrue(r.err().contains("dialect \"no-such-ctl\", which is not in the library (it has ottmere-ctl,"
+                + " varrow-ctl)"), r::toString);
+        assertTrue(r.err().contains("hobwright dialects save FILE"), r::toString);
+        assertTrue(Files.notExists(home.resolve("machines/shop-lathe-4.json")));
+    }
+
+    /** A template for a machine the library does not have is refused on save. */
+    @Test
+    void aTemplateForAMissingMachineIsRefused() throws IOException {
+        Path file = Files.writeString(home.resolve("t.json"), Store.builtinText("templates/varrow-1605/brass-fine.json")
+                .replace("\"varrow-1605\"", "\"no-such-lathe\""));
+        Cli.Run r = Cli.run(home, "templates", "save", file.toString());
+        assertEquals(ExitCodes.USAGE, r.code(), r::toString);
+        assertTrue(r.err().contains("machine \"no-such-lathe\", which is not in the library"), r::toString);
+        assertTrue(Files.notExists(home.resolve("templates/no-such-lathe")));
+    }
+
+    /**
+     * The dialects verb lists, shows, saves and removes; a dialect is checked on save by posting the
+     * sample job with it, and a machine may name it once saved.
+     */
+    @Test
+    void dialectsAreListedShownCheckedSavedAndRemoved() throws IOException {
+        Cli.Run list = Cli.run(home, "dialects", "list");
+        assertEquals(ExitCodes.OK, list.code(), list::toString);
+        assertTrue(list.out().contains("varrow-ctl  (built-in)"), list::toString);
+        assertTrue(Cli.run(home, "dialects", "show", "varrow-ctl").out().contains("\"hobwright-dialect\""));
+
+        String good = Store.builtinText("dialects/varrow-ctl.json").replace("\"varrow-ctl\"", "\"shop-ctl\"");
+        String broken = good.replace("F{feed}", "F{feedrate}");
+        Path bad = Files.writeString(home.resolve("broken.json"), broken);
+        Cli.Run refused = Cli.run(home, "dialects", "save", bad.toString());
+        assertEquals(ExitCodes.USAGE, refused.code(), refused::toString);
+        assertTrue(refused.err().contains("feedrate"), refused::toString);
+        assertTrue(Files.notExists(home.resolve("dialects/shop-ctl.json")));
+
+        Path file = Files.writeString(home.resolve("shop.json"), good);
+        Cli.Run saved = Cli.run(home, "dialects", "save", file.toString());
+        assertEquals(ExitCodes.OK, saved.code(), saved::toString);
+        assertTrue(Files.exists(home.resolve("dialects/shop-ctl.json")));
+        Path machine = Files.writeString(home.resolve("m.json"), Store.builtinText("machines/varrow-1605.json")
+                .replace("\"varrow-1605\"", "\"shop-lathe-5\"").replace("\"varrow-ctl\"", "\"shop-ctl\""));
+        assertEquals(ExitCodes.OK, Cli.run(home, "machines", "save", machine.toString()).code());
+        assertEquals(ExitCodes.OK, Cli.run(home, "dialects", "remove", "shop-ctl").code());
+        assertTrue(Files.notExists(home.resolve("dialects/shop-ctl.json")));
+        assertEquals(ExitCodes.USAGE, Cli.run(home, "dialects", "remove", "varrow-ctl").code(), "built-in");
+    }
 }

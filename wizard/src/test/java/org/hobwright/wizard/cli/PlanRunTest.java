@@ -124,4 +124,57 @@ class PlanRunTest {
             throw new java.io.UncheckedIOException(e);
         }
     }
+
+    /** --out naming a file is refused before anything is planned, and the file is left alone. */
+    @Test
+    void anOutputFolderThatIsAFileIsRefusedBeforePlanning() throws IOException {
+        Path file = Files.writeString(dir.resolve("not-a-folder"), "keep");
+        Path job = Files.writeString(dir.resolve("job.json"), Store.builtinText("jobs/metering-pump-gear.json"));
+        Cli.Run r = Cli.run(dir.resolve("home"), "plan", job.toString(), "--out", file.toString());
+        assertEquals(ExitCodes.USAGE, r.code(), r::toString);
+        assertTrue(r.err().contains("is a file, not a folder"), r::toString);
+        assertTrue(r.out().isBlank(), "no planned summary before the refusal: " + r);
+        assertEquals("keep", Files.readString(file));
+    }
+
+    /** A second run into the same folder names every file it replaced. */
+    @Test
+    void replacedOutputsAreNamed() throws IOException {
+        Path job = Files.writeString(dir.resolve("job.json"), Store.builtinText("jobs/metering-pump-gear.json"));
+        Path out = dir.resolve("out");
+        Cli.Run first = Cli.run(dir.resolve("home"), "plan", job.toString(), "--out", out.toString());
+        assertEquals(ExitCodes.OK, first.code(), first::toString);
+        assertFalse(first.out().contains("Replaced"), first::toString);
+        Cli.Run again = Cli.run(dir.resolve("home"), "plan", job.toString(), "--out", out.toString());
+        assertEquals(ExitCodes.OK, again.code(), again::toString);
+        assertTrue(again.out().contains("Replaced 4 older files of the same names: metering-pump-gear.nc,"), again::toString);
+    }
+
+    /**
+     * The fastest proposal says which job values give it; planned with them, the job takes the
+     * proposed time (within 2 %: the values are printed rounded down).
+     */
+    @Test
+    void theFastestProposalCanBeApplied() throws IOException {
+        Path job = Files.writeString(dir.resolve("job.json"), SAMPLE);
+        Cli.Run r = Cli.run(dir.resolve("home"), "plan", job.toString(), "--fastest", "--json");
+        assertEquals(ExitCodes.OK, r.code(), r::toString);
+        String line = r.err().lines().filter(l -> l.contains("fastest proposal: ")).findFirst().orElseThrow();
+        double time = Double.parseDouble(between(line, "fastest proposal: ", " s in "));
+        String speed = between(line, "cycle.cuttingSpeed ", ", ");
+        String rough = between(line, "cycle.roughFeed ", " and ");
+        String finish = line.substring(line.indexOf("cycle.finishFeed ") + "cycle.finishFeed ".length()).strip();
+        Path fast = Files.writeString(dir.resolve("fast.json"), SAMPLE.replace("\"workMaterial\": \"steel-free-machining\",",
+                "\"workMaterial\": \"steel-free-machining\", \"cuttingSpeed\": " + speed + ", \"roughFeed\": " + rough
+                        + ", \"finishFeed\": " + finish + ","));
+        Cli.Run applied = Cli.run(dir.resolve("home"), "plan", fast.toString(), "--json");
+        assertEquals(ExitCodes.OK, applied.code(), applied::toString);
+        double planned = JsonMapper.shared().readTree(applied.out()).at("/cycle/cycleTime").doubleValue();
+        assertEquals(time, planned, 0.02 * time, line + "\n" + applied);
+    }
+
+    private static String between(String text, String before, String after) {
+        int start = text.indexOf(before) + before.length();
+        return text.substring(start, text.indexOf(after, start));
+    }
 }

@@ -93,4 +93,33 @@ class SimulateCommandTest {
         assertTrue(r.err().contains("hob.module"), r.err());
         assertFalse(Files.exists(tmp.resolve("out")));
     }
+
+    /** A drawing plan refuses (the sample whose printed values disagree) is refused here too: exit 1, no picture. */
+    @Test
+    void aJobPlanRefusesIsNotSimulated() {
+        Path job = Path.of("../samples/scenario/jobs/counter-wheel-drawing-error.json");
+        Path home = tmp.resolve("library");
+        Cli.Run plan = Cli.run(home, "plan", job.toString(), "--out", tmp.resolve("plan-out").toString());
+        assertEquals(ExitCodes.JOB_ERRORS, plan.code(), plan::toString);
+        Run r = run(job.toString(), "--out", tmp.resolve("out").toString());
+        assertEquals(plan.code(), r.code(), r.out() + r.err());
+        assertTrue(r.err().contains("DRAWING_"), r.err());
+        assertFalse(Files.exists(tmp.resolve("out")));
+    }
+
+    /**
+     * Quality values in µm, as the targets and the plan's summary: the sample's enveloping depth in
+     * closed form is 0.244 µm (FORMULAS.md §6.2, δ_y = π² z₀² m_n sin α_n / (4 z₂ i²): m 1 mm, z₂ 24,
+     * z₀ 1, i 12 gashes, α 20° give π² · sin 20° / 13824 mm = 0.2442 µm), printed to 0.001 µm.
+     */
+    @Test
+    void qualityValuesArePrintedInMicrometres() {
+        Run r = run("--out", tmp.resolve("out").toString());
+        assertEquals(ExitCodes.OK, r.code(), r.err());
+        String line = r.out().lines().filter(l -> l.startsWith("enveloping depth")).findFirst().orElseThrow();
+        assertTrue(line.endsWith("(closed form 0.244 µm)"), line);
+        assertFalse(line.contains("mm"), line);
+        assertTrue(r.out().lines().filter(l -> l.startsWith("profile deviation max")).allMatch(l -> l.endsWith(" µm")),
+                r.out());
+    }
 }

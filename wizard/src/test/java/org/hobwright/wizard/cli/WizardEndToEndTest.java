@@ -59,7 +59,7 @@ class WizardEndToEndTest {
         List<String> lines = new ArrayList<>();
         boolean drawingAsked = false;
         for (FieldDef f : StepFields.of(id)) {
-            if (f.key().startsWith("gear.custom.")) {
+            if (f.key().startsWith("gear.custom.") || StepFields.splineOnly(f.key())) {
                 continue;
             }
             if (f.key().startsWith("gear.drawing.") || f.key().startsWith("gear.mate.")) {
@@ -122,6 +122,9 @@ class WizardEndToEndTest {
         List<String> in = new ArrayList<>();
         boolean drawingAsked = false;
         for (FieldDef f : StepFields.of(StepId.GEAR)) {
+            if (StepFields.splineOnly(f.key())) {
+                continue;                                              // not asked for a gear
+            }
             switch (f.key()) {
                 case "gear.toothSystem" -> in.add("custom");
                 case "gear.custom.addendum" -> in.add("1");
@@ -190,6 +193,64 @@ class WizardEndToEndTest {
         assertEquals(ExitCodes.OK, plan.code(), plan::toString);
         var report = tools.jackson.databind.json.JsonMapper.shared().readTree(plan.out());
         assertEquals(0.4, report.at("/cycle/axialFeed").doubleValue(), 1e-12, plan::toString);
+    }
+
+    /**
+     * A template chosen in the wizard replaces every cycle answer (the values of
+     * samples/scenario/templates/varrow-1605/brass-fine.json), and the job saved at REVIEW plans to
+     * the same files.
+     */
+    @Test
+    void aChosenTemplateFillsEveryCycleAnswer() throws IOException {
+        List<String> in = new ArrayList<>();
+        in.addAll(step(StepId.GEAR, java.util.Map.of()));
+        in.addAll(step(StepId.CUTTER, java.util.Map.of()));
+        in.addAll(step(StepId.MACHINE, java.util.Map.of()));
+        in.addAll(step(StepId.CYCLE, java.util.Map.of(StepFields.TEMPLATE, List.of("brass-fine"))));
+        in.add("yes");
+        in.add("");
+        Path out = dir.resolve("wizard-out");
+        Cli.Run wizard = wizardOnSample(in, "--out", out.toString(), "--date", "2026-12-01");
+        assertEquals(ExitCodes.OK, wizard.code(), wizard::toString);
+        assertTrue(wizard.out().contains("Work material [brass]"), wizard::toString);
+        Path saved = out.resolve("metering-pump-gear.job.json");
+        var cycle = tools.jackson.databind.json.JsonMapper.shared().readTree(Files.readString(saved)).path("cycle");
+        assertEquals("brass", cycle.path("workMaterial").asString());
+        assertEquals(80, cycle.path("cuttingSpeed").doubleValue(), 0);
+        assertEquals(1.0, cycle.path("roughFeed").doubleValue(), 0);
+        assertEquals(0.6, cycle.path("finishFeed").doubleValue(), 0);
+        assertEquals(1.5, cycle.path("roughDepth").doubleValue(), 0);
+        assertEquals(0.2, cycle.path("finishStock").doubleValue(), 0);
+
+        Path planOut = dir.resolve("plan-out");
+        Cli.Run plan = Cli.run(dir.resolve("home"), "", loader, "plan", saved.toString(), "--out", planOut.toString(),
+                "--date", "2026-12-01");
+        assertEquals(ExitCodes.OK, plan.code(), plan::toString);
+        for (String name : names(planOut)) {
+            assertArrayEquals(Files.readAllBytes(planOut.resolve(name)), Files.readAllBytes(out.resolve(name)), name);
+        }
+    }
+
+    /** A job file without the optional keys that have a default is taken with Enter, without asking again. */
+    @Test
+    void aJobWithoutItsOptionalKeysIsTakenWithEnter() throws IOException {
+        String text = Store.builtinText("jobs/metering-pump-gear.json").replace("    \"helixAngle\": 0,\n", "")
+                .replace("    \"profileShift\": 0,\n", "");
+        assertFalse(text.contains("helixAngle") || text.contains("profileShift"));
+        Path job = Files.writeString(dir.resolve("short.json"), text);
+        List<String> in = new ArrayList<>();
+        for (StepId id : List.of(StepId.GEAR, StepId.CUTTER, StepId.MACHINE, StepId.CYCLE)) {
+            in.addAll(step(id, java.util.Map.of()));
+        }
+        in.add("yes");
+        in.add("");
+        Path out = dir.resolve("out");
+        Cli.Run r = Cli.run(dir.resolve("home"), String.join("\n", in) + "\n", loader, "wizard", "--job",
+                job.toString(), "--out", out.toString());
+        assertEquals(ExitCodes.OK, r.code(), r::toString);
+        assertFalse(r.out().contains("  ! "), "no answer was refused: " + r);
+        assertTrue(Files.exists(out.resolve("short.job.json")) || Files.exists(out.resolve("metering-pump-gear.job.json")),
+                r::toString);
     }
 
     @Test

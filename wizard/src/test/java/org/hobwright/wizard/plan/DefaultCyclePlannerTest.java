@@ -243,6 +243,24 @@ class DefaultCyclePlannerTest {
         assertFalse(c.hasErrors(), "quality findings are warnings");
     }
 
+    /**
+     * The finding names the material without a row: the built-in table (cutting-data.json) has plastic
+     * only with hss and carbide hobs, so a coated hob is the unknown one; "unobtainium" has no row at all.
+     */
+    @Test
+    void missingCuttingDataNamesTheMaterialWithoutARow() {
+        HobJob plastic = TestJobs.with(SampleJobs.spurMetric(), TestJobs.cycle("plastic", OptionalDouble.empty(),
+                OptionalDouble.of(1), OptionalDouble.of(1), OptionalDouble.empty(), 0, QualityTargets.DEFAULTS, false));
+        plastic = plastic.withHob(plastic.hob().withMaterial("hss-coated"));
+        Finding hob = finding(planner.plan(plastic), PlanCode.PLAN_CUTTING_DATA_MISSING.code());
+        assertEquals("hob.material", hob.field(), hob::toString);
+        assertTrue(hob.message().contains("only with carbide or hss hobs"), hob::toString);
+        HobJob unknown = TestJobs.with(SampleJobs.spurMetric(), TestJobs.cycle("unobtainium", OptionalDouble.empty(),
+                OptionalDouble.of(1), OptionalDouble.of(1), OptionalDouble.empty(), 0, QualityTargets.DEFAULTS, false));
+        assertEquals("cycle.workMaterial", finding(planner.plan(unknown), PlanCode.PLAN_CUTTING_DATA_MISSING.code())
+                .field());
+    }
+
     @Test
     void missingCuttingDataIsAnErrorOnlyWhenSomethingIsOpen() {
         HobJob open = TestJobs.with(SampleJobs.spurMetric(), TestJobs.cycle("unobtainium", OptionalDouble.empty(),

@@ -26,11 +26,11 @@ class FormCheckTest {
         "ISO_4156, 40, 0.5, 45, FILLET", "ANSI_B92_1, 24, 1.5875, 30, FLAT", "ANSI_B92_1, 30, 1.27, 37.5, FILLET"})
     void standardHobReachesTheFormAndCutsTheRootWithinItsLimits(SplineStandard std, int z, double m, double alpha,
                                                                 SplineRoot root) {
-        SplineLimits l = Splines.limits(SplineSpec.of(std, z, m, alpha, root, 5, "h", 20));
+        SplineLimits l = Splines.limits(SplineDrawing.of(std, z, m, alpha, root, 5, "h", 20));
         SplineHob hob = Splines.standardHob(l);
         List<Finding> findings = new ArrayList<>();
-        assertTrue(SplineHobCheck.check(l, hob, findings), findings.toString());
-        FormCheck check = FormCheck.run(l, hob, 0.001, findings);
+        assertTrue(SplineHobCheck.check(l, hob, Splines.MM, findings), findings.toString());
+        FormCheck check = FormCheck.run(l, hob, 0.001, Splines.MM, findings);
         assertTrue(findings.isEmpty(), findings.toString());
         assertTrue(check.formReached());
         double a = Math.toRadians(alpha);
@@ -48,7 +48,7 @@ class FormCheckTest {
         assertEquals(start, check.involuteStartDiameterMm(), 0.02 * m, "start of the involute, 12 gashes");
         SplineHob fine = new SplineHob(hob.moduleMm(), hob.pressureAngleDeg(), hob.root(), hob.addendumMm(),
                 hob.tipRadiusMm(), 1, 400);
-        assertEquals(start, FormCheck.run(l, fine, 0.001, findings).involuteStartDiameterMm(), 0.001 * m,
+        assertEquals(start, FormCheck.run(l, fine, 0.001, Splines.MM, findings).involuteStartDiameterMm(), 0.001 * m,
                 "start of the involute, 400 gashes");
     }
 
@@ -59,8 +59,8 @@ class FormCheckTest {
         SplineLimits l = Splines.limits(Splines.iso(20, 1, 30, SplineRoot.FLAT, 5, "h"));
         SplineHob hob = Splines.withTip(Splines.standardHob(l), 0.75, 0.45);
         List<Finding> findings = new ArrayList<>();
-        assertTrue(SplineHobCheck.check(l, hob, findings), findings.toString());
-        FormCheck check = FormCheck.run(l, hob, 0.001, findings);
+        assertTrue(SplineHobCheck.check(l, hob, Splines.MM, findings), findings.toString());
+        FormCheck check = FormCheck.run(l, hob, 0.001, Splines.MM, findings);
         assertFalse(check.formReached());
         assertTrue(check.involuteStartDiameterMm() > l.formDiameterMm());
         assertEquals(List.of("SPLINE_FORM_NOT_REACHED"), Splines.codes(findings));
@@ -70,10 +70,10 @@ class FormCheckTest {
     void aLongAddendumCutsBelowTheMinorDiameter() {
         SplineLimits l = Splines.limits(Splines.iso(20, 1, 30, SplineRoot.FLAT, 5, "h"));
         List<Finding> findings = new ArrayList<>();
-        FormCheck.run(l, Splines.withTip(Splines.standardHob(l), 0.95, 0.2), 0.001, findings);
+        FormCheck.run(l, Splines.withTip(Splines.standardHob(l), 0.95, 0.2), 0.001, Splines.MM, findings);
         assertEquals(List.of("SPLINE_ROOT_BELOW_MINOR"), Splines.codes(findings));
         findings.clear();
-        FormCheck.run(l, Splines.withTip(Splines.standardHob(l), 0.6, 0.2), 0.001, findings);
+        FormCheck.run(l, Splines.withTip(Splines.standardHob(l), 0.6, 0.2), 0.001, Splines.MM, findings);
         // a short addendum leaves the root high and, with it, the straight flank too short for the form
         assertEquals(List.of("SPLINE_FORM_NOT_REACHED", "SPLINE_ROOT_ABOVE_MINOR"), Splines.codes(findings));
     }
@@ -83,14 +83,14 @@ class FormCheckTest {
         SplineLimits l = Splines.limits(Splines.iso(20, 1, 30, SplineRoot.FILLET, 5, "h"));
         SplineHob good = Splines.standardHob(l);
         List<Finding> findings = new ArrayList<>();
-        assertFalse(SplineHobCheck.check(l, new SplineHob(1.25, 37.5, SplineRoot.FLAT, 0.9, 0.4, 1, 12), findings));
+        assertFalse(SplineHobCheck.check(l, new SplineHob(1.25, 37.5, SplineRoot.FLAT, 0.9, 0.4, 1, 12), Splines.MM, findings));
         assertEquals(List.of("SPLINE_HOB_PITCH", "SPLINE_HOB_PRESSURE_ANGLE", "SPLINE_HOB_ROOT_FORM"),
                 Splines.codes(findings));
         findings.clear();
-        assertTrue(SplineHobCheck.check(l, Splines.withTip(good, 0.9, 0.1), findings));
+        assertTrue(SplineHobCheck.check(l, Splines.withTip(good, 0.9, 0.1), Splines.MM, findings));
         assertEquals(List.of("SPLINE_HOB_TIP_RADIUS_SMALL"), Splines.codes(findings));
         findings.clear();
-        assertFalse(SplineHobCheck.check(l, Splines.withTip(good, 0.9, 0.9), findings));
+        assertFalse(SplineHobCheck.check(l, Splines.withTip(good, 0.9, 0.9), Splines.MM, findings));
         assertEquals(List.of("SPLINE_HOB_TIP_RADIUS_LARGE"), Splines.codes(findings));
     }
 }

@@ -32,7 +32,7 @@ class SplineLimitsReferenceTest {
         assertEquals(119.4, l.majorDiameterMaxMm(), 1e-9, "d_a1 = d_B − 0.2 m");
         assertEquals(6.220, l.toothThicknessMaxMm(), 1e-9, "s_max");
         assertEquals(6.180, l.toothThicknessMinMm(), 1e-9, "s_min");
-        SplinePins pins = SplinePins.choose(l, OptionalDouble.empty(), List.of(), new ArrayList<>());
+        SplinePins pins = SplinePins.choose(l, OptionalDouble.empty(), List.of(), Splines.MM, new ArrayList<>());
         assertEquals(6.0, pins.pinMm(), 1e-12, "D_M = 2 m for m 3");
         assertEquals(126.017, pins.overPinsMaxMm(), 0.0005, "M1 max (reference)");
         assertEquals(125.956, pins.overPinsMinMm(), 0.0005, "M1 min");
@@ -136,7 +136,7 @@ class SplineLimitsReferenceTest {
     // spline of module 25.4/16 and fit h has the ANSI 16/32 spline's D, D_b, S and major diameter.
     @Test
     void isoAndAnsiAgreeWhereTheyCoincide() {
-        SplineLimits iso = Splines.limits(SplineSpec.of(SplineStandard.ISO_4156, 24, 25.4 / 16, 30, SplineRoot.FLAT, 5, "h",
+        SplineLimits iso = Splines.limits(SplineDrawing.of(SplineStandard.ISO_4156, 24, 25.4 / 16, 30, SplineRoot.FLAT, 5, "h",
                 25));
         SplineLimits ansi = Splines.limits(Splines.ansi(24, 16, 30, SplineRoot.FLAT, 5));
         assertRelative(ansi.baseDiameterMm(), iso.baseDiameterMm(), 1e-14, "D_b");
@@ -164,16 +164,16 @@ class SplineLimitsReferenceTest {
                 .withFit("f")));
         assertEquals(List.of("SPLINE_PITCH"), codesOf(Splines.ansi(20, 14, 30, SplineRoot.FLAT, 5)));
         assertEquals(List.of("SPLINE_TEETH_RANGE"), codesOf(Splines.iso(5, 1, 30, SplineRoot.FLAT, 5, "h")));
-        assertEquals(List.of("SPLINE_TOLERANCE_VALUES"), codesOf(SplineSpec.of(SplineStandard.DIN_5480, 38, 3, 30,
+        assertEquals(List.of("SPLINE_TOLERANCE_VALUES"), codesOf(SplineDrawing.of(SplineStandard.DIN_5480, 38, 3, 30,
                 SplineRoot.FILLET, 8, "f", 40)));
         assertEquals(List.of("SPLINE_REFERENCE_DIAMETER"), codesOf(Splines.din(125, 3, 38, -0.028, 0.063, 0.023)));
         assertEquals(List.of("SPLINE_TOOTH_TOO_THIN"), codesOf(Splines.din(120, 3, 38, -3, 4, 0.023)));
         assertEquals(List.of("SPLINE_SIZE"), codesOf(Splines.iso(100, 6, 30, SplineRoot.FLAT, 5, "h")));
     }
 
-    private static List<String> codesOf(SplineSpec s) {
+    private static List<String> codesOf(SplineDrawing s) {
         List<Finding> findings = new ArrayList<>();
-        SplineLimits.of(s, findings);
+        SplineLimits.of(s, Splines.MM, findings);
         return Splines.codes(findings);
     }
 }

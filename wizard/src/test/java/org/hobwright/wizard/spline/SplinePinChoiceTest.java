@@ -29,7 +29,7 @@ class SplinePinChoiceTest {
     @Test
     void shopPinNearestTheStandardsThatFits() {
         List<Finding> findings = new ArrayList<>();
-        SplinePins pins = SplinePins.choose(iso, OptionalDouble.empty(), List.of(1.0, 1.75, 2.2, 5.0), findings);
+        SplinePins pins = SplinePins.choose(iso, OptionalDouble.empty(), List.of(1.0, 1.75, 2.2, 5.0), Splines.MM, findings);
         assertEquals(2.2, pins.pinMm(), 1e-12, "nearest to " + iso.recommendedPinMm());
         assertEquals(List.of("SPLINE_PIN_FROM_SHOP_SET"), Splines.codes(findings));
     }
@@ -37,7 +37,7 @@ class SplinePinChoiceTest {
     @Test
     void aPinThatCannotMeasureIsAWarningNotAValue() {
         List<Finding> findings = new ArrayList<>();
-        SplinePins pins = SplinePins.choose(iso, OptionalDouble.of(0.8), List.of(), findings);
+        SplinePins pins = SplinePins.choose(iso, OptionalDouble.of(0.8), List.of(), Splines.MM, findings);
         assertEquals(List.of("SPLINE_PIN_CONTACT"), Splines.codes(findings));
         assertTrue(pins.overPinsMaxMm() > pins.overPinsMinMm());
     }

@@ -29,9 +29,9 @@ class SplinePinsCrossCheckTest {
     void overPinsAgreeWithACircleTangentToSampledFlanks(SplineStandard std, int z, double m, double alpha,
                                                         SplineRoot root, int cls, String fit) {
         List<Finding> findings = new ArrayList<>();
-        SplineLimits limits = SplineLimits.of(SplineSpec.of(std, z, m, alpha, root, cls, fit, 20), findings)
+        SplineLimits limits = SplineLimits.of(SplineDrawing.of(std, z, m, alpha, root, cls, fit, 20), Splines.MM, findings)
                 .orElseThrow();
-        SplinePins pins = SplinePins.choose(limits, OptionalDouble.empty(), List.of(), findings);
+        SplinePins pins = SplinePins.choose(limits, OptionalDouble.empty(), List.of(), Splines.MM, findings);
         assertTrue(findings.isEmpty(), findings.toString());
         assertRelative(bruteForce(limits, pins.pinMm(), limits.toothThicknessMaxMm()), pins.overPinsMaxMm(), 1e-7,
                 "over pins at S_max");
@@ -40,7 +40,7 @@ class SplinePinsCrossCheckTest {
     }
 
     static double bruteForce(SplineLimits limits, double pin, double thickness) {
-        SplineSpec s = limits.spec();
+        SplineDrawing s = limits.spec();
         int z = s.teeth();
         double m = s.moduleMm();
         SampledFlanks flanks = new SampledFlanks(z, m, s.pressureAngleDeg(), 0, 0, thickness - Math.PI * m / 2,

@@ -28,7 +28,7 @@ class AnswersTest {
                 .toList());
         expected.addAll(List.of("cycle.axialClearance=1", "cycle.fastest=false", "cycle.finishStock=0",
                 "cycle.hobShift.everyParts=1", "cycle.hobShift.perPart=0", "cycle.radialClearance=1", "gear.hand=right",
-                "cycle.batchSize=1", "cycle.hobTurnedRound=false"));
+                "cycle.batchSize=1", "cycle.hobTurnedRound=false", "part=gear"));
         expected.sort(null);
         assertEquals(expected, leaves(back, ""));
     }

@@ -83,4 +83,54 @@ class StepWizardFactoryTest {
         assertEquals(SampleJobs.helicalMetric().gear(), w.job().orElseThrow().gear());
         assertTrue(w.cycle().isPresent());
     }
+    /** The keys of the fields a step shows. */
+    private static List<String> keys(Wizard w) {
+        return w.view().fields().stream().map(FieldSpec::key).toList();
+    }
+
+    @Test
+    void aSplineAnswerAsksTheSplinesQuestionsAndEndsInASplineJob() {
+        Wizard w = factory().start(Map.of(WizardFactory.HOME, home.toString()));
+        assertTrue(keys(w).contains("gear.teeth"));
+        assertFalse(keys(w).contains("spline.teeth"), "a gear job has no spline questions");
+        assertTrue(w.answer("part", "spline").isEmpty());
+        assertTrue(keys(w).containsAll(List.of("spline.standard", "spline.teeth", "spline.module",
+                "spline.diametralPitch", "spline.pressureAngle", "spline.root", "spline.toleranceClass",
+                "spline.fitClass", "spline.faceWidth")), () -> keys(w).toString());
+        assertTrue(keys(w).stream().noneMatch(k -> k.startsWith("gear.")), "the spline's questions replace the gear's");
+        assertEquals("30", w.value("spline.pressureAngle"), "the standards' 30°");
+        // the metric sample spline: ISO 4156 18 teeth module 1, 30° flat root, class 5h
+        for (String[] a : new String[][] {{"name", "wizard-spline"}, {"spline.standard", "iso4156"},
+            {"spline.teeth", "18"}, {"spline.module", "1"}, {"spline.root", "flat"}, {"spline.faceWidth", "16"},
+            {"spline.blankDiameter", "18.95"}}) {
+            assertEquals(List.of(), w.answer(a[0], a[1]), a[0]);
+        }
+        assertEquals("1", w.value("hob.module"), "the hob follows the spline's module");
+        assertEquals("30", w.value("hob.pressureAngle"));
+        assertEquals("flat", w.value("hob.root"), "and its root form");
+        assertTrue(w.next(true).moved(), () -> w.view().toString());
+        assertEquals(StepId.CUTTER, w.view().id());
+        assertTrue(keys(w).containsAll(List.of("hob.root", "hob.tipRadius", "hob.addendum")), () -> keys(w).toString());
+        for (String[] a : new String[][] {{"hob.tipRadius", "0.2"}, {"hob.hand", "right"}, {"hob.outsideDiameter", "32"},
+            {"hob.gashes", "12"}, {"hob.length", "25"}, {"hob.material", "hss-coated"}}) {
+            assertEquals(List.of(), w.answer(a[0], a[1]), a[0]);
+        }
+        assertTrue(w.next(true).moved(), () -> w.view().toString());
+        assertEquals(List.of(), w.answer("machine", "varrow-1605"));
+        for (int i = 0; i < 4 && w.view().id() != StepId.REVIEW; i++) {
+            if (w.view().id() == StepId.CYCLE) {
+                w.answer("cycle.workMaterial", "steel-free-machining");
+            }
+            assertTrue(w.next(true).moved(), () -> w.view().toString());
+        }
+        assertEquals(StepId.REVIEW, w.view().id());
+        var job = w.job().orElseThrow();
+        assertEquals("spline", job.part());
+        assertEquals("iso4156", job.spline().orElseThrow().standard());
+        assertEquals("flat", job.hob().splineProfile().orElseThrow().root());
+        var cycle = w.cycle().orElseThrow();
+        assertFalse(cycle.hasErrors(), () -> cycle.findings().toString());
+        // the pitch diameter D = m z of ISO 4156-1:2005: 1 mm × 18
+        assertEquals(18.0, cycle.spline().orElseThrow().pitchDiameterMm(), 1e-12);
+    }
 }

@@ -19,6 +19,8 @@ import org.hobwright.api.job.JobFields;
 import org.hobwright.api.job.MachineFields;
 import org.hobwright.api.job.Pitch;
 import org.hobwright.api.job.QualityTargets;
+import org.hobwright.api.job.SplineHobProfile;
+import org.hobwright.api.job.SplineSpec;
 import org.hobwright.api.job.ToothProportions;
 import org.hobwright.api.job.Units;
 import org.hobwright.api.testkit.SampleJobs;
@@ -68,15 +70,36 @@ class FieldCoverageTest {
         return out;
     }
 
-    @Test
-    void everyJobFieldIsWrittenAndReadBack() {
-        JsonNode tree = JobWriter.jobTree(full(), Units.MM, false);
-        Set<String> written = leaves(tree, "", new TreeSet<>());
+    /**
+     * A spline job with every optional value given: the DIN 5480 reference diameter, the drawing's
+     * deviation and tolerances, the spline hob's root, tip radius and addendum.
+     */
+    static HobJob fullSpline() {
+        HobJob gearJob = full();
+        GearSpec frame = new GearSpec("shaft 2", 18, new Pitch.Module(1.25), 30, 0, Hand.RIGHT, 16, 0, 0,
+                SplineParts.TOOTH_SYSTEM, Optional.empty(), OptionalDouble.of(24.8), OptionalDouble.of(2.5),
+                OptionalInt.empty(), DrawingValues.NONE);
+        SplineSpec spline = new SplineSpec("din5480", "fillet", 8, "f", OptionalDouble.of(25), OptionalDouble.of(-0.03),
+                OptionalDouble.of(0.05), OptionalDouble.of(0.02));
+        HobSpec hob = gearJob.hob().withPitch(new Pitch.Module(1.25)).withPressureAngleDeg(30)
+                .withSplineProfile(Optional.of(new SplineHobProfile("fillet", 0.3, OptionalDouble.of(0.7))));
+        return gearJob.withName("full-spline").withGear(frame).withHob(hob).withSpline(Optional.of(spline));
+    }
+
+    /** The keys a gear job has not: the spline's, the spline hob's, the part word (a gear is the default). */
+    private static boolean splineOnly(FieldDef f) {
+        return f == JobFields.PART || f.key().startsWith("spline.") || f == JobFields.HOB_ROOT
+                || f == JobFields.HOB_TIP_RADIUS || f == JobFields.HOB_ADDENDUM;
+    }
+
+    /** Every key of the table a job of {@code part} writes when it gives every value. */
+    private static Set<String> expected(boolean spline) {
         Set<String> expected = new TreeSet<>(Set.of("format", "version"));
         for (FieldDef f : JobFields.all()) {
-            if (f != JobFields.GEAR_DIAMETRAL_PITCH && f != JobFields.HOB_DIAMETRAL_PITCH
-                    && f != JobFields.CYCLE_TEMPLATE && f != JobFields.MACHINE
-                    && f != JobFields.GEAR_THICKNESS_SERIES) {
+            boolean otherPart = spline ? f.key().startsWith("gear.") : splineOnly(f);
+            if (!otherPart && f != JobFields.GEAR_DIAMETRAL_PITCH && f != JobFields.HOB_DIAMETRAL_PITCH
+                    && f != JobFields.SPLINE_DIAMETRAL_PITCH && f != JobFields.CYCLE_TEMPLATE
+                    && f != JobFields.MACHINE && f != JobFields.GEAR_THICKNESS_SERIES) {
                 expected.add(f.key());
             }
         }
@@ -85,11 +108,27 @@ class FieldCoverageTest {
                 expected.add("machine." + f.key());
             }
         }
-        assertEquals(expected, written);
+        return expected;
+    }
+
+    private static void writtenAndReadBack(HobJob job, boolean spline) {
+        JsonNode tree = JobWriter.jobTree(job, Units.MM, false);
+        Set<String> written = leaves(tree, "", new TreeSet<>());
+        assertEquals(expected(spline), written);
         Loaded<HobJob> back = new JobReader(Library.open(Optional.empty(), java.util.Map.of(),
-                java.nio.file.Path.of("no-home"))).read(tree, "full");
+                java.nio.file.Path.of("no-home"))).read(tree, job.name());
         assertEquals(java.util.List.of(), back.findings());
-        StoreTesting.assertClose(full(), back.get(), 1e-12, "job");
+        StoreTesting.assertClose(job, back.get(), 1e-12, "job");
+    }
+
+    @Test
+    void everyJobFieldIsWrittenAndReadBack() {
+        writtenAndReadBack(full(), false);
+    }
+
+    @Test
+    void everySplineJobFieldIsWrittenAndReadBack() {
+        writtenAndReadBack(fullSpline(), true);
     }
 
     @Test

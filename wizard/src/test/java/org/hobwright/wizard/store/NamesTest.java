@@ -37,4 +37,13 @@ class NamesTest {
         assertFalse(Names.valid(""));
         assertFalse(Names.valid(null));
     }
+
+    /** The field of a job's or template's name is "name": the message says it once. */
+    @Test
+    void theMessageNamesTheFieldOnce() {
+        assertEquals("name \"a b\" is not allowed: only letters, digits, '.', '_' and '-' are allowed",
+                Names.check("name", "a b").orElseThrow().message());
+        assertEquals("machine name \".x\" is not allowed: it starts with a dot",
+                Names.check("machine", ".x").orElseThrow().message());
+    }
 }

@@ -24,7 +24,8 @@ import tools.jackson.databind.node.ObjectNode;
  * choice, default and help text comes from there. What a table of single fields cannot say is
  * written here once: exactly one of module and diametral pitch, the hand of a helical gear, the
  * custom factors only with the custom tooth system, a thickness series only without allowances, the
- * mating gear's teeth whenever it is given, a machine by name or inline. A range in a unit
+ * mating gear's teeth whenever it is given, a machine by name or inline, a gear or a spline by the
+ * part kind, a spline pitch written as the standard does ("16/32"), a spline hob's keys together. A range in a unit
  * that follows the file's ({@code mm} or {@code in}) can only be stated as its sign; its limits are
  * in the description.
  */
@@ -112,10 +113,23 @@ final class SchemaFromTable {
         ((ObjectNode) props.get("cycle")).put("unevaluatedProperties", false);
         pitch((ObjectNode) props.get("gear"), true);
         pitch((ObjectNode) props.get("hob"), false);
+        ObjectNode spline = (ObjectNode) props.get("spline");
+        pitch(spline, false);
+        ObjectNode dp = (ObjectNode) spline.get("properties").get(JobFields.SPLINE_DIAMETRAL_PITCH.leaf());
+        dp.remove(List.of("type", "minLength"));
+        ArrayNode dpForms = dp.putArray("anyOf");
+        dpForms.addObject().put("type", "number").put("exclusiveMinimum", 0);
+        dpForms.addObject().put("type", "string").put("pattern", "^\\s*[0-9.]+\\s*(/\\s*[0-9.]+\\s*)?$");
+        splineHob((ObjectNode) props.get("hob"));
         s.set("properties", props);
         ArrayNode required = words("format", "version");
-        required.addAll(required(root));
+        for (JsonNode k : required(root)) {
+            if (!k.asString().equals("gear") && !k.asString().equals("spline")) {
+                required.add(k);
+            }
+        }
         s.set("required", required);
+        s.set("allOf", NODES.arrayNode().add(partRule()));
         s.put("additionalProperties", false);
         ObjectNode defs = s.putObject("$defs");
         ObjectNode keys = object(JobFields.cycle(), "cycle.", "machine.schema.json#/$defs/");
@@ -177,6 +191,27 @@ final class SchemaFromTable {
                     + " of the other hand and tooth system)");
         }
         object.set("allOf", all);
+    }
+
+    /** A spline job has a spline and no gear; any other job a gear and no spline. */
+    private static ObjectNode partRule() {
+        ObjectNode rule = NODES.objectNode();
+        rule.set("if", NODES.objectNode().<ObjectNode>set("properties", NODES.objectNode()
+                .set(JobFields.PART.key(), NODES.objectNode().put("const", JobFields.PARTS.get(1))))
+                .set("required", words(JobFields.PART.key())));
+        rule.set("then", NODES.objectNode().<ObjectNode>set("required", words("spline"))
+                .set("not", NODES.objectNode().set("required", words("gear"))));
+        rule.set("else", NODES.objectNode().<ObjectNode>set("required", words("gear"))
+                .set("not", NODES.objectNode().set("required", words("spline"))));
+        return rule;
+    }
+
+    /** A spline hob gives its root form and tip radius together; its addendum only with them. */
+    private static void splineHob(ObjectNode hob) {
+        String root = JobFields.HOB_ROOT.leaf();
+        String tip = JobFields.HOB_TIP_RADIUS.leaf();
+        hob.putObject("dependentRequired").<ObjectNode>set(root, words(tip)).<ObjectNode>set(tip, words(root))
+                .set(JobFields.HOB_ADDENDUM.leaf(), words(root, tip));
     }
 
     /** An object schema of the fields, nested by their dotted keys below {@code prefix}. */

@@ -23,22 +23,28 @@ import java.util.OptionalDouble;
  * @param totalToleranceMm     T + λ, mm, when the drawing states it
  * @param effectiveVariationMm λ, mm, when the drawing states it
  */
-public record SplineSpec(SplineStandard standard, int teeth, double moduleMm, double pressureAngleDeg, SplineRoot root,
+public record SplineDrawing(SplineStandard standard, int teeth, double moduleMm, double pressureAngleDeg, SplineRoot root,
                          int toleranceClass, String fitClass, double referenceDiameterMm, double lengthMm,
                          OptionalDouble allowanceMm, OptionalDouble totalToleranceMm,
                          OptionalDouble effectiveVariationMm) {
 
     /** A spline whose tolerances follow from its classes. */
-    public static SplineSpec of(SplineStandard standard, int teeth, double moduleMm, double pressureAngleDeg,
+    public static SplineDrawing of(SplineStandard standard, int teeth, double moduleMm, double pressureAngleDeg,
                                 SplineRoot root, int toleranceClass, String fitClass, double lengthMm) {
-        return new SplineSpec(standard, teeth, moduleMm, pressureAngleDeg, root, toleranceClass, fitClass, Double.NaN,
+        return new SplineDrawing(standard, teeth, moduleMm, pressureAngleDeg, root, toleranceClass, fitClass, Double.NaN,
                 lengthMm, OptionalDouble.empty(), OptionalDouble.empty(), OptionalDouble.empty());
     }
 
     /** The same spline with another fit class. */
-    public SplineSpec withFit(String fit) {
-        return new SplineSpec(standard, teeth, moduleMm, pressureAngleDeg, root, toleranceClass, fit, referenceDiameterMm,
+    public SplineDrawing withFit(String fit) {
+        return new SplineDrawing(standard, teeth, moduleMm, pressureAngleDeg, root, toleranceClass, fit, referenceDiameterMm,
                 lengthMm, allowanceMm, totalToleranceMm, effectiveVariationMm);
+    }
+
+    /** The same spline with another length. */
+    public SplineDrawing withLength(double length) {
+        return new SplineDrawing(standard, teeth, moduleMm, pressureAngleDeg, root, toleranceClass, fitClass,
+                referenceDiameterMm, length, allowanceMm, totalToleranceMm, effectiveVariationMm);
     }
 
     /** Diametral pitch P = 25.4 / m, 1/in. */
