@@ -133,7 +133,7 @@ class HostileInputTest {
     @Test
     void aWizardValueThatOverflowsInAnotherUnitIsRefusedNotACrash() {
         // inches, a face width of 1e308 in (2.54e308 mm overflows), back to the first step, millimetres
-        String answers = "j1\nin\n\n24\n1\n\n\n\n\n1e308\n" + "back\n".repeat(10) + "mm\n";
+        String answers = "j1\nin\n\n\n24\n1\n\n\n\n\n1e308\n" + "back\n".repeat(10) + "mm\n";
         Cli.Run r = Cli.piped(dir, answers, "wizard", "--out", out().toString());
         assertEquals(ExitCodes.USAGE, r.code(), r::toString);     // the answers end before the wizard does
         assertTrue(r.out().contains("Face width: must be at most 1000000 mm in size"), r::toString);
